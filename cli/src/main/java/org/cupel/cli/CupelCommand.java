@@ -1,0 +1,86 @@
+package org.cupel.cli;
+
+import java.io.PrintWriter;
+import java.util.concurrent.Callable;
+import org.cupel.config.ConfigException;
+import org.cupel.project.InputException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/**
+ * The {@code cupel} command. Subcommands are thin: they parse options, call core analyses and chart
+ * rendering, and print. Exit codes: 0 ok, 1 QC failures found (with {@code --fail-on-qc}), 2 usage or
+ * input error, 3 internal error.
+ */
+@Command(name = "cupel",
+        mixinStandardHelpOptions = true,
+        versionProvider = CupelCommand.Version.class,
+        description = {"Statistical QA/QC for assay data: lab batches, CRMs, blanks, duplicates,",
+                "detection limits, smelt recoveries, and the QC appendix of a resource report."},
+        footer = {"", "Example:", "  cupel demo demo-project && cupel report demo-project --out qc-appendix"},
+        subcommands = {
+            CommandLine.HelpCommand.class,
+        })
+public final class CupelCommand implements Callable<Integer> {
+
+    public static final int OK = 0;
+    public static final int QC_FAILED = 1;
+    public static final int INPUT_ERROR = 2;
+    public static final int INTERNAL_ERROR = 3;
+
+    @Option(names = "--verbose", scope = CommandLine.ScopeType.INHERIT,
+            description = "Print the stack trace of an error as well as its message.")
+    boolean verbose;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+        return OK;
+    }
+
+    public static void main(String[] args) {
+        System.exit(run(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+    }
+
+    /** Runs the command line with the given streams; used by {@link #main} and by tests. */
+    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+        CupelCommand top = new CupelCommand();
+        CommandLine cl = new CommandLine(top);
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
+            boolean isInput = ex instanceof InputException || ex instanceof ConfigException;
+            String message = ex.getMessage() == null ? ex.getClass().getSimpleName() : ex.getMessage();
+            err.println((isInput ? "cupel: " : "cupel: internal error: ") + message);
+            if (top.verbose) {
+                ex.printStackTrace(err);
+            } else if (!isInput) {
+                err.println("cupel: run again with --verbose for the stack trace, and please report it.");
+            }
+            err.flush();
+            return isInput ? INPUT_ERROR : INTERNAL_ERROR;
+        });
+        cl.setParameterExceptionHandler((ex, a) -> {
+            err.println("cupel: " + ex.getMessage());
+            CommandLine.UnmatchedArgumentException.printSuggestions(ex, err);
+            err.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help'.");
+            err.flush();
+            return INPUT_ERROR;
+        });
+        return cl.execute(args);
+    }
+
+    /** Version from the jar manifest, or "development" when run from classes. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            String v = CupelCommand.class.getPackage().getImplementationVersion();
+            return new String[] {"cupel " + (v == null ? "development build" : v)};
+        }
+    }
+}

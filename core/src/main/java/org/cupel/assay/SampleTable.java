@@ -1,0 +1,187 @@
+package org.cupel.assay;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalInt;
+
+/**
+ * The samples of a project, stored column-wise so that a million rows cost a few arrays rather than
+ * a million objects. Row {@code i} here is row {@code i} of every {@link AnalyteColumn}. Immutable once
+ * built.
+ */
+public final class SampleTable {
+    private final String[] ids;
+    private final int[] batchIndex;
+    private final int[] positions;
+    private final byte[] roles;
+    private final String[] references;
+    private final int[] fileIndex;
+    private final long[] lines;
+    private final List<Batch> batches;
+    private final List<String> files;
+    private final Map<String, Integer> rowById;
+
+    private SampleTable(Builder b) {
+        int n = b.size;
+        this.ids = Arrays.copyOf(b.ids, n);
+        this.batchIndex = Arrays.copyOf(b.batchIndex, n);
+        this.positions = Arrays.copyOf(b.positions, n);
+        this.roles = Arrays.copyOf(b.roles, n);
+        this.references = Arrays.copyOf(b.references, n);
+        this.fileIndex = Arrays.copyOf(b.fileIndex, n);
+        this.lines = Arrays.copyOf(b.lines, n);
+        this.batches = List.copyOf(b.batches);
+        this.files = List.copyOf(b.files);
+        this.rowById = new HashMap<>(b.rowById);
+    }
+
+    public int size() {
+        return ids.length;
+    }
+
+    public String id(int row) {
+        return ids[row];
+    }
+
+    public Batch batch(int row) {
+        return batches.get(batchIndex[row]);
+    }
+
+    public int batchIndex(int row) {
+        return batchIndex[row];
+    }
+
+    /** Batches in the order they were first read; index them with {@link #batchIndex(int)}. */
+    public List<Batch> batches() {
+        return batches;
+    }
+
+    public int position(int row) {
+        return positions[row];
+    }
+
+    public QcRole role(int row) {
+        return QcRole.values()[roles[row]];
+    }
+
+    /** CRM code, original sample ID, or the empty string. */
+    public String reference(int row) {
+        return references[row];
+    }
+
+    public SourceLocation source(int row) {
+        return new SourceLocation(files.get(fileIndex[row]), lines[row], 0);
+    }
+
+    public OptionalInt rowOf(String sampleId) {
+        Integer row = rowById.get(sampleId);
+        return row == null ? OptionalInt.empty() : OptionalInt.of(row);
+    }
+
+    public Sample sample(int row) {
+        return new Sample(ids[row], batch(row), positions[row], role(row), references[row], source(row));
+    }
+
+    /** Rows with the given role, in table order. */
+    public int[] rowsWithRole(QcRole role) {
+        byte r = (byte) role.ordinal();
+        int count = 0;
+        for (byte x : roles) {
+            if (x == r) {
+                count++;
+            }
+        }
+        int[] out = new int[count];
+        int k = 0;
+        for (int i = 0; i < roles.length; i++) {
+            if (roles[i] == r) {
+                out[k++] = i;
+            }
+        }
+        return out;
+    }
+
+    public static Builder builder() {
+        return new Builder();
+    }
+
+    /** Collects rows one at a time; sample IDs must be unique. */
+    public static final class Builder {
+        private String[] ids = new String[1024];
+        private int[] batchIndex = new int[1024];
+        private int[] positions = new int[1024];
+        private byte[] roles = new byte[1024];
+        private String[] references = new String[1024];
+        private int[] fileIndex = new int[1024];
+        private long[] lines = new long[1024];
+        private int size;
+        private final List<Batch> batches = new ArrayList<>();
+        private final Map<Batch, Integer> batchIndexOf = new HashMap<>();
+        private final List<String> files = new ArrayList<>();
+        private final Map<String, Integer> fileIndexOf = new HashMap<>();
+        private final Map<String, Integer> rowById = new HashMap<>();
+
+        /** Adds a sample and returns its row; throws if the ID is already present. */
+        public int add(String id, Batch batch, int position, QcRole role, String reference, SourceLocation source) {
+            if (rowById.containsKey(id)) {
+                throw new IllegalArgumentException("sample ID already present: " + id);
+            }
+            ensureCapacity(size + 1);
+            ids[size] = id;
+            batchIndex[size] = batchIndexOf.computeIfAbsent(batch, k -> {
+                batches.add(k);
+                return batches.size() - 1;
+            });
+            positions[size] = position;
+            roles[size] = (byte) role.ordinal();
+            references[size] = reference == null ? "" : reference;
+            fileIndex[size] = fileIndexOf.computeIfAbsent(source.file(), k -> {
+                files.add(k);
+                return files.size() - 1;
+            });
+            lines[size] = source.line();
+            rowById.put(id, size);
+            return size++;
+        }
+
+        public boolean contains(String id) {
+            return rowById.containsKey(id);
+        }
+
+        public OptionalInt rowOf(String id) {
+            Integer row = rowById.get(id);
+            return row == null ? OptionalInt.empty() : OptionalInt.of(row);
+        }
+
+        /** Sets role and reference after the register has been joined to the lab rows. */
+        public void setRole(int row, QcRole role, String reference) {
+            roles[row] = (byte) role.ordinal();
+            references[row] = reference == null ? "" : reference;
+        }
+
+        public int size() {
+            return size;
+        }
+
+        public SampleTable build() {
+            return new SampleTable(this);
+        }
+
+        private void ensureCapacity(int needed) {
+            if (needed <= ids.length) {
+                return;
+            }
+            int cap = Math.max(needed, ids.length * 2);
+            ids = Arrays.copyOf(ids, cap);
+            batchIndex = Arrays.copyOf(batchIndex, cap);
+            positions = Arrays.copyOf(positions, cap);
+            roles = Arrays.copyOf(roles, cap);
+            references = Arrays.copyOf(references, cap);
+            fileIndex = Arrays.copyOf(fileIndex, cap);
+            lines = Arrays.copyOf(lines, cap);
+        }
+    }
+}

@@ -1,0 +1,32 @@
+package org.cupel.project;
+
+import org.cupel.units.GradeUnit;
+
+/**
+ * The certified value of one CRM for one analyte, from its certificate.
+ *
+ * @param code the project's code for the CRM
+ * @param analyte analyte name
+ * @param unit unit of the certified value and SD (converted to the project's unit for the analyte at load)
+ * @param certifiedValue the certified (consensus) value
+ * @param sd the certificate's between-lab 1 SD, which sets control limits; never the CI of the mean
+ * @param ci95Low lower end of the certificate's 95 % interval of the certified value, NaN when not given
+ * @param ci95High upper end of that interval, NaN when not given
+ * @param method the certified method, empty when not given
+ */
+public record CrmCertificate(String code, String analyte, GradeUnit unit, double certifiedValue, double sd,
+                             double ci95Low, double ci95High, String method) {
+    public CrmCertificate {
+        if (!(sd > 0) || !Double.isFinite(certifiedValue)) {
+            throw new IllegalArgumentException("CRM " + code + " " + analyte
+                    + ": certified value must be finite and SD positive");
+        }
+        method = method == null ? "" : method;
+    }
+
+    /** The same certificate expressed in {@code target}. */
+    public CrmCertificate in(GradeUnit target) {
+        double f = unit.convert(1.0, target);
+        return new CrmCertificate(code, analyte, target, certifiedValue * f, sd * f, ci95Low * f, ci95High * f, method);
+    }
+}

@@ -1,0 +1,55 @@
+package org.cupel.project;
+
+import org.cupel.assay.SourceLocation;
+
+/**
+ * One problem found in the input, phrased so a user can fix it: where, what was found, what was
+ * expected, and how to fix it.
+ *
+ * @param severity whether the row was still analysed, left out, or the file not read
+ * @param where file, line and column
+ * @param sampleId the sample concerned, empty when none
+ * @param found the offending text, verbatim (escaped only at output)
+ * @param problem one sentence: what is wrong
+ * @param expected what the reader expected there
+ * @param fix how to fix it
+ */
+public record DataIssue(Severity severity, SourceLocation where, String sampleId, String found, String problem,
+                        String expected, String fix) {
+
+    /** How far a problem reaches. */
+    public enum Severity {
+        /** Noted; the row is analysed. */
+        WARNING,
+        /** The row (or the value) is left out of the analyses and listed in the exceptions table. */
+        EXCLUDED,
+        /** The file could not be used at all. */
+        FATAL
+    }
+
+    public DataIssue {
+        sampleId = sampleId == null ? "" : sampleId;
+        found = found == null ? "" : found;
+        expected = expected == null ? "" : expected;
+        fix = fix == null ? "" : fix;
+    }
+
+    /** One line: {@code file:line:col: problem (found 'x'; expected y). Fix: z}. */
+    public String message() {
+        StringBuilder sb = new StringBuilder().append(where).append(": ").append(problem);
+        if (!found.isEmpty() || !expected.isEmpty()) {
+            sb.append(" (");
+            if (!found.isEmpty()) {
+                sb.append("found '").append(found).append('\'');
+            }
+            if (!expected.isEmpty()) {
+                sb.append(found.isEmpty() ? "" : "; ").append("expected ").append(expected);
+            }
+            sb.append(')');
+        }
+        if (!fix.isEmpty()) {
+            sb.append(". Fix: ").append(fix);
+        }
+        return sb.toString();
+    }
+}
