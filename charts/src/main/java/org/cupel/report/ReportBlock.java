@@ -1,0 +1,35 @@
+package org.cupel.report;
+
+import java.util.function.Supplier;
+import org.knowm.xchart.internal.chartpart.Chart;
+
+/** One piece of a report section, in reading order. Renderers (HTML, PDF) handle each kind. */
+public sealed interface ReportBlock permits ReportBlock.Paragraph, ReportBlock.Table, ReportBlock.Figure,
+        ReportBlock.Callout {
+
+    /** A paragraph of plain text (escaped by the renderer). */
+    record Paragraph(String text) implements ReportBlock {
+    }
+
+    /** A table; also exported as CSV. */
+    record Table(ReportTable table) implements ReportBlock {
+    }
+
+    /**
+     * A chart, drawn when the report is written so that screen and print resolution both come from one
+     * definition.
+     *
+     * @param name file stem for {@code charts/<name>.png} (sanitised when written)
+     * @param caption caption under the chart
+     * @param chart builds the chart; called once per output resolution
+     */
+    record Figure(String name, String caption, Supplier<Chart<?, ?>> chart) implements ReportBlock {
+    }
+
+    /** A highlighted statement: a verdict, a caution. */
+    record Callout(Level level, String text) implements ReportBlock {
+    }
+
+    /** How a callout is shown. */
+    enum Level { INFO, PASS, WARN, FAIL, CAUTION }
+}
