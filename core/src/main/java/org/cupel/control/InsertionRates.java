@@ -1,0 +1,64 @@
+package org.cupel.control;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.cupel.assay.QcRole;
+import org.cupel.assay.SampleTable;
+
+/**
+ * Insertion rates of CRMs, blanks and each duplicate type per batch and overall: rate = count of the role
+ * ÷ all samples in the batch (routine and QC), compared with the targets of {@link InsertionSettings}.
+ * A rate strictly below a positive target is flagged.
+ *
+ * @param batches one per batch, in table order
+ * @param overall the whole project
+ * @param settings targets in force
+ */
+public record InsertionRates(List<BatchInsertion> batches, BatchInsertion overall, InsertionSettings settings) {
+
+    /** Roles reported, in this order. */
+    public static final List<QcRole> ROLES = List.of(QcRole.CRM, QcRole.BLANK, QcRole.FIELD_DUPLICATE,
+            QcRole.COARSE_DUPLICATE, QcRole.PULP_DUPLICATE, QcRole.LAB_REPEAT, QcRole.UMPIRE);
+
+    public InsertionRates {
+        batches = List.copyOf(batches);
+    }
+
+    public static InsertionRates compute(SampleTable table, InsertionSettings settings) {
+        int nb = table.batches().size();
+        int[][] counts = new int[nb][QcRole.values().length];
+        int[] all = new int[QcRole.values().length];
+        for (int row = 0; row < table.size(); row++) {
+            counts[table.batchIndex(row)][table.role(row).ordinal()]++;
+            all[table.role(row).ordinal()]++;
+        }
+        List<BatchInsertion> batches = new ArrayList<>(nb);
+        for (int b = 0; b < nb; b++) {
+            batches.add(of(table.batches().get(b).id(), counts[b], settings));
+        }
+        return new InsertionRates(batches, of("all batches", all, settings), settings);
+    }
+
+    /** Batches with some role below target. */
+    public List<BatchInsertion> belowTarget() {
+        return batches.stream().filter(BatchInsertion::belowTarget).toList();
+    }
+
+    static BatchInsertion of(String batch, int[] countsByRole, InsertionSettings settings) {
+        int total = 0;
+        for (int c : countsByRole) {
+            total += c;
+        }
+        List<InsertionRate> rates = new ArrayList<>();
+        boolean below = false;
+        for (QcRole role : ROLES) {
+            int c = countsByRole[role.ordinal()];
+            double rate = total == 0 ? Double.NaN : (double) c / total;
+            double target = settings.target(role);
+            boolean low = target > 0 && !(rate >= target);
+            below |= low;
+            rates.add(new InsertionRate(role.label(), c, total, rate, target, low));
+        }
+        return new BatchInsertion(batch, total, countsByRole[QcRole.ROUTINE.ordinal()], rates, below);
+    }
+}
