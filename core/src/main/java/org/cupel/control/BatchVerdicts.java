@@ -51,6 +51,11 @@ public final class BatchVerdicts {
         return verdicts.stream().anyMatch(v -> v.verdict() == Verdict.FAIL);
     }
 
+    /** How many batches have verdict {@code v}. */
+    public static int count(List<BatchVerdict> verdicts, Verdict v) {
+        return (int) verdicts.stream().filter(b -> b.verdict() == v).count();
+    }
+
     private static BatchVerdict batch(SampleTable table, int b, int size, List<ControlOutcome> outcomes,
                                       Set<String> analytes) {
         List<AnalyteVerdict> per = new ArrayList<>();
