@@ -78,7 +78,8 @@ public final class VerdictSection {
                 "Reasons list every control result that did not pass, with the rule that decided it.");
     }
 
-    static ReportTable reassayTable(ReassayList reassay) {
+    /** The re-assay list as a table; also written by {@code cupel batches --reassay-csv}. */
+    public static ReportTable reassayTable(ReassayList reassay) {
         List<List<String>> rows = new ArrayList<>();
         for (ReassayEntry e : reassay.entries()) {
             rows.add(List.of(e.sampleId(), e.batch(), Integer.toString(e.position()), e.analyte(),
@@ -101,7 +102,7 @@ public final class VerdictSection {
                 rows, "");
     }
 
-    static String label(Verdict v) {
+    public static String label(Verdict v) {
         return v == Verdict.CANNOT_JUDGE ? "cannot judge" : v.name().toLowerCase(Locale.ROOT);
     }
 }
