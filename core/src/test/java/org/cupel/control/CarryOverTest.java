@@ -14,14 +14,13 @@ import org.cupel.assay.AssayValue;
 import org.junit.jupiter.api.Test;
 
 /**
- * Carry-over statistics against scipy 1.10 (Debian): scipy.stats.spearmanr and scipy.stats.linregress
+ * Carry-over statistics against scipy 1.10 and R 4.2 (Debian): scipy.stats.spearmanr and scipy.stats.linregress
  * over testdata/reference/control-blanks/carry_over_pairs.csv, by carry_over.py beside it.
  */
 class CarryOverTest {
     private static final Path DIR = Path.of(System.getProperty("cupel.testdata"), "reference", "control-blanks");
 
-    @Test
-    void matchesScipy() throws IOException {
+    private static CarryOverRelation fromPairsFile() throws IOException {
         List<BlankResult> results = new ArrayList<>();
         List<String> lines = Files.readAllLines(DIR.resolve("carry_over_pairs.csv"));
         for (int i = 1; i < lines.size(); i++) {
@@ -32,7 +31,12 @@ class CarryOverTest {
                     AssayValue.detected(Double.parseDouble(c[0]), 0.005));
             results.add(BlankReview.judge(o, BlankSettings.DEFAULTS));
         }
-        CarryOverRelation r = CarryOver.relation("Au", results);
+        return CarryOver.relation("Au", results);
+    }
+
+    @Test
+    void matchesScipy() throws IOException {
+        CarryOverRelation r = fromPairsFile();
         JsonNode e = new ObjectMapper().readTree(DIR.resolve("carry_over_expected.json").toFile());
         assertEquals(e.get("n_rank").asInt(), r.nRank());
         assertEquals(e.get("n_regression").asInt(), r.nRegression());
@@ -46,6 +50,27 @@ class CarryOverTest {
         assertEquals(e.get("spearman_p").asDouble(), r.spearmanP(), 1e-6 * e.get("spearman_p").asDouble());
         assertEquals(e.get("slope_p").asDouble(), r.slopeP(), 1e-6 * e.get("slope_p").asDouble());
         assertEquals("", r.note());
+    }
+
+    /** R 4.2 (Debian): cor.test(method = "spearman", exact = FALSE) and lm, by carry_over.R beside the data. */
+    @Test
+    void matchesR() throws IOException {
+        CarryOverRelation r = fromPairsFile();
+        java.util.Map<String, Double> e = new java.util.HashMap<>();
+        for (String line : Files.readAllLines(DIR.resolve("carry_over_expected_r.csv")).subList(1, 9)) {
+            String[] c = line.split(",");
+            e.put(c[0], Double.parseDouble(c[1]));
+        }
+        assertEquals(e.get("n_rank").intValue(), r.nRank());
+        assertEquals(e.get("n_regression").intValue(), r.nRegression());
+        // 1e-12: same closed forms, only rounding differs (values written with 17 significant digits).
+        assertEquals(e.get("spearman_rho"), r.spearmanRho(), 1e-12);
+        assertEquals(e.get("slope"), r.slope(), 1e-12);
+        assertEquals(e.get("slope_stderr"), r.slopeStdErr(), 1e-12);
+        assertEquals(e.get("intercept"), r.intercept(), 1e-12);
+        // Relative 1e-6: R's pt and Commons Math's t distribution are separate implementations at p ~ 1e-11.
+        assertEquals(e.get("spearman_p"), r.spearmanP(), 1e-6 * e.get("spearman_p"));
+        assertEquals(e.get("slope_p"), r.slopeP(), 1e-6 * e.get("slope_p"));
     }
 
     @Test
