@@ -5,15 +5,15 @@ package org.cupel.control;
  *
  * @param role QC role label ("CRM", "blank", "field duplicate")
  * @param count samples of that role
- * @param total all samples in the batch (or project), the denominator
- * @param rate count ÷ total; {@code NaN} when total is 0
+ * @param routine routine samples in the batch (or project), the denominator
+ * @param rate count ÷ routine; {@code NaN} when there are no routine samples
  * @param target target rate; 0 when there is none
  * @param belowTarget rate below a positive target
  */
-public record InsertionRate(String role, int count, int total, double rate, double target, boolean belowTarget) {
+public record InsertionRate(String role, int count, int routine, double rate, double target, boolean belowTarget) {
 
     /** "1 in 20", or "none". */
     public String oneIn() {
-        return count == 0 ? "none" : "1 in " + org.cupel.assay.Numbers.significant((double) total / count, 3);
+        return count == 0 ? "none" : "1 in " + org.cupel.assay.Numbers.significant((double) routine / count, 3);
     }
 }

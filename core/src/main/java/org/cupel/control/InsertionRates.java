@@ -7,8 +7,9 @@ import org.cupel.assay.SampleTable;
 
 /**
  * Insertion rates of CRMs, blanks and each duplicate type per batch and overall: rate = count of the role
- * ÷ all samples in the batch (routine and QC), compared with the targets of {@link InsertionSettings}.
- * A rate strictly below a positive target is flagged.
+ * ÷ routine samples of the batch, so "1 in 20" is one control per 20 routine samples (common practice),
+ * compared with the targets of {@link InsertionSettings}. A rate strictly below a positive target is
+ * flagged; a batch without routine samples has no rate (NaN) and is not flagged.
  *
  * @param batches one per batch, in table order
  * @param overall the whole project
@@ -49,16 +50,17 @@ public record InsertionRates(List<BatchInsertion> batches, BatchInsertion overal
         for (int c : countsByRole) {
             total += c;
         }
+        int routine = countsByRole[QcRole.ROUTINE.ordinal()];
         List<InsertionRate> rates = new ArrayList<>();
         boolean below = false;
         for (QcRole role : ROLES) {
             int c = countsByRole[role.ordinal()];
-            double rate = total == 0 ? Double.NaN : (double) c / total;
+            double rate = routine == 0 ? Double.NaN : (double) c / routine;
             double target = settings.target(role);
-            boolean low = target > 0 && !(rate >= target);
+            boolean low = target > 0 && routine > 0 && rate < target;
             below |= low;
-            rates.add(new InsertionRate(role.label(), c, total, rate, target, low));
+            rates.add(new InsertionRate(role.label(), c, routine, rate, target, low));
         }
-        return new BatchInsertion(batch, total, countsByRole[QcRole.ROUTINE.ordinal()], rates, below);
+        return new BatchInsertion(batch, total, routine, rates, below);
     }
 }

@@ -3,7 +3,7 @@ package org.cupel.control;
 import org.cupel.assay.QcRole;
 
 /**
- * Target insertion rates, as fractions of all samples in a batch, bound from config section
+ * Target insertion rates, as QC samples per routine sample in a batch, bound from config section
  * {@code insertion}. Defaults: about 1 in 20 (0.05) for CRMs, blanks and each duplicate type (common
  * practice); lab repeats and umpire checks have no per-batch target (0) unless set. Abzalov (2008),
  * "Quality control of assay data: a review of procedures for measuring and monitoring precision and

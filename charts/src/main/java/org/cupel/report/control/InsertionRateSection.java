@@ -43,7 +43,7 @@ public final class InsertionRateSection {
         }
         rows.add(row(rates.overall()));
         return new ReportTable("insertion-rates", "Insertion rates per batch and overall", columns, rows,
-                "Rate = samples of the type ÷ all samples in the batch. Targets: about 1 in 20 each (common practice); "
+                "Rate = samples of the type ÷ routine samples of the batch (1 in 20 = one per 20 routine samples). Targets: about 1 in 20 each (common practice); "
                         + "Abzalov (2008, Exploration and Mining Geology 17) gives field duplicates 5–10 %, pulp "
                         + "duplicates 3–5 %, standards 3–5 % and about 5 % to an umpire lab.");
     }

@@ -78,8 +78,8 @@ class ControlSectionsTest {
     void insertionSectionFlagsBatchesBelowTarget() {
         InsertionRates r = InsertionRates.compute(table(), InsertionSettings.DEFAULTS);
         ReportTable tab = table(InsertionRateSection.build(r), "insertion-rates");
-        // 1 CRM in 10 samples: 10 %, 1 in 10; no duplicates: below target.
-        assertEquals("1 · 10 % (1 in 10)", tab.rows().get(0).get(3));
+        // 1 CRM per 8 routine samples: 12.5 %, 1 in 8; no duplicates: below target.
+        assertEquals("1 · 13 % (1 in 8)", tab.rows().get(0).get(3));
         assertTrue(tab.rows().get(0).get(10).contains("field duplicate"));
         assertEquals("all batches", tab.rows().get(1).get(0));
     }
