@@ -23,6 +23,7 @@ import picocli.CommandLine.Option;
             CommandLine.HelpCommand.class,
             DemoCommand.class,
             BlanksCommand.class,
+            BatchesCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 

@@ -21,27 +21,24 @@ public final class BatchVerdicts {
     /**
      * @param table the sample table the outcome rows refer to
      * @param outcomes control outcomes in any order, from any number of sources
-     * @return one verdict per batch, in the table's batch order
+     * @return one verdict per batch (lab and batch ID, see {@link BatchSequence}), in the table's order
      */
     public static List<BatchVerdict> judge(SampleTable table, List<ControlOutcome> outcomes) {
         Set<String> analytes = new TreeSet<>();
         for (ControlOutcome o : outcomes) {
             analytes.add(o.analyte());
         }
+        BatchSequence seq = BatchSequence.of(table);
         List<List<ControlOutcome>> byBatch = new ArrayList<>();
-        for (int b = 0; b < table.batches().size(); b++) {
+        for (int b = 0; b < seq.size(); b++) {
             byBatch.add(new ArrayList<>());
         }
         for (ControlOutcome o : outcomes) {
-            byBatch.get(table.batchIndex(o.row())).add(o);
-        }
-        int[] sizes = new int[table.batches().size()];
-        for (int row = 0; row < table.size(); row++) {
-            sizes[table.batchIndex(row)]++;
+            byBatch.get(seq.batchOf(o.row())).add(o);
         }
         List<BatchVerdict> out = new ArrayList<>();
         for (int b = 0; b < byBatch.size(); b++) {
-            out.add(batch(table, b, sizes[b], byBatch.get(b), analytes));
+            out.add(batch(table, seq.batch(b), seq.batchSize(b), byBatch.get(b), analytes));
         }
         return out;
     }
@@ -56,8 +53,8 @@ public final class BatchVerdicts {
         return (int) verdicts.stream().filter(b -> b.verdict() == v).count();
     }
 
-    private static BatchVerdict batch(SampleTable table, int b, int size, List<ControlOutcome> outcomes,
-                                      Set<String> analytes) {
+    private static BatchVerdict batch(SampleTable table, org.cupel.assay.Batch batch, int size,
+                                      List<ControlOutcome> outcomes, Set<String> analytes) {
         List<AnalyteVerdict> per = new ArrayList<>();
         Verdict batchVerdict = analytes.isEmpty() ? Verdict.CANNOT_JUDGE : Verdict.PASS;
         for (String analyte : analytes) {
@@ -65,7 +62,6 @@ public final class BatchVerdicts {
             per.add(av);
             batchVerdict = batchVerdict.worst(av.verdict());
         }
-        var batch = table.batches().get(b);
         return new BatchVerdict(batch.id(), batch.lab(), size, batchVerdict, per);
     }
 

@@ -41,17 +41,17 @@ public final class BlankReview {
         Map<String, Double> methodLimit = methodLimits(col);
         String unit = col.analyte().unit().symbol();
         List<BlankObservation> out = new ArrayList<>();
-        for (int b = 0; b < table.batches().size(); b++) {
+        for (int b = 0; b < seq.size(); b++) {
             for (int row : seq.rows(b)) {
                 if (table.role(row) != QcRole.BLANK) {
                     continue;
                 }
-                int prev = seq.preceding(table, row);
+                int prev = seq.preceding(row);
                 double dl = col.limit(row);
                 if (!(dl > 0) || col.qualifier(row) == org.cupel.assay.Qualifier.ABOVE_UPPER_LIMIT) {
                     dl = methodLimit.getOrDefault(col.method(row), Double.NaN);
                 }
-                out.add(new BlankObservation(row, table.id(row), table.batch(row).id(), table.position(row),
+                out.add(new BlankObservation(row, table.id(row), seq.batch(b).id(), table.position(row),
                         col.analyte().name(), unit, col.value(row), dl, prev < 0 ? "" : table.id(prev),
                         prev < 0 ? AssayValue.missing(MissingReason.NONE) : col.value(prev)));
             }

@@ -11,7 +11,7 @@ import org.cupel.assay.SampleTable;
  * compared with the targets of {@link InsertionSettings}. A rate strictly below a positive target is
  * flagged; a batch without routine samples has no rate (NaN) and is not flagged.
  *
- * @param batches one per batch, in table order
+ * @param batches one per batch (lab and batch ID, see {@link BatchSequence}), in table order
  * @param overall the whole project
  * @param settings targets in force
  */
@@ -26,16 +26,17 @@ public record InsertionRates(List<BatchInsertion> batches, BatchInsertion overal
     }
 
     public static InsertionRates compute(SampleTable table, InsertionSettings settings) {
-        int nb = table.batches().size();
+        BatchSequence seq = BatchSequence.of(table);
+        int nb = seq.size();
         int[][] counts = new int[nb][QcRole.values().length];
         int[] all = new int[QcRole.values().length];
         for (int row = 0; row < table.size(); row++) {
-            counts[table.batchIndex(row)][table.role(row).ordinal()]++;
+            counts[seq.batchOf(row)][table.role(row).ordinal()]++;
             all[table.role(row).ordinal()]++;
         }
         List<BatchInsertion> batches = new ArrayList<>(nb);
         for (int b = 0; b < nb; b++) {
-            batches.add(of(table.batches().get(b).id(), counts[b], settings));
+            batches.add(of(seq.batch(b).id(), counts[b], settings));
         }
         return new InsertionRates(batches, of("all batches", all, settings), settings);
     }

@@ -18,8 +18,9 @@ import org.cupel.assay.SampleTable;
  * </ul>
  * "Passing" is per analyte: a control whose outcomes for that analyte are all PASS or WARN (a warning
  * does not fail the result). Failed controls inside a bracket are passed over, so consecutive failures
- * share one bracket. Control samples (CRMs, blanks) are never on the list themselves; duplicates are
- * samples of the ground and are.
+ * share one bracket. Control samples (CRMs, blanks) are never on the list themselves; field, coarse and
+ * pulp duplicates are samples of the ground and are; lab repeats and umpire checks are not (the lab
+ * repeats the listed original; umpire checks belong to the umpire lab's batches).
  *
  * @param entries one per sample and analyte, in batch, position and analyte order
  * @param brackets one per triggering outcome, in the order of the entries
@@ -40,7 +41,7 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
             status.computeIfAbsent(o.analyte(), k -> new HashMap<>()).merge(o.row(), o.verdict(), Verdict::worst);
         }
         List<ControlOutcome> triggers = outcomes.stream().filter(ControlOutcome::triggersReassay)
-                .sorted(java.util.Comparator.comparingInt((ControlOutcome o) -> table.batchIndex(o.row()))
+                .sorted(java.util.Comparator.comparingInt((ControlOutcome o) -> seq.batchOf(o.row()))
                         .thenComparingInt(o -> seq.indexInBatch(o.row())).thenComparing(ControlOutcome::analyte)
                         .thenComparing(ControlOutcome::rule))
                 .toList();
@@ -50,15 +51,15 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
             brackets.add(bracket(table, seq, o, status.get(o.analyte()), settings.scope(), byKey));
         }
         List<Builder> sorted = new ArrayList<>(byKey.values());
-        sorted.sort(java.util.Comparator.comparingInt((Builder x) -> table.batchIndex(x.row))
+        sorted.sort(java.util.Comparator.comparingInt((Builder x) -> seq.batchOf(x.row))
                 .thenComparingInt(x -> seq.indexInBatch(x.row)).thenComparing(x -> x.analyte));
-        return new ReassayList(sorted.stream().map(x -> x.build(table)).toList(), brackets, settings.scope());
+        return new ReassayList(sorted.stream().map(x -> x.build(table, seq)).toList(), brackets, settings.scope());
     }
 
     private static ReassayBracket bracket(SampleTable table, BatchSequence seq, ControlOutcome o,
                                           Map<Integer, Verdict> status, ReassaySettings.Scope scope,
                                           Map<String, Builder> byKey) {
-        int[] rows = seq.rows(table.batchIndex(o.row()));
+        int[] rows = seq.rows(seq.batchOf(o.row()));
         int at = seq.indexInBatch(o.row());
         boolean blank = table.role(o.row()) == QcRole.BLANK;
         int from;
@@ -88,7 +89,7 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
         String why = table.id(o.row()) + " " + o.rule();
         for (int k = from; k <= to; k++) {
             int row = rows[k];
-            if (isControl(table.role(row))) {
+            if (!isReassayed(table.role(row))) {
                 continue;
             }
             n++;
@@ -97,7 +98,7 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
         }
         int fromPosition = from <= to ? table.position(rows[from]) : table.position(o.row());
         int toPosition = from <= to ? table.position(rows[to]) : table.position(o.row());
-        return new ReassayBracket(table.id(o.row()), table.role(o.row()).label(), table.batch(o.row()).id(),
+        return new ReassayBracket(table.id(o.row()), table.role(o.row()).label(), seq.batch(seq.batchOf(o.row())).id(),
                 o.analyte(), o.rule(), fromPosition, toPosition, n, note);
     }
 
@@ -121,6 +122,15 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
         return role == QcRole.CRM || role == QcRole.BLANK;
     }
 
+    /**
+     * Samples of the ground: routine samples and field, coarse-reject and pulp duplicates. Lab repeats are
+     * the lab's own second reading of a listed sample and umpire checks belong to another lab's batch.
+     */
+    static boolean isReassayed(QcRole role) {
+        return role == QcRole.ROUTINE || role == QcRole.FIELD_DUPLICATE || role == QcRole.COARSE_DUPLICATE
+                || role == QcRole.PULP_DUPLICATE;
+    }
+
     private static final class Builder {
         final int row;
         final String analyte;
@@ -139,8 +149,8 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
             }
         }
 
-        ReassayEntry build(SampleTable table) {
-            return new ReassayEntry(table.id(row), table.batch(row).id(), table.position(row), analyte, triggers,
+        ReassayEntry build(SampleTable table, BatchSequence seq) {
+            return new ReassayEntry(table.id(row), seq.batch(seq.batchOf(row)).id(), table.position(row), analyte, triggers,
                     String.join("; ", reasons));
         }
     }

@@ -66,14 +66,15 @@ class DemoBlanksTest {
         int blankRow = r.observation().row();
         // Walk the batch in run order, by hand, from the blank to the next Au blank that passed.
         BatchSequence seq = BatchSequence.of(t);
-        int[] rows = seq.rows(t.batchIndex(blankRow));
+        int[] rows = seq.rows(seq.batchOf(blankRow));
         List<String> expected = new ArrayList<>();
         for (int k = seq.indexInBatch(blankRow) + 1; k < rows.length; k++) {
             int row = rows[k];
             if (t.role(row) == QcRole.BLANK && passedAu(row)) {
                 break;
             }
-            if (t.role(row) != QcRole.BLANK && t.role(row) != QcRole.CRM) {
+            if (t.role(row) == QcRole.ROUTINE || t.role(row).isDuplicate() && t.role(row) != QcRole.LAB_REPEAT
+                    && t.role(row) != QcRole.UMPIRE) {
                 expected.add(t.id(row));
             }
         }

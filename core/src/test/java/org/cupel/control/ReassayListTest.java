@@ -94,6 +94,13 @@ class ReassayListTest {
     }
 
     @Test
+    void duplicatesAreListedLabRepeatsAndUmpireChecksAreNot() {
+        SampleTable t = new Sequences().batch("J", "CRFLPDUC").table();
+        ReassayList l = run(t, ReassaySettings.Scope.BRACKET, "J-1", Verdict.FAIL, "J-8", Verdict.PASS);
+        assertEquals(List.of("J-2", "J-3", "J-5", "J-6"), ids(l));
+    }
+
+    @Test
     void wholeBatchOption() {
         SampleTable t = new Sequences().batch("J", "RCRFBR").batch("K", "RRC").table();
         ReassayList l = run(t, ReassaySettings.Scope.WHOLE_BATCH, "J-2", Verdict.FAIL, "J-5", Verdict.PASS,

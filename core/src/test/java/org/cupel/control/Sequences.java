@@ -15,7 +15,7 @@ import org.cupel.units.GradeUnit;
 
 /**
  * Builds small sample tables from a run-order code per batch: R routine, C CRM, B blank, F field
- * duplicate, P pulp duplicate, D coarse duplicate. Sample IDs are batch + "-" + position (1-based).
+ * duplicate, P pulp duplicate, D coarse duplicate, L lab repeat, U umpire check. Sample IDs are batch + "-" + position (1-based).
  */
 final class Sequences {
     static final Analyte AU = new Analyte("Au", GradeUnit.G_PER_T);
@@ -59,6 +59,8 @@ final class Sequences {
             case 'F': return QcRole.FIELD_DUPLICATE;
             case 'P': return QcRole.PULP_DUPLICATE;
             case 'D': return QcRole.COARSE_DUPLICATE;
+            case 'L': return QcRole.LAB_REPEAT;
+            case 'U': return QcRole.UMPIRE;
             default: throw new IllegalArgumentException("role code " + c);
         }
     }
