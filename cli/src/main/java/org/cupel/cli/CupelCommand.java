@@ -23,6 +23,8 @@ import picocli.CommandLine.Option;
             CommandLine.HelpCommand.class,
             CheckCommand.class,
             DemoCommand.class,
+            BlanksCommand.class,
+            BatchesCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 
