@@ -11,14 +11,23 @@ public enum RuleAction {
     WARN,
     FAIL;
 
+    /**
+     * Reads off / warn / fail, case-insensitive. YAML 1.1 reads an unquoted {@code off} or {@code no} as
+     * boolean false, so "false" and "no" also mean OFF.
+     */
     @JsonCreator
     public static RuleAction parse(String text) {
+        String t = text.strip();
+        if (t.equalsIgnoreCase("false") || t.equalsIgnoreCase("no")) {
+            return OFF;
+        }
         for (RuleAction a : values()) {
-            if (a.name().equalsIgnoreCase(text.strip())) {
+            if (a.name().equalsIgnoreCase(t)) {
                 return a;
             }
         }
-        throw new IllegalArgumentException("rule action '" + text + "' is not one of off, warn, fail");
+        throw new IllegalArgumentException("rule action '" + text + "' is not one of off, warn, fail (quote the "
+                + "value: \"warn\")");
     }
 
     @JsonValue
