@@ -31,10 +31,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.knowm.xchart.XYChart;
 
-class CrmChartsTest {
+public class CrmChartsTest {
 
     /** 24 weekly batches, three CRMs; MID drifts upwards, LOW has one swap with MID, HIGH one failure. */
-    static CrmReview plantedReview() {
+    public static CrmReview plantedReview() {
         SampleTable.Builder t = SampleTable.builder();
         AnalyteColumn.Builder au = AnalyteColumn.builder(new Analyte("Au", GradeUnit.G_PER_T));
         java.util.Random rnd = new java.util.Random(20250301L);
