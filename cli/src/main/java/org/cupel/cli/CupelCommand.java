@@ -22,6 +22,7 @@ import picocli.CommandLine.Option;
         subcommands = {
             CommandLine.HelpCommand.class,
             CrmCommand.class,
+            DemoCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 
