@@ -63,10 +63,10 @@ public final class CrmBiasChart {
             XYSeries fit = c.addSeries("Least-squares line", ends, new double[] {grade.fit().intercept(),
                 grade.fit().intercept() + grade.fit().slope() * ends[1]});
             fit.setMarker(SeriesMarkers.NONE).setLineColor(ChartStyle.GREY).setLineStyle(ChartStyle.dashed(1.3f));
-            note = String.format(Locale.ROOT, "n = %d CRMs; slope %s %% per %s (95 %% CI %s to %s, p = %s)",
+            note = String.format(Locale.ROOT, "n = %d CRMs; slope %s %% per %s (95 %% CI %s to %s, %s)",
                     grade.fit().n(), Numbers.significant(grade.fit().slope(), 3), unit,
                     Numbers.significant(grade.fit().slopeLow(), 3), Numbers.significant(grade.fit().slopeHigh(), 3),
-                    Numbers.significant(grade.fit().pValue(), 2));
+                    grade.fit().pText());
         } else {
             note = "n = " + usable.size() + " CRMs; no line: " + grade.fit().note();
         }

@@ -150,8 +150,8 @@ public final class CrmSection {
             if (a.biasVsGrade().fit().estimated()) {
                 var f = a.biasVsGrade().fit();
                 rows.add(List.of("bias vs grade", a.analyte(), "CRMs", String.format(Locale.ROOT,
-                        "slope %s %% per unit grade (95 %% CI %s to %s, p = %s, n = %d CRMs)", num(f.slope()),
-                        num(f.slopeLow()), num(f.slopeHigh()), num(f.pValue()), f.n()),
+                        "slope %s %% per unit grade (95 %% CI %s to %s, %s, n = %d CRMs)", num(f.slope()),
+                        num(f.slopeLow()), num(f.slopeHigh()), f.pText(), f.n()),
                         f.pValue() < r.settings().driftAlpha() ? "bias changes with grade" : "no grade dependence shown"));
             }
         }
@@ -165,8 +165,8 @@ public final class CrmSection {
     }
 
     private static List<String> driftRow(String series, String analyte, org.cupel.control.crm.SeriesDrift d) {
-        String trend = d.trend().estimated() ? String.format(Locale.ROOT, "%s (95 %% CI %s to %s, p = %s, n = %d)",
-                num(d.trend().slope()), num(d.trend().slopeLow()), num(d.trend().slopeHigh()), num(d.trend().pValue()),
+        String trend = d.trend().estimated() ? String.format(Locale.ROOT, "%s (95 %% CI %s to %s, %s, n = %d)",
+                num(d.trend().slope()), num(d.trend().slopeLow()), num(d.trend().slopeHigh()), d.trend().pText(),
                 d.trend().n()) : d.trend().note();
         return List.of(series, analyte, d.timeAxis(), trend, d.findings().isEmpty() ? "none"
                 : String.join("; ", d.findings()));

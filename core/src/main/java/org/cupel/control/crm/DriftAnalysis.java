@@ -37,9 +37,9 @@ final class DriftAnalysis {
         TabularCusum cusum = TabularCusum.of(z, 0, 1, s.cusumK(), s.cusumH());
         List<String> findings = new ArrayList<>();
         if (trend.estimated() && trend.pValue() < s.driftAlpha()) {
-            findings.add(String.format(Locale.ROOT, "z trend %s SD %s (%d %% CI %s to %s, p = %s, n = %d)",
+            findings.add(String.format(Locale.ROOT, "z trend %s SD %s (%d %% CI %s to %s, %s, n = %d)",
                     signed(trend.slope()), per, Math.round(s.confidence() * 100), Numbers.significant(trend.slopeLow(), 3),
-                    Numbers.significant(trend.slopeHigh(), 3), Numbers.significant(trend.pValue(), 2), n));
+                    Numbers.significant(trend.slopeHigh(), 3), trend.pText(), n));
         }
         if (ewma.firstSignal() >= 0) {
             CrmResult r = judged.get(ewma.firstSignal());

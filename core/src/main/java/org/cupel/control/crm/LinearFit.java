@@ -53,6 +53,14 @@ public record LinearFit(int n, double slope, double slopeLow, double slopeHigh, 
         return note.isEmpty();
     }
 
+    /** The p-value as printed in reports: "p = 0.012", "p < 0.0001", or "p not estimated". */
+    public String pText() {
+        if (!Double.isFinite(pValue)) {
+            return "p not estimated";
+        }
+        return pValue < 1e-4 ? "p < 0.0001" : "p = " + org.cupel.assay.Numbers.significant(pValue, 2);
+    }
+
     /** Whether the slope interval excludes zero. */
     public boolean slopeExcludesZero() {
         return estimated() && (slopeLow > 0 || slopeHigh < 0);
