@@ -22,6 +22,7 @@ import picocli.CommandLine.Option;
         subcommands = {
             CommandLine.HelpCommand.class,
             CheckCommand.class,
+            CrmCommand.class,
             DemoCommand.class,
             BlanksCommand.class,
             BatchesCommand.class,
