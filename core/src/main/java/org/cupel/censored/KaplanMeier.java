@@ -131,7 +131,7 @@ public final class KaplanMeier {
         }
         List<String> notes = new ArrayList<>();
         notes.add(f0 > 0
-                ? "probability " + Numbers.compact(f0) + " below the lowest detect placed at "
+                ? "probability " + Numbers.significant(f0, 4) + " below the lowest detect placed at "
                   + (options.lowestMass() == LowestMass.AT_LOWEST_LIMIT ? "the lowest detection limit " : "the lowest detect ")
                   + Numbers.compact(at)
                 : "no probability left below the lowest detect");
