@@ -58,7 +58,8 @@ public final class CensoredCommand implements Callable<Integer> {
                 ? KaplanMeier.LowestMass.AT_LOWEST_DETECT : KaplanMeier.LowestMass.AT_LOWEST_LIMIT,
                 KaplanMeier.SdDivisor.DISTRIBUTION);
         CensoredAnalysis a = CensoredAnalysis.of(CensoredSample.of(col.values()), options);
-        if (chart != null) {
+        boolean drawable = !a.ros().points().isEmpty();
+        if (chart != null && drawable) {
             PngWriter.write(CensoredProbabilityPlot.create(a.ros(), col.header(), "Censored probability plot: "
                     + col.header()), chart, PngWriter.PRINT_DPI);
         }
@@ -89,7 +90,8 @@ public final class CensoredCommand implements Callable<Integer> {
         }
         if (chart != null) {
             out.println();
-            out.println("Probability plot written to " + chart);
+            out.println(drawable ? "Probability plot written to " + chart
+                    : "No probability plot written: " + a.ros().summary().notes().get(0) + ".");
         }
         out.flush();
         return CupelCommand.OK;

@@ -74,6 +74,24 @@ class CensoredCommandTest {
     }
 
     @Test
+    void overLimitsTurnTheSummaryToMaximumLikelihood(@TempDir Path dir) throws Exception {
+        Path csv = dir.resolve("au.csv");
+        Files.writeString(csv, "Sample ID,Au_ppm\nS1,<0.005\nS2,0.012\nS3,<0.01\nS4,0.031\nS5,0.007\nS6,0.25\n"
+                + "S7,1.84\nS8,<0.005\nS9,0.066\nS10,0.102\nS11,>10\nS12,0.044\nS13,3.2\nS14,0.009\n");
+        Path png = dir.resolve("au.png");
+        Run r = run("censored", csv.toString(), "--column", "Au_ppm", "--chart", png.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("Recommendation: use MLE lognormal"), r.out());
+        assertTrue(r.out().contains("Kaplan–Meier: not applicable"), r.out());
+        assertTrue(r.out().contains("No probability plot written: not applicable: ROS handles"), r.out());
+        assertTrue(!Files.exists(png));
+        String dump = System.getProperty("cupel.cli.out");
+        if (dump != null) {
+            Files.writeString(Path.of(dump + ".au.txt"), r.out());
+        }
+    }
+
+    @Test
     void unknownColumnIsAnInputErrorNamingTheColumns(@TempDir Path dir) throws Exception {
         Path csv = dir.resolve("mn.csv");
         Files.writeString(csv, MANGANESE);

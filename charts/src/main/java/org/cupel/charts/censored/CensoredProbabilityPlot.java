@@ -42,8 +42,14 @@ public final class CensoredProbabilityPlot {
             XYSeries empty = chart.addSeries("no data", new double[] {0}, new double[] {1});
             empty.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
             empty.setMarker(SeriesMarkers.NONE);
-            chart.addAnnotation(new AnnotationText(ros.summary().notes().get(0), ChartStyle.WIDTH / 2.0,
-                    ChartStyle.HEIGHT / 2.0, true));
+            chart.getStyler().setLegendVisible(false);
+            chart.getStyler().setAxisTicksVisible(false);
+            String why = ros.summary().notes().get(0);
+            int cut = why.indexOf(':');
+            chart.addAnnotation(new AnnotationText("No probability plot: ROS is not applicable", ChartStyle.WIDTH / 2.0,
+                    ChartStyle.HEIGHT / 2.0 + 12, true));
+            chart.addAnnotation(new AnnotationText(cut > 0 ? why.substring(cut + 1).strip() : why,
+                    ChartStyle.WIDTH / 2.0, ChartStyle.HEIGHT / 2.0 - 12, true));
             return chart;
         }
         points.sort(Comparator.comparingDouble(Ros.Point::normalQuantile));

@@ -38,4 +38,17 @@ class CensoredProbabilityPlotTest {
             PngWriter.write(chart, Path.of(out), PngWriter.SCREEN_DPI);
         }
     }
+
+    @Test
+    void notApplicableSaysWhyInsteadOfDrawingPoints(@TempDir Path dir) throws Exception {
+        CensoredSample over = CensoredSample.builder().detected(1).detected(2).detected(3).above(10).build();
+        XYChart chart = CensoredProbabilityPlot.create(Ros.fit(over), "Au (g/t)", "Censored probability plot");
+        assertEquals(1, chart.getSeriesMap().size());
+        Path png = dir.resolve("empty.png");
+        PngWriter.write(chart, png, PngWriter.SCREEN_DPI);
+        String out = System.getProperty("cupel.chart.out");
+        if (out != null) {
+            PngWriter.write(chart, Path.of(out + ".empty.png"), PngWriter.SCREEN_DPI);
+        }
+    }
 }
