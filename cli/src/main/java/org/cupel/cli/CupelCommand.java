@@ -26,6 +26,8 @@ import picocli.CommandLine.Option;
             DemoCommand.class,
             BlanksCommand.class,
             BatchesCommand.class,
+            CensoredCommand.class,
+            DlCheckCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 
