@@ -47,7 +47,7 @@ public final class BiasAnalysis {
         for (double v : x) {
             ss += (v - mean) * (v - mean);
         }
-        double half = new TDistribution(null, n - 1).inverseCumulativeProbability(0.975)
+        double half = new TDistribution(null, n - 1, 1e-14).inverseCumulativeProbability(0.975)
                 * Math.sqrt(ss / (n - 1) / n);
         return Estimate.of(mean, mean - half, mean + half, n, how);
     }

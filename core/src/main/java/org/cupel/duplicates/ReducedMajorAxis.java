@@ -50,7 +50,7 @@ public final class ReducedMajorAxis {
         double intercept = my - slope * mx;
         double slopeSe = Math.abs(slope) * Math.sqrt((1 - r * r) / n);
         double interceptSe = sy * Math.sqrt(((1 - r * r) / n) * (1 + mx * mx / (sx * sx)));
-        double t = new TDistribution(null, n - 2).inverseCumulativeProbability(0.975);
+        double t = new TDistribution(null, n - 2, 1e-14).inverseCumulativeProbability(0.975);
         return new RmaFit(slope, intercept, slopeSe, interceptSe,
                 new double[] {slope - t * slopeSe, slope + t * slopeSe},
                 new double[] {intercept - t * interceptSe, intercept + t * interceptSe}, r, n, "");
