@@ -60,7 +60,7 @@ public final class DuplicateAnalysis {
     }
 
     private static List<OutlierPair> outliers(ScreenedPairs set, PrecisionModelResult model, double hardLimit) {
-        List<OutlierPair> out = new ArrayList<>();
+        Map<Integer, List<OutlierPair.Test>> flagged = new java.util.TreeMap<>();
         ScreenedPairs.Members abs = set.absolute();
         if (model.available()) {
             boolean[] above = ThompsonHowarth.above(NormalDifferenceConstants.P99, model.thompsonHowarth().model(),
@@ -68,7 +68,7 @@ public final class DuplicateAnalysis {
             int[] rows = abs.rows();
             for (int i = 0; i < rows.length; i++) {
                 if (above[i]) {
-                    out.add(outlier(set.pairs().get(rows[i]), OutlierPair.Test.ABOVE_99_PERCENT_LINE));
+                    flagged.computeIfAbsent(rows[i], k -> new ArrayList<>()).add(OutlierPair.Test.ABOVE_99_PERCENT_LINE);
                 }
             }
         }
@@ -78,17 +78,19 @@ public final class DuplicateAnalysis {
         int[] rows = rel.rows();
         for (int i = 0; i < rows.length; i++) {
             if (PairMeasures.hard(a[i], b[i]) > hardLimit) {
-                out.add(outlier(set.pairs().get(rows[i]), OutlierPair.Test.OUTSIDE_HARD_LIMIT));
+                flagged.computeIfAbsent(rows[i], k -> new ArrayList<>()).add(OutlierPair.Test.OUTSIDE_HARD_LIMIT);
             }
         }
+        List<OutlierPair> out = new ArrayList<>();
+        flagged.forEach((row, tests) -> out.add(outlier(set.pairs().get(row), tests)));
         out.sort(Comparator.comparingDouble(OutlierPair::hard).reversed());
         return out;
     }
 
-    private static OutlierPair outlier(DuplicatePair p, OutlierPair.Test test) {
+    private static OutlierPair outlier(DuplicatePair p, List<OutlierPair.Test> tests) {
         double a = p.original().value();
         double b = p.duplicate().value();
         return new OutlierPair(p.id(), p.originalId(), p.batch(), p.original().display(), p.duplicate().display(),
-                PairMeasures.hard(a, b), test);
+                PairMeasures.hard(a, b), tests);
     }
 }

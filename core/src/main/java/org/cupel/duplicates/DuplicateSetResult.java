@@ -1,5 +1,6 @@
 package org.cupel.duplicates;
 
+import com.fasterxml.jackson.annotation.JsonIgnore;
 import java.util.List;
 import org.cupel.assay.QcRole;
 
@@ -13,12 +14,12 @@ import org.cupel.assay.QcRole;
  * @param model Thompson–Howarth and RMS SD regression (or why not fitted)
  * @param bias duplicate against original (umpire against primary lab)
  * @param outliers flagged pairs, most extreme HARD first
- * @param pairs the pairs of the set, for charts: originals and duplicates of the relative set
+ * @param pairs the values of the set, for charts (not written to JSON: it can hold 50 000 pairs)
  * @param batches the same precision summary per batch
  */
 public record DuplicateSetResult(String analyte, String unit, QcRole type, PrecisionSummary precision,
                                  PrecisionModelResult model, BiasResult bias, List<OutlierPair> outliers,
-                                 PairValues pairs, List<BatchPrecision> batches) {
+                                 @JsonIgnore PairValues pairs, List<BatchPrecision> batches) {
     public DuplicateSetResult {
         outliers = List.copyOf(outliers);
         batches = List.copyOf(batches);

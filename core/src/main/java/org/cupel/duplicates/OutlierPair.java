@@ -9,10 +9,19 @@ package org.cupel.duplicates;
  * @param original the original as reported
  * @param duplicate the duplicate as reported
  * @param hard HARD of the pair as a fraction
- * @param test which test flagged it
+ * @param tests which tests flagged it
  */
 public record OutlierPair(String id, String originalId, String batch, String original, String duplicate,
-                          double hard, Test test) {
+                          double hard, java.util.List<Test> tests) {
+
+    public OutlierPair {
+        tests = java.util.List.copyOf(tests);
+    }
+
+    /** The tests' labels joined for a table cell. */
+    public String testLabels() {
+        return String.join("; ", tests.stream().map(Test::label).toList());
+    }
 
     /** The tests that flag a pair. */
     public enum Test {

@@ -272,11 +272,11 @@ public final class DuplicatesSection {
                 }
                 OutlierPair o = list.get(i);
                 rows.add(List.of(s.type().label(), o.id(), o.originalId(), o.batch(), o.original(), o.duplicate(),
-                        pct1(o.hard()), o.test().label()));
+                        pct1(o.hard()), o.testLabels()));
             }
         }
         return new ReportTable("duplicates-outliers-" + r.analyte(), r.analyte() + ": pairs flagged",
-                List.of("Type", "Duplicate ID", "Original ID", "Batch", "Original", "Duplicate", "HARD", "Test"), rows,
+                List.of("Type", "Duplicate ID", "Original ID", "Batch", "Original", "Duplicate", "HARD", "Flagged by"), rows,
                 more > 0 ? more + " further flagged pairs not listed (the " + OUTLIERS_LISTED
                         + " with the largest HARD per type are shown)." : "");
     }
