@@ -21,11 +21,8 @@ import picocli.CommandLine.Option;
         footer = {"", "Example:", "  cupel demo demo-project && cupel report demo-project --out qc-appendix"},
         subcommands = {
             CommandLine.HelpCommand.class,
-<<<<<<< HEAD
-            DuplicatesCommand.class,
-=======
             DemoCommand.class,
->>>>>>> main
+            DuplicatesCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 

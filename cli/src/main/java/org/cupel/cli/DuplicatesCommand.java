@@ -23,7 +23,10 @@ import org.cupel.duplicates.DuplicateSettings;
 import org.cupel.duplicates.Estimate;
 import org.cupel.duplicates.ModelFit;
 import org.cupel.duplicates.OutlierPair;
+import org.cupel.duplicates.PairExtraction;
 import org.cupel.duplicates.PairsFile;
+import org.cupel.ingest.ProjectLoader;
+import org.cupel.project.Project;
 import org.cupel.duplicates.PrecisionSummary;
 import org.cupel.duplicates.RuleOutcome;
 import org.cupel.project.DataIssue;
@@ -88,7 +91,19 @@ public final class DuplicatesCommand implements Callable<Integer> {
         }
         List<DuplicateReport> reports = new ArrayList<>();
         List<DataIssue> issues = new ArrayList<>();
-        {
+        if (Files.isDirectory(input)) {
+            Project project = ProjectLoader.load(input);
+            DuplicateSettings fromConfig = project.config().section("duplicates", DuplicateSettings.class,
+                    DuplicateSettings.DEFAULTS);
+            if (dlMultiple != null) {
+                fromConfig = fromConfig.withLimitMultipleOfDetection(dlMultiple);
+            }
+            reports.addAll(PairExtraction.analyse(project, fromConfig, analyte, only));
+            if (reports.isEmpty()) {
+                throw new InputException(input + ": no duplicates found" + (only == null ? "" : " of type " + type)
+                        + "; the sample register marks duplicates by role with the original sample ID as reference.");
+            }
+        } else {
             PairsFile.Result r = PairsFile.read(input, only == null ? QcRole.PULP_DUPLICATE : only);
             issues.addAll(r.issues());
             List<DuplicatePair> pairs = r.pairs().stream().filter(p -> only == null || p.type() == only).toList();

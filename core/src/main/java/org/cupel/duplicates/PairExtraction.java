@@ -6,6 +6,7 @@ import java.util.OptionalInt;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
+import org.cupel.project.InputException;
 import org.cupel.project.Project;
 
 /**
@@ -54,10 +55,32 @@ public final class PairExtraction {
 
     /** The duplicate report of every analyte of the project, precision stated at the CRM grades by default. */
     public static List<DuplicateReport> analyse(Project project, DuplicateSettings settings) {
+        return analyse(project, settings, null, null);
+    }
+
+    /**
+     * As {@link #analyse(Project, DuplicateSettings)}, for one analyte and/or one duplicate type.
+     *
+     * @param analyte analyte name, or null for all
+     * @param type duplicate type, or null for all
+     * @throws InputException when the project has no such analyte
+     */
+    public static List<DuplicateReport> analyse(Project project, DuplicateSettings settings, String analyte,
+                                                QcRole type) {
+        if (analyte != null && project.analyte(analyte).isEmpty()) {
+            throw new InputException("analyte " + analyte + " is not in project " + project.name() + "; it has "
+                    + String.join(", ", project.analyteNames()) + ".");
+        }
         List<DuplicateReport> out = new ArrayList<>();
         for (AnalyteColumn column : project.analytes().values()) {
             String name = column.analyte().name();
-            Extracted e = extract(project, column);
+            if (analyte != null && !analyte.equals(name)) {
+                continue;
+            }
+            Extracted all = extract(project, column);
+            Extracted e = type == null ? all : new Extracted(
+                    all.pairs().stream().filter(p -> p.type() == type).toList(),
+                    all.orphans().stream().filter(o -> o.type() == type).toList());
             if (e.pairs().isEmpty() && e.orphans().isEmpty()) {
                 continue;
             }
