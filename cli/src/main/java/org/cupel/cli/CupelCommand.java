@@ -28,6 +28,7 @@ import picocli.CommandLine.Option;
             BatchesCommand.class,
             CensoredCommand.class,
             DlCheckCommand.class,
+            DuplicatesCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 
