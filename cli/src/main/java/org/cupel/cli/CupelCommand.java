@@ -29,6 +29,7 @@ import picocli.CommandLine.Option;
             CensoredCommand.class,
             DlCheckCommand.class,
             DuplicatesCommand.class,
+            RecoveryCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 
