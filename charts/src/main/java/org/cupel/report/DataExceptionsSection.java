@@ -27,10 +27,10 @@ public final class DataExceptionsSection {
         int fatal = reg.withSeverity(DataIssue.Severity.FATAL).size();
         List<FileAccount> unbalanced = project.files().stream().filter(f -> !f.balances()).toList();
         List<ReportBlock> blocks = new ArrayList<>();
-        blocks.add(new ReportBlock.Paragraph(String.format(Locale.US, "%,d input problems were found: %,d rows or "
-                + "values left out of the analyses, %,d warnings on rows that were still analysed, and %,d files "
-                + "that could not be used. Each is listed with its file, line and column, what was found, and how to "
-                + "fix it.", reg.size(), excluded, warnings, fatal)));
+        blocks.add(new ReportBlock.Paragraph("Input problems found: " + reg.size() + ". Left out of the analyses "
+                + "(rows or values): " + excluded + "; warnings on rows still analysed: " + warnings
+                + "; files that could not be used: " + fatal + ". Each is listed with its file, line and column, what "
+                + "was found, what was expected, and how to fix it."));
         if (fatal > 0) {
             blocks.add(new ReportBlock.Callout(ReportBlock.Level.FAIL, fatal + " input file(s) could not be used; "
                     + "their rows are missing from every analysis until the files are fixed."));

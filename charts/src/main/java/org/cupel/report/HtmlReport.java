@@ -16,6 +16,8 @@ public final class HtmlReport {
     static final DateTimeFormatter STAMP =
             DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'", Locale.ROOT).withZone(ZoneOffset.UTC);
 
+    private static final java.util.regex.Pattern DATE = java.util.regex.Pattern.compile("\\d{4}-\\d{2}-\\d{2}");
+
     private final QcReport report;
     private final ReportFiles files;
     private final StringBuilder out = new StringBuilder(64 * 1024);
@@ -97,7 +99,8 @@ public final class HtmlReport {
         for (List<String> row : t.rows().subList(0, Math.min(t.rows().size(), TableLimit.SHOWN))) {
             out.append("<tr>");
             for (String cell : row) {
-                out.append(TableLimit.isNumeric(cell) ? "<td class=\"n\">" : "<td>").append(e(cell))
+                out.append(TableLimit.isNumeric(cell) ? "<td class=\"n\">"
+                        : DATE.matcher(cell).matches() ? "<td class=\"d\">" : "<td>").append(e(cell))
                         .append("</td>");
             }
             out.append("</tr>\n");

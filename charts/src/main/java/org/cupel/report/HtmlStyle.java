@@ -13,7 +13,7 @@ final class HtmlStyle {
             "body{margin:0;color:var(--ink);background:#fff;font-family:\"DejaVu Sans\",\"Segoe UI\",Helvetica,Arial,"
                     + "sans-serif;line-height:1.5}",
             "header,nav,main,footer{max-width:62rem;margin:0 auto;padding:0 1.5rem}",
-            "header{padding-top:2rem;padding-bottom:1rem;border-bottom:3px solid var(--accent)}",
+            "header{padding-top:2rem;padding-bottom:1rem}", "header::after{content:\"\";display:block;margin-top:1rem;border-bottom:3px solid var(--accent)}",
             ".kicker{margin:0;text-transform:uppercase;letter-spacing:.12em;font-size:.8rem;color:var(--accent);"
                     + "font-weight:bold}",
             "h1{margin:.2rem 0 .4rem;font-size:2rem;line-height:1.2}",
@@ -37,6 +37,7 @@ final class HtmlStyle {
             "th{background:var(--band);border-bottom:2px solid #9aa1ab;white-space:nowrap}",
             "tbody tr:nth-child(even){background:#fafbfc}",
             "td.n{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}",
+            "td.d{white-space:nowrap}",
             "td.empty{color:var(--muted);font-style:italic}",
             "a.csv{font-weight:normal;font-size:.8rem;margin-left:.5rem;color:var(--accent)}",
             ".note{color:var(--muted);font-size:.85rem;margin-top:.3rem}",

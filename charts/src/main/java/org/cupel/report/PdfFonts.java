@@ -61,11 +61,11 @@ record PdfFonts(BaseFont regular, BaseFont bold) {
     }
 
     Font tableHead() {
-        return new Font(bold, 7.8f, Font.NORMAL, INK);
+        return new Font(bold, PdfReport.TABLE_FONT, Font.NORMAL, INK);
     }
 
     Font tableBody() {
-        return new Font(regular, 7.8f, Font.NORMAL, INK);
+        return new Font(regular, PdfReport.TABLE_FONT, Font.NORMAL, INK);
     }
 
     Font frame() {

@@ -43,6 +43,7 @@ public final class PdfReport {
     static final float MARGIN_X = 54f;
     static final float MARGIN_TOP = 66f;
     static final float MARGIN_BOTTOM = 58f;
+    static final float TABLE_FONT = 7.8f;
 
     private final QcReport report;
     private final ReportFiles files;
@@ -155,8 +156,16 @@ public final class PdfReport {
         caption.setKeepTogether(true);
         ch.add(caption);
         PdfPTable table = new PdfPTable(t.columns().size());
-        table.setWidthPercentage(100);
-        table.setWidths(PdfTableWidths.of(t));
+        float available = doc.getPageSize().getWidth() - 2 * MARGIN_X;
+        float[] widths = PdfTableWidths.of(t, fonts.bold(), fonts.regular(), TABLE_FONT, available);
+        float sum = 0;
+        for (float w : widths) {
+            sum += w;
+        }
+        // Narrow tables keep their natural width (left-aligned) rather than stretching across the page.
+        table.setTotalWidth(sum > available ? scaled(widths, available / sum) : widths);
+        table.setLockedWidth(true);
+        table.setHorizontalAlignment(Element.ALIGN_LEFT);
         table.setHeaderRows(1);
         table.setSplitLate(false);
         table.setSplitRows(true);
@@ -175,7 +184,8 @@ public final class PdfReport {
             for (String v : rows.get(r)) {
                 PdfPCell cell = new PdfPCell(new Phrase(v, fonts.tableBody()));
                 cell.setBorder(Rectangle.BOTTOM);
-                cell.setBorderColorBottom(new Color(217, 220, 225));
+                cell.setBorderColor(new Color(205, 209, 215));
+                cell.setBorderWidthBottom(0.5f);
                 cell.setPadding(3f);
                 cell.setHorizontalAlignment(TableLimit.isNumeric(v) ? Element.ALIGN_RIGHT : Element.ALIGN_LEFT);
                 table.addCell(cell);
@@ -199,18 +209,32 @@ public final class PdfReport {
     private void addFigure(Chapter ch, ReportBlock.Figure f) throws IOException {
         Image img = Image.getInstance(png.apply(f));
         float width = doc.getPageSize().getWidth() - 2 * MARGIN_X;
-        float height = (doc.getPageSize().getHeight() - MARGIN_TOP - MARGIN_BOTTOM) * 0.62f;
+        float height = (doc.getPageSize().getHeight() - MARGIN_TOP - MARGIN_BOTTOM) * 0.55f;
         img.scaleToFit(width, height);
-        img.setAlignment(Image.MIDDLE);
-        Paragraph holder = new Paragraph();
-        holder.setSpacingBefore(8f);
+        PdfPTable holder = new PdfPTable(1);
+        holder.setTotalWidth(width);
+        holder.setLockedWidth(true);
         holder.setKeepTogether(true);
-        holder.add(new Chunk(img, 0, 0, true));
-        Paragraph caption = new Paragraph(f.caption(), fonts.muted());
-        caption.setSpacingAfter(10f);
-        holder.add(Chunk.NEWLINE);
-        holder.add(caption);
+        holder.setSpacingBefore(6f);
+        holder.setSpacingAfter(10f);
+        PdfPCell picture = new PdfPCell(img, false);
+        picture.setBorder(Rectangle.NO_BORDER);
+        picture.setHorizontalAlignment(Element.ALIGN_CENTER);
+        picture.setPadding(0f);
+        holder.addCell(picture);
+        PdfPCell caption = new PdfPCell(new Phrase(f.caption(), fonts.muted()));
+        caption.setBorder(Rectangle.NO_BORDER);
+        caption.setPaddingTop(3f);
+        holder.addCell(caption);
         ch.add(holder);
+    }
+
+    private static float[] scaled(float[] w, float factor) {
+        float[] out = new float[w.length];
+        for (int i = 0; i < w.length; i++) {
+            out[i] = w[i] * factor;
+        }
+        return out;
     }
 
     private static Color levelColour(ReportBlock.Level level) {
