@@ -1,0 +1,182 @@
+package org.cupel.ingest;
+
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.charset.CharacterCodingException;
+import java.util.ArrayList;
+import java.util.List;
+import org.cupel.project.InputException;
+
+/**
+ * Splits delimited text into records by hand-written character scanning (no regular expressions):
+ * RFC 4180 quoting with doubled quotes and line breaks inside quotes, CR, LF and CRLF line ends, cells
+ * trimmed. A field longer than {@link #MAX_FIELD_CHARS} or a record wider than {@link #MAX_CELLS} stops
+ * the read with a clear message instead of exhausting memory.
+ */
+final class DelimitedTokenizer {
+    /** 1 MB of text in one cell is far beyond any assay value or sample ID; it means a broken quote. */
+    static final int MAX_FIELD_CHARS = 1 << 20;
+    static final int MAX_CELLS = 20_000;
+    private static final int EOF = -1;
+
+    private final Reader in;
+    private final char delimiter;
+    private final String file;
+    private final char[] buf = new char[1 << 16];
+    private int pos;
+    private int end;
+    private long line = 1;
+    private final StringBuilder field = new StringBuilder();
+
+    DelimitedTokenizer(Reader in, char delimiter, String file) {
+        this.in = in;
+        this.delimiter = delimiter;
+        this.file = file;
+    }
+
+    /** The next record, or {@code null} at the end of the input. An empty line gives one empty cell. */
+    RawRow next() {
+        int c = peek();
+        if (c == EOF) {
+            return null;
+        }
+        long recordLine = line;
+        List<String> cells = new ArrayList<>();
+        while (true) {
+            int stop = readField(cells.size() + 1);
+            cells.add(field.toString().strip());
+            if (cells.size() > MAX_CELLS) {
+                throw new InputException(file + ":" + recordLine + ": a row has more than " + MAX_CELLS
+                        + " cells, which is not a lab table; check that the file is a delimited text table.");
+            }
+            if (stop != delimiter) {
+                return new RawRow(recordLine, cells);
+            }
+        }
+    }
+
+    /** Reads one field into {@link #field}; returns the character that ended it (delimiter, '\n' or EOF). */
+    private int readField(int column) {
+        field.setLength(0);
+        int c = read();
+        while (c == ' ' || (c == '\t' && delimiter != '\t')) {
+            c = read();
+        }
+        if (c == '"') {
+            return readQuoted(column);
+        }
+        while (true) {
+            if (c == delimiter || c == EOF) {
+                return c;
+            }
+            if (c == '\r' || c == '\n') {
+                return endLine(c);
+            }
+            append(c, column);
+            c = read();
+        }
+    }
+
+    private int readQuoted(int column) {
+        long openLine = line;
+        while (true) {
+            int c = read();
+            if (c == EOF) {
+                throw new InputException(file + ":" + openLine + ":" + column + ": a quoted cell opened here is "
+                        + "never closed (expected a closing \" before the end of the file); close the quote or "
+                        + "double any quote inside the cell (\"\").");
+            }
+            if (c == '"') {
+                if (peek() == '"') {
+                    read();
+                    append('"', column);
+                    continue;
+                }
+                return afterClosingQuote(column);
+            }
+            if (c == '\r') {
+                if (peek() == '\n') {
+                    read();
+                }
+                line++;
+                append('\n', column);
+            } else {
+                if (c == '\n') {
+                    line++;
+                }
+                append(c, column);
+            }
+        }
+    }
+
+    /** Text between a closing quote and the delimiter is kept as written (lenient, as spreadsheets are). */
+    private int afterClosingQuote(int column) {
+        while (true) {
+            int c = read();
+            if (c == delimiter || c == EOF) {
+                return c;
+            }
+            if (c == '\r' || c == '\n') {
+                return endLine(c);
+            }
+            append(c, column);
+        }
+    }
+
+    private int endLine(int c) {
+        if (c == '\r' && peek() == '\n') {
+            read();
+        }
+        line++;
+        return '\n';
+    }
+
+    private void append(int c, int column) {
+        if (c == 0) {
+            throw new InputException(file + ":" + line + ":" + column + ": the file contains binary data (a NUL "
+                    + "character), expected a text table; export the results as CSV or XLSX.");
+        }
+        if (field.length() >= MAX_FIELD_CHARS) {
+            throw new InputException(file + ":" + line + ":" + column + ": a cell is longer than 1 MB, expected "
+                    + "short cell texts; check for an unbalanced quote (\") above this line.");
+        }
+        field.append((char) c);
+    }
+
+    private int read() {
+        int c = peek();
+        if (c != EOF) {
+            pos++;
+        }
+        return c;
+    }
+
+    private int peek() {
+        if (pos < end) {
+            return buf[pos];
+        }
+        if (end == EOF) {
+            return EOF;
+        }
+        try {
+            int n;
+            do {
+                n = in.read(buf, 0, buf.length);
+            } while (n == 0);
+            if (n < 0) {
+                end = EOF;
+                pos = 0;
+                return EOF;
+            }
+            pos = 0;
+            end = n;
+            return buf[0];
+        } catch (CharacterCodingException e) {
+            throw new InputException(file + ":" + line + ": the text is not valid in its encoding (expected "
+                    + "UTF-8, with or without byte-order mark); save the file as \"CSV UTF-8\".", e);
+        } catch (IOException e) {
+            throw new InputException(file + ":" + line + ": the file could not be read (" + e.getMessage()
+                    + "); check that it is not locked or truncated.", e);
+        }
+    }
+}

@@ -1,0 +1,49 @@
+package org.cupel.ingest;
+
+import java.util.List;
+import java.util.Map;
+import org.cupel.assay.MissingReason;
+import org.cupel.config.CupelConfig;
+
+/**
+ * Every setting of the {@code ingest} section of {@code cupel.yaml} (docs/config.md). The value
+ * conventions are flat here, as a user writes them, and grouped by {@link #valueConventions()}.
+ *
+ * @param columns header → the header Cupel should read it as ({@code Au1: "Au g/t FA-AAS"})
+ * @param units analyte → the unit values are reported in ({@code Au: g/t}); else the first column's unit
+ * @param methodPriority analyte → methods in order of preference for the reported value
+ * @param sheet the XLSX sheet to read; empty for the first
+ * @param dateFormat how dates are written: {@code ISO} ({@code 2025-03-14}), {@code DMY} or {@code MDY}
+ *     (with {@code /}, {@code -} or {@code .})
+ */
+public record IngestSettings(boolean decimalComma, boolean negativeMeansBelowDetection, boolean thousandsSeparator,
+                             List<String> belowDetectionCodes, Map<String, MissingReason> missingCodes,
+                             Map<String, Double> detectionLimits, List<String> repeatSuffixes,
+                             Map<String, String> columns, Map<String, String> units,
+                             Map<String, List<String>> methodPriority, String sheet, String dateFormat) {
+
+    public static final IngestSettings DEFAULTS = of(ValueConventions.DEFAULTS);
+
+    public IngestSettings {
+        columns = columns == null ? Map.of() : Map.copyOf(columns);
+        units = units == null ? Map.of() : Map.copyOf(units);
+        methodPriority = methodPriority == null ? Map.of() : Map.copyOf(methodPriority);
+        sheet = sheet == null ? "" : sheet;
+        dateFormat = dateFormat == null || dateFormat.isBlank() ? "ISO" : dateFormat;
+    }
+
+    public static IngestSettings from(CupelConfig config) {
+        return config.section("ingest", IngestSettings.class, DEFAULTS);
+    }
+
+    public ValueConventions valueConventions() {
+        return new ValueConventions(decimalComma, negativeMeansBelowDetection, thousandsSeparator,
+                belowDetectionCodes, missingCodes, detectionLimits, repeatSuffixes);
+    }
+
+    private static IngestSettings of(ValueConventions v) {
+        return new IngestSettings(v.decimalComma(), v.negativeMeansBelowDetection(), v.thousandsSeparator(),
+                v.belowDetectionCodes(), v.missingCodes(), v.detectionLimits(), v.repeatSuffixes(),
+                Map.of(), Map.of(), Map.of(), "", "ISO");
+    }
+}

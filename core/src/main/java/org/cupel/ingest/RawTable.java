@@ -1,0 +1,79 @@
+package org.cupel.ingest;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.cupel.assay.SourceLocation;
+import org.cupel.project.DataIssue;
+
+/**
+ * A table as read from a file: the lab's header block above it, the column headers, and the data rows.
+ * Nothing is interpreted yet; the readers of lab files, the register and the catalog work on this.
+ *
+ * @param file the file name used in messages
+ * @param headerBlock {@code key: value} lines above the table, keys lower-case with single spaces
+ * @param columns the header row, trimmed
+ * @param headerLine the 1-based line (or sheet row) of the header row
+ * @param rows the data rows below the header; rows whose cells are all empty are not kept
+ * @param warnings problems that did not stop the read (formulas read as cached values, ...)
+ */
+public record RawTable(String file, Map<String, String> headerBlock, List<String> columns, long headerLine,
+                       List<RawRow> rows, List<DataIssue> warnings) {
+
+    public RawTable {
+        headerBlock = Map.copyOf(headerBlock);
+        columns = List.copyOf(columns);
+        rows = List.copyOf(rows);
+        warnings = List.copyOf(warnings);
+    }
+
+    public RawTable(String file, Map<String, String> headerBlock, List<String> columns, long headerLine,
+                    List<RawRow> rows) {
+        this(file, headerBlock, columns, headerLine, rows, List.of());
+    }
+
+    /**
+     * The 0-based index of the first column whose header matches one of {@code aliases}, or -1.
+     * Matching ignores case, surrounding space, and treats {@code _}, {@code -} and space alike.
+     */
+    public int column(String... aliases) {
+        for (String alias : aliases) {
+            String a = normalise(alias);
+            for (int i = 0; i < columns.size(); i++) {
+                if (normalise(columns.get(i)).equals(a)) {
+                    return i;
+                }
+            }
+        }
+        return -1;
+    }
+
+    /** Where {@code row}'s cell in {@code column} (0-based) is; the location's column is 1-based. */
+    public SourceLocation at(RawRow row, int column) {
+        return new SourceLocation(file, row.line(), column + 1);
+    }
+
+    /** Where {@code row} is, as a whole. */
+    public SourceLocation at(RawRow row) {
+        return new SourceLocation(file, row.line(), 0);
+    }
+
+    /** Header matching form: lower case, {@code _ -} and runs of space as one space, trimmed. */
+    public static String normalise(String header) {
+        StringBuilder sb = new StringBuilder(header.length());
+        boolean space = false;
+        for (int i = 0; i < header.length(); i++) {
+            char c = header.charAt(i);
+            if (c == '_' || c == '-' || Character.isWhitespace(c)) {
+                space = sb.length() > 0;
+            } else {
+                if (space) {
+                    sb.append(' ');
+                    space = false;
+                }
+                sb.append(c);
+            }
+        }
+        return sb.toString().toLowerCase(Locale.ROOT);
+    }
+}

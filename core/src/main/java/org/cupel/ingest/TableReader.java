@@ -1,0 +1,180 @@
+package org.cupel.ingest;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.Reader;
+import java.nio.charset.Charset;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Locale;
+import java.util.NoSuchElementException;
+import java.util.function.Predicate;
+import org.cupel.project.DataIssue;
+import org.cupel.project.InputException;
+
+/**
+ * Reads a table file (.csv, .tsv, .txt or .xlsx) into a {@link RawTable}. Text files: UTF-8 with or
+ * without byte-order mark (UTF-16 with a byte-order mark too, as spreadsheets save "Unicode text"),
+ * delimiter sniffed among comma, semicolon and tab, RFC 4180 quotes, any line ending. Above the table a
+ * lab's header block of {@code key: value} or {@code key,value} lines is collected. Problems that make the
+ * file unusable throw {@link InputException} with a one-sentence message saying where, what was expected
+ * and how to fix it.
+ */
+public final class TableReader {
+    /** Column headers that name the sample ID column (matched as {@link RawTable#column}). */
+    public static final List<String> SAMPLE_ID_ALIASES = List.of("sample id", "sample_id", "sampleid", "sample",
+            "sample no", "sample number", "sample #", "id");
+    private static final int SNIFF_BYTES = 64 * 1024;
+
+    private TableReader() {
+    }
+
+    /** Reads {@code file}; the header row is the first row with a sample-ID column, else the widest early row. */
+    public static RawTable read(Path file) {
+        return read(file, TableReader::hasSampleIdColumn);
+    }
+
+    public static RawTable read(Path file, Predicate<List<String>> isHeaderRow) {
+        return read(file, file.toString(), isHeaderRow, null);
+    }
+
+    /**
+     * @param displayName the file name used in messages and source locations
+     * @param sheet for XLSX, the sheet to read; null or empty for the first
+     */
+    public static RawTable read(Path file, String displayName, Predicate<List<String>> isHeaderRow, String sheet) {
+        if (!Files.isRegularFile(file) || !Files.isReadable(file)) {
+            throw new InputException(displayName + ": the file does not exist or cannot be read; check the path "
+                    + "and its permissions.");
+        }
+        String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
+        List<DataIssue> warnings = new ArrayList<>();
+        if (name.endsWith(".xlsx") || name.endsWith(".xlsm")) {
+            List<RawRow> rows = XlsxSheetReader.read(file, displayName, sheet, warnings);
+            return TableAssembler.assemble(displayName, rows.iterator(), isHeaderRow, warnings);
+        }
+        if (name.endsWith(".xls")) {
+            throw new InputException(displayName + ": the old binary Excel format (.xls) is not read; save the "
+                    + "workbook as .xlsx or the sheet as CSV UTF-8.");
+        }
+        return readText(file, displayName, isHeaderRow, warnings);
+    }
+
+    /** Whether a row holds a sample-ID column header. */
+    public static boolean hasSampleIdColumn(List<String> cells) {
+        for (String c : cells) {
+            String n = RawTable.normalise(c);
+            for (String alias : SAMPLE_ID_ALIASES) {
+                if (n.equals(RawTable.normalise(alias))) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
+    private static RawTable readText(Path file, String displayName, Predicate<List<String>> isHeaderRow,
+                                     List<DataIssue> warnings) {
+        byte[] head = head(file, displayName);
+        Charset charset = charsetOf(head);
+        rejectBinary(head, charset, displayName);
+        char delimiter = DelimiterSniffer.sniff(decodePrefix(head, charset), isHeaderRow);
+        try (InputStream in = Files.newInputStream(file);
+             Reader reader = new InputStreamReader(skipBom(in, head), charset.newDecoder()
+                     .onMalformedInput(CodingErrorAction.REPORT)
+                     .onUnmappableCharacter(CodingErrorAction.REPORT))) {
+            DelimitedTokenizer t = new DelimitedTokenizer(reader, delimiter, displayName);
+            return TableAssembler.assemble(displayName, iterate(t), isHeaderRow, warnings);
+        } catch (IOException e) {
+            throw new InputException(displayName + ": the file could not be read (" + e.getMessage()
+                    + "); check that it is not locked or truncated.", e);
+        }
+    }
+
+    private static byte[] head(Path file, String displayName) {
+        try (InputStream in = Files.newInputStream(file)) {
+            return in.readNBytes(SNIFF_BYTES);
+        } catch (IOException e) {
+            throw new InputException(displayName + ": the file could not be read (" + e.getMessage()
+                    + "); check the path and its permissions.", e);
+        }
+    }
+
+    private static Charset charsetOf(byte[] b) {
+        if (b.length >= 2 && (b[0] & 0xFF) == 0xFF && (b[1] & 0xFF) == 0xFE) {
+            return StandardCharsets.UTF_16LE;
+        }
+        if (b.length >= 2 && (b[0] & 0xFF) == 0xFE && (b[1] & 0xFF) == 0xFF) {
+            return StandardCharsets.UTF_16BE;
+        }
+        return StandardCharsets.UTF_8;
+    }
+
+    private static int bomLength(byte[] b, Charset charset) {
+        if (charset != StandardCharsets.UTF_8) {
+            return 2;
+        }
+        boolean utf8Bom = b.length >= 3 && (b[0] & 0xFF) == 0xEF && (b[1] & 0xFF) == 0xBB && (b[2] & 0xFF) == 0xBF;
+        return utf8Bom ? 3 : 0;
+    }
+
+    private static InputStream skipBom(InputStream in, byte[] head) throws IOException {
+        in.skipNBytes(bomLength(head, charsetOf(head)));
+        return in;
+    }
+
+    private static void rejectBinary(byte[] b, Charset charset, String displayName) {
+        if (b.length >= 4 && b[0] == 'P' && b[1] == 'K' && b[2] == 3 && b[3] == 4) {
+            throw new InputException(displayName + ": the file is a ZIP archive (probably an Excel workbook), "
+                    + "expected a text table; give it the .xlsx extension or save the sheet as CSV UTF-8.");
+        }
+        if (charset != StandardCharsets.UTF_8) {
+            return;
+        }
+        for (byte x : b) {
+            if (x == 0) {
+                throw new InputException(displayName + ": the file contains binary data (NUL bytes), expected a "
+                        + "text table; export the results as CSV or XLSX.");
+            }
+        }
+    }
+
+    /** The sniffing sample, cut at its last line break so a split character does not fail decoding. */
+    private static String decodePrefix(byte[] head, Charset charset) {
+        int start = bomLength(head, charset);
+        int end = head.length;
+        if (head.length == SNIFF_BYTES) {
+            while (end > start && head[end - 1] != '\n') {
+                end--;
+            }
+        }
+        return new String(head, start, end - start, charset);
+    }
+
+    private static Iterator<RawRow> iterate(DelimitedTokenizer t) {
+        return new Iterator<>() {
+            private RawRow next = t.next();
+
+            @Override
+            public boolean hasNext() {
+                return next != null;
+            }
+
+            @Override
+            public RawRow next() {
+                if (next == null) {
+                    throw new NoSuchElementException();
+                }
+                RawRow r = next;
+                next = t.next();
+                return r;
+            }
+        };
+    }
+}
