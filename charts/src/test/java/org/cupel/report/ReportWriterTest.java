@@ -20,6 +20,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 class ReportWriterTest {
     private static final ReportOptions SCREEN = new ReportOptions(PdfReport.Paper.A4, PngWriter.SCREEN_DPI, false);
+    /** Print resolution draws each chart once (the PDF reuses the PNG), which keeps these tests quick. */
+    private static final ReportOptions PRINT = ReportOptions.DEFAULTS;
 
     @Test
     void writesEveryPartUnderSafeNames(@TempDir Path dir) throws IOException {
@@ -45,7 +47,7 @@ class ReportWriterTest {
     @Test
     void csvNeutralisesFormulasFromTheData(@TempDir Path dir) throws IOException {
         Path out = dir.resolve("qc");
-        ReportWriter.write(ReportFixture.report(), out, SCREEN, ReportProgress.NONE);
+        ReportWriter.write(ReportFixture.report(), out, PRINT, ReportProgress.NONE);
         String csv = Files.readString(out.resolve("tables/x.csv"));
         assertTrue(csv.contains("\r\nS-7,-0.430,'=SUM(A1:A9)\r\n"), "negative number kept, formula neutralised");
         String ex = Files.readString(out.resolve("tables/data-exceptions.csv"));
@@ -57,19 +59,19 @@ class ReportWriterTest {
     void aFailureLeavesNoFolder(@TempDir Path dir) {
         Path out = dir.resolve("qc");
         QcReport broken = withFailingChart(ReportFixture.report());
-        assertThrows(IllegalStateException.class, () -> ReportWriter.write(broken, out, SCREEN, ReportProgress.NONE));
+        assertThrows(IllegalStateException.class, () -> ReportWriter.write(broken, out, PRINT, ReportProgress.NONE));
         assertEquals(List.of(), listing(dir), "neither the report nor its temporary folder exists");
     }
 
     @Test
     void anExistingFolderNeedsForceAndSurvivesAFailedReplacement(@TempDir Path dir) throws IOException {
         Path out = dir.resolve("qc");
-        ReportWriter.write(ReportFixture.report(), out, SCREEN, ReportProgress.NONE);
+        ReportWriter.write(ReportFixture.report(), out, PRINT, ReportProgress.NONE);
         byte[] before = Files.readAllBytes(out.resolve("index.html"));
         InputException e = assertThrows(InputException.class,
-                () -> ReportWriter.write(ReportFixture.report(), out, SCREEN, ReportProgress.NONE));
+                () -> ReportWriter.write(ReportFixture.report(), out, PRINT, ReportProgress.NONE));
         assertTrue(e.getMessage().contains("--force"));
-        ReportOptions force = new ReportOptions(PdfReport.Paper.A4, PngWriter.SCREEN_DPI, true);
+        ReportOptions force = new ReportOptions(PdfReport.Paper.A4, PngWriter.PRINT_DPI, true);
         assertThrows(IllegalStateException.class,
                 () -> ReportWriter.write(withFailingChart(ReportFixture.report()), out, force, ReportProgress.NONE));
         assertArrayEquals(before, Files.readAllBytes(out.resolve("index.html")), "the previous report is intact");
@@ -84,7 +86,7 @@ class ReportWriterTest {
     void forceNeverReplacesAFolderCupelDidNotWrite(@TempDir Path dir) throws IOException {
         Path out = Files.createDirectory(dir.resolve("thesis"));
         Files.writeString(out.resolve("chapter1.docx"), "precious");
-        ReportOptions force = new ReportOptions(PdfReport.Paper.A4, PngWriter.SCREEN_DPI, true);
+        ReportOptions force = new ReportOptions(PdfReport.Paper.A4, PngWriter.PRINT_DPI, true);
         assertThrows(InputException.class, () -> ReportWriter.write(ReportFixture.report(), out, force,
                 ReportProgress.NONE));
         assertEquals("precious", Files.readString(out.resolve("chapter1.docx")));
@@ -94,8 +96,8 @@ class ReportWriterTest {
     void twoRunsGiveIdenticalCsvJsonAndHtml(@TempDir Path dir) throws IOException {
         Path a = dir.resolve("a");
         Path b = dir.resolve("b");
-        ReportWriter.write(ReportFixture.report(), a, SCREEN, ReportProgress.NONE);
-        ReportWriter.write(ReportFixture.report(), b, SCREEN, ReportProgress.NONE);
+        ReportWriter.write(ReportFixture.report(), a, PRINT, ReportProgress.NONE);
+        ReportWriter.write(ReportFixture.report(), b, PRINT, ReportProgress.NONE);
         List<String> files = new ArrayList<>(listing(a.resolve("tables")).stream().map(f -> "tables/" + f).toList());
         files.add("summary.json");
         files.add("index.html");
