@@ -21,6 +21,7 @@ import picocli.CommandLine.Option;
         footer = {"", "Example:", "  cupel demo demo-project && cupel report demo-project --out qc-appendix"},
         subcommands = {
             CommandLine.HelpCommand.class,
+            DemoCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 

@@ -1,0 +1,233 @@
+package org.cupel.ingest;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.stream.Stream;
+import org.cupel.assay.AnalyteColumn;
+import org.cupel.assay.QcRole;
+import org.cupel.assay.SampleTable;
+import org.cupel.config.ConfigException;
+import org.cupel.config.CupelConfig;
+import org.cupel.project.CrmCatalog;
+import org.cupel.project.ExceptionRegister;
+import org.cupel.project.FileAccount;
+import org.cupel.project.InputException;
+import org.cupel.project.Project;
+import org.cupel.units.GradeUnit;
+
+/**
+ * Loads a project folder (docs/input-formats.md): {@code cupel.yaml} if present, {@code register.csv},
+ * {@code crm-catalog.csv} and the lab files in {@code lab/} (or, without that folder, the table files
+ * beside the register), read in name order so that results are deterministic. Each analyte is reported
+ * in {@code ingest.units}, else in the unit of the first column seen for it.
+ */
+public final class ProjectLoader {
+    public static final String CONFIG = "cupel.yaml";
+    public static final String REGISTER = "register.csv";
+    public static final String CATALOG = "crm-catalog.csv";
+    public static final String LAB_DIR = "lab";
+
+    private ProjectLoader() {
+    }
+
+    /** Loads with the folder's config (defaults when there is none); a fatal input problem throws. */
+    public static Project load(Path folder) {
+        return load(folder, readConfig(folder));
+    }
+
+    /** @throws InputException for a file that cannot be used at all */
+    public static Project load(Path folder, CupelConfig config) {
+        return new Load(folder, config, true).run();
+    }
+
+    /**
+     * Loads as far as possible for {@code cupel check}: a file that cannot be used becomes a FATAL entry of
+     * the exceptions register (and its account shows no rows) instead of stopping the load.
+     */
+    public static Project inspect(Path folder) {
+        CupelConfig config;
+        try {
+            config = readConfig(folder);
+        } catch (ConfigException | InputException e) {
+            Project p = new Load(folder, CupelConfig.defaults(), false).run();
+            p.exceptions().add(SampleJoin.fatal(CONFIG, e.getMessage()));
+            return p;
+        }
+        return new Load(folder, config, false).run();
+    }
+
+    /** The folder's {@code cupel.yaml}, or the defaults when there is none. */
+    public static CupelConfig readConfig(Path folder) {
+        requireFolder(folder);
+        Path f = folder.resolve(CONFIG);
+        if (!Files.isRegularFile(f)) {
+            return CupelConfig.defaults();
+        }
+        try {
+            return CupelConfig.fromYaml(Files.readString(f, StandardCharsets.UTF_8), CONFIG);
+        } catch (IOException e) {
+            throw new InputException(CONFIG + ": the config could not be read (" + e.getMessage()
+                    + "); save it as UTF-8 text or remove it to use the defaults.", e);
+        }
+    }
+
+    /** The lab files of a project, in name order. */
+    public static List<Path> labFiles(Path folder) {
+        Path lab = folder.resolve(LAB_DIR);
+        Path dir = Files.isDirectory(lab) ? lab : folder;
+        try (Stream<Path> s = Files.list(dir)) {
+            return s.filter(Files::isRegularFile)
+                    .filter(p -> isTable(p.getFileName().toString()))
+                    .filter(p -> dir == lab || !isProjectFile(p.getFileName().toString()))
+                    .sorted()
+                    .toList();
+        } catch (IOException e) {
+            throw new InputException(dir + ": the folder could not be listed (" + e.getMessage()
+                    + "); check its permissions.", e);
+        }
+    }
+
+    private static boolean isTable(String name) {
+        String n = name.toLowerCase(Locale.ROOT);
+        return !n.startsWith(".") && !n.startsWith("~$") && (n.endsWith(".csv") || n.endsWith(".tsv")
+                || n.endsWith(".txt") || n.endsWith(".xlsx"));
+    }
+
+    private static boolean isProjectFile(String name) {
+        return name.equalsIgnoreCase(REGISTER) || name.equalsIgnoreCase(CATALOG);
+    }
+
+    private static void requireFolder(Path folder) {
+        if (!Files.isDirectory(folder)) {
+            throw new InputException(folder + ": not a folder (expected a project folder holding lab/ and "
+                    + "optionally register.csv, crm-catalog.csv, cupel.yaml); give the project folder's path.");
+        }
+    }
+
+    /** One load of one folder. */
+    private static final class Load {
+        private final Path folder;
+        private final CupelConfig config;
+        private final boolean strict;
+        private final IngestSettings settings;
+        private final ExceptionRegister exceptions = new ExceptionRegister();
+        private final List<FileAccount> failed = new ArrayList<>();
+
+        Load(Path folder, CupelConfig config, boolean strict) {
+            this.folder = folder;
+            this.config = config;
+            this.strict = strict;
+            this.settings = IngestSettings.from(config);
+        }
+
+        Project run() {
+            requireFolder(folder);
+            List<LabFile> labs = readLabs();
+            Map<String, GradeUnit> units = reportingUnits(labs);
+            SampleRegister register = readRegister();
+            CatalogReader.Result catalog = readCatalog(units);
+            SampleJoin join = new SampleJoin(register, units, exceptions);
+            labs.forEach(join::add);
+            join.finishRegister();
+            SampleTable table = join.buildSamples();
+            CrmCatalog crms = catalog == null ? CrmCatalog.empty() : catalog.catalog();
+            join.checkReferences(table, crms, catalog != null);
+            if (catalog == null && table.rowsWithRole(QcRole.CRM).length > 0) {
+                exceptions.warn(org.cupel.assay.SourceLocation.ofFile(CATALOG), "", "",
+                        "the project has CRM samples but no CRM catalog, so their results cannot be judged",
+                        "crm-catalog.csv in the project folder", "add crm-catalog.csv (docs/input-formats.md)");
+            }
+            List<FileAccount> accounts = new ArrayList<>(join.accounts());
+            if (catalog != null) {
+                catalog.issues().forEach(exceptions::add);
+                accounts.add(new FileAccount(CATALOG, "CRM catalog", catalog.rowsRead(),
+                        catalog.rowsRead() - catalog.rowsExcluded(), catalog.rowsExcluded()));
+            }
+            accounts.addAll(failed);
+            Map<String, AnalyteColumn> columns = join.buildColumns(table.size(),
+                    new MethodPriority(settings.methodPriority()));
+            String name = config.projectName(folder.toAbsolutePath().normalize().getFileName() == null
+                    ? "project" : folder.toAbsolutePath().normalize().getFileName().toString());
+            return new Project(name, folder, config, table, columns, crms, exceptions, accounts);
+        }
+
+        private List<LabFile> readLabs() {
+            List<Path> files = labFiles(folder);
+            if (files.isEmpty()) {
+                fail(LAB_DIR, "lab results", new InputException(folder.resolve(LAB_DIR) + ": no lab result files "
+                        + "(expected .csv, .tsv, .txt or .xlsx files in lab/); put the lab's result files there."));
+            }
+            LabFileReader reader = new LabFileReader(settings);
+            List<LabFile> out = new ArrayList<>();
+            for (Path f : files) {
+                String name = displayName(f);
+                try {
+                    out.add(reader.read(f, name));
+                } catch (InputException e) {
+                    fail(name, "lab results", e);
+                }
+            }
+            return out;
+        }
+
+        private SampleRegister readRegister() {
+            Path f = folder.resolve(REGISTER);
+            if (!Files.isRegularFile(f)) {
+                return null;
+            }
+            try {
+                return RegisterReader.read(f, REGISTER);
+            } catch (InputException e) {
+                fail(REGISTER, "sample register", e);
+                return null;
+            }
+        }
+
+        private CatalogReader.Result readCatalog(Map<String, GradeUnit> units) {
+            Path f = folder.resolve(CATALOG);
+            if (!Files.isRegularFile(f)) {
+                return null;
+            }
+            try {
+                return CatalogReader.read(f, CATALOG, units);
+            } catch (InputException e) {
+                fail(CATALOG, "CRM catalog", e);
+                return null;
+            }
+        }
+
+        private Map<String, GradeUnit> reportingUnits(List<LabFile> labs) {
+            Map<String, GradeUnit> units = new LinkedHashMap<>();
+            settings.units().forEach((analyte, symbol) -> units.put(analyte, GradeUnit.parse(symbol)
+                    .orElseThrow(() -> new ConfigException(config.source() + ": ingest.units." + analyte + " is '"
+                            + symbol + "', not a unit Cupel knows (expected ppb, ppm, g/t, mg/kg, %, oz/st or oz/lt); "
+                            + "correct it in cupel.yaml."))));
+            for (LabFile f : labs) {
+                for (LabColumn c : f.columns()) {
+                    units.putIfAbsent(c.analyte().analyte(), c.analyte().unit());
+                }
+            }
+            return units;
+        }
+
+        private void fail(String file, String kind, InputException e) {
+            if (strict) {
+                throw e;
+            }
+            exceptions.add(SampleJoin.fatal(file, e.getMessage()));
+            failed.add(new FileAccount(file, kind, 0, 0, 0));
+        }
+
+        private String displayName(Path f) {
+            Path rel = folder.relativize(f);
+            return rel.toString().replace('\\', '/');
+        }
+    }
+}
