@@ -22,7 +22,14 @@ import picocli.CommandLine.Option;
         subcommands = {
             CommandLine.HelpCommand.class,
             CheckCommand.class,
+            CrmCommand.class,
             DemoCommand.class,
+            BlanksCommand.class,
+            BatchesCommand.class,
+            CensoredCommand.class,
+            DlCheckCommand.class,
+            DuplicatesCommand.class,
+            RecoveryCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 
