@@ -177,10 +177,14 @@ public final class DuplicatesCommand implements Callable<Integer> {
             out.println(s.type().label() + ": " + s.bias().verdict());
             for (BatchPrecision b : s.batches()) {
                 if (b.flagged()) {
-                    out.println("  batch " + (b.batch().isEmpty() ? "(none)" : b.batch()) + " fails: "
-                            + String.format(Locale.ROOT, "%.1f%%", b.precision().percentWithinLimit().value())
-                            + " of " + b.precision().usedRelative() + " pairs within HARD "
-                            + pct(b.precision().hardLimit(), 0) + ", RMS CV " + interval(b.precision().rmsCv()));
+                    PrecisionSummary bp = b.precision();
+                    out.println("  batch " + (b.batch().isEmpty() ? "(none)" : b.batch()) + ": "
+                            + String.format(Locale.ROOT, "%.1f%%", bp.percentWithinLimit().value()) + " of "
+                            + bp.usedRelative() + " pairs within HARD " + pct(bp.hardLimit(), 0)
+                            + (b.failsRule() ? " (fails the rule)" : "") + ", RMS CV " + interval(bp.rmsCv())
+                            + (b.lessPrecise() ? String.format(Locale.ROOT,
+                            " — less precise than the set (%.1f× its RMS CV, chi-square p = %.2g)",
+                            b.dispersion().ratio(), b.dispersion().pValue()) : ""));
                 }
             }
             List<OutlierPair> o = s.outliers();

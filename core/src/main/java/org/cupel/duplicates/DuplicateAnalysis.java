@@ -43,18 +43,20 @@ public final class DuplicateAnalysis {
         List<OutlierPair> outliers = outliers(screened, model, settings.hardLimit(type));
         return new DuplicateSetResult(analyte, unit, type, precision, model, bias, outliers,
                 new DuplicateSetResult.PairValues(abs.a(), abs.b(), rel.a(), rel.b()),
-                batches(type, pairs, settings));
+                batches(type, pairs, precision.rmsCv(), settings));
     }
 
-    private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, DuplicateSettings settings) {
+    private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, Estimate setRmsCv,
+                                                DuplicateSettings settings) {
         Map<String, List<DuplicatePair>> byBatch = new LinkedHashMap<>();
         for (DuplicatePair p : pairs) {
             byBatch.computeIfAbsent(p.batch(), k -> new ArrayList<>()).add(p);
         }
         List<BatchPrecision> out = new ArrayList<>();
         for (Map.Entry<String, List<DuplicatePair>> e : byBatch.entrySet()) {
-            out.add(new BatchPrecision(e.getKey(),
-                    PrecisionMeasures.summarise(type, PairScreen.screen(e.getValue(), settings), settings)));
+            PrecisionSummary p = PrecisionMeasures.summarise(type, PairScreen.screen(e.getValue(), settings), settings);
+            out.add(new BatchPrecision(e.getKey(), p, BatchDispersion.test(p.rmsCv(), setRmsCv),
+                    settings.batchTestAlpha()));
         }
         return out;
     }
