@@ -144,7 +144,7 @@ public final class DuplicatesCommand implements Callable<Integer> {
 
     private static void print(PrintWriter out, DuplicateReport r) {
         String unit = r.unit().isEmpty() ? "" : " (" + r.unit() + ")";
-        out.println(r.analyte() + unit + ": duplicate precision");
+        out.println(r.analyte() + unit + ": duplicate precision (" + r.detectionLimits() + ")");
         TextTable t = new TextTable("Type", "Pairs", "Used", "Excluded", "HARD limit", "Within", "Rule",
                 "RMS CV (95% CI)", "Mean CV (biased)", "s_r");
         for (DuplicateSetResult s : r.sets()) {

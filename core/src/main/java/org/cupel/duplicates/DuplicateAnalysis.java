@@ -22,6 +22,15 @@ public final class DuplicateAnalysis {
      */
     public static DuplicateReport run(String analyte, String unit, List<DuplicatePair> pairs,
                                       List<OrphanDuplicate> orphans, double[] grades, DuplicateSettings settings) {
+        return run(analyte, unit, pairs, orphans, grades, settings, "as stated with each value");
+    }
+
+    /**
+     * @param detectionLimits where the detection limits came from, for the report
+     */
+    public static DuplicateReport run(String analyte, String unit, List<DuplicatePair> pairs,
+                                      List<OrphanDuplicate> orphans, double[] grades, DuplicateSettings settings,
+                                      String detectionLimits) {
         List<DuplicateSetResult> sets = new ArrayList<>();
         for (QcRole type : TYPE_ORDER) {
             List<DuplicatePair> ofType = pairs.stream().filter(p -> p.type() == type).toList();
@@ -29,7 +38,7 @@ public final class DuplicateAnalysis {
                 sets.add(analyseSet(analyte, unit, type, ofType, grades, settings));
             }
         }
-        return new DuplicateReport(analyte, unit, settings, sets, orphans);
+        return new DuplicateReport(analyte, unit, settings, sets, orphans, detectionLimits);
     }
 
     static DuplicateSetResult analyseSet(String analyte, String unit, QcRole type, List<DuplicatePair> pairs,

@@ -62,6 +62,7 @@ public final class DuplicatesSection {
 
     private static void analyteBlocks(DuplicateReport report, List<ReportBlock> blocks, Map<String, Object> headlines) {
         String a = report.analyte();
+        blocks.add(new ReportBlock.Paragraph(a + ": " + report.detectionLimits() + "."));
         for (DuplicateSetResult set : report.sets()) {
             PrecisionSummary p = set.precision();
             ReportBlock.Level level = p.rule() == RuleOutcome.FAIL ? ReportBlock.Level.FAIL
