@@ -56,6 +56,23 @@ public final class Ros {
     private Ros() {
     }
 
+    /**
+     * ROS with the mean's standard error and 95 % interval from {@code replicates} bootstrap resamples
+     * ({@link RosBootstrap}); {@code replicates = 0} gives the plain fit.
+     */
+    public static Result fit(CensoredSample sample, int replicates, long seed) {
+        Result r = fit(sample);
+        if (replicates == 0 || !r.summary().isApplicable() || r.summary().nCensored() == 0) {
+            return r;
+        }
+        CensoredSummary s = r.summary();
+        CensoredSummary withSe = new CensoredSummary(s.method(), s.n(), s.nCensored(),
+                RosBootstrap.mean(sample, s.mean().value(), replicates, seed), s.sd(), s.median(), s.percentiles(),
+                s.notes());
+        return new Result(r.points(), r.limits(), r.exceedance(), r.intercept(), r.slope(), withSe);
+    }
+
+    /** ROS without bootstrap: the mean carries no standard error. */
     public static Result fit(CensoredSample sample) {
         int n = sample.size();
         int nCens = sample.censoredCount();
