@@ -9,12 +9,14 @@ import org.cupel.config.CupelConfig;
  * @param kmSdDivisor the Kaplan–Meier SD convention
  * @param bootstrapReplicates resamples for the ROS mean's standard error and interval; 0 for none
  * @param bootstrapSeed seed of the resampling, so that reruns give the same interval
+ * @param bootstrapMaxN above this many observations the bootstrap is skipped (run time grows with n times
+ *     the replicates, and the interval is then narrow anyway)
  */
 public record CensoredSettings(KaplanMeier.LowestMass kmLowestMass, KaplanMeier.SdDivisor kmSdDivisor,
-                               int bootstrapReplicates, long bootstrapSeed) {
+                               int bootstrapReplicates, long bootstrapSeed, int bootstrapMaxN) {
 
     public static final CensoredSettings DEFAULTS = new CensoredSettings(KaplanMeier.LowestMass.AT_LOWEST_LIMIT,
-            KaplanMeier.SdDivisor.DISTRIBUTION, 1000, 20_260_101L);
+            KaplanMeier.SdDivisor.DISTRIBUTION, 1000, 20_260_101L, 5000);
 
     public CensoredSettings {
         if (kmLowestMass == null || kmSdDivisor == null || bootstrapReplicates < 0) {
@@ -32,6 +34,6 @@ public record CensoredSettings(KaplanMeier.LowestMass kmLowestMass, KaplanMeier.
     }
 
     public CensoredSettings withKmLowestMass(KaplanMeier.LowestMass m) {
-        return new CensoredSettings(m, kmSdDivisor, bootstrapReplicates, bootstrapSeed);
+        return new CensoredSettings(m, kmSdDivisor, bootstrapReplicates, bootstrapSeed, bootstrapMaxN);
     }
 }

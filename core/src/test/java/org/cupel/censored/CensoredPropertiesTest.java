@@ -28,7 +28,7 @@ class CensoredPropertiesTest {
     private static final double ITERATIVE = 1e-6;
     /** The invariants concern the estimates; the seeded bootstrap would only slow the tries down. */
     private static final CensoredSettings NO_BOOTSTRAP = new CensoredSettings(KaplanMeier.LowestMass.AT_LOWEST_LIMIT,
-            KaplanMeier.SdDivisor.DISTRIBUTION, 0, 1);
+            KaplanMeier.SdDivisor.DISTRIBUTION, 0, 1, 0);
 
     @Provide
     Arbitrary<List<AssayValue>> censoredValues() {
