@@ -21,7 +21,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code cupel censored}: censored-data summary of one column of a CSV. */
-@Command(name = "censored",
+@Command(name = "censored", mixinStandardHelpOptions = true,
         description = {"Summarise one column with values below detection (<0.005) and above range (>10), several "
                 + "limits allowed: Kaplan–Meier, ROS, maximum likelihood (normal and lognormal), a substitution "
                 + "comparison, and which estimate to use (Helsel 2012)."},
