@@ -75,7 +75,10 @@ public final class CrmControlChart {
                 SeriesMarkers.TRIANGLE_UP, lo, hi);
         batchBoundaries(c, rs);
         offScaleLabels(c, rs, lo, hi);
-        String note = ChartNotes.count(n, Math.min(n, shown.length)) + String.format(Locale.ROOT,
+        // Only passing results are thinned; every flagged result is drawn.
+        long drawn = rs.stream().filter(r -> r.verdict() != Verdict.PASS).count()
+                + java.util.Arrays.stream(shown).filter(i -> rs.get(i).verdict() == Verdict.PASS).count();
+        String note = ChartNotes.count(n, drawn) + String.format(Locale.ROOT,
                 "; certified %s %s, limits ±2 and ±3 × certificate SD %s %s", Numbers.significant(lim.certified(), 4), unit,
                 Numbers.significant(lim.sd(), 3), unit)
                 + (s.projectLimits().available() ? "; own ±2 SD from the project's " + s.projectLimits().n()
