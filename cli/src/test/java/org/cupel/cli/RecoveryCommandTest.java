@@ -49,6 +49,25 @@ class RecoveryCommandTest {
         assertTrue(j.get("caution").asText().contains("lead"));
     }
 
+    /**
+     * The demo project (docs/testwork.md) plants a clear difference (LIT60-1050 against LIT90-1050) and a
+     * pair that three replicates cannot resolve (LIT60-1050 against LIT60-1100).
+     */
+    @Test
+    void demoProjectShowsADifferenceAndACannotTell(@TempDir Path dir) throws Exception {
+        Path project = dir.resolve("demo");
+        String[] demo = run("demo", project.toString());
+        assertEquals("0", demo[0], demo[2]);
+        String[] r = run("recovery", project.toString());
+        assertEquals("0", r[0], r[2]);
+        System.out.println(r[1]);
+        String[] lines = r[1].split("\n");
+        assertTrue(java.util.Arrays.stream(lines).anyMatch(l -> l.startsWith("Au") && l.contains("LIT60-1050 − LIT90-1050")
+                && l.contains(" different ")), r[1]);
+        assertTrue(java.util.Arrays.stream(lines).anyMatch(l -> l.startsWith("Au") && l.contains("LIT60-1050 − LIT60-1100")
+                && l.contains("cannot tell") && l.contains("per condition")), r[1]);
+    }
+
     @Test
     void missingFolderIsAnInputError() {
         String[] r = run("recovery", "/no/such/folder");
