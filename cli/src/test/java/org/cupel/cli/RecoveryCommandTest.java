@@ -47,6 +47,7 @@ class RecoveryCommandTest {
         assertEquals(0.8, j.get("settings").get("equivalenceMargin").asDouble(), 0);
         assertEquals(2.0, j.get("comparisons").get(0).get("plan").get("difference").asDouble(), 0);
         assertTrue(j.get("caution").asText().contains("lead"));
+        Files.writeString(Path.of("target", "recovery-fixture.json"), r[1]);
     }
 
     /**
