@@ -22,6 +22,7 @@ import picocli.CommandLine.Option;
         subcommands = {
             CommandLine.HelpCommand.class,
             DemoCommand.class,
+            ReportCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 
