@@ -1,0 +1,368 @@
+package org.cupel.report.duplicates;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.function.Predicate;
+import org.cupel.charts.duplicates.DuplicateCharts;
+import org.cupel.duplicates.BatchPrecision;
+import org.cupel.duplicates.BiasResult;
+import org.cupel.duplicates.ControlLineCheck;
+import org.cupel.duplicates.DuplicateReport;
+import org.cupel.duplicates.DuplicateSetResult;
+import org.cupel.duplicates.DuplicateSettings;
+import org.cupel.duplicates.Estimate;
+import org.cupel.duplicates.ExclusionReason;
+import org.cupel.duplicates.GradePrecision;
+import org.cupel.duplicates.ModelFit;
+import org.cupel.duplicates.OrphanDuplicate;
+import org.cupel.duplicates.OutlierPair;
+import org.cupel.duplicates.PrecisionModelResult;
+import org.cupel.duplicates.PrecisionSummary;
+import org.cupel.duplicates.RmaFit;
+import org.cupel.duplicates.RuleOutcome;
+import org.cupel.duplicates.TestResult;
+import org.cupel.report.ReportBlock;
+import org.cupel.report.ReportSection;
+import org.cupel.report.ReportTable;
+
+/** The duplicates section of the QC appendix, formatted from the core duplicate results. */
+public final class DuplicatesSection {
+    /** Outlier rows listed per set; the rest are counted. */
+    public static final int OUTLIERS_LISTED = 50;
+
+    private DuplicatesSection() {
+    }
+
+    /**
+     * @param reports one per analyte
+     * @param userSet whether a config key ("duplicates.pulpHardLimitPercent") was set by the user, for labels
+     */
+    public static ReportSection build(List<DuplicateReport> reports, Predicate<String> userSet) {
+        List<ReportBlock> blocks = new ArrayList<>();
+        Map<String, Object> headlines = new LinkedHashMap<>();
+        blocks.add(new ReportBlock.Paragraph("Precision of duplicate assays by type and analyte: share of pairs "
+                + "within the type's HARD limit (HARD = |a − b|/(a + b), Shaw 1997), RMS CV (Stanley & Lawie 2007), "
+                + "repeatability s_r and r = 2.8·s_r (ISO 5725), the concentration-dependent precision by "
+                + "Thompson–Howarth and by the unbiased RMS SD regression (Stanley & Lawie 2008), and bias between "
+                + "duplicates and originals (reduced major axis after Miller & Kahn 1962, paired t and Wilcoxon "
+                + "signed-rank tests)."));
+        if (reports.isEmpty()) {
+            blocks.add(new ReportBlock.Callout(ReportBlock.Level.INFO, "No duplicate pairs were found."));
+        } else {
+            blocks.add(new ReportBlock.Paragraph(settingsText(reports.get(0).settings(), userSet)));
+        }
+        for (DuplicateReport report : reports) {
+            analyteBlocks(report, blocks, headlines);
+        }
+        return new ReportSection("duplicates", "Duplicates and precision", blocks, headlines);
+    }
+
+    private static void analyteBlocks(DuplicateReport report, List<ReportBlock> blocks, Map<String, Object> headlines) {
+        String a = report.analyte();
+        for (DuplicateSetResult set : report.sets()) {
+            PrecisionSummary p = set.precision();
+            ReportBlock.Level level = p.rule() == RuleOutcome.FAIL ? ReportBlock.Level.FAIL
+                    : p.rule() == RuleOutcome.PASS ? ReportBlock.Level.PASS : ReportBlock.Level.INFO;
+            blocks.add(new ReportBlock.Callout(level, a + " " + set.type().label() + "s: " + ruleText(p)));
+            String key = a + "." + typeKey(set);
+            headlines.put(key + ".pairsUsed", p.usedRelative());
+            if (p.percentWithinLimit().available()) {
+                headlines.put(key + ".percentWithinLimit", round(p.percentWithinLimit().value(), 1));
+            }
+            if (p.rmsCv().available()) {
+                headlines.put(key + ".rmsCvPercent", round(100 * p.rmsCv().value(), 2));
+            }
+            headlines.put(key + ".rule", p.rule().name());
+            long flagged = set.batches().stream().filter(BatchPrecision::flagged).count();
+            headlines.put(key + ".batchesFailing", flagged);
+            if (set.bias().meanRelativeBias().available()) {
+                headlines.put(key + ".meanRelativeBiasPercent", round(100 * set.bias().meanRelativeBias().value(), 2));
+            }
+        }
+        blocks.add(new ReportBlock.Table(precisionTable(report)));
+        blocks.add(new ReportBlock.Table(batchTable(report)));
+        List<BatchPrecision> flagged = report.flaggedBatches();
+        if (!flagged.isEmpty()) {
+            StringBuilder sb = new StringBuilder(a + ": batches failing the acceptance rule: ");
+            for (int i = 0; i < flagged.size(); i++) {
+                BatchPrecision b = flagged.get(i);
+                sb.append(i == 0 ? "" : "; ").append(b.batch().isEmpty() ? "(no batch)" : b.batch()).append(" (")
+                        .append(b.precision().type().label()).append(", ")
+                        .append(pct1(b.precision().percentWithinLimit().value() / 100)).append(" within)");
+            }
+            blocks.add(new ReportBlock.Callout(ReportBlock.Level.FAIL, sb.toString()));
+        }
+        blocks.add(new ReportBlock.Table(modelTable(report)));
+        ReportTable grades = gradeTable(report);
+        if (!grades.rows().isEmpty()) {
+            blocks.add(new ReportBlock.Table(grades));
+        }
+        blocks.add(new ReportBlock.Table(biasTable(report)));
+        for (DuplicateSetResult set : report.sets()) {
+            if (set.bias().n() > 0) {
+                blocks.add(new ReportBlock.Callout(set.bias().significant() ? ReportBlock.Level.WARN
+                        : ReportBlock.Level.INFO, a + " " + set.type().label() + "s: " + set.bias().verdict()));
+            }
+        }
+        blocks.add(new ReportBlock.Table(outlierTable(report)));
+        if (!report.orphans().isEmpty()) {
+            blocks.add(new ReportBlock.Table(orphanTable(report)));
+        }
+        for (DuplicateSetResult set : report.sets()) {
+            figures(set, blocks);
+        }
+    }
+
+    private static void figures(DuplicateSetResult set, List<ReportBlock> blocks) {
+        String stem = "duplicates-" + set.analyte() + "-" + typeKey(set);
+        String what = set.analyte() + " " + set.type().label() + "s";
+        blocks.add(new ReportBlock.Figure(stem + "-scatter", what + ": original against duplicate, with the 1:1 line "
+                + "and the HARD limit lines" + (set.type() == org.cupel.assay.QcRole.UMPIRE
+                ? " and the reduced major axis" : "") + ".", () -> DuplicateCharts.scatter(set, true)));
+        blocks.add(new ReportBlock.Figure(stem + "-ranked-hard", what + ": ranked HARD against the type's limit.",
+                () -> DuplicateCharts.rankedHard(set)));
+        if (set.model().available()) {
+            blocks.add(new ReportBlock.Figure(stem + "-thompson-howarth", what + ": Thompson–Howarth plot with the "
+                    + "fitted model and its 90 % and 99 % control lines.", () -> DuplicateCharts.thompsonHowarth(set)));
+        }
+        blocks.add(new ReportBlock.Figure(stem + "-relative-difference", what + ": relative difference against pair "
+                + "mean, with the mean bias and its 95 % interval.", () -> DuplicateCharts.relativeDifference(set)));
+    }
+
+    static String settingsText(DuplicateSettings s, Predicate<String> userSet) {
+        return String.format(Locale.ROOT, "Acceptance: %s of pairs within HARD %s (field), %s (coarse reject), %s "
+                        + "(pulp), %s (lab repeat), %s (umpire) — %s. Pairs with a below-detection member are %s; "
+                        + "pairs with mean below %s× the detection limit are left out of relative measures (%s). "
+                        + "Intervals: %d bootstrap resamples, seed %d. Thompson–Howarth: groups of %d, at least %d "
+                        + "pairs.",
+                compact(s.acceptancePercent()) + " %", compact(s.fieldHardLimitPercent()) + " %",
+                compact(s.coarseHardLimitPercent()) + " %", compact(s.pulpHardLimitPercent()) + " %",
+                compact(s.labRepeatHardLimitPercent()) + " %", compact(s.umpireHardLimitPercent()) + " %",
+                anyUserSet(userSet, "duplicates.acceptancePercent", "duplicates.fieldHardLimitPercent",
+                        "duplicates.coarseHardLimitPercent", "duplicates.pulpHardLimitPercent",
+                        "duplicates.labRepeatHardLimitPercent", "duplicates.umpireHardLimitPercent")
+                        ? "user settings" : "common practice defaults, not a published standard",
+                s.censoredAtHalfLimit() ? "taken at half the limit in relative measures" : "not used in relative "
+                        + "measures", compact(s.limitMultipleOfDetection()),
+                userSet.test("duplicates.limitMultipleOfDetection") ? "user setting" : "common practice default",
+                s.bootstrapResamples(), s.bootstrapSeed(), s.thGroupSize(), s.thMinimumPairs());
+    }
+
+    private static boolean anyUserSet(Predicate<String> userSet, String... keys) {
+        for (String k : keys) {
+            if (userSet.test(k)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    static String ruleText(PrecisionSummary p) {
+        if (p.rule() == RuleOutcome.NOT_JUDGED) {
+            return "not judged: " + p.percentWithinLimit().note();
+        }
+        return String.format(Locale.ROOT, "%s of %d pairs within HARD %s (rule: %s%%) — %s; RMS CV %s",
+                pct1(p.percentWithinLimit().value() / 100), p.usedRelative(), pct0(p.hardLimit()),
+                compact(p.acceptancePercent()), p.rule() == RuleOutcome.PASS ? "pass" : "fail", estimatePct(p.rmsCv()));
+    }
+
+    private static ReportTable precisionTable(DuplicateReport r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (DuplicateSetResult s : r.sets()) {
+            PrecisionSummary p = s.precision();
+            rows.add(List.of(s.type().label(), Integer.toString(p.pairs()), Integer.toString(p.usedRelative()),
+                    exclusions(p.excludedRelative()), pct0(p.hardLimit()), value(p.percentWithinLimit(), 1, ""),
+                    p.rule().name().toLowerCase(Locale.ROOT).replace('_', ' '), estimatePct(p.rmsCv()),
+                    p.meanCv().available() ? pct2(p.meanCv().value()) : p.meanCv().note(),
+                    value(p.repeatabilitySd(), 4, ""), value(p.repeatabilityLimit(), 4, "")));
+        }
+        return new ReportTable("duplicates-precision-" + r.analyte(), r.analyte() + ": precision by duplicate type",
+                List.of("Type", "Pairs", "Used (relative)", "Excluded (reason: n)", "HARD limit", "% within limit",
+                        "Rule", "RMS CV (95 % CI)", "Mean CV (biased low)", "s_r (" + r.unit() + ")",
+                        "r = 2.8·s_r (" + r.unit() + ")"), rows,
+                "RMS CV after Stanley & Lawie (2007); the arithmetic mean CV is shown only for comparison, it is "
+                        + "biased low. s_r and r over pairs with two detected values (ISO 5725-2, -6).");
+    }
+
+    private static ReportTable batchTable(DuplicateReport r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (DuplicateSetResult s : r.sets()) {
+            for (BatchPrecision b : s.batches()) {
+                PrecisionSummary p = b.precision();
+                rows.add(List.of(b.batch().isEmpty() ? "(no batch)" : b.batch(), s.type().label(),
+                        Integer.toString(p.pairs()), Integer.toString(p.usedRelative()),
+                        value(p.percentWithinLimit(), 1, ""), p.rule().name().toLowerCase(Locale.ROOT).replace('_', ' '),
+                        p.rmsCv().available() ? pct2(p.rmsCv().value()) : p.rmsCv().note()));
+            }
+        }
+        return new ReportTable("duplicates-batches-" + r.analyte(), r.analyte() + ": precision by batch",
+                List.of("Batch", "Type", "Pairs", "Used (relative)", "% within limit", "Rule", "RMS CV"), rows,
+                "A batch fails when fewer than the required share of its pairs lie within the type's HARD limit; "
+                        + "with few pairs per batch one wide pair decides, so read failures beside the RMS CV.");
+    }
+
+    private static ReportTable modelTable(DuplicateReport r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (DuplicateSetResult s : r.sets()) {
+            PrecisionModelResult m = s.model();
+            if (!m.available()) {
+                rows.add(List.of(s.type().label(), "—", m.note(), "", "", "", "", "", ""));
+                continue;
+            }
+            for (ModelFit f : List.of(m.thompsonHowarth(), m.rmsRegression())) {
+                boolean th = f == m.thompsonHowarth();
+                rows.add(List.of(s.type().label(), f.method(), estimate(f.sigma0(), 4), estimate(f.k(), 4),
+                        fmt(f.rSquared(), 3), Integer.toString(m.groups().groups()),
+                        Integer.toString(m.groups().dropped()), th ? line(m.line90()) : "",
+                        th ? line(m.line99()) : ""));
+            }
+        }
+        return new ReportTable("duplicates-model-" + r.analyte(), r.analyte() + ": precision model σ_c = σ₀ + k·c",
+                List.of("Type", "Method", "σ₀ (" + r.unit() + ", 95 % CI)", "k (95 % CI)", "R²", "Groups",
+                        "Pairs dropped", "Above 90 % line (expected; p)", "Above 99 % line (expected; p)"), rows,
+                "Thompson–Howarth (1978): groups of pairs by mean, median |d| regressed on group mean, scaled by "
+                        + "1.048358. RMS SD regression: group √(Σd²/2n) on group mean (Stanley & Lawie 2008), "
+                        + "unbiased when errors are not normal. p: binomial upper tail of the exceedance count.");
+    }
+
+    private static ReportTable gradeTable(DuplicateReport r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (DuplicateSetResult s : r.sets()) {
+            for (GradePrecision g : s.model().atGrades()) {
+                rows.add(List.of(s.type().label(), compact(g.grade()), estimatePct(g.thompsonHowarth()),
+                        estimatePct(g.rmsRegression())));
+            }
+        }
+        return new ReportTable("duplicates-grades-" + r.analyte(), r.analyte() + ": precision P_c = 2σ_c/c at chosen grades",
+                List.of("Type", "Grade (" + r.unit() + ")", "Thompson–Howarth (95 % CI)", "RMS SD regression (95 % CI)"),
+                rows, "Grades: the project's CRM grades unless set in duplicates.precisionGrades.");
+    }
+
+    private static ReportTable biasTable(DuplicateReport r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (DuplicateSetResult s : r.sets()) {
+            BiasResult b = s.bias();
+            RmaFit rma = b.rma();
+            rows.add(List.of(s.type().label(), Integer.toString(b.n()),
+                    rma.available() ? fmt(rma.slope(), 4) + " (" + fmt(rma.slopeCi95()[0], 4) + " to "
+                            + fmt(rma.slopeCi95()[1], 4) + ")" : rma.note(),
+                    rma.available() ? fmt(rma.intercept(), 4) + " (" + fmt(rma.interceptCi95()[0], 4) + " to "
+                            + fmt(rma.interceptCi95()[1], 4) + ")" : "",
+                    estimatePct(b.meanRelativeBias()), test(b.pairedT()), test(b.wilcoxon())));
+        }
+        return new ReportTable("duplicates-bias-" + r.analyte(), r.analyte() + ": bias of duplicate against original",
+                List.of("Type", "Pairs", "RMA slope (95 % CI)", "RMA intercept (" + r.unit() + ", 95 % CI)",
+                        "Mean relative bias (95 % CI)", "Paired t p", "Wilcoxon p"), rows,
+                "Reduced major axis after Miller & Kahn (1962); relative bias = mean of (duplicate − original)/pair "
+                        + "mean with a Student-t interval. For umpire checks the duplicate is the second lab.");
+    }
+
+    private static ReportTable outlierTable(DuplicateReport r) {
+        List<List<String>> rows = new ArrayList<>();
+        int more = 0;
+        for (DuplicateSetResult s : r.sets()) {
+            List<OutlierPair> list = s.outliers();
+            for (int i = 0; i < list.size(); i++) {
+                if (i >= OUTLIERS_LISTED) {
+                    more += list.size() - OUTLIERS_LISTED;
+                    break;
+                }
+                OutlierPair o = list.get(i);
+                rows.add(List.of(s.type().label(), o.id(), o.originalId(), o.batch(), o.original(), o.duplicate(),
+                        pct1(o.hard()), o.testLabels()));
+            }
+        }
+        return new ReportTable("duplicates-outliers-" + r.analyte(), r.analyte() + ": pairs flagged",
+                List.of("Type", "Duplicate ID", "Original ID", "Batch", "Original", "Duplicate", "HARD", "Flagged by"), rows,
+                more > 0 ? more + " further flagged pairs not listed (the " + OUTLIERS_LISTED
+                        + " with the largest HARD per type are shown)." : "");
+    }
+
+    private static ReportTable orphanTable(DuplicateReport r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (OrphanDuplicate o : r.orphans()) {
+            rows.add(List.of(o.id(), o.type().label(), o.batch(), o.originalId(), o.reason()));
+        }
+        return new ReportTable("duplicates-unpaired-" + r.analyte(), r.analyte() + ": duplicates without an original",
+                List.of("Duplicate ID", "Type", "Batch", "Original ID given", "Why not paired"), rows,
+                "Fix the original sample ID in the sample register, or add the original's assay.");
+    }
+
+    private static String exclusions(Map<ExclusionReason, Integer> m) {
+        if (m.isEmpty()) {
+            return "none";
+        }
+        StringBuilder sb = new StringBuilder();
+        for (ExclusionReason e : ExclusionReason.values()) {
+            Integer n = m.get(e);
+            if (n != null) {
+                sb.append(sb.length() == 0 ? "" : "; ").append(e.label()).append(": ").append(n);
+            }
+        }
+        return sb.toString();
+    }
+
+    private static String line(ControlLineCheck c) {
+        return String.format(Locale.ROOT, "%d (%.1f; p = %s)", c.exceedances(), c.expected(), p(c.pValue()));
+    }
+
+    private static String test(TestResult t) {
+        return t.available() ? p(t.pValue()) : t.note();
+    }
+
+    private static String p(double p) {
+        return p < 0.001 ? "< 0.001" : String.format(Locale.ROOT, "%.3f", p);
+    }
+
+    private static String estimatePct(Estimate e) {
+        if (!e.available()) {
+            return e.note();
+        }
+        return e.hasInterval() ? pct2(e.value()) + " (" + pct2(e.ciLow()) + " to " + pct2(e.ciHigh()) + ")"
+                : pct2(e.value());
+    }
+
+    private static String estimate(Estimate e, int digits) {
+        if (!e.available()) {
+            return e.note();
+        }
+        return e.hasInterval() ? fmt(e.value(), digits) + " (" + fmt(e.ciLow(), digits) + " to "
+                + fmt(e.ciHigh(), digits) + ")" : fmt(e.value(), digits);
+    }
+
+    private static String value(Estimate e, int digits, String suffix) {
+        return e.available() ? fmt(e.value(), digits) + suffix : e.note();
+    }
+
+    private static String typeKey(DuplicateSetResult s) {
+        return s.type().name().toLowerCase(Locale.ROOT);
+    }
+
+    private static String fmt(double v, int significant) {
+        return org.cupel.assay.Numbers.significant(v, significant);
+    }
+
+    private static String compact(double v) {
+        return org.cupel.assay.Numbers.compact(v);
+    }
+
+    private static double round(double v, int decimals) {
+        double f = Math.pow(10, decimals);
+        return Math.round(v * f) / f;
+    }
+
+    private static String pct0(double fraction) {
+        return String.format(Locale.ROOT, "%.0f %%", 100 * fraction);
+    }
+
+    private static String pct1(double fraction) {
+        return String.format(Locale.ROOT, "%.1f %%", 100 * fraction);
+    }
+
+    private static String pct2(double fraction) {
+        return String.format(Locale.ROOT, "%.2f %%", 100 * fraction);
+    }
+}

@@ -1,0 +1,260 @@
+package org.cupel.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.cupel.assay.QcRole;
+import org.cupel.charts.PngWriter;
+import org.cupel.charts.duplicates.DuplicateCharts;
+import org.cupel.duplicates.BatchPrecision;
+import org.cupel.duplicates.DuplicateAnalysis;
+import org.cupel.duplicates.DuplicatePair;
+import org.cupel.duplicates.DuplicateReport;
+import org.cupel.duplicates.DuplicateSetResult;
+import org.cupel.duplicates.DuplicateSettings;
+import org.cupel.duplicates.Estimate;
+import org.cupel.duplicates.ModelFit;
+import org.cupel.duplicates.OutlierPair;
+import org.cupel.duplicates.PairExtraction;
+import org.cupel.duplicates.PairsFile;
+import org.cupel.ingest.ProjectLoader;
+import org.cupel.project.Project;
+import org.cupel.duplicates.PrecisionSummary;
+import org.cupel.duplicates.RuleOutcome;
+import org.cupel.project.DataIssue;
+import org.cupel.project.InputException;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code cupel duplicates}: duplicate precision and bias on a project folder or a plain pairs CSV. */
+@Command(name = "duplicates",
+        description = {"Precision of duplicate assays (HARD, RMS CV, Thompson–Howarth and RMS SD regression) and",
+                "bias between duplicates and originals or between labs (RMA, paired t, Wilcoxon)."},
+        footer = {"", "A pairs CSV has columns original, duplicate (values such as 1.23 or <0.005) and optional",
+                "type (field, coarse, pulp, repeat, umpire), batch, id and dl (detection limit).", "",
+                "Examples:", "  cupel duplicates demo-project --analyte Au --charts charts/",
+                "  cupel duplicates pairs.csv --type pulp --json"})
+public final class DuplicatesCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "<project-folder | pairs.csv>",
+            description = "A project folder, or a CSV/XLSX of pairs.")
+    Path input;
+
+    @Option(names = "--analyte", paramLabel = "NAME",
+            description = "Analyte to analyse (project: default all; pairs file: the name to show, default 'value').")
+    String analyte;
+
+    @Option(names = "--type", paramLabel = "TYPE",
+            description = "Only this duplicate type: field, coarse, pulp, repeat, umpire. For a pairs file "
+                    + "without a type column, the type of its pairs (default pulp).")
+    String type;
+
+    @Option(names = "--unit", paramLabel = "UNIT", description = "Unit of a pairs file's values, for labels (default: none).")
+    String unit;
+
+    @Option(names = "--json", description = "Print the full results as JSON (see docs/json-schema-duplicates.md).")
+    boolean json;
+
+    @Option(names = "--charts", paramLabel = "DIR", description = "Write the charts as 300 dpi PNGs into DIR.")
+    Path chartDir;
+
+    @Option(names = "--dl-multiple", paramLabel = "X",
+            description = "Leave pairs with mean below X times the detection limit out of relative measures "
+                    + "(default 10, or duplicates.limitMultipleOfDetection).")
+    Double dlMultiple;
+
+    @Option(names = "--fail-on-qc", description = "Exit with code 1 when a set or a batch fails the acceptance rule.")
+    boolean failOnQc;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        QcRole only = type == null ? null : parseType(type);
+        DuplicateSettings settings = DuplicateSettings.DEFAULTS;
+        if (dlMultiple != null) {
+            settings = settings.withLimitMultipleOfDetection(dlMultiple);
+        }
+        List<DuplicateReport> reports = new ArrayList<>();
+        List<DataIssue> issues = new ArrayList<>();
+        if (Files.isDirectory(input)) {
+            Project project = ProjectLoader.load(input);
+            DuplicateSettings fromConfig = project.config().section("duplicates", DuplicateSettings.class,
+                    DuplicateSettings.DEFAULTS);
+            if (dlMultiple != null) {
+                fromConfig = fromConfig.withLimitMultipleOfDetection(dlMultiple);
+            }
+            reports.addAll(PairExtraction.analyse(project, fromConfig, analyte, only));
+            if (reports.isEmpty()) {
+                throw new InputException(input + ": no duplicates found" + (only == null ? "" : " of type " + type)
+                        + "; the sample register marks duplicates by role with the original sample ID as reference.");
+            }
+        } else {
+            PairsFile.Result r = PairsFile.read(input, only == null ? QcRole.PULP_DUPLICATE : only);
+            issues.addAll(r.issues());
+            List<DuplicatePair> pairs = r.pairs().stream().filter(p -> only == null || p.type() == only).toList();
+            if (pairs.isEmpty()) {
+                throw new InputException(input + ": no usable pairs" + (only == null ? "" : " of type " + type)
+                        + "; check the values and the type column, or drop --type.");
+            }
+            reports.add(DuplicateAnalysis.run(analyte == null ? "value" : analyte, unit == null ? "" : unit, pairs,
+                    List.of(), new double[0], settings));
+        }
+        for (DataIssue i : issues) {
+            err.println("cupel: " + i.message());
+        }
+        err.flush();
+        if (json) {
+            Map<String, Object> doc = new LinkedHashMap<>();
+            doc.put("input", input.toString());
+            doc.put("analytes", reports);
+            doc.put("inputIssues", issues.stream().map(DataIssue::message).toList());
+            Json.print(out, doc);
+        } else {
+            for (DuplicateReport r : reports) {
+                print(out, r);
+            }
+        }
+        if (chartDir != null) {
+            writeCharts(reports, out);
+        }
+        boolean failed = reports.stream().anyMatch(r -> !r.flaggedBatches().isEmpty()
+                || r.sets().stream().anyMatch(s -> s.precision().rule() == RuleOutcome.FAIL));
+        return failOnQc && failed ? CupelCommand.QC_FAILED : CupelCommand.OK;
+    }
+
+    static QcRole parseType(String text) {
+        return QcRole.parse(text).filter(QcRole::isDuplicate).orElseThrow(() -> new InputException("--type " + text
+                + ": not a duplicate type; use field, coarse, pulp, repeat or umpire."));
+    }
+
+    private static void print(PrintWriter out, DuplicateReport r) {
+        String unit = r.unit().isEmpty() ? "" : " (" + r.unit() + ")";
+        out.println(r.analyte() + unit + ": duplicate precision");
+        TextTable t = new TextTable("Type", "Pairs", "Used", "Excluded", "HARD limit", "Within", "Rule",
+                "RMS CV (95% CI)", "Mean CV (biased)", "s_r");
+        for (DuplicateSetResult s : r.sets()) {
+            PrecisionSummary p = s.precision();
+            t.row(s.type().label(), p.pairs(), p.usedRelative(), p.pairs() - p.usedRelative(), pct(p.hardLimit(), 0),
+                    p.percentWithinLimit().available() ? String.format(Locale.ROOT, "%.1f%%",
+                            p.percentWithinLimit().value()) : "-",
+                    p.rule().name().toLowerCase(Locale.ROOT).replace('_', ' '), interval(p.rmsCv()),
+                    p.meanCv().available() ? pct(p.meanCv().value(), 2) : "-",
+                    p.repeatabilitySd().available() ? sig(p.repeatabilitySd().value()) : "-");
+        }
+        t.print(out);
+        out.println();
+        TextTable m = new TextTable("Type", "Model", "sigma0 (95% CI)", "k (95% CI)", "Above 90% line", "Above 99% line");
+        for (DuplicateSetResult s : r.sets()) {
+            if (!s.model().available()) {
+                m.row(s.type().label(), "not fitted", s.model().note(), "", "", "");
+                continue;
+            }
+            for (ModelFit f : List.of(s.model().thompsonHowarth(), s.model().rmsRegression())) {
+                boolean th = f == s.model().thompsonHowarth();
+                m.row(s.type().label(), f.method(), number(f.sigma0()), number(f.k()),
+                        th ? s.model().line90().exceedances() + " (exp " + Math.round(s.model().line90().expected()) + ")" : "",
+                        th ? s.model().line99().exceedances() + " (exp " + Math.round(s.model().line99().expected()) + ")" : "");
+            }
+        }
+        m.print(out);
+        out.println();
+        for (DuplicateSetResult s : r.sets()) {
+            out.println(s.type().label() + ": " + s.bias().verdict());
+            for (BatchPrecision b : s.batches()) {
+                if (b.flagged()) {
+                    out.println("  batch " + (b.batch().isEmpty() ? "(none)" : b.batch()) + " fails: "
+                            + String.format(Locale.ROOT, "%.1f%%", b.precision().percentWithinLimit().value())
+                            + " of " + b.precision().usedRelative() + " pairs within HARD "
+                            + pct(b.precision().hardLimit(), 0) + ", RMS CV " + interval(b.precision().rmsCv()));
+                }
+            }
+            List<OutlierPair> o = s.outliers();
+            if (!o.isEmpty()) {
+                out.println("  " + o.size() + " flagged pairs; largest HARD:");
+                for (OutlierPair x : o.subList(0, Math.min(5, o.size()))) {
+                    out.println("    " + x.id() + (x.originalId().isEmpty() ? "" : " / " + x.originalId())
+                            + (x.batch().isEmpty() ? "" : " [" + x.batch() + "]") + ": " + x.original() + " vs "
+                            + x.duplicate() + ", HARD " + pct(x.hard(), 1) + " — " + x.testLabels());
+                }
+            }
+        }
+        if (!r.orphans().isEmpty()) {
+            out.println(r.orphans().size() + " duplicates without an original, e.g. " + r.orphans().get(0).id() + ": "
+                    + r.orphans().get(0).reason());
+        }
+        out.println();
+        out.flush();
+    }
+
+    private void writeCharts(List<DuplicateReport> reports, PrintWriter out) {
+        try {
+            Files.createDirectories(chartDir);
+            int n = 0;
+            for (DuplicateReport r : reports) {
+                for (DuplicateSetResult s : r.sets()) {
+                    String stem = safe(r.analyte() + "-" + s.type().name().toLowerCase(Locale.ROOT));
+                    PngWriter.write(DuplicateCharts.scatter(s, true), chartDir.resolve(stem + "-scatter.png"),
+                            PngWriter.PRINT_DPI);
+                    PngWriter.write(DuplicateCharts.rankedHard(s), chartDir.resolve(stem + "-ranked-hard.png"),
+                            PngWriter.PRINT_DPI);
+                    PngWriter.write(DuplicateCharts.relativeDifference(s),
+                            chartDir.resolve(stem + "-relative-difference.png"), PngWriter.PRINT_DPI);
+                    n += 3;
+                    if (s.model().available()) {
+                        PngWriter.write(DuplicateCharts.thompsonHowarth(s),
+                                chartDir.resolve(stem + "-thompson-howarth.png"), PngWriter.PRINT_DPI);
+                        n++;
+                    }
+                }
+            }
+            if (!json) {
+                out.println(n + " charts written to " + chartDir);
+                out.flush();
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("could not write charts to " + chartDir + ": " + e.getMessage(), e);
+        }
+    }
+
+    private static String safe(String s) {
+        return s.replaceAll("[^A-Za-z0-9._-]", "_");
+    }
+
+    private static String interval(Estimate e) {
+        if (!e.available()) {
+            return "-";
+        }
+        return e.hasInterval() ? pct(e.value(), 2) + " (" + pct(e.ciLow(), 2) + "-" + pct(e.ciHigh(), 2) + ")"
+                : pct(e.value(), 2);
+    }
+
+    private static String number(Estimate e) {
+        if (!e.available()) {
+            return e.note();
+        }
+        return sig(e.value()) + (e.hasInterval() ? " (" + sig(e.ciLow()) + " to " + sig(e.ciHigh()) + ")" : "");
+    }
+
+    private static String sig(double v) {
+        return org.cupel.assay.Numbers.significant(v, 4);
+    }
+
+    private static String pct(double fraction, int decimals) {
+        return String.format(Locale.ROOT, "%." + decimals + "f%%", 100 * fraction);
+    }
+}

@@ -1,0 +1,81 @@
+package org.cupel.duplicates;
+
+import java.util.List;
+import org.cupel.assay.QcRole;
+
+/**
+ * Settings of the duplicate analysis, bound from the {@code duplicates} section of {@code cupel.yaml}.
+ * The defaults are common practice in the trade, not the result of a published study, and reports say so.
+ *
+ * @param limitMultipleOfDetection pairs whose mean is below this multiple of the detection limit are left
+ *     out of relative measures (default 10, common practice)
+ * @param censoredAtHalfLimit when true, a below-detection member enters ratio measures at half its limit
+ *     instead of removing the pair (default false)
+ * @param acceptancePercent the share of pairs that must lie within the type's HARD limit (default 90)
+ * @param fieldHardLimitPercent HARD limit of field duplicates, % (default 30, common practice)
+ * @param coarseHardLimitPercent HARD limit of coarse-reject duplicates, % (default 20, common practice)
+ * @param pulpHardLimitPercent HARD limit of pulp duplicates, % (default 10, common practice)
+ * @param labRepeatHardLimitPercent HARD limit of lab repeats (pulp repeats in the same lab), % (default 10)
+ * @param umpireHardLimitPercent HARD limit of umpire checks (pulps sent to a second lab), % (default 10)
+ * @param thGroupSize pairs per Thompson–Howarth group (default 11, after Thompson and Howarth 1978)
+ * @param thMinimumPairs fewest usable pairs for a precision model (default 50, common practice)
+ * @param bootstrapResamples bootstrap resamples for intervals (default 1000)
+ * @param bootstrapSeed seed of every bootstrap, so reruns give the same intervals (default 20240601)
+ * @param precisionGrades grades at which to state precision; empty means the project's CRM grades
+ */
+public record DuplicateSettings(double limitMultipleOfDetection, boolean censoredAtHalfLimit,
+                                double acceptancePercent, double fieldHardLimitPercent,
+                                double coarseHardLimitPercent, double pulpHardLimitPercent,
+                                double labRepeatHardLimitPercent, double umpireHardLimitPercent, int thGroupSize,
+                                int thMinimumPairs, int bootstrapResamples, long bootstrapSeed,
+                                List<Double> precisionGrades) {
+
+    public static final DuplicateSettings DEFAULTS = new DuplicateSettings(10, false, 90, 30, 20, 10, 10, 10, 11,
+            50, 1000, 20240601L, List.of());
+
+    public DuplicateSettings {
+        precisionGrades = precisionGrades == null ? List.of() : List.copyOf(precisionGrades);
+        if (!(limitMultipleOfDetection >= 0) || !(acceptancePercent > 0 && acceptancePercent <= 100)
+                || thGroupSize < 3 || thMinimumPairs < thGroupSize * 2 || bootstrapResamples < 100) {
+            throw new IllegalArgumentException("duplicates settings out of range: limitMultipleOfDetection >= 0, "
+                    + "0 < acceptancePercent <= 100, thGroupSize >= 3, thMinimumPairs >= 2 groups, "
+                    + "bootstrapResamples >= 100");
+        }
+    }
+
+    /** The HARD limit of a duplicate type as a fraction (0.10 for 10 %). */
+    public double hardLimit(QcRole type) {
+        switch (type) {
+            case FIELD_DUPLICATE: return fieldHardLimitPercent / 100.0;
+            case COARSE_DUPLICATE: return coarseHardLimitPercent / 100.0;
+            case PULP_DUPLICATE: return pulpHardLimitPercent / 100.0;
+            case LAB_REPEAT: return labRepeatHardLimitPercent / 100.0;
+            case UMPIRE: return umpireHardLimitPercent / 100.0;
+            default: throw new IllegalArgumentException("not a duplicate type: " + type);
+        }
+    }
+
+    /** The config key of a type's HARD limit, for "user setting" labels. */
+    public static String hardLimitKey(QcRole type) {
+        switch (type) {
+            case FIELD_DUPLICATE: return "duplicates.fieldHardLimitPercent";
+            case COARSE_DUPLICATE: return "duplicates.coarseHardLimitPercent";
+            case PULP_DUPLICATE: return "duplicates.pulpHardLimitPercent";
+            case LAB_REPEAT: return "duplicates.labRepeatHardLimitPercent";
+            case UMPIRE: return "duplicates.umpireHardLimitPercent";
+            default: throw new IllegalArgumentException("not a duplicate type: " + type);
+        }
+    }
+
+    public DuplicateSettings withLimitMultipleOfDetection(double multiple) {
+        return new DuplicateSettings(multiple, censoredAtHalfLimit, acceptancePercent, fieldHardLimitPercent,
+                coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent, umpireHardLimitPercent,
+                thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, precisionGrades);
+    }
+
+    public DuplicateSettings withPrecisionGrades(List<Double> grades) {
+        return new DuplicateSettings(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent,
+                fieldHardLimitPercent, coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent,
+                umpireHardLimitPercent, thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, grades);
+    }
+}

@@ -1,0 +1,43 @@
+package org.cupel.duplicates;
+
+/**
+ * A pair flagged for a look: its IDs, batch, values and the test that flagged it.
+ *
+ * @param id duplicate sample ID
+ * @param originalId original sample ID
+ * @param batch the duplicate's batch
+ * @param original the original as reported
+ * @param duplicate the duplicate as reported
+ * @param hard HARD of the pair as a fraction
+ * @param tests which tests flagged it
+ */
+public record OutlierPair(String id, String originalId, String batch, String original, String duplicate,
+                          double hard, java.util.List<Test> tests) {
+
+    public OutlierPair {
+        tests = java.util.List.copyOf(tests);
+    }
+
+    /** The tests' labels joined for a table cell. */
+    public String testLabels() {
+        return String.join("; ", tests.stream().map(Test::label).toList());
+    }
+
+    /** The tests that flag a pair. */
+    public enum Test {
+        /** |d| above the 99 % control line 3.642773·σ_c of the Thompson–Howarth model. */
+        ABOVE_99_PERCENT_LINE("|d| above the 99 % line of the Thompson–Howarth model"),
+        /** HARD above the type's acceptance limit. */
+        OUTSIDE_HARD_LIMIT("HARD above the type's limit");
+
+        private final String label;
+
+        Test(String label) {
+            this.label = label;
+        }
+
+        public String label() {
+            return label;
+        }
+    }
+}

@@ -1,0 +1,100 @@
+package org.cupel.duplicates;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.OptionalInt;
+import org.cupel.assay.AnalyteColumn;
+import org.cupel.assay.QcRole;
+import org.cupel.assay.SampleTable;
+import org.cupel.project.InputException;
+import org.cupel.project.Project;
+
+/**
+ * Pairs every duplicate row of a project (field, coarse-reject and pulp duplicates from the sample
+ * register, lab repeats and umpire checks from the lab files) with the original sample its
+ * {@link SampleTable#reference(int)} names.
+ */
+public final class PairExtraction {
+    private PairExtraction() {
+    }
+
+    /** Pairs and unpaired duplicates of one analyte. */
+    public record Extracted(List<DuplicatePair> pairs, List<OrphanDuplicate> orphans) {
+        public Extracted {
+            pairs = List.copyOf(pairs);
+            orphans = List.copyOf(orphans);
+        }
+    }
+
+    public static Extracted extract(Project project, AnalyteColumn column) {
+        SampleTable samples = project.samples();
+        List<DuplicatePair> pairs = new ArrayList<>();
+        List<OrphanDuplicate> orphans = new ArrayList<>();
+        for (int row = 0; row < samples.size(); row++) {
+            QcRole role = samples.role(row);
+            if (!role.isDuplicate()) {
+                continue;
+            }
+            String id = samples.id(row);
+            String ref = samples.reference(row);
+            String batch = samples.batch(row).id();
+            if (ref.isBlank()) {
+                orphans.add(new OrphanDuplicate(id, ref, batch, role, "no original sample ID is given"));
+                continue;
+            }
+            OptionalInt original = samples.rowOf(ref);
+            if (original.isEmpty()) {
+                orphans.add(new OrphanDuplicate(id, ref, batch, role,
+                        "original sample " + ref + " is not in the project"));
+                continue;
+            }
+            pairs.add(new DuplicatePair(id, ref, batch, role, column.value(original.getAsInt()), column.value(row)));
+        }
+        return new Extracted(pairs, orphans);
+    }
+
+    /** The duplicate report of every analyte of the project, precision stated at the CRM grades by default. */
+    public static List<DuplicateReport> analyse(Project project, DuplicateSettings settings) {
+        return analyse(project, settings, null, null);
+    }
+
+    /**
+     * As {@link #analyse(Project, DuplicateSettings)}, for one analyte and/or one duplicate type.
+     *
+     * @param analyte analyte name, or null for all
+     * @param type duplicate type, or null for all
+     * @throws InputException when the project has no such analyte
+     */
+    public static List<DuplicateReport> analyse(Project project, DuplicateSettings settings, String analyte,
+                                                QcRole type) {
+        if (analyte != null && project.analyte(analyte).isEmpty()) {
+            throw new InputException("analyte " + analyte + " is not in project " + project.name() + "; it has "
+                    + String.join(", ", project.analyteNames()) + ".");
+        }
+        List<DuplicateReport> out = new ArrayList<>();
+        for (AnalyteColumn column : project.analytes().values()) {
+            String name = column.analyte().name();
+            if (analyte != null && !analyte.equals(name)) {
+                continue;
+            }
+            Extracted all = extract(project, column);
+            Extracted e = type == null ? all : new Extracted(
+                    all.pairs().stream().filter(p -> p.type() == type).toList(),
+                    all.orphans().stream().filter(o -> o.type() == type).toList());
+            if (e.pairs().isEmpty() && e.orphans().isEmpty()) {
+                continue;
+            }
+            out.add(DuplicateAnalysis.run(name, column.analyte().unit().symbol(), e.pairs(), e.orphans(),
+                    grades(project, name, settings), settings));
+        }
+        return out;
+    }
+
+    static double[] grades(Project project, String analyte, DuplicateSettings settings) {
+        if (!settings.precisionGrades().isEmpty()) {
+            return settings.precisionGrades().stream().mapToDouble(Double::doubleValue).toArray();
+        }
+        return project.catalog().forAnalyte(analyte).stream().mapToDouble(c -> c.certifiedValue()).filter(v -> v > 0)
+                .sorted().distinct().toArray();
+    }
+}

@@ -1,0 +1,90 @@
+package org.cupel.duplicates;
+
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The pairs of one set split by use, as primitive arrays for the kernels. {@code absolute} pairs have two
+ * detected positive values and feed Thompson–Howarth and repeatability; {@code relative} pairs also pass the
+ * detection-limit multiple and feed HARD, CV and bias. Arrays are index-aligned with their {@code rows}
+ * (indices into {@link #pairs()}).
+ *
+ * @param pairs every pair of the set
+ * @param absolute pairs usable in absolute measures
+ * @param relative pairs usable in relative measures
+ * @param excludedAbsolute counts of pairs left out of absolute measures, by reason
+ * @param excludedRelative counts of pairs left out of relative measures, by reason (includes the above)
+ * @param limitUnknown relative pairs kept although no detection limit was known to test the multiple
+ * @param censoredSubstituted relative pairs with a below-detection member taken at half its limit
+ */
+public record ScreenedPairs(List<DuplicatePair> pairs, Members absolute, Members relative,
+                            Map<ExclusionReason, Integer> excludedAbsolute,
+                            Map<ExclusionReason, Integer> excludedRelative, int limitUnknown,
+                            int censoredSubstituted) {
+
+    public ScreenedPairs {
+        pairs = List.copyOf(pairs);
+        excludedAbsolute = Collections.unmodifiableMap(new EnumMap<>(excludedAbsolute.isEmpty()
+                ? new EnumMap<>(ExclusionReason.class) : excludedAbsolute));
+        excludedRelative = Collections.unmodifiableMap(new EnumMap<>(excludedRelative.isEmpty()
+                ? new EnumMap<>(ExclusionReason.class) : excludedRelative));
+    }
+
+    /** Values of the used pairs: {@code a} original, {@code b} duplicate, {@code rows} into the pair list. */
+    public record Members(int[] rows, double[] a, double[] b) {
+        public Members {
+            if (rows.length != a.length || a.length != b.length) {
+                throw new IllegalArgumentException("rows, a and b must have the same length");
+            }
+            rows = rows.clone();
+            a = a.clone();
+            b = b.clone();
+        }
+
+        public int size() {
+            return rows.length;
+        }
+
+        @Override
+        public int[] rows() {
+            return rows.clone();
+        }
+
+        @Override
+        public double[] a() {
+            return a.clone();
+        }
+
+        @Override
+        public double[] b() {
+            return b.clone();
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Members m && Arrays.equals(rows, m.rows) && Arrays.equals(a, m.a)
+                    && Arrays.equals(b, m.b);
+        }
+
+        @Override
+        public int hashCode() {
+            return Arrays.hashCode(rows) * 31 + Arrays.hashCode(a);
+        }
+
+        @Override
+        public String toString() {
+            return "Members[n=" + rows.length + "]";
+        }
+    }
+
+    public int excludedAbsoluteCount() {
+        return excludedAbsolute.values().stream().mapToInt(Integer::intValue).sum();
+    }
+
+    public int excludedRelativeCount() {
+        return excludedRelative.values().stream().mapToInt(Integer::intValue).sum();
+    }
+}
