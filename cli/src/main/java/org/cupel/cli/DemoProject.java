@@ -7,19 +7,18 @@ import java.util.Comparator;
 import java.util.stream.Stream;
 import org.cupel.demo.DemoGenerator;
 import org.cupel.demo.DemoSettings;
-import org.cupel.ingest.ProjectLoader;
 import org.cupel.project.InputException;
 import org.cupel.project.Project;
 
 /**
  * The demo project for {@code cupel report --demo}: generated with the default size and seed into a
- * temporary folder, read exactly as a user's folder would be, and the folder deleted again.
+ * temporary folder, read exactly as a user's folder would be (testwork included), and the folder deleted again.
  */
 final class DemoProject {
     private DemoProject() {
     }
 
-    static Project load(Path folderAlsoGiven) throws IOException {
+    static ReportInputs load(Path folderAlsoGiven) throws IOException {
         if (folderAlsoGiven != null) {
             throw new InputException("both --demo and the project folder " + folderAlsoGiven
                     + " were given; give one of them");
@@ -28,10 +27,11 @@ final class DemoProject {
         try {
             DemoGenerator.generate(new DemoSettings(DemoSettings.DEFAULT_SAMPLES, DemoSettings.DEFAULT_SEED),
                     DemoCommand.folderSink(tmp));
-            Project p = ProjectLoader.load(tmp);
+            ReportInputs in = ReportInputs.load(tmp);
+            Project p = in.project();
             // The generated folder has a temporary name; the demo's own name is the better title.
-            return new Project(p.config().projectName(DemoGenerator.PROJECT), null, p.config(), p.samples(),
-                    p.analytes(), p.catalog(), p.exceptions(), p.files());
+            return new ReportInputs(new Project(p.config().projectName(DemoGenerator.PROJECT), null, p.config(),
+                    p.samples(), p.analytes(), p.catalog(), p.exceptions(), p.files()), in.testwork());
         } finally {
             try (Stream<Path> walk = Files.walk(tmp)) {
                 for (Path p : (Iterable<Path>) walk.sorted(Comparator.reverseOrder())::iterator) {

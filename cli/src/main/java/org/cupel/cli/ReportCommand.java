@@ -14,7 +14,6 @@ import me.tongfei.progressbar.ConsoleProgressBarConsumer;
 import me.tongfei.progressbar.ProgressBar;
 import me.tongfei.progressbar.ProgressBarBuilder;
 import org.cupel.charts.PngWriter;
-import org.cupel.ingest.ProjectLoader;
 import org.cupel.project.BatchSelection;
 import org.cupel.project.InputException;
 import org.cupel.project.Project;
@@ -83,13 +82,14 @@ public final class ReportCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         BatchSelection selection = new BatchSelection(date("--since", since), date("--until", until),
                 new LinkedHashSet<>(batches));
-        Project project = demo ? DemoProject.load(projectFolder) : ProjectLoader.load(folder());
+        ReportInputs inputs = demo ? DemoProject.load(projectFolder) : ReportInputs.load(folder());
+        Project project = inputs.project();
         Project reviewed = selection.selectsAll() ? project : ProjectFilter.batches(project, selection);
         if (reviewed.samples().size() == 0 && !selection.selectsAll()) {
             throw new InputException("no samples in " + selection.describe() + " of project " + project.name()
                     + "; check the dates and batch IDs against the Batches table of a full report");
         }
-        QcReport report = QcAppendix.build(reviewed, selection.describe(),
+        QcReport report = QcAppendix.build(reviewed, inputs.testwork(), selection.describe(),
                 GenerationTime.from(System.getenv(), Clock.systemUTC()));
         ReportOptions options = new ReportOptions(paper, screen ? PngWriter.SCREEN_DPI : PngWriter.PRINT_DPI, force);
         try (Progress progress = Progress.open(!quiet && System.console() != null)) {
