@@ -129,16 +129,36 @@ public final class ProjectLoader {
 
         Project run() {
             requireFolder(folder);
-            List<LabFile> labs = readLabs();
-            Map<String, GradeUnit> units = reportingUnits(labs);
-            SampleRegister register = readRegister();
+            // Each lab file is joined as soon as it is read, so only one file's rows are held as objects
+            // at a time (a million-row project would not fit a 2 GiB heap otherwise). The register is
+            // read first for the join; its failure, the join's issues and the catalog's failure are
+            // listed in the order they had when every file was read first.
+            Path registerFile = folder.resolve(REGISTER);
+            InputException registerFailure = null;
+            SampleRegister register = null;
+            try {
+                register = Files.isRegularFile(registerFile) ? RegisterReader.read(registerFile, REGISTER) : null;
+            } catch (InputException e) {
+                registerFailure = e;
+            }
+            Map<String, GradeUnit> units = configuredUnits();
+            ExceptionRegister joined = new ExceptionRegister();
+            SampleJoin join = new SampleJoin(register, units, joined);
+            readLabs(file -> {
+                for (LabColumn c : file.columns()) {
+                    units.putIfAbsent(c.analyte().analyte(), c.analyte().unit());
+                }
+                join.add(file);
+            });
+            if (registerFailure != null) {
+                fail(REGISTER, "sample register", registerFailure);
+            }
             CatalogReader.Result catalog = readCatalog(units);
-            SampleJoin join = new SampleJoin(register, units, exceptions);
-            labs.forEach(join::add);
             join.finishRegister();
             SampleTable table = join.buildSamples();
             CrmCatalog crms = catalog == null ? CrmCatalog.empty() : catalog.catalog();
             join.checkReferences(table, crms, catalog != null);
+            joined.all().forEach(exceptions::add);
             if (catalog == null && table.rowsWithRole(QcRole.CRM).length > 0) {
                 exceptions.warn(org.cupel.assay.SourceLocation.ofFile(CATALOG), "", "",
                         "the project has CRM samples but no CRM catalog, so their results cannot be judged",
@@ -158,35 +178,23 @@ public final class ProjectLoader {
             return new Project(name, folder, config, table, columns, crms, exceptions, accounts);
         }
 
-        private List<LabFile> readLabs() {
+        private void readLabs(java.util.function.Consumer<LabFile> join) {
             List<Path> files = labFiles(folder);
             if (files.isEmpty()) {
                 fail(LAB_DIR, "lab results", new InputException(folder.resolve(LAB_DIR) + ": no lab result files "
                         + "(expected .csv, .tsv, .txt or .xlsx files in lab/); put the lab's result files there."));
             }
             LabFileReader reader = new LabFileReader(settings);
-            List<LabFile> out = new ArrayList<>();
             for (Path f : files) {
                 String name = displayName(f);
+                LabFile read;
                 try {
-                    out.add(reader.read(f, name));
+                    read = reader.read(f, name);
                 } catch (InputException e) {
                     fail(name, "lab results", e);
+                    continue;
                 }
-            }
-            return out;
-        }
-
-        private SampleRegister readRegister() {
-            Path f = folder.resolve(REGISTER);
-            if (!Files.isRegularFile(f)) {
-                return null;
-            }
-            try {
-                return RegisterReader.read(f, REGISTER);
-            } catch (InputException e) {
-                fail(REGISTER, "sample register", e);
-                return null;
+                join.accept(read);
             }
         }
 
@@ -203,17 +211,12 @@ public final class ProjectLoader {
             }
         }
 
-        private Map<String, GradeUnit> reportingUnits(List<LabFile> labs) {
+        private Map<String, GradeUnit> configuredUnits() {
             Map<String, GradeUnit> units = new LinkedHashMap<>();
             settings.units().forEach((analyte, symbol) -> units.put(analyte, GradeUnit.parse(symbol)
                     .orElseThrow(() -> new ConfigException(config.source() + ": ingest.units." + analyte + " is '"
                             + symbol + "', not a unit Cupel knows (expected ppb, ppm, g/t, mg/kg, %, oz/st or oz/lt); "
                             + "correct it in cupel.yaml."))));
-            for (LabFile f : labs) {
-                for (LabColumn c : f.columns()) {
-                    units.putIfAbsent(c.analyte().analyte(), c.analyte().unit());
-                }
-            }
             return units;
         }
 
