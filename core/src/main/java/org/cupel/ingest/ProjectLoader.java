@@ -78,7 +78,21 @@ public final class ProjectLoader {
         }
     }
 
-    /** The lab files of a project, in name order. */
+    /**
+     * Name order without the extension first, so that {@code OAL-00001.csv} (the batch) comes before
+     * {@code OAL-00001-GRAV.csv} (its re-assays): a sample's batch and position are those of the first file
+     * that holds it, and later files add candidate results.
+     */
+    static final java.util.Comparator<Path> BY_NAME = java.util.Comparator
+            .comparing((Path p) -> stem(p.getFileName().toString()))
+            .thenComparing(p -> p.getFileName().toString());
+
+    private static String stem(String name) {
+        int dot = name.lastIndexOf('.');
+        return dot > 0 ? name.substring(0, dot) : name;
+    }
+
+    /** The lab files of a project, in name order (see {@link #BY_NAME}). */
     public static List<Path> labFiles(Path folder) {
         Path lab = folder.resolve(LAB_DIR);
         Path dir = Files.isDirectory(lab) ? lab : folder;
@@ -86,7 +100,7 @@ public final class ProjectLoader {
             return s.filter(Files::isRegularFile)
                     .filter(p -> isTable(p.getFileName().toString()))
                     .filter(p -> dir == lab || !isProjectFile(p.getFileName().toString()))
-                    .sorted()
+                    .sorted(BY_NAME)
                     .toList();
         } catch (IOException e) {
             throw new InputException(dir + ": the folder could not be listed (" + e.getMessage()
