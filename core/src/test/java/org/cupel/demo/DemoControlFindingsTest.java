@@ -17,7 +17,13 @@ import org.cupel.control.Verdict;
 import org.cupel.control.crm.CrmResult;
 import org.cupel.control.crm.CrmReview;
 import org.cupel.control.crm.SeriesReview;
+import org.cupel.assay.QcRole;
 import org.cupel.demo.PlantedProblem.Kind;
+import org.cupel.duplicates.BatchPrecision;
+import org.cupel.duplicates.DuplicateReport;
+import org.cupel.duplicates.DuplicateSetResult;
+import org.cupel.duplicates.DuplicateSettings;
+import org.cupel.duplicates.PairExtraction;
 import org.cupel.ingest.ProjectLoader;
 import org.cupel.project.Project;
 import org.junit.jupiter.api.BeforeAll;
@@ -25,8 +31,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * End to end: the CRM and blank reviews, with their default settings, find the planted CRM drift, CRM
- * swap and blank carry-over of the default demo project, and fail nothing else.
+ * End to end: the CRM, blank and duplicate reviews, with their default settings, find the planted CRM
+ * drift, CRM swap, blank carry-over and poor pulp precision of the default demo project, and nothing else
+ * of the same kind.
  */
 class DemoControlFindingsTest {
 
@@ -85,5 +92,18 @@ class DemoControlFindingsTest {
         }
         assertTrue(report.carryOverFindings().stream().anyMatch(r -> r.observation().sampleId().equals(blank)));
         assertTrue(report.carryOverFindings().stream().allMatch(r -> r.observation().sampleId().equals(blank)));
+    }
+
+    @Test
+    void thePoorPulpBatchIsTheOnlyPulpBatchLessPreciseThanTheSet() {
+        DuplicateReport gold = PairExtraction.analyse(project, DuplicateSettings.DEFAULTS).stream()
+                .filter(r -> r.analyte().equals("Au")).findFirst().orElseThrow();
+        DuplicateSetResult pulp = gold.sets().stream().filter(s -> s.type() == QcRole.PULP_DUPLICATE)
+                .findFirst().orElseThrow();
+        String poor = summary.planted().stream().filter(p -> p.kind() == Kind.POOR_PULP_PRECISION).findFirst()
+                .orElseThrow().where().replace("lab/", "").replace(".csv", "");
+        List<String> lessPrecise = pulp.batches().stream().filter(BatchPrecision::lessPrecise)
+                .map(BatchPrecision::batch).toList();
+        assertEquals(List.of(poor), lessPrecise);
     }
 }
