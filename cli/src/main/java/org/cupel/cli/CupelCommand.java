@@ -21,8 +21,16 @@ import picocli.CommandLine.Option;
         footer = {"", "Example:", "  cupel demo demo-project && cupel report demo-project --out qc-appendix"},
         subcommands = {
             CommandLine.HelpCommand.class,
+            CheckCommand.class,
+            CrmCommand.class,
             DemoCommand.class,
+            BlanksCommand.class,
+            BatchesCommand.class,
+            CensoredCommand.class,
+            DlCheckCommand.class,
             DuplicatesCommand.class,
+            RecoveryCommand.class,
+            ReportCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 

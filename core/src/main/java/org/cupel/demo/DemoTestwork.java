@@ -14,9 +14,10 @@ import java.util.List;
  * and the rest in the slag, so the products balance the charge before assay error. Assay errors are
  * multiplicative: 1.2 % for heads, 1 % for buttons, 3 % for mattes, 8 % for slags (plus 0.15 g/t near the
  * slag detection limit of 0.5 g/t Au). Condition {@code LIT60-1050} against {@code LIT90-1050} differs
- * by about 5.6 recovery points with replicate SDs under 1 point (clearly different); {@code LIT60-1050}
- * against {@code LIT60-1100} differs by about 0.6 points with replicate SDs near 0.7 (cannot tell with
- * three replicates each). {@code LIT60-1050-HALF} is the first condition at half the charge mass.
+ * by about 5.6 recovery points with replicate SDs near 1 point (share SD plus the 1 % button assay):
+ * clearly different; {@code LIT60-1050} against {@code LIT60-1100} differs by about 0.6 points with
+ * replicate SDs near 1.2: cannot tell with three replicates each. {@code LIT60-1050-HALF} is the first
+ * condition at half the charge mass.
  */
 final class DemoTestwork {
 

@@ -1,0 +1,167 @@
+package org.cupel.charts.control;
+
+import java.awt.Color;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.cupel.assay.Numbers;
+import org.cupel.charts.ChartNotes;
+import org.cupel.charts.ChartStyle;
+import org.cupel.charts.PointBudget;
+import org.cupel.control.Verdict;
+import org.cupel.control.crm.CertifiedLimits;
+import org.cupel.control.crm.CrmResult;
+import org.cupel.control.crm.SeriesReview;
+import org.knowm.xchart.AnnotationLine;
+import org.knowm.xchart.AnnotationText;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYChartBuilder;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+
+/**
+ * Control chart of one CRM and analyte: results in series order, certified value, ±2 SD and ±3 SD
+ * certificate limits, the project's running mean, batch boundaries as dotted verticals, and each result
+ * marked by its outcome. The value axis spans certified ± 5 SD (wider when judged results need it);
+ * results beyond it (swaps, mostly) sit on the edge and are labelled with their value.
+ */
+public final class CrmControlChart {
+    private static final double SPAN_SD = 5;
+
+    private CrmControlChart() {
+    }
+
+    public static XYChart of(SeriesReview s) {
+        CertifiedLimits lim = s.limits();
+        List<CrmResult> rs = s.results();
+        int n = rs.size();
+        String unit = s.analyte().unit().symbol();
+        XYChart c = new XYChartBuilder().width(ChartStyle.WIDTH).height(ChartStyle.HEIGHT)
+                .title("CRM " + s.crm() + ": " + s.analyte().name() + " in time order")
+                .xAxisTitle("Result number (batch date, then position; dotted lines separate batches)")
+                .yAxisTitle(s.analyte().label()).build();
+        ChartStyle.apply(c);
+        double lo = lim.certified() - SPAN_SD * lim.sd();
+        double hi = lim.certified() + SPAN_SD * lim.sd();
+        for (CrmResult r : rs) {
+            if (!r.isSwap()) {
+                lo = Math.min(lo, r.point().value().value());
+                hi = Math.max(hi, r.point().value().value());
+            }
+        }
+        // Headroom at the top keeps the note box clear of the data.
+        c.getStyler().setYAxisMin(lo - (hi - lo) * 0.03).setYAxisMax(hi + (hi - lo) * 0.16).setXAxisMin(0.5).setXAxisMax(n + 0.5);
+        double[] ends = {0.5, n + 0.5};
+        line(c, "Certified", ends, lim.certified(),
+                ChartStyle.REFERENCE, ChartStyle.solid(1.6f), true);
+        line(c, "±2 SD", ends, lim.warnHigh(), ChartStyle.WARNING, ChartStyle.dashed(1.4f), true);
+        line(c, "-2 SD", ends, lim.warnLow(), ChartStyle.WARNING, ChartStyle.dashed(1.4f), false);
+        line(c, "±3 SD", ends, lim.failHigh(), ChartStyle.FAILURE, ChartStyle.solid(1.8f), true);
+        line(c, "-3 SD", ends, lim.failLow(), ChartStyle.FAILURE, ChartStyle.solid(1.8f), false);
+        runningMean(c, rs);
+        if (s.projectLimits().available()) {
+            line(c, "Own ±2 SD", ends, s.projectLimits().warnHigh(),
+                    ChartStyle.SECOND, ChartStyle.dotted(1.6f), true);
+            line(c, "project -2 SD", ends, s.projectLimits().warnLow(), ChartStyle.SECOND, ChartStyle.dotted(1.6f),
+                    false);
+        }
+        int[] shown = PointBudget.indices(n, PointBudget.DEFAULT);
+        points(c, rs, shown, "Pass", r -> r.verdict() == Verdict.PASS, ChartStyle.DATA, SeriesMarkers.CIRCLE, lo, hi);
+        points(c, rs, allIndices(n), "Warn", r -> r.verdict() == Verdict.WARN && !r.isSwap(), ChartStyle.WARNING,
+                SeriesMarkers.DIAMOND, lo, hi);
+        points(c, rs, allIndices(n), "Fail", r -> r.verdict() == Verdict.FAIL, ChartStyle.FAILURE,
+                SeriesMarkers.SQUARE, lo, hi);
+        points(c, rs, allIndices(n), "Swap", CrmResult::isSwap, ChartStyle.REDDISH_PURPLE,
+                SeriesMarkers.TRIANGLE_UP, lo, hi);
+        batchBoundaries(c, rs);
+        offScaleLabels(c, rs, lo, hi);
+        // Only passing results are thinned; every flagged result is drawn.
+        long drawn = rs.stream().filter(r -> r.verdict() != Verdict.PASS).count()
+                + java.util.Arrays.stream(shown).filter(i -> rs.get(i).verdict() == Verdict.PASS).count();
+        String note = ChartNotes.count(n, drawn) + String.format(Locale.ROOT,
+                "; certified %s %s, limits ±2 and ±3 × certificate SD %s %s", Numbers.significant(lim.certified(), 4), unit,
+                Numbers.significant(lim.sd(), 3), unit)
+                + (s.projectLimits().available() ? "; own ±2 SD from the project's " + s.projectLimits().n()
+                + " results" : "");
+        ChartNote.add(c, note);
+        return c;
+    }
+
+    private static void line(XYChart c, String name, double[] x, double y, Color color,
+                             java.awt.BasicStroke stroke, boolean legend) {
+        XYSeries s = c.addSeries(name, x, new double[] {y, y});
+        s.setMarker(SeriesMarkers.NONE).setLineColor(color).setLineStyle(stroke).setShowInLegend(legend);
+    }
+
+    private static void runningMean(XYChart c, List<CrmResult> rs) {
+        List<Double> x = new ArrayList<>();
+        List<Double> y = new ArrayList<>();
+        for (int i = 0; i < rs.size(); i++) {
+            if (!rs.get(i).isSwap() && Double.isFinite(rs.get(i).runningMean())) {
+                x.add(i + 1.0);
+                y.add(rs.get(i).runningMean());
+            }
+        }
+        if (x.size() >= 2) {
+            XYSeries s = c.addSeries("Running mean", x, y);
+            s.setMarker(SeriesMarkers.NONE).setLineColor(ChartStyle.SECOND).setLineStyle(ChartStyle.solid(2f));
+        }
+    }
+
+    private static void points(XYChart c, List<CrmResult> rs, int[] idx, String name,
+                               java.util.function.Predicate<CrmResult> which, Color color,
+                               org.knowm.xchart.style.markers.Marker marker, double lo, double hi) {
+        List<Double> x = new ArrayList<>();
+        List<Double> y = new ArrayList<>();
+        for (int i : idx) {
+            CrmResult r = rs.get(i);
+            if (which.test(r)) {
+                x.add(i + 1.0);
+                y.add(Math.max(lo, Math.min(hi, r.point().value().value())));
+            }
+        }
+        if (!x.isEmpty()) {
+            XYSeries s = c.addSeries(name + " " + x.size(), x, y);
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+            s.setMarker(marker).setMarkerColor(color);
+        }
+    }
+
+    private static void batchBoundaries(XYChart c, List<CrmResult> rs) {
+        c.getStyler().setAnnotationLineColor(new Color(185, 185, 185)).setAnnotationLineStroke(ChartStyle.dotted(0.8f));
+        int boundaries = 0;
+        for (int i = 1; i < rs.size(); i++) {
+            if (!rs.get(i).point().batchId().equals(rs.get(i - 1).point().batchId())) {
+                boundaries++;
+            }
+        }
+        if (boundaries > 200) {
+            return;
+        }
+        for (int i = 1; i < rs.size(); i++) {
+            if (!rs.get(i).point().batchId().equals(rs.get(i - 1).point().batchId())) {
+                c.addAnnotation(new AnnotationLine(i + 0.5, true, false));
+            }
+        }
+    }
+
+    private static void offScaleLabels(XYChart c, List<CrmResult> rs, double lo, double hi) {
+        for (int i = 0; i < rs.size(); i++) {
+            double v = rs.get(i).point().value().value();
+            if (v < lo || v > hi) {
+                double y = v > hi ? hi - (hi - lo) * 0.045 : lo + (hi - lo) * 0.045;
+                String label = rs.get(i).point().value().display() + " off scale"
+                        + (rs.get(i).isSwap() ? ": " + rs.get(i).swapWith() + "?" : "");
+                c.addAnnotation(new AnnotationText(label, i + 1.0, y, false));
+            }
+        }
+    }
+
+    private static int[] allIndices(int n) {
+        int[] a = new int[n];
+        for (int i = 0; i < n; i++) {
+            a[i] = i;
+        }
+        return a;
+    }
+}

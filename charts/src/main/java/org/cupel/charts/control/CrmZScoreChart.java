@@ -1,0 +1,107 @@
+package org.cupel.charts.control;
+
+import java.time.LocalDate;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.List;
+import org.cupel.charts.ChartNotes;
+import org.cupel.charts.ChartStyle;
+import org.cupel.charts.PointBudget;
+import org.cupel.control.crm.CrmResult;
+import org.cupel.control.crm.SeriesReview;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYChartBuilder;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+
+/**
+ * Every CRM of one analyte on one normalised chart, z = (x − certified)/SD against time, to show drift
+ * that affects the whole lab rather than one material. Time is days since the first dated batch when
+ * every result is dated, else the batch number. Swaps are left out (their z is not a measure of the lab);
+ * z is clipped to ±6 so one wild result does not flatten the rest.
+ */
+public final class CrmZScoreChart {
+    private static final double CLIP = 6;
+
+    private CrmZScoreChart() {
+    }
+
+    public static XYChart of(String analyte, List<SeriesReview> series) {
+        LocalDate origin = null;
+        boolean dated = true;
+        for (SeriesReview s : series) {
+            for (CrmResult r : s.results()) {
+                LocalDate d = r.point().date();
+                dated &= d != null;
+                if (d != null && (origin == null || d.isBefore(origin))) {
+                    origin = d;
+                }
+            }
+        }
+        dated &= origin != null;
+        XYChart c = new XYChartBuilder().width(ChartStyle.WIDTH).height(ChartStyle.HEIGHT)
+                .title("All CRMs, " + analyte + ": z-score over time")
+                .xAxisTitle(dated ? "Days since " + origin : "Batch number (some batches undated)")
+                .yAxisTitle("z = (result − certified) / certificate SD").build();
+        ChartStyle.apply(c);
+        c.getStyler().setYAxisMin(-CLIP).setYAxisMax(CLIP);
+        double maxX = 1;
+        long total = 0;
+        long drawn = 0;
+        int k = 0;
+        for (SeriesReview s : series) {
+            List<CrmResult> judged = s.results().stream().filter(r -> !r.isSwap()).toList();
+            int[] idx = PointBudget.indices(judged.size(), PointBudget.DEFAULT / Math.max(1, series.size()));
+            double[] x = new double[idx.length];
+            double[] y = new double[idx.length];
+            for (int i = 0; i < idx.length; i++) {
+                CrmResult r = judged.get(idx[i]);
+                x[i] = dated ? ChronoUnit.DAYS.between(origin, r.point().date()) : r.point().batchOrder() + 1;
+                y[i] = Math.max(-CLIP, Math.min(CLIP, r.z()));
+                maxX = Math.max(maxX, x[i]);
+            }
+            total += judged.size();
+            drawn += idx.length;
+            if (idx.length > 0) {
+                XYSeries xs = c.addSeries(s.crm() + " (n = " + judged.size() + ")", x, y);
+                xs.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+                xs.setMarker(MARKERS[k % MARKERS.length]).setLineStyle(ChartStyle.solid(0.8f));
+                java.awt.Color col = CRM_COLOURS[k % CRM_COLOURS.length];
+                xs.setMarkerColor(col).setLineColor(col);
+            }
+            k++;
+        }
+        double[] ends = {0, maxX};
+        band(c, "±2 SD", 2, ChartStyle.WARNING);
+        band(c, "±3 SD", 3, ChartStyle.FAILURE);
+        XYSeries zero = c.addSeries("z = 0", ends, new double[] {0, 0});
+        zero.setMarker(SeriesMarkers.NONE).setLineColor(ChartStyle.REFERENCE).setLineStyle(ChartStyle.solid(1.2f));
+        ChartNote.add(c, ChartNotes.count(total, drawn) + "; swaps left out; |z| clipped at 6");
+        return c;
+    }
+
+    /** Okabe–Ito colours other than the orange and vermillion that mean warning and failure limits. */
+    static final java.awt.Color[] CRM_COLOURS = {ChartStyle.BLUE, ChartStyle.REDDISH_PURPLE, ChartStyle.BLUISH_GREEN,
+        ChartStyle.SKY_BLUE, ChartStyle.BLACK, ChartStyle.GREY};
+
+    private static final org.knowm.xchart.style.markers.Marker[] MARKERS = {SeriesMarkers.CIRCLE,
+        SeriesMarkers.SQUARE, SeriesMarkers.DIAMOND, SeriesMarkers.TRIANGLE_UP, SeriesMarkers.TRIANGLE_DOWN};
+
+    private static void band(XYChart c, String name, double z, java.awt.Color color) {
+        java.awt.BasicStroke stroke = z >= 3 ? ChartStyle.solid(1.6f) : ChartStyle.dashed(1.3f);
+        double[] ends = {c.getStyler().getXAxisMin() == null ? 0 : c.getStyler().getXAxisMin(), maxX(c)};
+        XYSeries up = c.addSeries(name, ends, new double[] {z, z});
+        up.setMarker(SeriesMarkers.NONE).setLineColor(color).setLineStyle(stroke);
+        XYSeries down = c.addSeries(name + " low", ends, new double[] {-z, -z});
+        down.setMarker(SeriesMarkers.NONE).setLineColor(color).setLineStyle(stroke)
+                .setShowInLegend(false);
+    }
+
+    private static double maxX(XYChart c) {
+        double m = 1;
+        for (XYSeries s : c.getSeriesMap().values()) {
+            m = Math.max(m, s.getXMax());
+        }
+        return m;
+    }
+}

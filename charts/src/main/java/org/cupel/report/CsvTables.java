@@ -1,0 +1,72 @@
+package org.cupel.report;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.regex.Pattern;
+
+/**
+ * Writes report tables as CSV files that open safely in a spreadsheet.
+ *
+ * <p>Format: RFC 4180 (Shafranovich, 2005, "Common Format and MIME Type for Comma-Separated Values (CSV)
+ * Files"): comma separated, CRLF line ends, a header row, fields holding a comma, double quote, CR or
+ * LF enclosed in double quotes with inner quotes doubled. UTF-8 without a byte-order mark.
+ *
+ * <p>Spreadsheet safety, after OWASP Foundation, "CSV Injection" (owasp.org/www-community/attacks/
+ * CSV_Injection): a spreadsheet runs a cell that begins with {@code =}, {@code +}, {@code -}, {@code @},
+ * tab or carriage return as a formula, so such a cell is prefixed with a single quote, which makes the
+ * spreadsheet show it as text. The one exception is a plain negative number ({@code -0.12},
+ * {@code -1,234.5}, {@code -3.4e-2}, {@code -12%}): a single numeric literal cannot call a function or
+ * reference another cell, and quoting it would turn a measured value into text. A cell such as
+ * {@code -2+3} or {@code -1;SUM(A1)} is not a plain number and is neutralised.
+ */
+public final class CsvTables {
+    private static final Pattern NEGATIVE_NUMBER =
+            Pattern.compile("-(\\d+|\\d{1,3}(,\\d{3})+)(\\.\\d+)?([eE][+-]?\\d+)?%?");
+
+    private CsvTables() {
+    }
+
+    /** Writes {@code table} (header row, then the rows) to {@code file}. */
+    public static void write(ReportTable table, Path file) throws IOException {
+        try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
+            writeRow(w, table.columns());
+            for (List<String> row : table.rows()) {
+                writeRow(w, row);
+            }
+        }
+    }
+
+    /** One cell made spreadsheet-safe, then quoted per RFC 4180 when needed. */
+    public static String field(String cell) {
+        String s = neutralise(cell == null ? "" : cell);
+        boolean quote = s.indexOf(',') >= 0 || s.indexOf('"') >= 0 || s.indexOf('\n') >= 0 || s.indexOf('\r') >= 0;
+        return quote ? '"' + s.replace("\"", "\"\"") + '"' : s;
+    }
+
+    /** {@code cell} with a leading single quote when a spreadsheet would read it as a formula. */
+    public static String neutralise(String cell) {
+        if (cell.isEmpty()) {
+            return cell;
+        }
+        char c = cell.charAt(0);
+        boolean trigger = c == '=' || c == '+' || c == '-' || c == '@' || c == '\t' || c == '\r';
+        if (!trigger || NEGATIVE_NUMBER.matcher(cell).matches()) {
+            return cell;
+        }
+        return "'" + cell;
+    }
+
+    private static void writeRow(Writer w, List<String> cells) throws IOException {
+        for (int i = 0; i < cells.size(); i++) {
+            if (i > 0) {
+                w.write(',');
+            }
+            w.write(field(cells.get(i)));
+        }
+        w.write("\r\n");
+    }
+}

@@ -1,0 +1,253 @@
+package org.cupel.report;
+
+import com.lowagie.text.Chapter;
+import com.lowagie.text.Chunk;
+import com.lowagie.text.Document;
+import com.lowagie.text.DocumentException;
+import com.lowagie.text.Element;
+import com.lowagie.text.Font;
+import com.lowagie.text.Image;
+import com.lowagie.text.PageSize;
+import com.lowagie.text.Paragraph;
+import com.lowagie.text.Phrase;
+import com.lowagie.text.Rectangle;
+import com.lowagie.text.pdf.PdfPCell;
+import com.lowagie.text.pdf.PdfPTable;
+import com.lowagie.text.pdf.PdfWriter;
+import java.awt.Color;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.Function;
+
+/**
+ * Renders a {@link QcReport} as a paginated PDF with OpenPDF: a title page, one chapter per section (each
+ * a PDF bookmark, starting on a new page), a running header (project, "QC appendix") and "page n of m"
+ * footer, tables whose caption and header row repeat on every page they run over and whose rows are not split
+ * mid-line, and charts from print-resolution PNGs scaled to the text width.
+ */
+public final class PdfReport {
+
+    /** Paper sizes offered. */
+    public enum Paper {
+        A4(PageSize.A4), LETTER(PageSize.LETTER);
+
+        private final Rectangle size;
+
+        Paper(Rectangle size) {
+            this.size = size;
+        }
+    }
+
+    static final float MARGIN_X = 54f;
+    static final float MARGIN_TOP = 66f;
+    static final float MARGIN_BOTTOM = 58f;
+    static final float TABLE_FONT = 7.8f;
+
+    private final QcReport report;
+    private final ReportFiles files;
+    private final Function<ReportBlock.Figure, byte[]> png;
+    private final PdfFonts fonts = PdfFonts.load();
+    private final Document doc;
+
+    private PdfReport(QcReport report, ReportFiles files, Function<ReportBlock.Figure, byte[]> png, Paper paper) {
+        this.report = report;
+        this.files = files;
+        this.png = png;
+        this.doc = new Document(paper.size, MARGIN_X, MARGIN_X, MARGIN_TOP, MARGIN_BOTTOM);
+    }
+
+    /**
+     * Writes the PDF to {@code out}.
+     *
+     * @param png the print-resolution PNG bytes of a figure
+     */
+    public static void write(QcReport report, ReportFiles files, Function<ReportBlock.Figure, byte[]> png,
+                             Paper paper, OutputStream out) throws IOException {
+        new PdfReport(report, files, png, paper).render(out);
+    }
+
+    private void render(OutputStream out) throws IOException {
+        try {
+            PdfWriter writer = PdfWriter.getInstance(doc, out);
+            writer.setPageEvent(new PdfPageFrame(report.project() + " — " + QcReport.TITLE, fonts));
+            writer.setViewerPreferences(PdfWriter.PageModeUseOutlines);
+            doc.addTitle(report.project() + " — " + QcReport.TITLE);
+            doc.addCreator("Cupel");
+            doc.open();
+            titlePage();
+            List<ReportSection> sections = report.sections();
+            for (int i = 0; i < sections.size(); i++) {
+                doc.add(chapter(i + 1, sections.get(i)));
+            }
+            doc.close();
+        } catch (DocumentException e) {
+            throw new IOException("could not write the PDF: " + e.getMessage(), e);
+        }
+    }
+
+    private void titlePage() {
+        Paragraph kicker = new Paragraph(QcReport.TITLE.toUpperCase(Locale.ROOT), fonts.kicker());
+        kicker.setSpacingBefore(150f);
+        doc.add(kicker);
+        Paragraph title = new Paragraph(report.project(), fonts.title());
+        title.setSpacingAfter(12f);
+        doc.add(title);
+        doc.add(new Paragraph("Covers " + report.selection() + ".", fonts.body()));
+        doc.add(new Paragraph("Generated " + HtmlReport.STAMP.format(report.generated()) + " by Cupel.",
+                fonts.muted()));
+        Paragraph contents = new Paragraph("Contents", fonts.heading2());
+        contents.setSpacingBefore(36f);
+        contents.setSpacingAfter(4f);
+        doc.add(contents);
+        List<ReportSection> sections = report.sections();
+        for (int i = 0; i < sections.size(); i++) {
+            Paragraph p = new Paragraph((i + 1) + "   " + sections.get(i).title(), fonts.body());
+            p.setIndentationLeft(8f);
+            doc.add(p);
+        }
+    }
+
+    private Chapter chapter(int number, ReportSection s) throws IOException {
+        Paragraph heading = new Paragraph(s.title(), fonts.heading1());
+        heading.setSpacingAfter(8f);
+        Chapter ch = new Chapter(heading, number);
+        ch.setNumberDepth(1);
+        ch.setBookmarkTitle(number + ". " + s.title());
+        for (ReportBlock b : s.blocks()) {
+            if (b instanceof ReportBlock.Paragraph p) {
+                Paragraph para = new Paragraph(p.text(), fonts.body());
+                para.setSpacingAfter(5f);
+                ch.add(para);
+            } else if (b instanceof ReportBlock.Callout c) {
+                ch.add(callout(c));
+            } else if (b instanceof ReportBlock.Table t) {
+                addTable(ch, t.table());
+            } else if (b instanceof ReportBlock.Figure f) {
+                addFigure(ch, f);
+            }
+        }
+        return ch;
+    }
+
+    private PdfPTable callout(ReportBlock.Callout c) {
+        PdfPTable box = new PdfPTable(1);
+        box.setWidthPercentage(100);
+        box.setSpacingBefore(4f);
+        box.setSpacingAfter(8f);
+        Phrase text = new Phrase();
+        text.add(new Chunk(HtmlReport.label(c.level()) + " ", fonts.bodyBold()));
+        text.add(new Chunk(c.text(), fonts.body()));
+        PdfPCell cell = new PdfPCell(text);
+        cell.setBorder(Rectangle.LEFT);
+        cell.setBorderWidthLeft(4f);
+        cell.setBorderColorLeft(levelColour(c.level()));
+        cell.setBackgroundColor(new Color(244, 245, 247));
+        cell.setPadding(6f);
+        cell.setPaddingLeft(9f);
+        box.addCell(cell);
+        return box;
+    }
+
+    private void addTable(Chapter ch, ReportTable t) {
+        PdfPTable table = new PdfPTable(t.columns().size());
+        float available = doc.getPageSize().getWidth() - 2 * MARGIN_X;
+        float[] widths = PdfTableWidths.of(t, fonts.bold(), fonts.regular(), TABLE_FONT, available);
+        float sum = 0;
+        for (float w : widths) {
+            sum += w;
+        }
+        // Narrow tables keep their natural width (left-aligned) rather than stretching across the page.
+        table.setTotalWidth(sum > available ? scaled(widths, available / sum) : widths);
+        table.setLockedWidth(true);
+        table.setHorizontalAlignment(Element.ALIGN_LEFT);
+        // The caption is a header row too: it never strands at a page foot and repeats over each page.
+        table.setHeaderRows(2);
+        // A row that does not fit moves whole to the next page; only a row taller than a page is split.
+        table.setSplitLate(true);
+        table.setSplitRows(true);
+        table.setSpacingBefore(10f);
+        PdfPCell caption = new PdfPCell(new Phrase(t.title(), fonts.bodyBold()));
+        caption.setColspan(t.columns().size());
+        caption.setBorder(Rectangle.NO_BORDER);
+        caption.setPaddingLeft(0f);
+        caption.setPaddingBottom(4f);
+        table.addCell(caption);
+        for (String c : t.columns()) {
+            PdfPCell cell = new PdfPCell(new Phrase(c, fonts.tableHead()));
+            cell.setBackgroundColor(new Color(234, 236, 240));
+            cell.setBorder(Rectangle.BOTTOM);
+            cell.setBorderWidthBottom(1f);
+            cell.setPadding(3f);
+            table.addCell(cell);
+        }
+        List<List<String>> rows = t.rows();
+        int shown = Math.min(rows.size(), TableLimit.SHOWN);
+        for (int r = 0; r < shown; r++) {
+            for (String v : rows.get(r)) {
+                PdfPCell cell = new PdfPCell(new Phrase(v, fonts.tableBody()));
+                cell.setBorder(Rectangle.BOTTOM);
+                cell.setBorderColor(new Color(205, 209, 215));
+                cell.setBorderWidthBottom(0.5f);
+                cell.setPadding(3f);
+                cell.setHorizontalAlignment(TableLimit.isNumeric(v) ? Element.ALIGN_RIGHT : Element.ALIGN_LEFT);
+                table.addCell(cell);
+            }
+        }
+        if (rows.isEmpty()) {
+            PdfPCell cell = new PdfPCell(new Phrase("No rows.", fonts.muted()));
+            cell.setColspan(t.columns().size());
+            cell.setBorder(Rectangle.NO_BORDER);
+            table.addCell(cell);
+        }
+        ch.add(table);
+        String note = TableLimit.note(t, files.table(t));
+        if (!note.isEmpty()) {
+            Paragraph p = new Paragraph(note, fonts.muted());
+            p.setSpacingAfter(6f);
+            ch.add(p);
+        }
+    }
+
+    private void addFigure(Chapter ch, ReportBlock.Figure f) throws IOException {
+        Image img = Image.getInstance(png.apply(f));
+        float width = doc.getPageSize().getWidth() - 2 * MARGIN_X;
+        float height = (doc.getPageSize().getHeight() - MARGIN_TOP - MARGIN_BOTTOM) * 0.55f;
+        img.scaleToFit(width, height);
+        PdfPTable holder = new PdfPTable(1);
+        holder.setTotalWidth(width);
+        holder.setLockedWidth(true);
+        holder.setKeepTogether(true);
+        holder.setSpacingBefore(6f);
+        holder.setSpacingAfter(10f);
+        PdfPCell picture = new PdfPCell(img, false);
+        picture.setBorder(Rectangle.NO_BORDER);
+        picture.setHorizontalAlignment(Element.ALIGN_CENTER);
+        picture.setPadding(0f);
+        holder.addCell(picture);
+        PdfPCell caption = new PdfPCell(new Phrase(f.caption(), fonts.muted()));
+        caption.setBorder(Rectangle.NO_BORDER);
+        caption.setPaddingTop(3f);
+        holder.addCell(caption);
+        ch.add(holder);
+    }
+
+    private static float[] scaled(float[] w, float factor) {
+        float[] out = new float[w.length];
+        for (int i = 0; i < w.length; i++) {
+            out[i] = w[i] * factor;
+        }
+        return out;
+    }
+
+    private static Color levelColour(ReportBlock.Level level) {
+        switch (level) {
+            case PASS: return new Color(0, 158, 115);
+            case WARN: return new Color(230, 159, 0);
+            case FAIL: return new Color(213, 94, 0);
+            case CAUTION: return new Color(204, 121, 167);
+            default: return new Color(86, 180, 233);
+        }
+    }
+}

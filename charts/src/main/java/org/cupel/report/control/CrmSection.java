@@ -1,0 +1,217 @@
+package org.cupel.report.control;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.cupel.assay.Numbers;
+import org.cupel.charts.control.CrmBiasChart;
+import org.cupel.charts.control.CrmControlChart;
+import org.cupel.charts.control.CrmZScoreChart;
+import org.cupel.control.crm.AnalyteReview;
+import org.cupel.control.crm.BiasEstimate;
+import org.cupel.control.crm.CrmException;
+import org.cupel.control.crm.CrmResult;
+import org.cupel.control.crm.CrmReview;
+import org.cupel.control.crm.CrmRule;
+import org.cupel.control.crm.RuleAction;
+import org.cupel.control.crm.RuleFinding;
+import org.cupel.control.crm.SeriesReview;
+import org.cupel.report.ReportBlock;
+import org.cupel.report.ReportSection;
+import org.cupel.report.ReportTable;
+
+/** The "CRM control" section of the QC appendix, formatted from a {@link CrmReview}; computes nothing. */
+public final class CrmSection {
+    private CrmSection() {
+    }
+
+    public static ReportSection of(CrmReview r) {
+        List<ReportBlock> b = new ArrayList<>();
+        b.add(headline(r));
+        b.add(new ReportBlock.Paragraph("Each CRM result is compared with its certificate: z = (result − certified) "
+                + "/ SD, where SD is the certificate's between-lab standard deviation. Warning limits are certified "
+                + "± 2 SD and failure limits ± 3 SD. The confidence interval of the certified value is never used "
+                + "for limits: it describes how well the mean is known and is far narrower than the spread of single "
+                + "results (common practice). z-scores are banded as in ISO 13528 (|z| ≤ 2 satisfactory, 2–3 "
+                + "questionable, ≥ 3 unsatisfactory). A result beyond 3 SD that lies within "
+                + Numbers.compact(r.settings().swapWithinSd()) + " SD of another CRM in the catalog, or at blank "
+                + "level, is reported as a probable swap (after Smee, Bloom, Arne & Heberlein 2024, GEEA 24): a "
+                + "warning without re-assay, left out of the bias and drift statistics."));
+        b.add(new ReportBlock.Table(summary(r)));
+        b.add(new ReportBlock.Table(rules(r)));
+        List<RuleFinding> findings = new ArrayList<>();
+        r.series().forEach(s -> findings.addAll(s.findings()));
+        findings.removeIf(f -> f.rule().equals(CrmRule.W_1_2S.id()));
+        if (!findings.isEmpty()) {
+            b.add(new ReportBlock.Table(violations(findings)));
+        }
+        if (r.swaps() > 0) {
+            b.add(new ReportBlock.Table(swaps(r)));
+        }
+        b.add(new ReportBlock.Table(drift(r)));
+        if (!r.exceptions().isEmpty()) {
+            b.add(new ReportBlock.Table(exceptions(r.exceptions())));
+        }
+        for (SeriesReview s : r.series()) {
+            b.add(new ReportBlock.Figure("crm-" + s.crm() + "-" + s.analyte().name(), "Control chart of CRM " + s.crm()
+                    + ", " + s.analyte().label() + ": certified value, ± 2 SD and ± 3 SD from the certificate, "
+                    + "the project's running mean; batch boundaries dotted.", () -> CrmControlChart.of(s)));
+        }
+        for (AnalyteReview a : r.analytes()) {
+            List<SeriesReview> of = r.series().stream().filter(s -> s.analyte().name().equals(a.analyte())).toList();
+            b.add(new ReportBlock.Figure("crm-z-" + a.analyte(), "All CRMs for " + a.analyte()
+                    + " as z-scores over time: lab-wide drift shows as a common trend.",
+                    () -> CrmZScoreChart.of(a.analyte(), of)));
+            b.add(new ReportBlock.Figure("crm-bias-" + a.analyte(), "Mean bias of each CRM for " + a.analyte()
+                    + " against its certified value, with 95 % t-intervals.", () -> CrmBiasChart.of(a.biasVsGrade(), of)));
+        }
+        return new ReportSection("crms", "CRM control", b, headlines(r));
+    }
+
+    private static ReportBlock headline(CrmReview r) {
+        long n = r.series().stream().mapToLong(SeriesReview::n).sum();
+        long drifting = r.series().stream().filter(s -> s.drift().drifting()).count();
+        String text = String.format(Locale.ROOT, "%d CRM results in %d series: %d failures, %d warnings, %d probable "
+                        + "swaps, %d series with drift signals, %d results listed as exceptions.", n, r.series().size(),
+                r.failures(), r.warnings(), r.swaps(), drifting, r.exceptions().size());
+        ReportBlock.Level level = r.failures() > 0 ? ReportBlock.Level.FAIL
+                : r.warnings() + r.swaps() + drifting + r.exceptions().size() > 0 ? ReportBlock.Level.WARN
+                : ReportBlock.Level.PASS;
+        return new ReportBlock.Callout(level, text);
+    }
+
+    private static ReportTable summary(CrmReview r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (SeriesReview s : r.series()) {
+            BiasEstimate bias = s.bias();
+            rows.add(List.of(s.crm(), s.analyte().name(), s.analyte().unit().symbol(), num(s.limits().certified()),
+                    num(s.limits().sd()), Integer.toString(bias.n()), num(bias.meanResult()), num(bias.sdResult()),
+                    pct(bias.meanBiasPct()) + interval(bias.meanLowPct(), bias.meanHighPct()),
+                    pct(bias.median().median()) + interval(bias.median().low(), bias.median().high()),
+                    inside(bias), Long.toString(s.failures()), Long.toString(s.warnings()), Long.toString(s.swaps()),
+                    s.projectLimits().available() ? num(s.projectLimits().mean()) + " ± " + num(2 * s.projectLimits().sd())
+                            : s.projectLimits().note()));
+        }
+        return new ReportTable("crm-summary", "CRM results per CRM and analyte",
+                List.of("CRM", "Analyte", "Unit", "Certified", "Certificate SD", "n", "Mean", "SD of results",
+                        "Mean bias % (95 % CI)", "Median bias % (95 % CI)", "Certified inside CI", "Failures",
+                        "Warnings", "Swaps", "Project mean ± 2 SD"),
+                rows, "n, mean, SD and bias exclude probable swaps. Mean-bias interval: Student t; median-bias "
+                        + "interval: distribution-free sign-test interval (Conover 1999).");
+    }
+
+    private static ReportTable rules(CrmReview r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (Map.Entry<CrmRule, RuleAction> e : r.settings().actions().entrySet()) {
+            if (e.getValue() != RuleAction.OFF) {
+                rows.add(List.of(e.getKey().id(), e.getValue().label(), e.getKey().description(),
+                        e.getKey().source().citation()));
+            }
+        }
+        return new ReportTable("crm-rules", "Rules in force", List.of("Rule", "Action", "Looks for", "Source"), rows,
+                "Limits are strict (beyond 2 SD means |z| > 2); runs count consecutive results of one CRM across "
+                        + "batches; R-4s looks within one batch. See docs/control-rules.md.");
+    }
+
+    private static ReportTable violations(List<RuleFinding> findings) {
+        List<List<String>> rows = new ArrayList<>();
+        for (RuleFinding f : findings) {
+            rows.add(List.of(f.crm(), f.analyte(), f.rule(), f.action().label(), f.sampleId(), f.batchId(),
+                    String.join(", ", f.involved())));
+        }
+        return new ReportTable("crm-violations", "Run-rule violations (beyond the single 2 SD warning)",
+                List.of("CRM", "Analyte", "Rule", "Action", "Sample", "Batch", "Results in the pattern"), rows, "");
+    }
+
+    private static ReportTable swaps(CrmReview r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (SeriesReview s : r.series()) {
+            for (CrmResult x : s.results()) {
+                if (x.isSwap()) {
+                    rows.add(List.of(x.point().sampleId(), x.point().batchId(), s.crm(), s.analyte().name(),
+                            x.point().value().display(), x.swapWith(), x.reason()));
+                }
+            }
+        }
+        return new ReportTable("crm-swaps", "Probable swapped or mislabelled CRMs",
+                List.of("Sample", "Batch", "Labelled as", "Analyte", "Result", "Matches", "Reason"), rows,
+                "Not counted as lab failures and not sent for re-assay; check the insertion record.");
+    }
+
+    private static ReportTable drift(CrmReview r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (SeriesReview s : r.series()) {
+            rows.add(driftRow(s.crm(), s.analyte().name(), s.drift()));
+        }
+        for (AnalyteReview a : r.analytes()) {
+            rows.add(driftRow("all CRMs", a.analyte(), a.drift()));
+            if (a.biasVsGrade().fit().estimated()) {
+                var f = a.biasVsGrade().fit();
+                rows.add(List.of("bias vs grade", a.analyte(), "CRMs", String.format(Locale.ROOT,
+                        "slope %s %% per unit grade (95 %% CI %s to %s, %s, n = %d CRMs)", num(f.slope()),
+                        num(f.slopeLow()), num(f.slopeHigh()), f.pText(), f.n()),
+                        f.pValue() < r.settings().driftAlpha() ? "bias changes with grade" : "no grade dependence shown"));
+            }
+        }
+        return new ReportTable("crm-drift", "Drift: trend of z on time, EWMA and tabular CUSUM",
+                List.of("Series", "Analyte", "Time axis", "Trend of z", "Findings"), rows, String.format(Locale.ROOT,
+                        "EWMA λ = %s, L = %s (NIST/SEMATECH e-Handbook 6.3.2.4); CUSUM k = %s, h = %s (Montgomery, "
+                                + "Introduction to Statistical Quality Control); trend reported when p < %s.",
+                        Numbers.compact(r.settings().ewmaLambda()), Numbers.compact(r.settings().ewmaWidth()),
+                        Numbers.compact(r.settings().cusumK()), Numbers.compact(r.settings().cusumH()),
+                        Numbers.compact(r.settings().driftAlpha())));
+    }
+
+    private static List<String> driftRow(String series, String analyte, org.cupel.control.crm.SeriesDrift d) {
+        String trend = d.trend().estimated() ? String.format(Locale.ROOT, "%s (95 %% CI %s to %s, %s, n = %d)",
+                num(d.trend().slope()), num(d.trend().slopeLow()), num(d.trend().slopeHigh()), d.trend().pText(),
+                d.trend().n()) : d.trend().note();
+        return List.of(series, analyte, d.timeAxis(), trend, d.findings().isEmpty() ? "none"
+                : String.join("; ", d.findings()));
+    }
+
+    private static ReportTable exceptions(List<CrmException> xs) {
+        List<List<String>> rows = new ArrayList<>();
+        for (CrmException x : xs) {
+            rows.add(List.of(x.sampleId(), x.batchId(), x.crm(), x.analyte(), x.found(), x.rule(), x.problem()));
+        }
+        return new ReportTable("crm-exceptions", "CRM results that cannot be judged",
+                List.of("Sample", "Batch", "CRM", "Analyte", "Reported", "Kind", "What to do"), rows,
+                "Listed, not passed: each counts as 'cannot judge' in the batch verdicts.");
+    }
+
+    private static Map<String, Object> headlines(CrmReview r) {
+        Map<String, Object> h = new LinkedHashMap<>();
+        h.put("crmResults", r.series().stream().mapToLong(SeriesReview::n).sum());
+        h.put("crmSeries", r.series().size());
+        h.put("crmFailures", r.failures());
+        h.put("crmWarnings", r.warnings());
+        h.put("crmSwaps", r.swaps());
+        h.put("crmExceptions", r.exceptions().size());
+        h.put("crmDriftingSeries", r.series().stream().filter(s -> s.drift().drifting()).count());
+        return h;
+    }
+
+    private static String num(double v) {
+        return Double.isFinite(v) ? Numbers.significant(v, 3) : "–";
+    }
+
+    private static String pct(double v) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%+.2f", v) : "–";
+    }
+
+    private static String interval(double lo, double hi) {
+        return Double.isFinite(lo) && Double.isFinite(hi)
+                ? String.format(Locale.ROOT, " (%+.2f to %+.2f)", lo, hi) : "";
+    }
+
+    private static String inside(BiasEstimate b) {
+        if (!Double.isFinite(b.meanLowPct())) {
+            return "–";
+        }
+        return (b.certifiedInsideMeanInterval() ? "yes" : "no") + " (mean), "
+                + (b.median().estimated() ? (b.certifiedInsideMedianInterval() ? "yes" : "no") : "–") + " (median)";
+    }
+}

@@ -1,0 +1,108 @@
+package org.cupel.report.control;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.cupel.control.AnalyteVerdict;
+import org.cupel.control.BatchVerdict;
+import org.cupel.control.BatchVerdicts;
+import org.cupel.control.ReassayBracket;
+import org.cupel.control.ReassayEntry;
+import org.cupel.control.ReassayList;
+import org.cupel.control.ReassaySettings;
+import org.cupel.control.Verdict;
+import org.cupel.control.VerdictReason;
+import org.cupel.report.ReportBlock;
+import org.cupel.report.ReportSection;
+import org.cupel.report.ReportTable;
+
+/** The verdict summary: every batch with pass / warn / fail and the reasons, and the re-assay list. */
+public final class VerdictSection {
+    private VerdictSection() {
+    }
+
+    public static ReportSection build(List<BatchVerdict> verdicts, ReassayList reassay) {
+        List<ReportBlock> blocks = new ArrayList<>();
+        int failed = BatchVerdicts.count(verdicts, Verdict.FAIL);
+        int warned = BatchVerdicts.count(verdicts, Verdict.WARN);
+        int unjudged = BatchVerdicts.count(verdicts, Verdict.CANNOT_JUDGE);
+        blocks.add(new ReportBlock.Callout(failed > 0 ? ReportBlock.Level.FAIL : warned > 0 ? ReportBlock.Level.WARN
+                : ReportBlock.Level.PASS, verdicts.size() + " batches: " + failed + " failed, " + warned + " warned, "
+                + unjudged + " could not be judged; " + reassay.entries().size() + " sample results to re-assay."));
+        blocks.add(new ReportBlock.Paragraph("A batch takes the worst verdict of its control results for each "
+                + "analyte (fail over warn over cannot judge over pass), and the worst over analytes. A batch "
+                + "without a control result for an analyte cannot be judged for it. Re-assay (common practice): "
+                + scope(reassay.scope())));
+        blocks.add(new ReportBlock.Table(verdictTable(verdicts)));
+        blocks.add(new ReportBlock.Table(reassayTable(reassay)));
+        if (!reassay.brackets().isEmpty()) {
+            blocks.add(new ReportBlock.Table(bracketTable(reassay)));
+        }
+        Map<String, Object> headlines = new LinkedHashMap<>();
+        headlines.put("batches", verdicts.size());
+        headlines.put("batchesFailed", failed);
+        headlines.put("batchesWarned", warned);
+        headlines.put("batchesNotJudged", unjudged);
+        headlines.put("reassayResults", reassay.entries().size());
+        return new ReportSection("verdicts", "Batch verdicts and re-assay list", blocks, headlines);
+    }
+
+    private static String scope(ReassaySettings.Scope scope) {
+        if (scope == ReassaySettings.Scope.WHOLE_BATCH) {
+            return "every sample of a batch with a failed control (user setting reassay.scope: WHOLE_BATCH).";
+        }
+        return "for a failed CRM, the samples between the nearest passing control samples before and after it; "
+                + "for a failed blank, the samples after it up to the next passing blank. Control samples are "
+                + "not listed; a warning does not fail a control.";
+    }
+
+    static ReportTable verdictTable(List<BatchVerdict> verdicts) {
+        List<List<String>> rows = new ArrayList<>();
+        for (BatchVerdict v : verdicts) {
+            List<String> per = new ArrayList<>();
+            for (AnalyteVerdict a : v.analytes()) {
+                per.add(a.analyte() + " " + label(a.verdict()) + " (" + a.nControls() + ")");
+            }
+            List<String> reasons = new ArrayList<>();
+            for (VerdictReason r : v.reasons()) {
+                reasons.add(r.sampleId().isEmpty() ? r.reason()
+                        : r.sampleId() + " [" + r.role() + ", " + r.rule() + "]: " + r.reason());
+            }
+            rows.add(List.of(v.batch(), v.lab(), Integer.toString(v.nSamples()), label(v.verdict()),
+                    String.join("; ", per), String.join(" | ", reasons)));
+        }
+        return new ReportTable("batch-verdicts", "Verdict per batch",
+                List.of("Batch", "Lab", "Samples", "Verdict", "Per analyte (control results)", "Reasons"), rows,
+                "Reasons list every control result that did not pass, with the rule that decided it.");
+    }
+
+    /** The re-assay list as a table; also written by {@code cupel batches --reassay-csv}. */
+    public static ReportTable reassayTable(ReassayList reassay) {
+        List<List<String>> rows = new ArrayList<>();
+        for (ReassayEntry e : reassay.entries()) {
+            rows.add(List.of(e.sampleId(), e.batch(), Integer.toString(e.position()), e.analyte(),
+                    String.join(", ", e.triggeredBy()), e.reason()));
+        }
+        return new ReportTable("reassay-list", "Re-assay list",
+                List.of("Sample ID", "Batch", "Position", "Analyte", "Triggered by", "Reason"), rows,
+                rows.isEmpty() ? "No control failure calls for re-assay." : "");
+    }
+
+    static ReportTable bracketTable(ReassayList reassay) {
+        List<List<String>> rows = new ArrayList<>();
+        for (ReassayBracket b : reassay.brackets()) {
+            rows.add(List.of(b.controlId(), b.role(), b.batch(), b.analyte(), b.rule(),
+                    b.nSamples() == 0 ? "none" : b.fromPosition() + "–" + b.toPosition(), Integer.toString(b.nSamples()),
+                    b.note()));
+        }
+        return new ReportTable("reassay-brackets", "Re-assay brackets per failed control",
+                List.of("Failed control", "Role", "Batch", "Analyte", "Rule", "Positions", "Samples", "Bounded by"),
+                rows, "");
+    }
+
+    public static String label(Verdict v) {
+        return v == Verdict.CANNOT_JUDGE ? "cannot judge" : v.name().toLowerCase(Locale.ROOT);
+    }
+}

@@ -1,0 +1,203 @@
+package org.cupel.report.recovery;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.stream.Collectors;
+import org.cupel.charts.recovery.DeportmentChart;
+import org.cupel.charts.recovery.DifferenceChart;
+import org.cupel.charts.recovery.RecoveryByConditionChart;
+import org.cupel.recovery.ComparisonVerdict;
+import org.cupel.recovery.ConditionRecovery;
+import org.cupel.recovery.Deportment;
+import org.cupel.recovery.PairComparison;
+import org.cupel.recovery.RecoveryInterval;
+import org.cupel.recovery.RecoveryResult;
+import org.cupel.recovery.SmeltBalance;
+import org.cupel.recovery.SmeltRecovery;
+import org.cupel.report.ReportBlock;
+import org.cupel.report.ReportSection;
+import org.cupel.report.ReportTable;
+
+/**
+ * The metallurgical testwork section of the QC appendix: recoveries with intervals, pairwise verdicts,
+ * the balance check, deportment, charts, and the caution on fire assay hazards. It formats the records of
+ * {@link RecoveryResult}; it computes nothing. The tables are public so the CLI prints the same ones.
+ */
+public final class TestworkSection {
+    private static final String DASH = "—";
+
+    private TestworkSection() {
+    }
+
+    public static ReportSection build(RecoveryResult r) {
+        List<ReportBlock> blocks = new ArrayList<>();
+        blocks.add(new ReportBlock.Paragraph(summary(r)));
+        blocks.add(new ReportBlock.Table(recoveries(r)));
+        for (String a : r.analytes()) {
+            blocks.add(new ReportBlock.Figure("recovery-" + a, a + " recovery per condition: mean (diamond), "
+                    + "t-interval (bar) and each smelt (points).", () -> RecoveryByConditionChart.of(r, a)));
+        }
+        blocks.add(new ReportBlock.Table(comparisons(r)));
+        for (String a : r.analytes()) {
+            blocks.add(new ReportBlock.Figure("recovery-differences-" + a, a + ": difference between each pair of "
+                    + "conditions with its Welch CI, against zero and the equivalence margin.",
+                    () -> DifferenceChart.of(r, a)));
+        }
+        blocks.add(new ReportBlock.Table(balance(r)));
+        blocks.add(new ReportBlock.Table(deportment(r)));
+        for (String a : r.analytes()) {
+            blocks.add(new ReportBlock.Figure("deportment-" + a, a + " deportment: mean share of the metal in each "
+                    + "product, per condition.", () -> DeportmentChart.of(r, a)));
+        }
+        r.notes().forEach(n -> blocks.add(new ReportBlock.Callout(ReportBlock.Level.INFO, n)));
+        blocks.add(new ReportBlock.Callout(ReportBlock.Level.CAUTION, r.safetyCaution()));
+        Map<String, Object> headlines = new LinkedHashMap<>();
+        headlines.put("recovery.smelts", r.smelts().stream().map(s -> s.smelt().testId()).distinct().count());
+        headlines.put("recovery.conditions", r.conditions().stream().map(ConditionRecovery::condition).distinct()
+                .count());
+        for (ComparisonVerdict v : ComparisonVerdict.values()) {
+            headlines.put("recovery.pairs." + v.name().toLowerCase(Locale.ROOT),
+                    r.comparisons().stream().filter(p -> p.verdict() == v).count());
+        }
+        headlines.put("recovery.balancesNotClosing", r.smelts().stream().filter(s -> s.usable() && !s.balanceCloses())
+                .count());
+        return new ReportSection("testwork", "Metallurgical testwork: smelt recoveries", blocks, headlines);
+    }
+
+    static String summary(RecoveryResult r) {
+        long smelts = r.smelts().stream().map(s -> s.smelt().testId()).distinct().count();
+        long conditions = r.conditions().stream().map(ConditionRecovery::condition).distinct().count();
+        return String.format(Locale.ROOT, "%d smelts under %d conditions, analysed for %s. Recoveries are %s, with "
+                + "%.0f%% confidence intervals; conditions are compared pairwise (Welch t with Holm and Games–Howell "
+                + "family-wise control, and TOST equivalence within ±%s percentage points).", smelts, conditions,
+                String.join(" and ", r.analytes()), r.settings().recoveryDefinition().label(),
+                100 * r.settings().confidence(), num(r.settings().equivalenceMargin(), 2));
+    }
+
+    public static ReportTable recoveries(RecoveryResult r) {
+        int conf = (int) Math.round(100 * r.settings().confidence());
+        List<List<String>> rows = new ArrayList<>();
+        for (int i = 0; i < r.conditions().size(); i++) {
+            ConditionRecovery c = r.conditions().get(i);
+            ConditionRecovery z = r.conditionsCensoredAtZero().get(i);
+            List<String> notes = new ArrayList<>();
+            for (RecoveryInterval iv : List.of(c.tInterval(), c.gum(), c.fieller())) {
+                if (!iv.note().isEmpty()) {
+                    notes.add(iv.method() + ": " + iv.note());
+                }
+            }
+            notes.addAll(c.excluded());
+            rows.add(List.of(c.analyte(), c.condition(), Integer.toString(c.n()), num(c.mean(), 2), num(c.sd(), 2),
+                    interval(c.tInterval()), interval(c.gum()), num(c.gum().df(), 1), interval(c.fieller()),
+                    bounds(c), r.anyCensoredLoss() ? num(z.mean(), 2) : DASH, String.join("; ", notes)));
+        }
+        return new ReportTable("recovery-by-condition", "Recovery per condition (" + r.settings().recoveryDefinition()
+                .label() + ")", List.of("Analyte", "Condition", "n", "Mean (%)", "SD (pp)", conf + "% CI, t (%)",
+                conf + "% CI, GUM (%)", "ν_eff", conf + "% CI, Fieller (%)", "Bounds, censored loss (%)",
+                "Mean, censored = 0 (%)", "Notes"), rows, "Intervals marked † are computed on the log of the loss and "
+                + "cannot pass 100%. Censored loss assays are counted at their detection limit unless stated. "
+                + "No bootstrap intervals: with 2 or 3 smelts there are only 3 or 10 distinct resamples.");
+    }
+
+    public static ReportTable comparisons(RecoveryResult r) {
+        int conf = (int) Math.round(100 * r.settings().confidence());
+        String delta = num(r.settings().powerDifference(), 2);
+        List<List<String>> rows = new ArrayList<>();
+        for (PairComparison p : r.comparisons()) {
+            boolean cannotTell = p.verdict() == ComparisonVerdict.CANNOT_TELL;
+            String plan = cannotTell ? (p.plan().note().isEmpty() ? p.plan().perCondition() + " per condition"
+                    : p.plan().note()) : DASH;
+            rows.add(List.of(p.analyte(), p.first() + " − " + p.second(), num(p.welch().difference(), 2),
+                    p.welch().computed() ? num(p.welch().lower(), 2) + " to " + num(p.welch().upper(), 2) : DASH,
+                    pValue(p.welch().p()), pValue(p.holmP()), pValue(p.gamesHowell().p()), pValue(p.tost().p()),
+                    p.verdict().label(), r.anyCensoredLoss() ? p.verdictCensoredAtZero().label()
+                            + (p.conclusionDependsOnCensoring() ? " (changes)" : "") : DASH, plan,
+                    p.welch().note()));
+        }
+        return new ReportTable("recovery-comparisons", "Pairwise comparison of conditions", List.of("Analyte", "Pair",
+                "Difference (pp)", conf + "% CI (pp)", "Welch p", "Holm p", "Games–Howell p", "TOST p (±"
+                        + num(r.settings().equivalenceMargin(), 2) + " pp)", "Verdict", "Verdict, censored = 0",
+                "Smelts needed to detect " + delta + " pp", "Notes"), rows,
+                "Equivalent: TOST p < α. Different: Holm-adjusted Welch p < α. Otherwise cannot tell; the replicate "
+                        + "count is for " + Math.round(100 * r.settings().power()) + "% power at α = "
+                        + num(r.settings().alpha(), 3) + " with the pooled replicate SD (noncentral t).");
+    }
+
+    public static ReportTable balance(RecoveryResult r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (int i = 0; i < r.smelts().size(); i++) {
+            SmeltRecovery s = r.smelts().get(i);
+            SmeltBalance b = r.balances().get(i);
+            if (!s.usable()) {
+                rows.add(List.of(s.smelt().testId(), s.smelt().condition(), s.analyte(), DASH, DASH, DASH, DASH,
+                        DASH, DASH, DASH, DASH, s.note()));
+                continue;
+            }
+            rows.add(List.of(s.smelt().testId(), s.smelt().condition(), s.analyte(), num(1000 * s.metalInCharge(), 4),
+                    num(s.calculatedHeadGpt(), 3), num(s.accountability(), 4), s.balanceCloses() ? "yes" : "NO",
+                    b.reconciliation() == null ? DASH : pValue(b.reconciliation().p()), num(b.reconciledRecovery(), 2),
+                    num(s.byLoss(), 2), num(s.direct(), 2), b.note()));
+        }
+        return new ReportTable("recovery-balance", "Metal balance per smelt", List.of("Test", "Condition", "Analyte",
+                "Metal in charge (mg)", "Calculated head (g/t)", "Accountability", "Closes (±"
+                        + num(100 * r.settings().balanceTolerance(), 1) + "%)", "χ² closure p",
+                "Reconciled recovery (%)", "Recovery by loss (%)", "Direct recovery (%)", "Notes"), rows,
+                "Accountability = calculated head ÷ assayed head. Reconciliation: weighted least squares under "
+                        + "metal in charge = Σ products (Kuehn & Davidson 1961; Hodouin & Everell 1980), weights from "
+                        + "the balance resolution (" + num(r.settings().balanceResolutionGrams(), 4) + " g) and "
+                        + "assay precisions " + precisions(r) + ".");
+    }
+
+    private static String precisions(RecoveryResult r) {
+        if (r.settings().precisionSigma0() != null && r.settings().precisionK() != null) {
+            return "σ_c = " + r.settings().precisionSigma0() + " + " + r.settings().precisionK() + "·c";
+        }
+        return r.settings().assayRelativeSd().entrySet().stream().sorted(Map.Entry.comparingByKey())
+                .map(e -> e.getKey() + " " + num(100 * e.getValue(), 2) + "%").collect(Collectors.joining(", "))
+                + " relative SD";
+    }
+
+    public static ReportTable deportment(RecoveryResult r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (Deportment d : r.deportment()) {
+            rows.add(List.of(d.analyte(), d.condition(), Integer.toString(d.n()), d.sharePercent().entrySet().stream()
+                    .map(e -> e.getKey() + " " + num(e.getValue(), 2) + "%").collect(Collectors.joining(", "))));
+        }
+        return new ReportTable("recovery-deportment", "Deportment: share of the metal in each product",
+                List.of("Analyte", "Condition", "n", "Mean share of metal in products"), rows, "");
+    }
+
+    static String interval(RecoveryInterval iv) {
+        if (!iv.computed()) {
+            return DASH;
+        }
+        return num(iv.lower(), 2) + " to " + num(iv.upper(), 2) + (iv.scale().equals("log loss") ? " †" : "");
+    }
+
+    private static String bounds(ConditionRecovery c) {
+        if (c.lowerBound() == c.upperBound() || Double.isNaN(c.lowerBound())) {
+            return DASH;
+        }
+        return num(c.lowerBound(), 2) + " to " + num(c.upperBound(), 2);
+    }
+
+    static String num(double v, int decimals) {
+        if (Double.isNaN(v)) {
+            return DASH;
+        }
+        if (Double.isInfinite(v)) {
+            return "∞";
+        }
+        return String.format(Locale.ROOT, "%." + decimals + "f", v);
+    }
+
+    static String pValue(double p) {
+        if (Double.isNaN(p)) {
+            return DASH;
+        }
+        return p < 0.001 ? "<0.001" : String.format(Locale.ROOT, "%.3f", p);
+    }
+}

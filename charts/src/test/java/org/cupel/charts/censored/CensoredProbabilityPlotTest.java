@@ -1,0 +1,54 @@
+package org.cupel.charts.censored;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.cupel.censored.CensoredSample;
+import org.cupel.censored.Ros;
+import org.cupel.charts.PngWriter;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.knowm.xchart.XYChart;
+
+class CensoredProbabilityPlotTest {
+
+    /** USEPA (2009) Unified Guidance Example 15-1 manganese (ppb). */
+    static CensoredSample manganese() {
+        CensoredSample.Builder b = CensoredSample.builder().below(2).below(2).below(2).below(5).below(5).below(5);
+        for (double v : new double[] {3.3, 5.3, 6.3, 7.7, 8.4, 9.5, 10.0, 11.9, 12.1, 12.6, 16.9, 17.9, 21.6, 22.7,
+            34.5, 45.9, 53.6, 77.2, 106.3}) {
+            b.detected(v);
+        }
+        return b.build();
+    }
+
+    @Test
+    void drawsDetectsImputedValuesLimitsAndLine(@TempDir Path dir) throws Exception {
+        XYChart chart = CensoredProbabilityPlot.create(Ros.fit(manganese()), "Mn (ppb)", "Censored probability plot");
+        assertEquals(19, chart.getSeriesMap().get("Detected (19)").getXData().length);
+        assertEquals(6, chart.getSeriesMap().get("Below detection (imputed by ROS) (6)").getXData().length);
+        assertTrue(chart.getSeriesMap().containsKey("Detection limits 2, 5"));
+        Path png = dir.resolve("plot.png");
+        PngWriter.write(chart, png, PngWriter.SCREEN_DPI);
+        assertTrue(Files.size(png) > 1000);
+        String out = System.getProperty("cupel.chart.out");
+        if (out != null) {
+            PngWriter.write(chart, Path.of(out), PngWriter.SCREEN_DPI);
+        }
+    }
+
+    @Test
+    void notApplicableSaysWhyInsteadOfDrawingPoints(@TempDir Path dir) throws Exception {
+        CensoredSample over = CensoredSample.builder().detected(1).detected(2).detected(3).above(10).build();
+        XYChart chart = CensoredProbabilityPlot.create(Ros.fit(over), "Au (g/t)", "Censored probability plot");
+        assertEquals(1, chart.getSeriesMap().size());
+        Path png = dir.resolve("empty.png");
+        PngWriter.write(chart, png, PngWriter.SCREEN_DPI);
+        String out = System.getProperty("cupel.chart.out");
+        if (out != null) {
+            PngWriter.write(chart, Path.of(out + ".empty.png"), PngWriter.SCREEN_DPI);
+        }
+    }
+}

@@ -1,0 +1,153 @@
+package org.cupel.report;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Stream;
+import org.cupel.charts.PngWriter;
+import org.cupel.project.InputException;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class ReportWriterTest {
+    private static final ReportOptions SCREEN = new ReportOptions(PdfReport.Paper.A4, PngWriter.SCREEN_DPI, false);
+    /** Print resolution draws each chart once (the PDF reuses the PNG), which keeps these tests quick. */
+    private static final ReportOptions PRINT = ReportOptions.DEFAULTS;
+
+    @Test
+    void writesEveryPartUnderSafeNames(@TempDir Path dir) throws IOException {
+        Path out = dir.resolve("qc");
+        ReportWriter.write(ReportFixture.report(), out, SCREEN, ReportProgress.NONE);
+        for (String f : List.of("index.html", "appendix.pdf", "summary.json", ReportWriter.MARKER,
+                "charts/script_alert_1_script.png", "charts/x.png", "tables/x.csv", "tables/data-exceptions.csv",
+                "tables/scope-batches.csv", "tables/references.csv")) {
+            assertTrue(Files.size(out.resolve(f)) > 0, f);
+        }
+        try (Stream<Path> all = Files.walk(dir)) {
+            for (Path p : (Iterable<Path>) all::iterator) {
+                String name = p.getFileName().toString();
+                assertFalse(name.contains("<") || name.contains(">") || name.contains(".."), name);
+            }
+        }
+        assertFalse(Files.exists(out.resolve("charts/.print")), "print-resolution copies are not left behind");
+        assertEquals(List.of("qc"), listing(dir), "no temporary folder is left beside the report");
+        String pdf = new String(Files.readAllBytes(out.resolve("appendix.pdf")), java.nio.charset.StandardCharsets.ISO_8859_1);
+        assertTrue(pdf.startsWith("%PDF-"));
+    }
+
+    @Test
+    void csvNeutralisesFormulasFromTheData(@TempDir Path dir) throws IOException {
+        Path out = dir.resolve("qc");
+        ReportWriter.write(ReportFixture.report(), out, PRINT, ReportProgress.NONE);
+        String csv = Files.readString(out.resolve("tables/x.csv"));
+        assertTrue(csv.contains("\r\nS-7,-0.430,'=SUM(A1:A9)\r\n"), "negative number kept, formula neutralised");
+        String ex = Files.readString(out.resolve("tables/data-exceptions.csv"));
+        assertTrue(ex.contains("'=1+1"));
+        assertTrue(ex.contains(",-0.5,"));
+    }
+
+    @Test
+    void aFailureLeavesNoFolder(@TempDir Path dir) {
+        Path out = dir.resolve("qc");
+        QcReport broken = withFailingChart(ReportFixture.report());
+        assertThrows(IllegalStateException.class, () -> ReportWriter.write(broken, out, PRINT, ReportProgress.NONE));
+        assertEquals(List.of(), listing(dir), "neither the report nor its temporary folder exists");
+    }
+
+    @Test
+    void anExistingFolderNeedsForceAndSurvivesAFailedReplacement(@TempDir Path dir) throws IOException {
+        Path out = dir.resolve("qc");
+        ReportWriter.write(ReportFixture.report(), out, PRINT, ReportProgress.NONE);
+        byte[] before = Files.readAllBytes(out.resolve("index.html"));
+        InputException e = assertThrows(InputException.class,
+                () -> ReportWriter.write(ReportFixture.report(), out, PRINT, ReportProgress.NONE));
+        assertTrue(e.getMessage().contains("--force"));
+        ReportOptions force = new ReportOptions(PdfReport.Paper.A4, PngWriter.PRINT_DPI, true);
+        assertThrows(IllegalStateException.class,
+                () -> ReportWriter.write(withFailingChart(ReportFixture.report()), out, force, ReportProgress.NONE));
+        assertArrayEquals(before, Files.readAllBytes(out.resolve("index.html")), "the previous report is intact");
+        assertEquals(List.of("qc"), listing(dir));
+        Files.writeString(out.resolve("stale.txt"), "from an older run");
+        ReportWriter.write(ReportFixture.report(), out, force, ReportProgress.NONE);
+        assertFalse(Files.exists(out.resolve("stale.txt")), "replaced whole, not merged");
+        assertEquals(List.of("qc"), listing(dir));
+    }
+
+    @Test
+    void forceNeverReplacesAFolderCupelDidNotWrite(@TempDir Path dir) throws IOException {
+        Path out = Files.createDirectory(dir.resolve("thesis"));
+        Files.writeString(out.resolve("chapter1.docx"), "precious");
+        ReportOptions force = new ReportOptions(PdfReport.Paper.A4, PngWriter.PRINT_DPI, true);
+        assertThrows(InputException.class, () -> ReportWriter.write(ReportFixture.report(), out, force,
+                ReportProgress.NONE));
+        assertEquals("precious", Files.readString(out.resolve("chapter1.docx")));
+    }
+
+    @Test
+    void twoRunsGiveIdenticalCsvJsonAndHtml(@TempDir Path dir) throws IOException {
+        Path a = dir.resolve("a");
+        Path b = dir.resolve("b");
+        ReportWriter.write(ReportFixture.report(), a, PRINT, ReportProgress.NONE);
+        ReportWriter.write(ReportFixture.report(), b, PRINT, ReportProgress.NONE);
+        List<String> files = new ArrayList<>(listing(a.resolve("tables")).stream().map(f -> "tables/" + f).toList());
+        files.add("summary.json");
+        files.add("index.html");
+        for (String f : files) {
+            assertArrayEquals(Files.readAllBytes(a.resolve(f)), Files.readAllBytes(b.resolve(f)), f);
+        }
+        assertEquals(listing(a.resolve("charts")), listing(b.resolve("charts")));
+    }
+
+    @Test
+    void summaryJsonHasSortedKeysAndNoNaN() throws IOException {
+        String json = SummaryJson.toJson(ReportFixture.report());
+        assertFalse(json.contains("NaN"));
+        assertTrue(json.contains("\"bias\" : \"not computed\""));
+        assertTrue(json.indexOf("\"cautions\"") < json.indexOf("\"data-exceptions\"")
+                && json.indexOf("\"data-exceptions\"") < json.indexOf("\"scope\""), "section keys sorted");
+        assertFalse(json.contains("generated"), "the JSON depends on the inputs only");
+    }
+
+    @Test
+    void progressCountsEveryStep(@TempDir Path dir) throws IOException {
+        long[] seen = new long[2];
+        ReportWriter.write(ReportFixture.report(), dir.resolve("qc"), SCREEN, new ReportProgress() {
+            @Override
+            public void start(long steps) {
+                seen[0] = steps;
+            }
+
+            @Override
+            public void step(String what) {
+                seen[1]++;
+            }
+        });
+        assertEquals(seen[0], seen[1]);
+    }
+
+    static QcReport withFailingChart(QcReport r) {
+        List<ReportSection> sections = new ArrayList<>(r.sections());
+        sections.add(new ReportSection("late", "Late", List.of(new ReportBlock.Figure("boom", "fails",
+                () -> {
+                    throw new IllegalStateException("chart failed");
+                })), Map.of()));
+        return new QcReport(r.project(), r.selection(), r.generated(), sections);
+    }
+
+    static List<String> listing(Path dir) {
+        try (Stream<Path> s = Files.list(dir)) {
+            return s.map(p -> p.getFileName().toString()).sorted().toList();
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+}

@@ -1,0 +1,66 @@
+package org.cupel.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.cupel.project.FileAccount;
+import org.cupel.project.Project;
+import org.cupel.project.ProjectSummary;
+import org.junit.jupiter.api.Test;
+
+/** The report's own sections format core records faithfully; expected values are read off the fixture. */
+class SectionsTest {
+    private final Project project = ReportFixture.project();
+
+    @Test
+    void scopeListsBatchesRolesAndLimits() {
+        ReportSection s = ScopeSection.build(ProjectSummary.of(project), "all batches");
+        ReportTable batches = table(s, "scope-batches");
+        assertEquals(List.of("JOB-2", "North & Sons <Lab>", "2025-03-10", "lab1.csv", "3"), batches.rows().get(1));
+        ReportTable roles = table(s, "scope-batch-roles");
+        assertEquals(List.of("Batch", "File", "Routine", "CRM", "Blank", "Field duplicate"), roles.columns());
+        assertEquals(List.of("JOB-2", "lab1.csv", "2", "0", "0", "1"), roles.rows().get(1));
+        ReportTable analytes = table(s, "scope-analytes");
+        assertEquals(List.of("Au", "g/t", "FA-AAS", "6", "0.005", "1", "0"), analytes.rows().get(0));
+        assertEquals(6, s.headlines().get("samples"));
+    }
+
+    @Test
+    void exceptionsListEveryIssueAndFlagUnbalancedFiles() {
+        ReportSection s = DataExceptionsSection.build(project);
+        ReportTable issues = table(s, "data-exceptions");
+        assertEquals(project.exceptions().size(), issues.rows().size());
+        assertEquals(List.of("excluded", "lab1.csv", "9", "3", "../../x", "=1+1", "not a number",
+                "a number such as 1.25", "correct the cell"), issues.rows().get(0));
+        assertEquals(0, s.headlines().get("filesNotBalanced"));
+        Project unbalanced = new Project(project.name(), null, project.config(), project.samples(),
+                project.analytes(), project.catalog(), project.exceptions(),
+                List.of(new FileAccount("lab1.csv", "lab results", 7, 5, 1)));
+        ReportSection u = DataExceptionsSection.build(unbalanced);
+        assertTrue(u.blocks().stream().anyMatch(b -> b instanceof ReportBlock.Callout c
+                && c.level() == ReportBlock.Level.FAIL && c.text().contains("does not balance")));
+    }
+
+    @Test
+    void methodsListEverySourceCitedOnceWithWhereCited() {
+        QcReport r = ReportFixture.report();
+        ReportSection methods = r.sections().stream().filter(x -> x.id().equals(MethodsSection.ID)).findFirst()
+                .orElseThrow();
+        ReportTable refs = table(methods, "references");
+        // The fixture's extra section is added after the appendix is built, so the cited sources are
+        // the cautions' two regulations and the three format sources.
+        assertEquals(5, refs.rows().size());
+        ReportSection own = MethodsSection.build(List.of(ReportFixture.extra(), ReportFixture.extra(),
+                CautionsSection.build()), project.config());
+        ReportTable all = table(own, "references");
+        assertEquals(6, all.rows().size(), "a source cited twice is listed once");
+        assertTrue(all.rows().get(0).get(1).startsWith("Westgard, J. O., Barry, P. L., Hunt, M. R. and Groth, T. "
+                + "(1981). A multi-rule Shewhart chart"));
+    }
+
+    private static ReportTable table(ReportSection s, String id) {
+        return s.blocks().stream().filter(b -> b instanceof ReportBlock.Table t && t.table().id().equals(id))
+                .map(b -> ((ReportBlock.Table) b).table()).findFirst().orElseThrow();
+    }
+}

@@ -1,0 +1,99 @@
+package org.cupel.report.control;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.cupel.assay.AssayValue;
+import org.cupel.assay.Batch;
+import org.cupel.assay.QcRole;
+import org.cupel.assay.SampleTable;
+import org.cupel.assay.SourceLocation;
+import org.cupel.control.BatchVerdicts;
+import org.cupel.control.BlankObservation;
+import org.cupel.control.BlankReport;
+import org.cupel.control.BlankReview;
+import org.cupel.control.BlankSettings;
+import org.cupel.control.ControlOutcome;
+import org.cupel.control.InsertionRates;
+import org.cupel.control.InsertionSettings;
+import org.cupel.control.ReassayList;
+import org.cupel.control.ReassaySettings;
+import org.cupel.control.Verdict;
+import org.cupel.report.ReportBlock;
+import org.cupel.report.ReportSection;
+import org.cupel.report.ReportTable;
+import org.junit.jupiter.api.Test;
+
+/** The control sections format the core results faithfully (no computation of their own). */
+class ControlSectionsTest {
+
+    private static SampleTable table() {
+        SampleTable.Builder b = SampleTable.builder();
+        Batch j = new Batch("J1", "Lab", null, "j1.csv");
+        String code = "RRCRRBRRRR";
+        for (int i = 0; i < code.length(); i++) {
+            QcRole role = code.charAt(i) == 'C' ? QcRole.CRM : code.charAt(i) == 'B' ? QcRole.BLANK : QcRole.ROUTINE;
+            b.add("S" + (i + 1), j, i + 1, role, "", new SourceLocation("j1.csv", i + 2, 0));
+        }
+        return b.build();
+    }
+
+    private static ReportTable table(ReportSection s, String id) {
+        return s.blocks().stream().filter(x -> x instanceof ReportBlock.Table).map(x -> ((ReportBlock.Table) x).table())
+                .filter(t -> t.id().equals(id)).findFirst().orElseThrow();
+    }
+
+    @Test
+    void verdictSectionListsBatchReasonsAndReassay() {
+        SampleTable t = table();
+        List<ControlOutcome> outs = List.of(
+                new ControlOutcome(2, "Au", Verdict.PASS, "within 2 SD", "ok", false),
+                new ControlOutcome(5, "Au", Verdict.FAIL, "blank > 5×DL", "S6 Au: 0.3 g/t is above 0.025 g/t", true));
+        ReassayList r = ReassayList.build(t, outs, ReassaySettings.DEFAULTS);
+        ReportSection s = VerdictSection.build(BatchVerdicts.judge(t, outs), r);
+        ReportTable v = table(s, "batch-verdicts");
+        assertEquals("fail", v.rows().get(0).get(3));
+        assertTrue(v.rows().get(0).get(5).startsWith("S6 [blank, blank > 5×DL]"), v.rows().get(0).get(5));
+        ReportTable re = table(s, "reassay-list");
+        assertEquals(List.of("S7", "S8", "S9", "S10"), re.rows().stream().map(x -> x.get(0)).toList());
+        assertEquals(1, s.headlines().get("batchesFailed"));
+        assertEquals(4, s.headlines().get("reassayResults"));
+    }
+
+    @Test
+    void blankSectionShowsFindingsWithPrecedingGrade() {
+        BlankObservation o = new BlankObservation(5, "S6", "J1", 6, "Au", "g/t", AssayValue.detected(0.3, 0.005), 0.005,
+                "S5", AssayValue.detected(25, 0.005));
+        BlankReport rep = BlankReview.review(List.of(o), BlankSettings.DEFAULTS);
+        ReportSection s = BlankSection.build(rep);
+        List<String> row = table(s, "blank-findings").rows().get(0);
+        assertEquals(List.of("S6", "0.3 g/t (60×DL)", "fail", "S5", "25 g/t", "1.2 %", "yes"),
+                List.of(row.get(0), row.get(4), row.get(6), row.get(8), row.get(9), row.get(10), row.get(11)));
+        assertTrue(table(s, "blank-summary").note().contains("at least 3"));
+        assertEquals(2, s.blocks().stream().filter(b -> b instanceof ReportBlock.Figure).count());
+        assertEquals(2, s.references().size());
+        String rules = ((ReportBlock.Paragraph) s.blocks().get(1)).text();
+        assertTrue(rules.contains("5× the detection limit of its method (default)"), rules);
+    }
+
+    @Test
+    void blankSectionSaysWhichThresholdTheUserSet() {
+        BlankReport rep = BlankReview.review(List.of(), new BlankSettings(10, 3, 10, java.util.Map.of()));
+        ReportSection s = BlankSection.build(rep, org.cupel.config.CupelConfig.fromYaml("blanks:\n  failMultiple: 10\n",
+                "cupel.yaml"));
+        String rules = ((ReportBlock.Paragraph) s.blocks().get(1)).text();
+        assertTrue(rules.contains("10× the detection limit of its method (user setting blanks.failMultiple; default 5×)"),
+                rules);
+    }
+
+    @Test
+    void insertionSectionFlagsBatchesBelowTarget() {
+        InsertionRates r = InsertionRates.compute(table(), InsertionSettings.DEFAULTS);
+        ReportTable tab = table(InsertionRateSection.build(r), "insertion-rates");
+        // 1 CRM per 8 routine samples: 12.5 %, 1 in 8; no duplicates: below target.
+        assertEquals("1 · 13 % (1 in 8)", tab.rows().get(0).get(3));
+        assertTrue(tab.rows().get(0).get(10).contains("field duplicate"));
+        assertEquals("all batches", tab.rows().get(1).get(0));
+    }
+}

@@ -1,0 +1,165 @@
+package org.cupel.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.cupel.control.AnalyteVerdict;
+import org.cupel.control.BatchInsertion;
+import org.cupel.control.BatchReview;
+import org.cupel.control.BatchVerdict;
+import org.cupel.control.InsertionRate;
+import org.cupel.control.ReassayEntry;
+import org.cupel.control.Verdict;
+import org.cupel.control.VerdictReason;
+import org.cupel.control.crm.CrmReview;
+import org.cupel.ingest.ProjectLoader;
+import org.cupel.project.Project;
+import org.cupel.report.CsvTables;
+import org.cupel.report.control.VerdictSection;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code cupel batches}: the batch-by-batch review of a project. */
+@Command(name = "batches", mixinStandardHelpOptions = true,
+        description = {"Judge every lab batch of a project: pass / warn / fail per analyte with the control",
+                "sample and rule behind each, the re-assay list, blank and carry-over findings, and the",
+                "insertion rates of CRMs, blanks and duplicates against their targets."},
+        footer = {"", "Example:", "  cupel batches demo-project --reassay-csv reassay.csv --fail-on-qc"})
+final class BatchesCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "PROJECT-FOLDER", description = "The project folder.")
+    Path folder;
+
+    @Option(names = "--json", description = "Print the review as JSON (docs/json-batches.md).")
+    boolean json;
+
+    @Option(names = "--reassay-csv", paramLabel = "FILE", description = "Also write the re-assay list as CSV.")
+    Path reassayCsv;
+
+    @Option(names = "--fail-on-qc", description = "Exit with status 1 when any batch fails.")
+    boolean failOnQc;
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        Project project = ProjectLoader.load(folder);
+        BatchReview review = BatchReview.of(project, CrmReview.of(project).outcomes());
+        if (reassayCsv != null) {
+            try {
+                CsvTables.write(VerdictSection.reassayTable(review.reassay()), reassayCsv);
+            } catch (IOException e) {
+                throw new UncheckedIOException("could not write " + reassayCsv + ": " + e.getMessage(), e);
+            }
+        }
+        if (json) {
+            Map<String, Object> doc = new LinkedHashMap<>();
+            doc.put("project", project.name());
+            doc.put("anyBatchFailed", review.anyBatchFailed());
+            doc.put("verdicts", review.verdicts());
+            doc.put("reassay", review.reassay());
+            doc.put("blanks", review.blanks());
+            doc.put("insertion", review.insertion());
+            doc.put("outcomes", review.outcomes());
+            Json.print(out, doc);
+        } else {
+            print(out, project, review);
+        }
+        return failOnQc && review.anyBatchFailed() ? CupelCommand.QC_FAILED : CupelCommand.OK;
+    }
+
+    private static void print(PrintWriter out, Project project, BatchReview review) {
+        out.println("Batch verdicts: " + project.name());
+        TextTable t = new TextTable("Batch", "Lab", "Samples", "Verdict", "Per analyte (control results)");
+        for (BatchVerdict v : review.verdicts()) {
+            List<String> per = new ArrayList<>();
+            for (AnalyteVerdict a : v.analytes()) {
+                per.add(a.analyte() + " " + label(a.verdict()) + " (" + a.nControls() + ")");
+            }
+            t.row(v.batch(), v.lab(), v.nSamples(), label(v.verdict()), String.join(", ", per));
+        }
+        t.print(out);
+        out.println();
+        out.println("Reasons");
+        boolean any = false;
+        for (BatchVerdict v : review.verdicts()) {
+            for (VerdictReason r : v.reasons()) {
+                any = true;
+                out.println("  " + v.batch() + "  " + label(r.verdict()) + "  "
+                        + (r.sampleId().isEmpty() ? "" : r.sampleId() + " [" + r.role() + ", " + r.rule() + "]: ")
+                        + r.reason());
+            }
+        }
+        if (!any) {
+            out.println("  every control result passed");
+        }
+        out.println();
+        if (review.reassay().entries().isEmpty()) {
+            out.println("Re-assay list: empty (no control failure calls for re-assay).");
+        } else {
+            out.println("Re-assay list (" + review.reassay().entries().size() + " sample results, scope "
+                    + review.reassay().scope() + ")");
+            TextTable r = new TextTable("Sample", "Batch", "Position", "Analyte", "Triggered by");
+            for (ReassayEntry e : review.reassay().entries()) {
+                r.row(e.sampleId(), e.batch(), e.position(), e.analyte(), String.join(", ", e.triggeredBy()));
+            }
+            r.print(out);
+        }
+        out.println();
+        BlankTables.print(out, review.blanks());
+        out.println();
+        printInsertion(out, review);
+    }
+
+    private static final List<String> SHORT = List.of("CRM", "Blank", "Field dup", "Coarse dup", "Pulp dup",
+            "Lab repeat", "Umpire");
+
+    private static void printInsertion(PrintWriter out, BatchReview review) {
+        List<String> headers = new ArrayList<>(List.of("Batch", "Routine"));
+        headers.addAll(SHORT);
+        headers.add("Below target");
+        TextTable t = new TextTable(headers.toArray(new String[0]));
+        List<BatchInsertion> rows = new ArrayList<>(review.insertion().batches());
+        rows.add(review.insertion().overall());
+        for (BatchInsertion b : rows) {
+            List<Object> cells = new ArrayList<>(List.of(b.batch(), b.nRoutine()));
+            List<String> low = new ArrayList<>();
+            for (int i = 0; i < b.rates().size(); i++) {
+                InsertionRate r = b.rates().get(i);
+                cells.add(r.count() + " (" + (Double.isNaN(r.rate()) ? "-" : percent(r.rate())) + ")");
+                if (r.belowTarget()) {
+                    low.add(SHORT.get(i));
+                }
+            }
+            cells.add(String.join(", ", low));
+            t.row(cells.toArray());
+        }
+        List<String> targets = new ArrayList<>();
+        List<InsertionRate> overall = review.insertion().overall().rates();
+        for (int i = 0; i < overall.size(); i++) {
+            if (overall.get(i).target() > 0) {
+                targets.add(SHORT.get(i) + " " + percent(overall.get(i).target()));
+            }
+        }
+        out.println("Insertion rates: count (per routine sample); targets " + String.join(", ", targets));
+        t.print(out);
+    }
+
+    private static String percent(double f) {
+        return org.cupel.assay.Numbers.significant(100 * f, 2) + "%";
+    }
+
+    private static String label(Verdict v) {
+        return VerdictSection.label(v);
+    }
+}

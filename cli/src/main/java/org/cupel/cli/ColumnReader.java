@@ -1,0 +1,51 @@
+package org.cupel.cli;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.cupel.assay.AssayValue;
+import org.cupel.ingest.ParsedValue;
+import org.cupel.ingest.RawRow;
+import org.cupel.ingest.RawTable;
+import org.cupel.ingest.TableReader;
+import org.cupel.ingest.ValueConventions;
+import org.cupel.ingest.ValueParser;
+import org.cupel.project.DataIssue;
+import org.cupel.project.InputException;
+
+/** Reads one value column of a plain CSV (or XLSX) for the commands that summarise a single column. */
+final class ColumnReader {
+
+    /**
+     * @param values every usable cell, in file order (blank cells as missing values)
+     * @param issues cells that could not be read, or were read with a warning
+     */
+    record Column(String file, String header, List<AssayValue> values, List<DataIssue> issues) {
+    }
+
+    private ColumnReader() {
+    }
+
+    static Column read(Path file, String column) {
+        RawTable table = TableReader.read(file);
+        int idx = table.column(column);
+        if (idx < 0) {
+            throw new InputException(table.file() + ": no column named '" + column + "' in the header row (line "
+                    + table.headerLine() + "); the columns are " + String.join(", ", table.columns())
+                    + ". Pass one of them to --column.");
+        }
+        ValueParser parser = new ValueParser(ValueConventions.DEFAULTS);
+        List<AssayValue> values = new ArrayList<>();
+        List<DataIssue> issues = new ArrayList<>(table.warnings());
+        for (RawRow row : table.rows()) {
+            ParsedValue p = parser.parse(row.cell(idx), Double.NaN, table.at(row, idx));
+            if (p.issue() != null) {
+                issues.add(p.issue());
+            }
+            if (p.usable()) {
+                values.add(p.value());
+            }
+        }
+        return new Column(table.file(), table.columns().get(idx), values, issues);
+    }
+}

@@ -1,0 +1,125 @@
+package org.cupel.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class CensoredCommandTest {
+    /** USEPA (2009) Unified Guidance Example 15-1 manganese (ppb), with a blank cell and an unreadable one. */
+    private static final String MANGANESE = "Sample ID,Mn_ppb\n"
+            + String.join("\n", "S01,<2", "S02,<2", "S03,<2", "S04,3.3", "S05,<5", "S06,<5", "S07,<5", "S08,5.3",
+                    "S09,6.3", "S10,7.7", "S11,8.4", "S12,9.5", "S13,10.0", "S14,11.9", "S15,12.1", "S16,12.6",
+                    "S17,16.9", "S18,17.9", "S19,21.6", "S20,22.7", "S21,34.5", "S22,45.9", "S23,53.6", "S24,77.2",
+                    "S25,106.3", "S26,", "S27,n.a.x") + "\n";
+
+    private record Run(int code, String out, String err) {
+    }
+
+    private static Run run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = CupelCommand.run(args, new PrintWriter(out), new PrintWriter(err));
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    @Test
+    void tableShowsEveryMethodAndTheRecommendation(@TempDir Path dir) throws Exception {
+        Path csv = dir.resolve("mn.csv");
+        Files.writeString(csv, MANGANESE);
+        Path png = dir.resolve("mn.png");
+        Run r = run("censored", csv.toString(), "--column", "Mn_ppb", "--chart", png.toString());
+        assertEquals(0, r.code(), r.err());
+        // USEPA (2009) Example 15-1: KM 19.867, ROS 19.828, lognormal MLE 23.004 (4 significant digits here).
+        assertTrue(r.out().contains("Kaplan–Meier"), r.out());
+        assertTrue(r.out().contains("19.87"), r.out());
+        assertTrue(r.out().contains("19.83"), r.out());
+        assertTrue(r.out().contains("23"), r.out());
+        assertTrue(r.out().contains("Substitution DL/2"), r.out());
+        assertTrue(r.out().contains("Recommendation: use Kaplan–Meier"), r.out());
+        assertTrue(r.out().contains("n = 25, 6 below detection (limits 2, 5)"), r.out());
+        assertTrue(Files.size(png) > 1000);
+        String dump = System.getProperty("cupel.cli.out");
+        if (dump != null) {
+            Files.writeString(Path.of(dump), r.out() + "\n--- stderr\n" + r.err());
+            Files.copy(png, Path.of(dump + ".png"), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        }
+    }
+
+    @Test
+    void jsonCarriesNullsAndNotesInsteadOfNaN(@TempDir Path dir) throws Exception {
+        Path csv = dir.resolve("mn.csv");
+        Files.writeString(csv, MANGANESE);
+        Run r = run("censored", csv.toString(), "--column", "Mn_ppb", "--json", "--km-lowest", "detect");
+        assertEquals(0, r.code(), r.err());
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        assertEquals(25, j.get("n").asInt());
+        assertEquals("detect", j.get("kmLowestMass").asText());
+        JsonNode km = j.get("summaries").get(0);
+        assertEquals("Kaplan–Meier", km.get("method").asText());
+        // 10th percentile lies in the censored mass: null with a note, never NaN.
+        JsonNode p10 = km.get("percentiles").get(0);
+        assertTrue(p10.get("value").isNull());
+        assertTrue(p10.get("note").asText().contains("below the lowest detect"));
+        assertEquals(23.004, j.get("summaries").get(3).get("mean").get("value").asDouble(), 5e-4);
+        assertEquals("Kaplan–Meier", j.get("recommendation").get("method").asText());
+        assertTrue(!r.out().contains("NaN"));
+    }
+
+    @Test
+    void overLimitsTurnTheSummaryToMaximumLikelihood(@TempDir Path dir) throws Exception {
+        Path csv = dir.resolve("au.csv");
+        Files.writeString(csv, "Sample ID,Au_ppm\nS1,<0.005\nS2,0.012\nS3,<0.01\nS4,0.031\nS5,0.007\nS6,0.25\n"
+                + "S7,1.84\nS8,<0.005\nS9,0.066\nS10,0.102\nS11,>10\nS12,0.044\nS13,3.2\nS14,0.009\n");
+        Path png = dir.resolve("au.png");
+        Run r = run("censored", csv.toString(), "--column", "Au_ppm", "--chart", png.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("Recommendation: use MLE lognormal"), r.out());
+        assertTrue(r.out().contains("Kaplan–Meier: not applicable"), r.out());
+        assertTrue(r.out().contains("No probability plot written: not applicable: ROS handles"), r.out());
+        assertTrue(!Files.exists(png));
+        String dump = System.getProperty("cupel.cli.out");
+        if (dump != null) {
+            Files.writeString(Path.of(dump + ".au.txt"), r.out());
+        }
+    }
+
+    @Test
+    void unknownColumnIsAnInputErrorNamingTheColumns(@TempDir Path dir) throws Exception {
+        Path csv = dir.resolve("mn.csv");
+        Files.writeString(csv, MANGANESE);
+        Run r = run("censored", csv.toString(), "--column", "Au_ppm");
+        assertEquals(CupelCommand.INPUT_ERROR, r.code());
+        assertTrue(r.err().contains("no column named 'Au_ppm'") && r.err().contains("Mn_ppb"), r.err());
+    }
+
+    @Test
+    void dlCheckGivesTheFourLimits(@TempDir Path dir) throws Exception {
+        Path csv = dir.resolve("blanks.csv");
+        Files.writeString(csv, "Sample ID,Au_ppm\nB1,1\nB2,2\nB3,3\nB4,4\nB5,5\nB6,6\nB7,7\nB8,<0.5\n");
+        Run r = run("dl-check", csv.toString(), "--column", "Au_ppm", "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        // s = √(28/6); EPA MDL = t(6, 0.99)·s = 3.143·s (40 CFR 136 App. B table, 3 decimals).
+        double s = Math.sqrt(28 / 6.0);
+        assertEquals(7, j.get("n").asInt());
+        assertEquals(3.143 * s, j.get("limits").get(3).get("value").asDouble(), 5e-4 * s);
+        Run text = run("dl-check", csv.toString(), "--column", "Au_ppm");
+        assertTrue(text.out().contains("Currie L_D"), text.out());
+    }
+
+    @Test
+    void helpShowsAnExample() {
+        Run r = run("censored", "--help");
+        assertEquals(0, r.code());
+        assertTrue(r.out().contains("cupel censored assays.csv --column Au_ppm"), r.out());
+        assertTrue(run("dl-check", "--help").out().contains("cupel dl-check"));
+    }
+}

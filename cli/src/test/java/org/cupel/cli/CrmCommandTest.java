@@ -1,0 +1,96 @@
+package org.cupel.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class CrmCommandTest {
+    private static final String CATALOG = "crm,analyte,unit,certified_value,sd\n"
+            + "LOW,Au,g/t,0.50,0.03\nMID,Au,g/t,2.50,0.10\nHIGH,Au,g/t,6.80,0.25\n";
+    /** Batch J3 has MID material in the LOW slot (a planted swap); J4 has a 1-3s failure on HIGH. */
+    private static final String RESULTS = "crm,batch,position,date,Au_ppm\n"
+            + "LOW,J1,5,2025-03-03,0.51\nMID,J1,15,2025-03-03,2.52\nHIGH,J1,25,2025-03-03,6.75\n"
+            + "LOW,J2,5,2025-03-10,0.49\nMID,J2,15,2025-03-10,2.45\nHIGH,J2,25,2025-03-10,6.90\n"
+            + "LOW,J3,5,2025-03-17,2.48\nMID,J3,15,2025-03-17,2.55\nHIGH,J3,25,2025-03-17,6.70\n"
+            + "LOW,J4,5,2025-03-24,0.50\nMID,J4,15,2025-03-24,2.49\nHIGH,J4,25,2025-03-24,7.70\n"
+            + "LOW,J5,5,2025-03-31,<0.01\nZZ-9,J5,15,2025-03-31,1.10\n";
+
+    private record Run(int code, String out, String err) {
+    }
+
+    private static Run run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = CupelCommand.run(args, new PrintWriter(out), new PrintWriter(err));
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    private static Path[] files(Path dir) throws IOException {
+        Path results = Files.writeString(dir.resolve("crm-results.csv"), RESULTS);
+        Path catalog = Files.writeString(dir.resolve("crm-catalog.csv"), CATALOG);
+        return new Path[] {results, catalog};
+    }
+
+    @Test
+    void plainModePrintsTablesWithSwapFailureAndExceptions(@TempDir Path dir) throws IOException {
+        Path[] f = files(dir);
+        Run r = run("crm", "--results", f[0].toString(), "--catalog", f[1].toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("1 failures, 0 warnings, 1 probable swaps, 2 exceptions"), r.out());
+        assertTrue(r.out().contains("probable swap with MID"), r.out());
+        assertTrue(r.out().contains("1-3s"), r.out());
+        assertTrue(r.out().contains("unknown CRM code 'ZZ-9'"), r.out());
+    }
+
+    @Test
+    void jsonModeFollowsDocumentedSchema(@TempDir Path dir) throws IOException {
+        Path[] f = files(dir);
+        Run r = run("crm", "--results", f[0].toString(), "--catalog", f[1].toString(), "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        assertEquals("cupel-crm/1", j.get("schema").asText());
+        assertEquals(1, j.get("summary").get("swaps").asInt());
+        JsonNode low = j.get("series").get(0);
+        assertEquals("LOW", low.get("crm").asText());
+        assertEquals("MID", low.get("results").get(2).get("swapWith").asText());
+        assertEquals("WARN", low.get("results").get(2).get("verdict").asText());
+        assertTrue(low.get("bias").get("meanBiasCiPct").isArray());
+        assertEquals(2, j.get("exceptions").size());
+    }
+
+    @Test
+    void failOnQcAndChartsAndInputErrors(@TempDir Path dir) throws IOException {
+        Path[] f = files(dir);
+        Path charts = dir.resolve("charts");
+        Run r = run("crm", "--results", f[0].toString(), "--catalog", f[1].toString(), "--fail-on-qc",
+                "--charts", charts.toString());
+        assertEquals(CupelCommand.QC_FAILED, r.code(), r.err());
+        assertTrue(Files.exists(charts.resolve("crm-LOW-Au.png")));
+        assertTrue(Files.exists(charts.resolve("crm-z-Au.png")));
+        assertTrue(Files.exists(charts.resolve("crm-bias-Au.png")));
+        Run missing = run("crm", "--results", f[0].toString());
+        assertEquals(CupelCommand.INPUT_ERROR, missing.code());
+        assertTrue(missing.err().contains("--catalog"), missing.err());
+        Files.writeString(f[0], "crm,batch,date,Au_ppm\nLOW,J1,03/03/2025,0.5\n");
+        Run badDate = run("crm", "--results", f[0].toString(), "--catalog", f[1].toString());
+        assertEquals(CupelCommand.INPUT_ERROR, badDate.code());
+        assertTrue(badDate.err().contains(":2:3: date '03/03/2025' is not an ISO date"), badDate.err());
+    }
+
+    @Test
+    void projectModeReadsAFolder() {
+        Path messy = Path.of(System.getProperty("cupel.testdata"), "fixtures", "ingest", "messy-project");
+        Run r = run("crm", messy.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("KRM-99"), r.out());
+    }
+}

@@ -1,0 +1,42 @@
+package org.cupel.control;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.cupel.project.Project;
+
+/**
+ * The batch-by-batch review of a project: blanks judged, batch verdicts and the re-assay list from the
+ * blank outcomes and any other control outcomes given (the CRM review's), and insertion rates. Settings
+ * from the config sections {@code blanks}, {@code reassay} and {@code insertion}.
+ *
+ * @param verdicts one per batch, in table order
+ * @param reassay the re-assay list
+ * @param blanks the blank review
+ * @param insertion insertion rates per batch and overall
+ * @param outcomes every control outcome the verdicts were built from (other sources first, then blanks)
+ */
+public record BatchReview(List<BatchVerdict> verdicts, ReassayList reassay, BlankReport blanks,
+                          InsertionRates insertion, List<ControlOutcome> outcomes) {
+
+    public BatchReview {
+        verdicts = List.copyOf(verdicts);
+        outcomes = List.copyOf(outcomes);
+    }
+
+    /** @param otherOutcomes outcomes of other control reviews (CRMs), in any order; may be empty */
+    public static BatchReview of(Project project, List<ControlOutcome> otherOutcomes) {
+        BlankReport blanks = BlankReview.review(project);
+        List<ControlOutcome> all = new ArrayList<>(otherOutcomes);
+        all.addAll(blanks.outcomes());
+        ReassaySettings reassay = project.config().section("reassay", ReassaySettings.class, ReassaySettings.DEFAULTS);
+        InsertionSettings insertion = project.config().section("insertion", InsertionSettings.class,
+                InsertionSettings.DEFAULTS);
+        return new BatchReview(BatchVerdicts.judge(project.samples(), all),
+                ReassayList.build(project.samples(), all, reassay), blanks,
+                InsertionRates.compute(project.samples(), insertion), all);
+    }
+
+    public boolean anyBatchFailed() {
+        return BatchVerdicts.anyFailed(verdicts);
+    }
+}

@@ -1,0 +1,149 @@
+package org.cupel.control;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.cupel.assay.AnalyteColumn;
+import org.cupel.assay.AssayValue;
+import org.cupel.assay.MissingReason;
+import org.cupel.assay.Numbers;
+import org.cupel.assay.QcRole;
+import org.cupel.assay.SampleTable;
+import org.cupel.project.Project;
+
+/**
+ * Judges every blank against its threshold ({@link BlankVerdict}), pairs it with the sample run before it
+ * (carry-over) and summarises per analyte ({@link CarryOver}).
+ */
+public final class BlankReview {
+    private BlankReview() {
+    }
+
+    /** Every blank of every analyte of the project, with the settings of config section {@code blanks}. */
+    public static BlankReport review(Project project) {
+        BlankSettings settings = project.config().section("blanks", BlankSettings.class, BlankSettings.DEFAULTS);
+        List<BlankObservation> all = new ArrayList<>();
+        BatchSequence seq = BatchSequence.of(project.samples());
+        for (AnalyteColumn col : project.analytes().values()) {
+            all.addAll(observations(project.samples(), seq, col));
+        }
+        return review(all, settings);
+    }
+
+    /**
+     * The blanks of one analyte in batch and run order, each with the sample before it. The detection
+     * limit is the one reported with the blank; when the lab gave none, the smallest limit reported for
+     * the same analyte and method elsewhere in the project.
+     */
+    public static List<BlankObservation> observations(SampleTable table, BatchSequence seq, AnalyteColumn col) {
+        Map<String, Double> methodLimit = methodLimits(col);
+        String unit = col.analyte().unit().symbol();
+        List<BlankObservation> out = new ArrayList<>();
+        for (int b = 0; b < seq.size(); b++) {
+            for (int row : seq.rows(b)) {
+                if (table.role(row) != QcRole.BLANK) {
+                    continue;
+                }
+                int prev = seq.preceding(row);
+                double dl = col.limit(row);
+                if (!(dl > 0) || col.qualifier(row) == org.cupel.assay.Qualifier.ABOVE_UPPER_LIMIT) {
+                    dl = methodLimit.getOrDefault(col.method(row), Double.NaN);
+                }
+                out.add(new BlankObservation(row, table.id(row), seq.batch(b).id(), table.position(row),
+                        col.analyte().name(), unit, col.value(row), dl, prev < 0 ? "" : table.id(prev),
+                        prev < 0 ? AssayValue.missing(MissingReason.NONE) : col.value(prev)));
+            }
+        }
+        return out;
+    }
+
+    /** Judges the observations (any mix of analytes); missing blank results are counted, not judged. */
+    public static BlankReport review(List<BlankObservation> observations, BlankSettings settings) {
+        Map<String, List<BlankResult>> byAnalyte = new LinkedHashMap<>();
+        Map<String, Integer> missing = new HashMap<>();
+        Map<String, String> units = new HashMap<>();
+        List<BlankResult> results = new ArrayList<>();
+        for (BlankObservation o : observations) {
+            byAnalyte.computeIfAbsent(o.analyte(), k -> new ArrayList<>());
+            units.put(o.analyte(), o.unit());
+            if (o.value().isMissing()) {
+                missing.merge(o.analyte(), 1, Integer::sum);
+                continue;
+            }
+            BlankResult r = judge(o, settings);
+            results.add(r);
+            byAnalyte.get(o.analyte()).add(r);
+        }
+        List<BlankSummary> summaries = new ArrayList<>();
+        for (Map.Entry<String, List<BlankResult>> e : byAnalyte.entrySet()) {
+            summaries.add(summary(e.getKey(), units.get(e.getKey()), e.getValue(),
+                    missing.getOrDefault(e.getKey(), 0)));
+        }
+        return new BlankReport(results, summaries, settings);
+    }
+
+    static BlankResult judge(BlankObservation o, BlankSettings settings) {
+        BlankThreshold t = settings.thresholdFor(o.analyte(), o.detectionLimit()).orElse(null);
+        BlankVerdict v = BlankVerdict.judge(o.value(), t, o.unit());
+        AssayValue prev = o.precedingGrade();
+        double ratio = Double.NaN;
+        String ratioNote = "";
+        if (prev.isMissing()) {
+            ratioNote = o.precedingId().isEmpty() ? "first sample in the batch" : "preceding sample has no result";
+        } else if (!o.value().isDetected()) {
+            ratioNote = "blank not a detected value";
+        } else if (!prev.isDetected() || !(prev.value() > 0)) {
+            ratioNote = "preceding grade not a positive detected value";
+        } else {
+            ratio = o.value().value() / prev.value();
+        }
+        boolean carry = v.verdict() == Verdict.FAIL && t != null && !prev.isMissing()
+                && prev.qualifier() != org.cupel.assay.Qualifier.BELOW_DETECTION
+                && prev.value() >= settings.highGradeMultiple() * t.fail();
+        String reason = o.sampleId() + " " + o.analyte() + ": " + v.explanation();
+        if (!prev.isMissing() && v.verdict() != Verdict.PASS) {
+            reason += "; follows " + o.precedingId() + " at " + prev.display() + " " + o.unit();
+        }
+        if (carry) {
+            reason += " (probable carry-over)";
+        }
+        ControlOutcome outcome = new ControlOutcome(o.row(), o.analyte(), v.verdict(), v.rule(), reason,
+                v.verdict() == Verdict.FAIL);
+        return new BlankResult(o, t, v, ratio, ratioNote, carry, outcome);
+    }
+
+    private static BlankSummary summary(String analyte, String unit, List<BlankResult> rs, int missing) {
+        int[] counts = new int[Verdict.values().length];
+        int carry = 0;
+        for (BlankResult r : rs) {
+            counts[r.verdict().verdict().ordinal()]++;
+            carry += r.carryOver() ? 1 : 0;
+        }
+        return new BlankSummary(analyte, unit, rs.size(), counts[Verdict.PASS.ordinal()],
+                counts[Verdict.WARN.ordinal()], counts[Verdict.FAIL.ordinal()],
+                counts[Verdict.CANNOT_JUDGE.ordinal()], missing, carry, CarryOver.relation(analyte, rs));
+    }
+
+    private static Map<String, Double> methodLimits(AnalyteColumn col) {
+        Map<String, Double> out = new HashMap<>();
+        for (int row = 0; row < col.size(); row++) {
+            double l = col.limit(row);
+            if (l > 0 && col.qualifier(row) != org.cupel.assay.Qualifier.ABOVE_UPPER_LIMIT) {
+                out.merge(col.method(row), l, Math::min);
+            }
+        }
+        return out;
+    }
+
+    /** "0.21 g/t (42×DL)", for tables. */
+    public static String describe(BlankResult r) {
+        BlankObservation o = r.observation();
+        String s = o.value().display() + " " + o.unit();
+        if (o.detectionLimit() > 0 && o.value().isDetected()) {
+            s += " (" + Numbers.significant(o.value().value() / o.detectionLimit(), 3) + "×DL)";
+        }
+        return s;
+    }
+}

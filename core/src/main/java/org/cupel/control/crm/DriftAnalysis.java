@@ -1,0 +1,65 @@
+package org.cupel.control.crm;
+
+import java.time.LocalDate;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.cupel.assay.Numbers;
+
+/** Builds a {@link SeriesDrift} from judged results in time order. */
+final class DriftAnalysis {
+    private DriftAnalysis() {
+    }
+
+    static SeriesDrift of(List<CrmResult> judged, CrmSettings s) {
+        int n = judged.size();
+        double[] z = new double[n];
+        double[] t = new double[n];
+        LocalDate origin = null;
+        boolean dated = n > 0;
+        for (CrmResult r : judged) {
+            LocalDate d = r.point().date();
+            if (d == null) {
+                dated = false;
+            } else if (origin == null || d.isBefore(origin)) {
+                origin = d;
+            }
+        }
+        for (int i = 0; i < n; i++) {
+            z[i] = judged.get(i).z();
+            t[i] = dated ? ChronoUnit.DAYS.between(origin, judged.get(i).point().date()) : i + 1;
+        }
+        String axis = dated ? "days since " + origin : "sequence number (some batches undated)";
+        String per = dated ? "per day" : "per result";
+        LinearFit trend = LinearFit.of(t, z, s.confidence());
+        Ewma ewma = Ewma.of(z, 0, 1, s.ewmaLambda(), s.ewmaWidth());
+        TabularCusum cusum = TabularCusum.of(z, 0, 1, s.cusumK(), s.cusumH());
+        List<String> findings = new ArrayList<>();
+        if (trend.estimated() && trend.pValue() < s.driftAlpha()) {
+            findings.add(String.format(Locale.ROOT, "z trend %s SD %s (%d %% CI %s to %s, %s, n = %d)",
+                    signed(trend.slope()), per, Math.round(s.confidence() * 100), Numbers.significant(trend.slopeLow(), 3),
+                    Numbers.significant(trend.slopeHigh(), 3), trend.pText(), n));
+        }
+        if (ewma.firstSignal() >= 0) {
+            CrmResult r = judged.get(ewma.firstSignal());
+            findings.add(String.format(Locale.ROOT, "EWMA (λ = %s, L = %s) outside its limits from %s (batch %s, "
+                            + "result %d of %d), %d results outside in all", Numbers.compact(s.ewmaLambda()),
+                    Numbers.compact(s.ewmaWidth()), r.point().sampleId(), r.point().batchId(), ewma.firstSignal() + 1,
+                    n, ewma.signals().size()));
+        }
+        if (cusum.firstSignal() >= 0) {
+            int i = cusum.firstSignal();
+            CrmResult r = judged.get(i);
+            String side = cusum.upper().get(i) > s.cusumH() ? "results read high" : "results read low";
+            findings.add(String.format(Locale.ROOT, "CUSUM (k = %s, h = %s) above h from %s (batch %s, result %d of "
+                            + "%d): %s", Numbers.compact(s.cusumK()), Numbers.compact(s.cusumH()), r.point().sampleId(),
+                    r.point().batchId(), i + 1, n, side));
+        }
+        return new SeriesDrift(axis, trend, ewma, cusum, !findings.isEmpty(), findings);
+    }
+
+    private static String signed(double v) {
+        return (v >= 0 ? "+" : "") + Numbers.significant(v, 3);
+    }
+}

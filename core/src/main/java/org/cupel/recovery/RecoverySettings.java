@@ -1,0 +1,83 @@
+package org.cupel.recovery;
+
+import java.util.Map;
+
+/**
+ * Settings of the recovery analysis, bound from the {@code recovery} section of {@code cupel.yaml}.
+ *
+ * @param definition recovery definition that condition means and comparisons use: {@code loss} (1 − losses /
+ *     metal in charge), {@code direct} (collected / metal in charge) or {@code calculated} (collected / sum of
+ *     products)
+ * @param confidence level of every confidence interval
+ * @param alpha significance level of the tests and of the power plan
+ * @param equivalenceMargin ± margin of the TOST equivalence test, in percentage points of recovery
+ * @param powerDifference difference in percentage points the replicate plan should detect
+ * @param power target power of the replicate plan
+ * @param balanceTolerance a smelt's balance closes when |accountability − 1| ≤ this
+ * @param nearComplete mean recoveries (%) at or above this get their intervals on the log-loss scale
+ * @param balanceResolutionGrams readability of the balance; its standard uncertainty is resolution / √12
+ *     (rectangular, JCGM 100:2008 F.2.2.1)
+ * @param assayRelativeSd relative SD of one assay per product name or role ({@code head}, {@code collected},
+ *     {@code loss}, or a product name such as {@code slag}); used by the reconciliation and, for a head with
+ *     a single assay, by the GUM budget
+ * @param precisionSigma0 σ₀ of the duplicate-precision model σ_c = σ₀ + k·c in g/t; when set with
+ *     {@link #precisionK} it replaces the relative SDs for every assay
+ * @param precisionK k of the precision model
+ * @param productRoles product name → {@code collected} or {@code loss}, overriding the role implied by the name
+ */
+public record RecoverySettings(String definition, double confidence, double alpha, double equivalenceMargin,
+                               double powerDifference, double power, double balanceTolerance, double nearComplete,
+                               double balanceResolutionGrams, Map<String, Double> assayRelativeSd,
+                               Double precisionSigma0, Double precisionK, Map<String, String> productRoles) {
+
+    /** Defaults; the assay precisions are assumptions for the reconciliation, labelled as such in the output. */
+    public static final RecoverySettings DEFAULTS = new RecoverySettings("loss", 0.95, 0.05, 0.5, 1.0, 0.80, 0.05,
+            95.0, 0.01, Map.of("head", 0.02, "collected", 0.01, "loss", 0.05), null, null, Map.of());
+
+    public RecoverySettings {
+        assayRelativeSd = assayRelativeSd == null ? Map.of() : Map.copyOf(assayRelativeSd);
+        productRoles = productRoles == null ? Map.of() : Map.copyOf(productRoles);
+        if (!(confidence > 0 && confidence < 1) || !(alpha > 0 && alpha < 1)) {
+            throw new IllegalArgumentException("confidence and alpha must lie between 0 and 1");
+        }
+        if (!(equivalenceMargin > 0) || !(powerDifference > 0)) {
+            throw new IllegalArgumentException("the equivalence margin and the power difference must be positive");
+        }
+        RecoveryDefinition.parse(definition);
+    }
+
+    public RecoveryDefinition recoveryDefinition() {
+        return RecoveryDefinition.parse(definition);
+    }
+
+    public RecoverySettings withMargin(double margin) {
+        return new RecoverySettings(definition, confidence, alpha, margin, powerDifference, power, balanceTolerance,
+                nearComplete, balanceResolutionGrams, assayRelativeSd, precisionSigma0, precisionK, productRoles);
+    }
+
+    public RecoverySettings withPowerDifference(double difference) {
+        return new RecoverySettings(definition, confidence, alpha, equivalenceMargin, difference, power,
+                balanceTolerance, nearComplete, balanceResolutionGrams, assayRelativeSd, precisionSigma0, precisionK,
+                productRoles);
+    }
+
+    /** Standard uncertainty of one weighing: resolution/√12. */
+    public double massUncertaintyGrams() {
+        return balanceResolutionGrams / Math.sqrt(12);
+    }
+
+    /**
+     * Standard uncertainty of one assay at {@code gradeGpt} of a product: σ₀ + k·c when the precision model is
+     * set, else the relative SD for the product name, else for its role ({@code head} for heads).
+     */
+    public double assayUncertainty(String productName, String roleKey, double gradeGpt) {
+        if (precisionSigma0 != null && precisionK != null) {
+            return precisionSigma0 + precisionK * gradeGpt;
+        }
+        Double rsd = assayRelativeSd.get(productName.toLowerCase(java.util.Locale.ROOT));
+        if (rsd == null) {
+            rsd = assayRelativeSd.getOrDefault(roleKey, 0.0);
+        }
+        return rsd * gradeGpt;
+    }
+}

@@ -1,0 +1,130 @@
+package org.cupel.censored;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Random;
+import net.jqwik.api.Arbitraries;
+import net.jqwik.api.Arbitrary;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.Provide;
+import net.jqwik.api.Tuple;
+import org.apache.commons.math3.stat.StatUtils;
+import org.apache.commons.math3.stat.descriptive.rank.Percentile;
+import org.cupel.assay.AssayValue;
+
+/**
+ * Invariants every censored-data estimator must keep (common practice): with nothing censored the
+ * estimators are the ordinary sample statistics; the order of the input does not matter; multiplying
+ * values and limits by c multiplies location and spread estimates by c.
+ */
+class CensoredPropertiesTest {
+    /** Relative tolerance for closed-form estimators: only floating-point rounding differs. */
+    private static final double CLOSED_FORM = 1e-9;
+    /** Relative tolerance for maximum likelihood: Newton–Raphson stops at a step of about 1e-11. */
+    private static final double ITERATIVE = 1e-6;
+    /** The invariants concern the estimates; the seeded bootstrap would only slow the tries down. */
+    private static final CensoredSettings NO_BOOTSTRAP = new CensoredSettings(KaplanMeier.LowestMass.AT_LOWEST_LIMIT,
+            KaplanMeier.SdDivisor.DISTRIBUTION, 0, 1, 0);
+
+    @Provide
+    Arbitrary<List<AssayValue>> censoredValues() {
+        Arbitrary<AssayValue> detect = Arbitraries.doubles().between(0.01, 100).ofScale(3).map(AssayValue::detected);
+        Arbitrary<AssayValue> below = Arbitraries.of(0.5, 1.0, 2.0, 5.0).map(AssayValue::belowDetection);
+        return Arbitraries.frequencyOf(Tuple.of(3, detect), Tuple.of(1, below)).list().ofMinSize(6).ofMaxSize(60)
+                .filter(l -> l.stream().filter(AssayValue::isDetected).mapToDouble(AssayValue::value).distinct()
+                        .count() >= 3);
+    }
+
+    @Provide
+    Arbitrary<Double> factors() {
+        return Arbitraries.doubles().between(1e-3, 1e3).ofScale(6);
+    }
+
+    @Provide
+    Arbitrary<double[]> completeValues() {
+        return Arbitraries.doubles().between(0.01, 100).ofScale(3).array(double[].class).ofMinSize(3).ofMaxSize(60)
+                .filter(a -> java.util.Arrays.stream(a).distinct().count() >= 2);
+    }
+
+    @Property
+    void withoutCensoringKaplanMeierIsTheSampleMeanAndSd(@ForAll("completeValues") double[] x) {
+        CensoredSample s = detects(x);
+        double mean = StatUtils.mean(x);
+        double sd = Math.sqrt(StatUtils.variance(x));
+        double sdPop = Math.sqrt(StatUtils.populationVariance(x));
+        CensoredSummary dist = KaplanMeier.fit(s, KaplanMeier.Options.DEFAULTS).summary();
+        CensoredSummary samp = KaplanMeier.fit(s, new KaplanMeier.Options(KaplanMeier.LowestMass.AT_LOWEST_LIMIT,
+                KaplanMeier.SdDivisor.SAMPLE)).summary();
+        assertRel(mean, dist.mean().value(), CLOSED_FORM);
+        assertRel(sdPop, dist.sd().value(), CLOSED_FORM);
+        assertRel(sd, samp.sd().value(), CLOSED_FORM);
+        // Without censoring the Greenwood-type SE is the plug-in s_pop/√n.
+        assertRel(sdPop / Math.sqrt(x.length), dist.mean().standardError(), CLOSED_FORM);
+    }
+
+    @Property
+    void withoutCensoringRosIsTheSampleStatistics(@ForAll("completeValues") double[] x) {
+        CensoredSummary r = Ros.fit(detects(x)).summary();
+        Percentile p = new Percentile().withEstimationType(Percentile.EstimationType.R_7);
+        p.setData(x);
+        assertRel(StatUtils.mean(x), r.mean().value(), CLOSED_FORM);
+        assertRel(Math.sqrt(StatUtils.variance(x)), r.sd().value(), CLOSED_FORM);
+        assertRel(p.evaluate(50), r.median().value(), CLOSED_FORM);
+    }
+
+    @Property(tries = 100)
+    void inputOrderDoesNotMatter(@ForAll("censoredValues") List<AssayValue> values, @ForAll long seed) {
+        List<AssayValue> shuffled = new ArrayList<>(values);
+        Collections.shuffle(shuffled, new Random(seed));
+        CensoredAnalysis a = CensoredAnalysis.of(CensoredSample.of(values), NO_BOOTSTRAP);
+        CensoredAnalysis b = CensoredAnalysis.of(CensoredSample.of(shuffled), NO_BOOTSTRAP);
+        for (int i = 0; i < a.summaries().size(); i++) {
+            CensoredSummary x = a.summaries().get(i);
+            CensoredSummary y = b.summaries().get(i);
+            double tol = x.method().startsWith("MLE") ? ITERATIVE : CLOSED_FORM;
+            assertSame(x.mean(), y.mean(), tol);
+            assertSame(x.sd(), y.sd(), tol);
+            assertSame(x.median(), y.median(), tol);
+        }
+        assertEquals(a.recommendation(), b.recommendation());
+    }
+
+    @Property(tries = 100)
+    void scalingValuesAndLimitsScalesTheEstimates(@ForAll("censoredValues") List<AssayValue> values,
+                                                  @ForAll("factors") double c) {
+        CensoredSample s = CensoredSample.of(values);
+        CensoredAnalysis a = CensoredAnalysis.of(s, NO_BOOTSTRAP);
+        CensoredAnalysis b = CensoredAnalysis.of(s.scaled(c), NO_BOOTSTRAP);
+        for (int i = 0; i < a.summaries().size(); i++) {
+            CensoredSummary x = a.summaries().get(i);
+            CensoredSummary y = b.summaries().get(i);
+            double tol = x.method().startsWith("MLE") ? ITERATIVE : CLOSED_FORM;
+            assertSame(x.mean().scaled(c), y.mean(), tol);
+            assertSame(x.sd().scaled(c), y.sd(), tol);
+            assertSame(x.median().scaled(c), y.median(), tol);
+        }
+    }
+
+    private static CensoredSample detects(double[] x) {
+        CensoredSample.Builder b = CensoredSample.builder();
+        for (double v : x) {
+            b.detected(v);
+        }
+        return b.build();
+    }
+
+    private static void assertSame(Estimate expected, Estimate actual, double rel) {
+        assertEquals(expected.isAvailable(), actual.isAvailable(), expected + " vs " + actual);
+        if (expected.isAvailable()) {
+            assertRel(expected.value(), actual.value(), rel);
+        }
+    }
+
+    private static void assertRel(double expected, double actual, double rel) {
+        assertEquals(expected, actual, rel * Math.max(1, Math.abs(expected)));
+    }
+}
