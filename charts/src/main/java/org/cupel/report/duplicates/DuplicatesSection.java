@@ -212,7 +212,8 @@ public final class DuplicatesSection {
                 "A batch fails the rule when fewer than the required share of its pairs lie within the type's HARD "
                         + "limit; with few pairs per batch one wide pair decides. The chi-square test of the batch's "
                         + "RMS CV against the set's (NIST/SEMATECH e-Handbook 7.2.3.1) flags a batch that is "
-                        + "significantly less precise.");
+                        + "significantly less precise; it assumes one relative error over the grade range, and with "
+                        + "many batches about 1 in 100 is flagged by chance at the default level.");
     }
 
     private static ReportTable modelTable(DuplicateReport r) {
