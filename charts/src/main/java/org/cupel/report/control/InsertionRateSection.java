@@ -71,7 +71,7 @@ public final class InsertionRateSection {
     }
 
     static String percent(double fraction) {
-        return Numbers.significant(100 * fraction, 2) + " %";
+        return Numbers.significant(100 * fraction, 2) + "%";
     }
 
     /** "CRM 5 %, Blank 5 %, ..." for the roles with a target. */

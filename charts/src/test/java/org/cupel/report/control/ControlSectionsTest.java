@@ -92,9 +92,9 @@ class ControlSectionsTest {
         InsertionRates r = InsertionRates.compute(table(), InsertionSettings.DEFAULTS);
         ReportTable tab = table(InsertionRateSection.build(r), "insertion-rates");
         // 1 CRM per 8 routine samples: 12.5 %; no duplicates: below target.
-        assertEquals("1 (13 %)", tab.rows().get(0).get(3));
+        assertEquals("1 (13%)", tab.rows().get(0).get(3));
         assertEquals("Field dup., Coarse dup., Pulp dup.", tab.rows().get(0).get(10));
-        assertTrue(tab.note().contains("Targets: CRM 5 %, Blank 5 %, Field dup. 5 %"), tab.note());
+        assertTrue(tab.note().contains("Targets: CRM 5%, Blank 5%, Field dup. 5%"), tab.note());
         assertEquals("all batches", tab.rows().get(1).get(0));
     }
 }
