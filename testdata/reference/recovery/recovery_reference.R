@@ -1,7 +1,8 @@
 # Reference values for the Cupel recovery tests, computed with base R (stats package).
 # Run from the repository root:
 #   /usr/bin/Rscript testdata/reference/recovery/recovery_reference.R
-# Writes ptukey.csv, qtukey.csv, power.csv, holm.csv, welch.csv, reconciliation.csv and noncentral_t.csv
+# Writes ptukey.csv, qtukey.csv, power.csv, holm.csv, welch.csv, reconciliation.csv, noncentral_t.csv and
+# games_howell.csv
 # beside this script.
 out <- "testdata/reference/recovery"
 options(digits = 15)
@@ -57,3 +58,18 @@ write.csv(data.frame(variable = c("charge", "button", "slag"), measured = x0, va
 nct <- expand.grid(t = c(-1, 0.5, 2, 2.1009, 4), df = c(2, 5, 38), ncp = c(0, 1, 3.162278))
 nct$p <- mapply(function(t, df, ncp) pt(t, df, ncp), nct$t, nct$df, nct$ncp)
 write.csv(nct, file.path(out, "noncentral_t.csv"), row.names = FALSE)
+
+# Games-Howell for one pair: Welch t and df from t.test, then the studentized range with k means,
+# p = ptukey(sqrt(2) |t|, k, df, lower.tail = FALSE), CI half-width qtukey(0.95, k, df) / sqrt(2) * SE.
+gh_cases <- list(list(a = c(97.1, 96.4, 97.9, 96.9), b = c(96.8, 97.5, 96.1, 95.2, 96.0), k = 3),
+                 list(a = c(92.6, 91.5, 92.5, 93.0), b = c(98.2, 97.9, 98.9, 98.4), k = 4))
+gh <- do.call(rbind, lapply(gh_cases, function(cs) {
+  tt <- t.test(cs$a, cs$b, var.equal = FALSE)
+  se <- unname((mean(cs$a) - mean(cs$b)) / tt$statistic)
+  half <- qtukey(0.95, cs$k, tt$parameter) / sqrt(2) * se
+  data.frame(a = paste(cs$a, collapse = " "), b = paste(cs$b, collapse = " "), k = cs$k,
+             t = unname(tt$statistic), df = unname(tt$parameter),
+             p = ptukey(sqrt(2) * abs(unname(tt$statistic)), cs$k, unname(tt$parameter), lower.tail = FALSE),
+             half_width = half)
+}))
+write.csv(gh, file.path(out, "games_howell.csv"), row.names = FALSE)

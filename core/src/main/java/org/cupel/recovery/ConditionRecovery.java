@@ -30,4 +30,9 @@ public record ConditionRecovery(String condition, String feed, String analyte, R
         replicates = replicates.clone();
         excluded = List.copyOf(excluded);
     }
+
+    @Override
+    public double[] replicates() {
+        return replicates.clone();
+    }
 }

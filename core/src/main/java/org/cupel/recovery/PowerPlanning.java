@@ -29,6 +29,7 @@ public final class PowerPlanning {
      */
     public record Plan(double difference, double sd, double alpha, double power, double n, String note) {
         /** Whole smelts per condition: ⌈n⌉. */
+        @com.fasterxml.jackson.annotation.JsonProperty("perCondition")
         public int perCondition() {
             return (int) Math.ceil(n - 1e-9);
         }

@@ -35,6 +35,21 @@ public record Reconciliation(double[] measured, double[] adjusted, double[] adju
         adjustedVariance = adjustedVariance.clone();
     }
 
+    @Override
+    public double[] measured() {
+        return measured.clone();
+    }
+
+    @Override
+    public double[] adjusted() {
+        return adjusted.clone();
+    }
+
+    @Override
+    public double[] adjustedVariance() {
+        return adjustedVariance.clone();
+    }
+
     /**
      * @param x measured values
      * @param variance their variances (diagonal V; measurements independent); all must be positive

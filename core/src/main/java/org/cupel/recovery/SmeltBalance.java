@@ -53,6 +53,8 @@ public record SmeltBalance(String testId, String analyte, List<String> variables
                     "no measurement uncertainty to weight the balance with: set recovery.assayRelativeSd");
         }
         for (int i = 0; i < v.length; i++) {
+            // A product with no metal (a censored assay counted as zero) has no variance: it is held fixed,
+            // which a vanishing variance does without making A V Aᵀ singular.
             v[i] = Math.max(v[i], 1e-30);
         }
         Reconciliation r = Reconciliation.adjust(x, v, a);

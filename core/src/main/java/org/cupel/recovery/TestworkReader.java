@@ -70,24 +70,46 @@ public final class TestworkReader {
                 .anyMatch(c -> RawTable.normalise(c).equals(RawTable.normalise(requiredColumn))), null);
     }
 
+    /**
+     * Head assays per feed and analyte. A replicate labelled {@code <label>-LD} is a lab duplicate of
+     * {@code <label>} (same pulp): the two are averaged into one replicate first, so the head's standard error
+     * counts independent test portions and not the repeat of one pulp.
+     */
     private Map<String, Map<String, List<AssayValue>>> readHeads(Path file) {
         RawTable t = table(file, "feed");
         int feed = required(t, "feed");
+        int replicate = t.column("replicate", "rep");
         Map<Integer, AnalyteHeader> cols = analyteColumns(t, "");
-        Map<String, Map<String, List<AssayValue>>> out = new LinkedHashMap<>();
+        Map<String, Map<String, Map<String, List<AssayValue>>>> byLabel = new LinkedHashMap<>();
         for (RawRow row : t.rows()) {
             String f = row.cell(feed).strip();
             if (f.isEmpty()) {
                 exclude(t.at(row, feed), "", "the row has no feed name", "a feed name", "fill in the feed column");
                 continue;
             }
+            String label = replicate < 0 || row.cell(replicate).isBlank() ? "line " + row.line()
+                    : row.cell(replicate).strip().replaceFirst("(?i)-LD$", "");
             for (Map.Entry<Integer, AnalyteHeader> c : cols.entrySet()) {
-                assay(t, row, c.getKey(), c.getValue()).filter(v -> !v.isMissing()).ifPresent(v -> out
+                assay(t, row, c.getKey(), c.getValue()).filter(v -> !v.isMissing()).ifPresent(v -> byLabel
                         .computeIfAbsent(f, k -> new LinkedHashMap<>())
-                        .computeIfAbsent(c.getValue().analyte(), k -> new ArrayList<>()).add(v));
+                        .computeIfAbsent(c.getValue().analyte(), k -> new LinkedHashMap<>())
+                        .computeIfAbsent(label, k -> new ArrayList<>()).add(v));
             }
         }
+        Map<String, Map<String, List<AssayValue>>> out = new LinkedHashMap<>();
+        byLabel.forEach((f, analytesOfFeed) -> analytesOfFeed.forEach((a, labels) -> labels.values().forEach(v -> out
+                .computeIfAbsent(f, k -> new LinkedHashMap<>()).computeIfAbsent(a, k -> new ArrayList<>())
+                .add(mergeDuplicates(v)))));
         return out;
+    }
+
+    /** One pulp's assays as one value: the mean when all are detected, else the original assay. */
+    private static AssayValue mergeDuplicates(List<AssayValue> assays) {
+        if (assays.size() == 1 || !assays.stream().allMatch(AssayValue::isDetected)) {
+            return assays.get(0);
+        }
+        return AssayValue.detected(assays.stream().mapToDouble(AssayValue::value).average().orElseThrow(),
+                assays.get(0).limit());
     }
 
     private List<Smelt> readSmelts(Path file) {

@@ -102,6 +102,25 @@ class StatisticsTest {
     }
 
     /**
+     * Games–Howell (1976) against R 4.2 (games_howell.csv): Welch t and ν from {@code t.test}, then
+     * {@code ptukey(√2|t|, k, ν, lower.tail = FALSE)} and {@code qtukey(0.95, k, ν)/√2 · SE}. Tolerances as
+     * for ptukey (5e-6, R's quadrature at small ν) and qtukey (1e-3 relative, R's eps = 0.0001).
+     */
+    @Test
+    void gamesHowellMatchesRPtukey() throws Exception {
+        for (Map<String, String> r : ReferenceCsv.rows("games_howell.csv")) {
+            double[] a = Arrays.stream(r.get("a").split(" ")).mapToDouble(Double::parseDouble).toArray();
+            double[] b = Arrays.stream(r.get("b").split(" ")).mapToDouble(Double::parseDouble).toArray();
+            WelchTest.Result w = WelchTest.test(a, b, 0.95);
+            assertEquals(ReferenceCsv.number(r, "t"), w.t(), 1e-9);
+            GamesHowell gh = GamesHowell.of(w, (int) ReferenceCsv.number(r, "k"));
+            assertEquals(ReferenceCsv.number(r, "p"), gh.p(), 5e-6);
+            double half = ReferenceCsv.number(r, "half_width");
+            assertEquals(half, (gh.upper() - gh.lower()) / 2, 1e-3 * half);
+        }
+    }
+
+    /**
      * Weighted least-squares reconciliation against R 4.2, which solves it another way (substituting the
      * constraint and fitting with lm weights; reconciliation.csv). Tolerance 1e-12 g on adjusted metal
      * (values ~0.08 g; double rounding only) and 1e-9 on χ².

@@ -54,6 +54,15 @@ class TestworkReaderTest {
         assertEquals(ProductRole.LOSS, s.products().get(1).role());
     }
 
+    /** A lab duplicate (label ending -LD) is averaged with its original: one pulp, one replicate. */
+    @Test
+    void labDuplicateOfAHeadIsAveragedWithItsOriginal(@TempDir Path dir) throws IOException {
+        Testwork t = read(dir, "feed,replicate,Au_g/t\nF1,1,300\nF1,2,310\nF1,2-LD,314\n",
+                "test_id,condition,feed,charge_g,product,mass_g,Au_g/t\nT1,A,F1,50,button,30,500\n");
+        assertEquals(2, t.heads("F1", "Au").size());
+        assertEquals(312, t.heads("F1", "Au").get(1).value(), 1e-12);
+    }
+
     @Test
     void missingColumnNamesFileAndFix(@TempDir Path dir) {
         InputException e = assertThrows(InputException.class, () -> read(dir, HEADS,
