@@ -83,6 +83,8 @@ out = {
     "wilcoxonTies": {"nNonZero": int(np.sum(td != 0)), "statistic": wap.statistic, "p": wap.pvalue},
     "pairedTTies": {"t": ttt.statistic, "p": ttt.pvalue},
     # Upper tails P(X >= x) of the control-line exceedance counts of ThompsonHowarthTest's constructed case.
+    # Upper tail of chi-square used by BatchDispersionTest.
+    "chiSquareUpperTail": {"x20_df5": stats.chi2.sf(20, 5)},
     "binomialUpperTail": {"n58_x13_p010": stats.binom.sf(12, 58, 0.10), "n58_x8_p001": stats.binom.sf(7, 58, 0.01)},
 }
 with open("bias_reference.json", "w") as f:

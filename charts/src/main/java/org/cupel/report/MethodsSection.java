@@ -58,8 +58,7 @@ public final class MethodsSection {
         List<List<String>> settings = new ArrayList<>();
         flatten("", config.tree(), settings);
         blocks.add(new ReportBlock.Paragraph(settings.isEmpty()
-                ? "No setting was changed in the project config (" + config.source() + "): every threshold is at its "
-                        + "documented default."
+                ? "No setting was changed in a project config file: every threshold is at its documented default."
                 : "Settings changed in the project config (" + config.source() + "); every other setting is at its "
                         + "documented default:"));
         if (!settings.isEmpty()) {

@@ -24,7 +24,7 @@ import java.util.function.Function;
 /**
  * Renders a {@link QcReport} as a paginated PDF with OpenPDF: a title page, one chapter per section (each
  * a PDF bookmark, starting on a new page), a running header (project, "QC appendix") and "page n of m"
- * footer, tables whose header row repeats on every page they run over and whose rows are never split
+ * footer, tables whose caption and header row repeat on every page they run over and whose rows are not split
  * mid-line, and charts from print-resolution PNGs scaled to the text width.
  */
 public final class PdfReport {
@@ -151,10 +151,6 @@ public final class PdfReport {
     }
 
     private void addTable(Chapter ch, ReportTable t) {
-        Paragraph caption = new Paragraph(t.title(), fonts.bodyBold());
-        caption.setSpacingBefore(8f);
-        caption.setKeepTogether(true);
-        ch.add(caption);
         PdfPTable table = new PdfPTable(t.columns().size());
         float available = doc.getPageSize().getWidth() - 2 * MARGIN_X;
         float[] widths = PdfTableWidths.of(t, fonts.bold(), fonts.regular(), TABLE_FONT, available);
@@ -166,10 +162,18 @@ public final class PdfReport {
         table.setTotalWidth(sum > available ? scaled(widths, available / sum) : widths);
         table.setLockedWidth(true);
         table.setHorizontalAlignment(Element.ALIGN_LEFT);
-        table.setHeaderRows(1);
-        table.setSplitLate(false);
+        // The caption is a header row too: it never strands at a page foot and repeats over each page.
+        table.setHeaderRows(2);
+        // A row that does not fit moves whole to the next page; only a row taller than a page is split.
+        table.setSplitLate(true);
         table.setSplitRows(true);
-        table.setSpacingBefore(3f);
+        table.setSpacingBefore(10f);
+        PdfPCell caption = new PdfPCell(new Phrase(t.title(), fonts.bodyBold()));
+        caption.setColspan(t.columns().size());
+        caption.setBorder(Rectangle.NO_BORDER);
+        caption.setPaddingLeft(0f);
+        caption.setPaddingBottom(4f);
+        table.addCell(caption);
         for (String c : t.columns()) {
             PdfPCell cell = new PdfPCell(new Phrase(c, fonts.tableHead()));
             cell.setBackgroundColor(new Color(234, 236, 240));

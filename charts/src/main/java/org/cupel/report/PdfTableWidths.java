@@ -11,7 +11,7 @@ final class PdfTableWidths {
     private static final float PADDING = 8f;
     private static final float CAP = 170f;
     /** Unbreakable tokens (IDs, file names) longer than this may wrap. */
-    private static final float WORD_CAP = 90f;
+    private static final float WORD_CAP = 62f;
 
     private PdfTableWidths() {
     }
@@ -20,6 +20,7 @@ final class PdfTableWidths {
         int n = t.columns().size();
         float[] min = new float[n];
         float[] want = new float[n];
+        float[] full = new float[n];
         int rows = Math.min(t.rows().size(), TableLimit.SHOWN);
         for (int c = 0; c < n; c++) {
             String header = t.columns().get(c);
@@ -36,6 +37,7 @@ final class PdfTableWidths {
                 }
             }
             min[c] = Math.max(min[c], Math.min(word, WORD_CAP) + PADDING);
+            full[c] = Math.max(min[c], longest);
             want[c] = Math.max(min[c], Math.min(longest, CAP));
         }
         float total = 0;
@@ -44,13 +46,33 @@ final class PdfTableWidths {
             total += want[c];
             minTotal += min[c];
         }
-        if (total <= available || total <= minTotal) {
+        if (total <= available) {
+            return widenCapped(want, full, available - total);
+        }
+        if (total <= minTotal) {
             return want;
         }
         float keep = Math.max(0f, (available - minTotal) / (total - minTotal));
         float[] out = new float[n];
         for (int c = 0; c < n; c++) {
             out[c] = min[c] + (want[c] - min[c]) * keep;
+        }
+        return out;
+    }
+
+    /** Spare width goes to the capped (long-text) columns, in proportion to what they lack, so they wrap less. */
+    private static float[] widenCapped(float[] want, float[] full, float spare) {
+        float lacking = 0;
+        for (int c = 0; c < want.length; c++) {
+            lacking += full[c] - want[c];
+        }
+        if (lacking <= 0) {
+            return want;
+        }
+        float share = Math.min(1f, spare / lacking);
+        float[] out = new float[want.length];
+        for (int c = 0; c < want.length; c++) {
+            out[c] = want[c] + (full[c] - want[c]) * share;
         }
         return out;
     }

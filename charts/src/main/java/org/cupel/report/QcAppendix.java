@@ -3,13 +3,29 @@ package org.cupel.report;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
+import org.cupel.censored.AnalyteCensoring;
+import org.cupel.censored.KaplanMeier;
+import org.cupel.control.BatchReview;
+import org.cupel.control.crm.CrmReview;
+import org.cupel.duplicates.DuplicateSettings;
+import org.cupel.duplicates.PairExtraction;
 import org.cupel.project.Project;
 import org.cupel.project.ProjectSummary;
+import org.cupel.recovery.RecoveryResult;
+import org.cupel.report.censored.DetectionLimitSection;
+import org.cupel.report.control.BlankSection;
+import org.cupel.report.control.CrmSection;
+import org.cupel.report.control.InsertionRateSection;
+import org.cupel.report.control.VerdictSection;
+import org.cupel.report.duplicates.DuplicatesSection;
+import org.cupel.report.recovery.TestworkSection;
 
 /**
- * The one place that lists the sections of the QC appendix, in the order a reviewer reads them: scope,
- * data exceptions, the analyses' sections, methods and references, cautions. Each section builder
- * formats results of core analyses; nothing is computed here.
+ * The one place that lists the sections of the QC appendix, in the order a reviewer reads them: scope and
+ * insertion rates, batch verdicts and the re-assay list, data exceptions and the detection-limit
+ * treatment, CRMs, blanks, duplicates, metallurgical testwork (when given), methods and references,
+ * cautions. The core analyses compute every result; each section builder only formats them.
  */
 public final class QcAppendix {
     private QcAppendix() {
@@ -18,15 +34,34 @@ public final class QcAppendix {
     /**
      * The report for {@code project}, which is already narrowed to the batches under review.
      *
+     * @param testwork the recovery results of the project's testwork, when it has any
      * @param selection the batches covered, in words, for the title page
      * @param generated generation time shown in the HTML and PDF
      */
-    public static QcReport build(Project project, String selection, Instant generated) {
+    public static QcReport build(Project project, Optional<RecoveryResult> testwork, String selection,
+                                 Instant generated) {
+        CrmReview crms = CrmReview.of(project);
+        BatchReview batches = BatchReview.of(project, crms.outcomes());
+        DuplicateSettings duplicates = project.config().section("duplicates", DuplicateSettings.class,
+                DuplicateSettings.DEFAULTS);
         List<ReportSection> sections = new ArrayList<>();
         sections.add(ScopeSection.build(ProjectSummary.of(project), selection));
+        sections.add(InsertionRateSection.build(batches.insertion()));
+        sections.add(VerdictSection.build(batches.verdicts(), batches.reassay()));
         sections.add(DataExceptionsSection.build(project));
+        sections.add(DetectionLimitSection.build(AnalyteCensoring.of(project, KaplanMeier.Options.DEFAULTS)));
+        sections.add(CrmSection.of(crms));
+        sections.add(BlankSection.build(batches.blanks()));
+        sections.add(DuplicatesSection.build(PairExtraction.analyse(project, duplicates),
+                path -> project.config().isUserSet(path)));
+        testwork.ifPresent(r -> sections.add(TestworkSection.build(r)));
+        sections.add(MethodsSection.build(sections, project.config()));
         sections.add(CautionsSection.build());
-        sections.add(sections.size() - 1, MethodsSection.build(sections, project.config()));
         return new QcReport(project.name(), selection, generated, sections);
+    }
+
+    /** The report of a project without testwork. */
+    public static QcReport build(Project project, String selection, Instant generated) {
+        return build(project, Optional.empty(), selection, generated);
     }
 }

@@ -23,6 +23,7 @@ public final class ScopeSection {
         blocks.add(new ReportBlock.Paragraph(overview(s, selection)));
         blocks.add(new ReportBlock.Table(roles(s)));
         blocks.add(new ReportBlock.Table(batches(s)));
+        blocks.add(new ReportBlock.Table(batchRoles(s)));
         blocks.add(new ReportBlock.Table(analytes(s)));
         Map<String, Object> h = new LinkedHashMap<>();
         h.put("samples", s.samples());
@@ -61,23 +62,33 @@ public final class ScopeSection {
     }
 
     private static ReportTable batches(ProjectSummary s) {
+        List<List<String>> rows = new ArrayList<>();
+        for (ProjectSummary.BatchCount b : s.batches()) {
+            rows.add(List.of(b.batch().id(), b.batch().lab(),
+                    b.batch().reported() == null ? "unknown" : b.batch().reported().toString(), b.batch().file(),
+                    count(b.samples())));
+        }
+        return new ReportTable("scope-batches", "Batches", List.of("Batch", "Lab", "Reported", "File", "Samples"),
+                rows, "In the order the batches were read.");
+    }
+
+    private static ReportTable batchRoles(ProjectSummary s) {
         List<QcRole> shown = new ArrayList<>();
         for (QcRole r : QcRole.values()) {
             if (s.samplesByRole().get(r) > 0) {
                 shown.add(r);
             }
         }
-        List<String> cols = new ArrayList<>(List.of("Batch", "Lab", "Reported", "File", "Samples"));
+        List<String> cols = new ArrayList<>(List.of("Batch", "File"));
         shown.forEach(r -> cols.add(capitalise(r.label())));
         List<List<String>> rows = new ArrayList<>();
         for (ProjectSummary.BatchCount b : s.batches()) {
-            List<String> row = new ArrayList<>(List.of(b.batch().id(), b.batch().lab(),
-                    b.batch().reported() == null ? "unknown" : b.batch().reported().toString(), b.batch().file(),
-                    count(b.samples())));
+            List<String> row = new ArrayList<>(List.of(b.batch().id(), b.batch().file()));
             shown.forEach(r -> row.add(count(b.samplesByRole().get(r))));
             rows.add(row);
         }
-        return new ReportTable("scope-batches", "Batches", cols, rows, "In the order the batches were read.");
+        return new ReportTable("scope-batch-roles", "Samples per batch by QC role", cols, rows,
+                "Roles that occur in the project; a batch is one lab job as read from one file.");
     }
 
     private static ReportTable analytes(ProjectSummary s) {

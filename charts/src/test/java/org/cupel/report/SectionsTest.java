@@ -17,10 +17,10 @@ class SectionsTest {
     void scopeListsBatchesRolesAndLimits() {
         ReportSection s = ScopeSection.build(ProjectSummary.of(project), "all batches");
         ReportTable batches = table(s, "scope-batches");
-        assertEquals(List.of("Batch", "Lab", "Reported", "File", "Samples", "Routine", "CRM", "Blank",
-                "Field duplicate"), batches.columns());
-        assertEquals(List.of("JOB-2", "North & Sons <Lab>", "2025-03-10", "lab1.csv", "3", "2", "0", "0", "1"),
-                batches.rows().get(1));
+        assertEquals(List.of("JOB-2", "North & Sons <Lab>", "2025-03-10", "lab1.csv", "3"), batches.rows().get(1));
+        ReportTable roles = table(s, "scope-batch-roles");
+        assertEquals(List.of("Batch", "File", "Routine", "CRM", "Blank", "Field duplicate"), roles.columns());
+        assertEquals(List.of("JOB-2", "lab1.csv", "2", "0", "0", "1"), roles.rows().get(1));
         ReportTable analytes = table(s, "scope-analytes");
         assertEquals(List.of("Au", "g/t", "FA-AAS", "6", "0.005", "1", "0"), analytes.rows().get(0));
         assertEquals(6, s.headlines().get("samples"));

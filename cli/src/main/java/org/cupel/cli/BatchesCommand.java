@@ -17,8 +17,10 @@ import org.cupel.control.InsertionRate;
 import org.cupel.control.ReassayEntry;
 import org.cupel.control.Verdict;
 import org.cupel.control.VerdictReason;
+import org.cupel.control.crm.CrmReview;
 import org.cupel.ingest.ProjectLoader;
 import org.cupel.project.Project;
+import org.cupel.report.CsvTables;
 import org.cupel.report.control.VerdictSection;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -52,10 +54,10 @@ final class BatchesCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         Project project = ProjectLoader.load(folder);
-        BatchReview review = BatchReview.of(project, List.of());
+        BatchReview review = BatchReview.of(project, CrmReview.of(project).outcomes());
         if (reassayCsv != null) {
             try {
-                ReassayCsv.write(VerdictSection.reassayTable(review.reassay()), reassayCsv);
+                CsvTables.write(VerdictSection.reassayTable(review.reassay()), reassayCsv);
             } catch (IOException e) {
                 throw new UncheckedIOException("could not write " + reassayCsv + ": " + e.getMessage(), e);
             }

@@ -6,6 +6,7 @@ import java.util.concurrent.Callable;
 import org.cupel.assay.Numbers;
 import org.cupel.censored.CensoredAnalysis;
 import org.cupel.censored.CensoredSample;
+import org.cupel.censored.CensoredSettings;
 import org.cupel.censored.CensoredSummary;
 import org.cupel.censored.Censoring;
 import org.cupel.censored.Estimate;
@@ -20,7 +21,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code cupel censored}: censored-data summary of one column of a CSV. */
-@Command(name = "censored",
+@Command(name = "censored", mixinStandardHelpOptions = true,
         description = {"Summarise one column with values below detection (<0.005) and above range (>10), several "
                 + "limits allowed: Kaplan–Meier, ROS, maximum likelihood (normal and lognormal), a substitution "
                 + "comparison, and which estimate to use (Helsel 2012)."},
@@ -54,10 +55,9 @@ public final class CensoredCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         ColumnReader.Column col = ColumnReader.read(file, column);
-        KaplanMeier.Options options = new KaplanMeier.Options(kmLowest == KmLowest.detect
-                ? KaplanMeier.LowestMass.AT_LOWEST_DETECT : KaplanMeier.LowestMass.AT_LOWEST_LIMIT,
-                KaplanMeier.SdDivisor.DISTRIBUTION);
-        CensoredAnalysis a = CensoredAnalysis.of(CensoredSample.of(col.values()), options);
+        CensoredSettings settings = CensoredSettings.DEFAULTS.withKmLowestMass(kmLowest == KmLowest.detect
+                ? KaplanMeier.LowestMass.AT_LOWEST_DETECT : KaplanMeier.LowestMass.AT_LOWEST_LIMIT);
+        CensoredAnalysis a = CensoredAnalysis.of(CensoredSample.of(col.values()), settings);
         boolean drawable = !a.ros().points().isEmpty();
         if (chart != null && drawable) {
             PngWriter.write(CensoredProbabilityPlot.create(a.ros(), col.header(), "Censored probability plot: "

@@ -30,6 +30,7 @@ import picocli.CommandLine.Option;
             DlCheckCommand.class,
             DuplicatesCommand.class,
             RecoveryCommand.class,
+            ReportCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 

@@ -11,7 +11,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code cupel dl-check}: detection limits estimated from replicate blanks, to check a lab's stated limit. */
-@Command(name = "dl-check",
+@Command(name = "dl-check", mixinStandardHelpOptions = true,
         description = {"Estimate a method's detection limit from replicate blank (or low-spike) results in one "
                 + "column: 3·s, Currie (1968) L_C and L_D, and the US EPA MDL (40 CFR 136 App. B)."},
         footer = {"", "Example:", "  cupel dl-check blank-replicates.csv --column Au_ppm"})

@@ -144,7 +144,7 @@ public final class DuplicatesCommand implements Callable<Integer> {
 
     private static void print(PrintWriter out, DuplicateReport r) {
         String unit = r.unit().isEmpty() ? "" : " (" + r.unit() + ")";
-        out.println(r.analyte() + unit + ": duplicate precision");
+        out.println(r.analyte() + unit + ": duplicate precision (" + r.detectionLimits() + ")");
         TextTable t = new TextTable("Type", "Pairs", "Used", "Excluded", "HARD limit", "Within", "Rule",
                 "RMS CV (95% CI)", "Mean CV (biased)", "s_r");
         for (DuplicateSetResult s : r.sets()) {
@@ -177,10 +177,14 @@ public final class DuplicatesCommand implements Callable<Integer> {
             out.println(s.type().label() + ": " + s.bias().verdict());
             for (BatchPrecision b : s.batches()) {
                 if (b.flagged()) {
-                    out.println("  batch " + (b.batch().isEmpty() ? "(none)" : b.batch()) + " fails: "
-                            + String.format(Locale.ROOT, "%.1f%%", b.precision().percentWithinLimit().value())
-                            + " of " + b.precision().usedRelative() + " pairs within HARD "
-                            + pct(b.precision().hardLimit(), 0) + ", RMS CV " + interval(b.precision().rmsCv()));
+                    PrecisionSummary bp = b.precision();
+                    out.println("  batch " + (b.batch().isEmpty() ? "(none)" : b.batch()) + ": "
+                            + String.format(Locale.ROOT, "%.1f%%", bp.percentWithinLimit().value()) + " of "
+                            + bp.usedRelative() + " pairs within HARD " + pct(bp.hardLimit(), 0)
+                            + (b.failsRule() ? " (fails the rule)" : "") + ", RMS CV " + interval(bp.rmsCv())
+                            + (b.lessPrecise() ? String.format(Locale.ROOT,
+                            " — less precise than the set (%.1f× its RMS CV, chi-square p = %.2g)",
+                            b.dispersion().ratio(), b.dispersion().pValue()) : ""));
                 }
             }
             List<OutlierPair> o = s.outliers();

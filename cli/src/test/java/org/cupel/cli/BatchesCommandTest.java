@@ -14,7 +14,10 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** {@code cupel batches} on the demo project, whose planted contaminated blank fails its batch (docs/demo.md). */
+/**
+ * {@code cupel batches} on the demo project (docs/demo.md): the planted contaminated blank fails its batch
+ * and sends the samples after it back; the drifting CRM's failures add their brackets.
+ */
 class BatchesCommandTest {
     @TempDir
     static Path dir;
@@ -55,12 +58,17 @@ class BatchesCommandTest {
             }
         }
         JsonNode entries = doc.get("reassay").get("entries");
-        assertTrue(entries.size() > 0);
+        int byBlank = 0;
         for (JsonNode e : entries) {
-            assertEquals(batch, e.get("batch").asText());
-            assertTrue(e.get("position").asInt() > carry.get("observation").get("position").asInt());
-            assertEquals(blank, e.get("triggeredBy").get(0).asText());
+            if (e.get("triggeredBy").toString().contains("\"" + blank + "\"")) {
+                byBlank++;
+                assertEquals(batch, e.get("batch").asText());
+                assertTrue(e.get("position").asInt() > carry.get("observation").get("position").asInt());
+            }
         }
+        assertTrue(byBlank > 0);
+        // The drifting CRM of the demo fails late batches too: their samples are listed as well.
+        assertTrue(entries.size() > byBlank);
         List<String> lines = Files.readAllLines(csv);
         assertEquals("Sample ID,Batch,Position,Analyte,Triggered by,Reason", lines.get(0));
         assertEquals(entries.size() + 1, lines.size());

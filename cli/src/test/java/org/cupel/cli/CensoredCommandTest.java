@@ -114,4 +114,12 @@ class CensoredCommandTest {
         Run text = run("dl-check", csv.toString(), "--column", "Au_ppm");
         assertTrue(text.out().contains("Currie L_D"), text.out());
     }
+
+    @Test
+    void helpShowsAnExample() {
+        Run r = run("censored", "--help");
+        assertEquals(0, r.code());
+        assertTrue(r.out().contains("cupel censored assays.csv --column Au_ppm"), r.out());
+        assertTrue(run("dl-check", "--help").out().contains("cupel dl-check"));
+    }
 }

@@ -51,7 +51,8 @@ class DuplicatesCommandTest {
         assertTrue(r.out().contains("Au (g/t): duplicate precision"), r.out());
         assertTrue(r.out().contains("pulp duplicate"), r.out());
         assertTrue(r.out().contains("Thompson–Howarth"), r.out());
-        assertTrue(r.out().contains("batch J2 fails"), r.out());
+        assertTrue(r.out().contains("batch J2: ") && r.out().contains("less precise than the set"), r.out());
+        assertTrue(!r.out().contains("batch J1:"), r.out());
     }
 
     @Test
@@ -88,5 +89,15 @@ class DuplicatesCommandTest {
         assertEquals(2, r.code());
         assertTrue(r.err().contains("'original' and 'duplicate'"), r.err());
         assertEquals(2, run("duplicates", f.toString(), "--type", "crm").code());
+    }
+
+    @Test
+    void runsOnTheDemoProjectAndFlagsThePoorPulpBatch() throws Exception {
+        Path demo = dir.resolve("demo");
+        assertEquals(0, run("demo", demo.toString()).code());
+        Run r = run("duplicates", demo.toString(), "--analyte", "Au", "--type", "pulp");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("less precise than the set"), r.out());
+        assertEquals(2, run("duplicates", demo.toString(), "--analyte", "Zn").code());
     }
 }

@@ -35,15 +35,15 @@ public record AnalyteCensoring(String analyteLabel, List<Double> detectionLimits
         methodCounts = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(methodCounts));
     }
 
-    public static List<AnalyteCensoring> of(Project project, KaplanMeier.Options options) {
+    public static List<AnalyteCensoring> of(Project project, CensoredSettings settings) {
         List<AnalyteCensoring> out = new ArrayList<>();
         for (AnalyteColumn column : project.analytes().values()) {
-            out.add(of(column, project.samples(), options));
+            out.add(of(column, project.samples(), settings));
         }
         return out;
     }
 
-    public static AnalyteCensoring of(AnalyteColumn column, SampleTable samples, KaplanMeier.Options options) {
+    public static AnalyteCensoring of(AnalyteColumn column, SampleTable samples, CensoredSettings settings) {
         TreeSet<Double> dls = new TreeSet<>();
         TreeSet<Double> uls = new TreeSet<>();
         int below = 0;
@@ -71,7 +71,7 @@ public record AnalyteCensoring(String analyteLabel, List<Double> detectionLimits
         for (int row : samples.rowsWithRole(QcRole.ROUTINE)) {
             routine.add(column.value(row));
         }
-        CensoredAnalysis analysis = CensoredAnalysis.of(CensoredSample.of(routine), options);
+        CensoredAnalysis analysis = CensoredAnalysis.of(CensoredSample.of(routine), settings);
         return new AnalyteCensoring(column.analyte().label(), new ArrayList<>(dls), new ArrayList<>(uls),
                 column.size() - missing, below, above, missing, column.reportedMethodCounts(), analysis);
     }

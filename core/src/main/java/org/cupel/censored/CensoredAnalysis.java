@@ -23,9 +23,10 @@ public record CensoredAnalysis(CensoredSample sample, KaplanMeier.Result kaplanM
         substitution = List.copyOf(substitution);
     }
 
-    public static CensoredAnalysis of(CensoredSample sample, KaplanMeier.Options kmOptions) {
-        KaplanMeier.Result km = KaplanMeier.fit(sample, kmOptions);
-        Ros.Result ros = Ros.fit(sample);
+    public static CensoredAnalysis of(CensoredSample sample, CensoredSettings settings) {
+        KaplanMeier.Result km = KaplanMeier.fit(sample, settings.kmOptions());
+        Ros.Result ros = Ros.fit(sample, settings.bootstrapReplicates(), settings.bootstrapSeed(),
+                settings.bootstrapMaxN());
         CensoredMle.Result normal = CensoredMle.fit(sample, CensoredMle.Distribution.NORMAL);
         CensoredMle.Result lognormal = CensoredMle.fit(sample, CensoredMle.Distribution.LOGNORMAL);
         Recommendation rec = Recommendation.choose(sample, km.summary(), ros.summary(), lognormal.summary(),

@@ -15,18 +15,27 @@ final class CensoredLikelihood {
     private static final double LOG_SQRT_2PI = 0.5 * Math.log(2 * Math.PI);
 
     private final double[] exact;
+    private final double[] exactWeight;
     private final double[] low;
     private final double[] high;
+    private final double[] censoredWeight;
     private final boolean logScale;
 
     /** Value, gradient (∂/∂μ, ∂/∂τ) and Hessian (μμ, μτ, ττ) at one θ. */
     record Evaluation(double value, double gMu, double gTau, double hMuMu, double hMuTau, double hTauTau) {
     }
 
-    CensoredLikelihood(double[] exact, double[] low, double[] high, boolean logScale) {
+    /**
+     * Identical observations enter once with a weight (their count): assay values are rounded, so a large
+     * sample has far fewer distinct values than rows, and each evaluation costs only the distinct ones.
+     */
+    CensoredLikelihood(double[] exact, double[] exactWeight, double[] low, double[] high, double[] censoredWeight,
+                       boolean logScale) {
         this.exact = exact;
+        this.exactWeight = exactWeight;
         this.low = low;
         this.high = high;
+        this.censoredWeight = censoredWeight;
         this.logScale = logScale;
     }
 
@@ -38,14 +47,16 @@ final class CensoredLikelihood {
         double hmm = 0;
         double hmt = 0;
         double htt = 0;
-        for (double y : exact) {
+        for (int i = 0; i < exact.length; i++) {
+            double y = exact[i];
+            double w = exactWeight[i];
             double z = (y - mu) / sigma;
-            v += -LOG_SQRT_2PI - 0.5 * z * z - tau - (logScale ? y : 0);
-            gm += z / sigma;
-            gt += z * z - 1;
-            hmm += -1 / (sigma * sigma);
-            hmt += -2 * z / sigma;
-            htt += -2 * z * z;
+            v += w * (-LOG_SQRT_2PI - 0.5 * z * z - tau - (logScale ? y : 0));
+            gm += w * z / sigma;
+            gt += w * (z * z - 1);
+            hmm += -w / (sigma * sigma);
+            hmt += -2 * w * z / sigma;
+            htt += -2 * w * z * z;
         }
         double[] da = new double[5];
         double[] db = new double[5];
@@ -60,12 +71,13 @@ final class CensoredLikelihood {
             derivatives(zb, sigma, db);
             double pm = db[0] - da[0];
             double pt = db[1] - da[1];
-            v += Math.log(p);
-            gm += pm / p;
-            gt += pt / p;
-            hmm += (db[2] - da[2]) / p - pm * pm / (p * p);
-            hmt += (db[3] - da[3]) / p - pm * pt / (p * p);
-            htt += (db[4] - da[4]) / p - pt * pt / (p * p);
+            double w = censoredWeight[i];
+            v += w * Math.log(p);
+            gm += w * pm / p;
+            gt += w * pt / p;
+            hmm += w * ((db[2] - da[2]) / p - pm * pm / (p * p));
+            hmt += w * ((db[3] - da[3]) / p - pm * pt / (p * p));
+            htt += w * ((db[4] - da[4]) / p - pt * pt / (p * p));
         }
         return new Evaluation(v, gm, gt, hmm, hmt, htt);
     }

@@ -120,20 +120,50 @@ public final class CensoredMle {
     private static CensoredLikelihood likelihood(CensoredSample s, boolean log) {
         int nd = s.count(Censoring.DETECTED);
         double[] exact = new double[nd];
-        double[] lo = new double[s.size() - nd];
-        double[] hi = new double[s.size() - nd];
+        double[][] bounds = new double[s.size() - nd][];
         int k = 0;
         int c = 0;
         for (int i = 0; i < s.size(); i++) {
             if (s.kind(i) == Censoring.DETECTED) {
                 exact[k++] = log ? Math.log(s.lower(i)) : s.lower(i);
             } else {
-                lo[c] = s.kind(i) == Censoring.BELOW ? Double.NEGATIVE_INFINITY : scale(s.lower(i), log);
-                hi[c] = scale(s.upper(i), log);
-                c++;
+                double lo = s.kind(i) == Censoring.BELOW ? Double.NEGATIVE_INFINITY : scale(s.lower(i), log);
+                bounds[c++] = new double[] {lo, scale(s.upper(i), log)};
             }
         }
-        return new CensoredLikelihood(exact, lo, hi, log);
+        java.util.Arrays.sort(exact);
+        java.util.Arrays.sort(bounds, java.util.Comparator.<double[]>comparingDouble(b -> b[0])
+                .thenComparingDouble(b -> b[1]));
+        double[][] ex = runs(exact.length, i -> new double[] {exact[i]});
+        double[][] ce = runs(bounds.length, i -> bounds[i]);
+        return new CensoredLikelihood(column(ex, 0), column(ex, 1), column(ce, 0), column(ce, 1),
+                column(ce, 2), log);
+    }
+
+    /** Sorted keys collapsed to distinct keys followed by their count. */
+    private static double[][] runs(int n, java.util.function.IntFunction<double[]> key) {
+        List<double[]> out = new ArrayList<>();
+        int i = 0;
+        while (i < n) {
+            double[] kk = key.apply(i);
+            int j = i + 1;
+            while (j < n && java.util.Arrays.equals(key.apply(j), kk)) {
+                j++;
+            }
+            double[] row = java.util.Arrays.copyOf(kk, kk.length + 1);
+            row[kk.length] = j - i;
+            out.add(row);
+            i = j;
+        }
+        return out.toArray(new double[0][]);
+    }
+
+    private static double[] column(double[][] rows, int col) {
+        double[] out = new double[rows.length];
+        for (int i = 0; i < rows.length; i++) {
+            out[i] = rows[i][col];
+        }
+        return out;
     }
 
     private static double scale(double x, boolean log) {

@@ -128,6 +128,19 @@ public final class CensoredSample {
         return new CensoredSample(kinds.clone(), lo, hi, missing);
     }
 
+    /** The observations at {@code rows} (repeats allowed), for resampling. */
+    CensoredSample select(int[] rows) {
+        Censoring[] k = new Censoring[rows.length];
+        double[] lo = new double[rows.length];
+        double[] hi = new double[rows.length];
+        for (int i = 0; i < rows.length; i++) {
+            k[i] = kinds[rows[i]];
+            lo[i] = lower[rows[i]];
+            hi[i] = upper[rows[i]];
+        }
+        return new CensoredSample(k, lo, hi, 0);
+    }
+
     private double[] boundsOf(Censoring kind, double[] bound) {
         double[] out = new double[count(kind)];
         int k = 0;

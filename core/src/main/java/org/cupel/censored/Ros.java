@@ -56,6 +56,27 @@ public final class Ros {
     private Ros() {
     }
 
+    /**
+     * ROS with the mean's standard error and 95 % interval from {@code replicates} bootstrap resamples
+     * ({@link RosBootstrap}); {@code replicates = 0} gives the plain fit. Above {@code maxN} observations
+     * the bootstrap is skipped to bound run time, and the mean's note says so.
+     */
+    public static Result fit(CensoredSample sample, int replicates, long seed, int maxN) {
+        Result r = fit(sample);
+        if (replicates == 0 || !r.summary().isApplicable() || r.summary().nCensored() == 0) {
+            return r;
+        }
+        CensoredSummary s = r.summary();
+        Estimate mean = sample.size() > maxN
+                ? Estimate.of(s.mean().value(), s.mean().note() + "; bootstrap skipped for n above " + maxN
+                        + " (setting censored.bootstrapMaxN)")
+                : RosBootstrap.mean(sample, s.mean().value(), replicates, seed);
+        CensoredSummary withSe = new CensoredSummary(s.method(), s.n(), s.nCensored(), mean, s.sd(), s.median(),
+                s.percentiles(), s.notes());
+        return new Result(r.points(), r.limits(), r.exceedance(), r.intercept(), r.slope(), withSe);
+    }
+
+    /** ROS without bootstrap: the mean carries no standard error. */
     public static Result fit(CensoredSample sample) {
         int n = sample.size();
         int nCens = sample.censoredCount();

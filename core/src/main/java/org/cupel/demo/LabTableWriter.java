@@ -59,24 +59,22 @@ final class LabTableWriter implements AutoCloseable {
 
     /** The text a lab writes for {@code value}: censored at the method's limits in this file's convention. */
     static String cellText(DemoAnalyte a, double value, LabFileStyle style) {
-        if (value < a.detectionLimit()) {
-            return (style.negativeBelowDetection() ? "-" : "<") + a.detectionLimitText();
-        }
-        if (value > a.upperLimit()) {
-            return ">" + a.upperLimitText();
-        }
-        return FixedDecimal.format(value, a.decimals());
+        return appendCell(new StringBuilder(), a, value, style, a.detectionLimitText(), a.upperLimitText()).toString();
     }
 
     private void cell(int column, double value) {
-        DemoAnalyte a = columns.get(column);
+        appendCell(line, columns.get(column), value, style, detectionText[column], upperText[column]);
+    }
+
+    private static StringBuilder appendCell(StringBuilder sb, DemoAnalyte a, double value, LabFileStyle style,
+                                            String detectionText, String upperText) {
         if (value < a.detectionLimit()) {
-            line.append(style.negativeBelowDetection() ? '-' : '<').append(detectionText[column]);
-        } else if (value > a.upperLimit()) {
-            line.append('>').append(upperText[column]);
-        } else {
-            FixedDecimal.append(line, value, a.decimals());
+            return sb.append(style.negativeBelowDetection() ? '-' : '<').append(detectionText);
         }
+        if (value > a.upperLimit()) {
+            return sb.append('>').append(upperText);
+        }
+        return FixedDecimal.append(sb, value, a.decimals());
     }
 
     private void flushLine() throws IOException {

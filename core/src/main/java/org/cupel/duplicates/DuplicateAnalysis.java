@@ -22,6 +22,15 @@ public final class DuplicateAnalysis {
      */
     public static DuplicateReport run(String analyte, String unit, List<DuplicatePair> pairs,
                                       List<OrphanDuplicate> orphans, double[] grades, DuplicateSettings settings) {
+        return run(analyte, unit, pairs, orphans, grades, settings, "as stated with each value");
+    }
+
+    /**
+     * @param detectionLimits where the detection limits came from, for the report
+     */
+    public static DuplicateReport run(String analyte, String unit, List<DuplicatePair> pairs,
+                                      List<OrphanDuplicate> orphans, double[] grades, DuplicateSettings settings,
+                                      String detectionLimits) {
         List<DuplicateSetResult> sets = new ArrayList<>();
         for (QcRole type : TYPE_ORDER) {
             List<DuplicatePair> ofType = pairs.stream().filter(p -> p.type() == type).toList();
@@ -29,7 +38,7 @@ public final class DuplicateAnalysis {
                 sets.add(analyseSet(analyte, unit, type, ofType, grades, settings));
             }
         }
-        return new DuplicateReport(analyte, unit, settings, sets, orphans);
+        return new DuplicateReport(analyte, unit, settings, sets, orphans, detectionLimits);
     }
 
     static DuplicateSetResult analyseSet(String analyte, String unit, QcRole type, List<DuplicatePair> pairs,
@@ -43,18 +52,20 @@ public final class DuplicateAnalysis {
         List<OutlierPair> outliers = outliers(screened, model, settings.hardLimit(type));
         return new DuplicateSetResult(analyte, unit, type, precision, model, bias, outliers,
                 new DuplicateSetResult.PairValues(abs.a(), abs.b(), rel.a(), rel.b()),
-                batches(type, pairs, settings));
+                batches(type, pairs, precision.rmsCv(), settings));
     }
 
-    private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, DuplicateSettings settings) {
+    private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, Estimate setRmsCv,
+                                                DuplicateSettings settings) {
         Map<String, List<DuplicatePair>> byBatch = new LinkedHashMap<>();
         for (DuplicatePair p : pairs) {
             byBatch.computeIfAbsent(p.batch(), k -> new ArrayList<>()).add(p);
         }
         List<BatchPrecision> out = new ArrayList<>();
         for (Map.Entry<String, List<DuplicatePair>> e : byBatch.entrySet()) {
-            out.add(new BatchPrecision(e.getKey(),
-                    PrecisionMeasures.summarise(type, PairScreen.screen(e.getValue(), settings), settings)));
+            PrecisionSummary p = PrecisionMeasures.summarise(type, PairScreen.screen(e.getValue(), settings), settings);
+            out.add(new BatchPrecision(e.getKey(), p, BatchDispersion.test(p.rmsCv(), setRmsCv),
+                    settings.batchTestAlpha()));
         }
         return out;
     }

@@ -11,9 +11,10 @@ import java.util.List;
  * @param settings the settings in force
  * @param sets one result per type, in the order field, coarse, pulp, lab repeat, umpire
  * @param orphans duplicates whose original is missing
+ * @param detectionLimits where the detection limits for the limit-multiple rule came from
  */
 public record DuplicateReport(String analyte, String unit, DuplicateSettings settings, List<DuplicateSetResult> sets,
-                              List<OrphanDuplicate> orphans) {
+                              List<OrphanDuplicate> orphans, String detectionLimits) {
     public DuplicateReport {
         sets = List.copyOf(sets);
         orphans = List.copyOf(orphans);

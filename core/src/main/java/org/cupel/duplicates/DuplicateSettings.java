@@ -22,24 +22,26 @@ import org.cupel.assay.QcRole;
  * @param bootstrapResamples bootstrap resamples for intervals (default 1000)
  * @param bootstrapSeed seed of every bootstrap, so reruns give the same intervals (default 20240601)
  * @param precisionGrades grades at which to state precision; empty means the project's CRM grades
+ * @param batchTestAlpha significance level of the test of a batch's RMS CV against its set's (default 0.01)
  */
 public record DuplicateSettings(double limitMultipleOfDetection, boolean censoredAtHalfLimit,
                                 double acceptancePercent, double fieldHardLimitPercent,
                                 double coarseHardLimitPercent, double pulpHardLimitPercent,
                                 double labRepeatHardLimitPercent, double umpireHardLimitPercent, int thGroupSize,
                                 int thMinimumPairs, int bootstrapResamples, long bootstrapSeed,
-                                List<Double> precisionGrades) {
+                                List<Double> precisionGrades, double batchTestAlpha) {
 
     public static final DuplicateSettings DEFAULTS = new DuplicateSettings(10, false, 90, 30, 20, 10, 10, 10, 11,
-            50, 1000, 20240601L, List.of());
+            50, 1000, 20240601L, List.of(), 0.01);
 
     public DuplicateSettings {
         precisionGrades = precisionGrades == null ? List.of() : List.copyOf(precisionGrades);
         if (!(limitMultipleOfDetection >= 0) || !(acceptancePercent > 0 && acceptancePercent <= 100)
-                || thGroupSize < 3 || thMinimumPairs < thGroupSize * 2 || bootstrapResamples < 100) {
+                || thGroupSize < 3 || thMinimumPairs < thGroupSize * 2 || bootstrapResamples < 100
+                || !(batchTestAlpha > 0 && batchTestAlpha < 1)) {
             throw new IllegalArgumentException("duplicates settings out of range: limitMultipleOfDetection >= 0, "
                     + "0 < acceptancePercent <= 100, thGroupSize >= 3, thMinimumPairs >= 2 groups, "
-                    + "bootstrapResamples >= 100");
+                    + "bootstrapResamples >= 100, 0 < batchTestAlpha < 1");
         }
     }
 
@@ -70,12 +72,13 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
     public DuplicateSettings withLimitMultipleOfDetection(double multiple) {
         return new DuplicateSettings(multiple, censoredAtHalfLimit, acceptancePercent, fieldHardLimitPercent,
                 coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent, umpireHardLimitPercent,
-                thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, precisionGrades);
+                thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, precisionGrades, batchTestAlpha);
     }
 
     public DuplicateSettings withPrecisionGrades(List<Double> grades) {
         return new DuplicateSettings(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent,
                 fieldHardLimitPercent, coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent,
-                umpireHardLimitPercent, thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, grades);
+                umpireHardLimitPercent, thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, grades,
+                batchTestAlpha);
     }
 }

@@ -27,6 +27,11 @@ public final class PairExtraction {
     }
 
     public static Extracted extract(Project project, AnalyteColumn column) {
+        return extract(project, column, DetectionLimits.of(column));
+    }
+
+    /** As {@link #extract(Project, AnalyteColumn)}, filling in limits the values do not state from {@code limits}. */
+    public static Extracted extract(Project project, AnalyteColumn column, DetectionLimits limits) {
         SampleTable samples = project.samples();
         List<DuplicatePair> pairs = new ArrayList<>();
         List<OrphanDuplicate> orphans = new ArrayList<>();
@@ -48,7 +53,9 @@ public final class PairExtraction {
                         "original sample " + ref + " is not in the project"));
                 continue;
             }
-            pairs.add(new DuplicatePair(id, ref, batch, role, column.value(original.getAsInt()), column.value(row)));
+            int o = original.getAsInt();
+            pairs.add(new DuplicatePair(id, ref, batch, role, limits.complete(column.value(o), column.method(o)),
+                    limits.complete(column.value(row), column.method(row))));
         }
         return new Extracted(pairs, orphans);
     }
@@ -77,7 +84,8 @@ public final class PairExtraction {
             if (analyte != null && !analyte.equals(name)) {
                 continue;
             }
-            Extracted all = extract(project, column);
+            DetectionLimits limits = DetectionLimits.of(column);
+            Extracted all = extract(project, column, limits);
             Extracted e = type == null ? all : new Extracted(
                     all.pairs().stream().filter(p -> p.type() == type).toList(),
                     all.orphans().stream().filter(o -> o.type() == type).toList());
@@ -85,7 +93,7 @@ public final class PairExtraction {
                 continue;
             }
             out.add(DuplicateAnalysis.run(name, column.analyte().unit().symbol(), e.pairs(), e.orphans(),
-                    grades(project, name, settings), settings));
+                    grades(project, name, settings), settings, limits.describe()));
         }
         return out;
     }

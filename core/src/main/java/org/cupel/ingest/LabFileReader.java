@@ -177,18 +177,19 @@ public final class LabFileReader {
 
         private List<LabRow.Result> results(RawRow row, String id) {
             List<LabRow.Result> out = new ArrayList<>(columns.size());
+            // One location per row, shared by its values; a cell's own column is set only on an issue.
+            SourceLocation rowAt = t.at(row);
             for (LabColumn col : columns) {
-                SourceLocation at = t.at(row, col.index());
-                ParsedValue p = values.parse(row.cell(col.index()), col.detectionLimit(), at);
+                ParsedValue p = values.parse(row.cell(col.index()), col.detectionLimit(), rowAt);
                 if (p.issue() != null) {
                     DataIssue i = p.issue();
-                    issues.add(new DataIssue(i.severity(), i.where(), id, i.found(),
+                    issues.add(new DataIssue(i.severity(), rowAt.atColumn(col.index() + 1), id, i.found(),
                             col.header() + ": " + i.problem(), i.expected(), i.fix()));
                 }
                 // A blank cell is no result by that method, not a result: it adds no candidate.
                 if (p.usable() && p.value().missingReason() != MissingReason.BLANK_CELL) {
                     AnalyteHeader a = col.analyte();
-                    out.add(new LabRow.Result(a.analyte(), a.unit(), new MethodValue(a.method(), p.value(), at)));
+                    out.add(new LabRow.Result(a.analyte(), a.unit(), new MethodValue(a.method(), p.value(), rowAt)));
                 }
             }
             return out;

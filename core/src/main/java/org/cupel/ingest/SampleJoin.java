@@ -60,8 +60,9 @@ final class SampleJoin {
             for (LabRow.Result result : row.results()) {
                 GradeUnit target = units.get(result.analyte());
                 MethodValue v = result.value();
-                MethodValue converted = new MethodValue(v.method(),
-                        v.value().scaled(result.unit().convert(1.0, target)), v.source());
+                double factor = result.unit().convert(1.0, target);
+                MethodValue converted = factor == 1.0 ? v
+                        : new MethodValue(v.method(), v.value().scaled(factor), v.source());
                 columns.computeIfAbsent(result.analyte(), a -> AnalyteColumn.builder(new Analyte(a, target)))
                         .add(r, converted);
             }

@@ -3,7 +3,6 @@ package org.cupel.ingest;
 import com.fasterxml.jackson.annotation.JsonIgnoreProperties;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import org.cupel.assay.MissingReason;
@@ -56,11 +55,10 @@ public record ValueConventions(boolean decimalComma, boolean negativeMeansBelowD
      * matched ignoring case; the longest marker wins.
      */
     public Optional<String> repeatOf(String id) {
-        String lower = id.toLowerCase(Locale.ROOT);
         String best = null;
-        for (String s : repeatSuffixes) {
-            String suffix = s.toLowerCase(Locale.ROOT);
-            if (lower.length() > suffix.length() && lower.endsWith(suffix)
+        for (String suffix : repeatSuffixes) {
+            int from = id.length() - suffix.length();
+            if (from > 0 && id.regionMatches(true, from, suffix, 0, suffix.length())
                     && (best == null || suffix.length() > best.length())) {
                 best = suffix;
             }

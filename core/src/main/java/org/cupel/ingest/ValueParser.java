@@ -49,7 +49,7 @@ public final class ValueParser {
             return ok(AssayValue.missing(MissingReason.BLANK_CELL));
         }
         char first = t.charAt(0);
-        if (!(first >= '0' && first <= '9')) {
+        if (mayBeCode(t, first)) {
             ParsedValue coded = parseCode(t, statedLimit, where);
             if (coded != null) {
                 return coded;
@@ -66,6 +66,18 @@ public final class ValueParser {
             return parseNegative(t, -v, where);
         }
         return ok(AssayValue.detected(v, validLimit(statedLimit)));
+    }
+
+    /** Numbers, {@code <0.005} and {@code -0.005} skip the code lookup (the hot path). */
+    private static boolean mayBeCode(String t, char first) {
+        if (first >= '0' && first <= '9') {
+            return false;
+        }
+        if ((first == '<' || first == '>' || first == '-' || first == '+') && t.length() > 1) {
+            char second = t.charAt(1);
+            return !(second >= '0' && second <= '9') && second != '.' && second != ' ' && second != '=';
+        }
+        return true;
     }
 
     private ParsedValue parseCode(String t, double statedLimit, SourceLocation where) {

@@ -15,7 +15,7 @@ class AnalyteCensoringTest {
     void messyProjectLimitsCountsAndMethods() {
         Project p = ProjectLoader.load(Path.of(System.getProperty("cupel.testdata", "../testdata"), "fixtures",
                 "ingest", "messy-project"));
-        List<AnalyteCensoring> all = AnalyteCensoring.of(p, KaplanMeier.Options.DEFAULTS);
+        List<AnalyteCensoring> all = AnalyteCensoring.of(p, CensoredSettings.DEFAULTS);
         AnalyteCensoring au = all.get(0);
         assertEquals("Au (g/t)", au.analyteLabel());
         // From the fixture's detection-limit row: 0.005 (FA-AAS) and 0.05 (FA-GRAV).

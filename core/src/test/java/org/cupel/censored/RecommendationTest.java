@@ -14,7 +14,7 @@ class RecommendationTest {
 
     @Test
     void manganeseAt24PercentCensoredUsesKaplanMeier() {
-        CensoredAnalysis a = CensoredAnalysis.of(Reference.manganese(), KaplanMeier.Options.DEFAULTS);
+        CensoredAnalysis a = CensoredAnalysis.of(Reference.manganese(), CensoredSettings.DEFAULTS);
         assertEquals(KaplanMeier.METHOD, a.recommendation().method());
         assertTrue(a.recommendation().reason().contains("Helsel 2012"));
         assertEquals(a.kaplanMeier().summary(), a.recommended());
@@ -37,7 +37,7 @@ class RecommendationTest {
 
     @Test
     void overLimitsNeedMaximumLikelihood() {
-        CensoredAnalysis a = CensoredAnalysis.of(Reference.mixed(), KaplanMeier.Options.DEFAULTS);
+        CensoredAnalysis a = CensoredAnalysis.of(Reference.mixed(), CensoredSettings.DEFAULTS);
         assertEquals(CensoredMle.method(CensoredMle.Distribution.LOGNORMAL), a.recommendation().method());
     }
 
@@ -50,6 +50,6 @@ class RecommendationTest {
         for (int i = 0; i < below; i++) {
             b.below(limit);
         }
-        return CensoredAnalysis.of(b.build(), KaplanMeier.Options.DEFAULTS).recommendation();
+        return CensoredAnalysis.of(b.build(), CensoredSettings.DEFAULTS).recommendation();
     }
 }

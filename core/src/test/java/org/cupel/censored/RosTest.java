@@ -47,4 +47,17 @@ class RosTest {
         assertFalse(r.isApplicable());
         assertTrue(r.mean().note().contains("at least 3"));
     }
+
+    @Test
+    void bootstrapIntervalIsReproducibleAndBracketsTheMean() {
+        // No outside reference for a resampling result: checked for determinism under a fixed seed and for
+        // an interval around the estimate whose SE is of the order of the KM SE (5.06, R survfit).
+        CensoredSample mn = Reference.manganese();
+        Estimate a = Ros.fit(mn, 1000, 7, 5000).summary().mean();
+        Estimate b = Ros.fit(mn, 1000, 7, 5000).summary().mean();
+        assertEquals(a, b);
+        assertTrue(a.lower() < a.value() && a.value() < a.upper());
+        assertTrue(a.standardError() > 2.5 && a.standardError() < 10, a.toString());
+        assertTrue(a.note().contains("seed 7"));
+    }
 }

@@ -265,4 +265,18 @@ class DemoPlantedProblemsTest {
         assertTrue(ratios.size() > 60, "pairs " + ratios.size());
         assertEquals(1.03, median(ratios), 0.015);
     }
+
+    /** The table of docs/demo.md quotes the default run's sample IDs; this keeps it true. */
+    @Test
+    void defaultRunHasTheSampleIdsQuotedInTheDocs() {
+        assertEquals(List.of("VH0001006"), planted(Kind.CRM_SWAP).sampleIds());
+        assertEquals(List.of("VH0001397", "VH0001396"), planted(Kind.BLANK_CARRY_OVER).sampleIds());
+        assertEquals(List.of("VH0001635"), planted(Kind.DUPLICATE_ID_ROW).sampleIds());
+        assertEquals(List.of("VH0002273"), planted(Kind.TEXT_TYPO).sampleIds());
+        assertEquals(List.of("VH0000644"), planted(Kind.NEVER_RECEIVED).sampleIds());
+        assertEquals(List.of("VH0000502", "VH0001650", "VH0002769"), planted(Kind.INSUFFICIENT_SAMPLE_CODE).sampleIds());
+        assertEquals(List.of("VH0000898", "VH0002252"), planted(Kind.NOT_RECEIVED_CODE).sampleIds());
+        assertEquals("lab/OAL-00016.csv", planted(Kind.POOR_PULP_PRECISION).where());
+        assertEquals(10, planted(Kind.OVER_LIMIT_REASSAY).sampleIds().size());
+    }
 }

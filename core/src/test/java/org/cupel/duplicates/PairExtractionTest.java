@@ -82,4 +82,22 @@ class PairExtractionTest {
         assertEquals(5, s.limitMultipleOfDetection());
         assertEquals(0.30, s.hardLimit(QcRole.FIELD_DUPLICATE), 1e-15);
     }
+
+    @Test
+    void limitsMissingOnDetectedValuesComeFromTheLabsBelowDetectionValues() {
+        Project p = project();
+        AnalyteColumn.Builder au = AnalyteColumn.builder(AU);
+        // Detected values without a stated limit; two <0.01 and one <0.02 by the same method: the mode is 0.01.
+        au.add(0, new MethodValue("FA", AssayValue.detected(1.00), null));
+        au.add(1, new MethodValue("FA", AssayValue.detected(1.10), null));
+        au.add(2, new MethodValue("FA", AssayValue.belowDetection(0.01), null));
+        au.add(3, new MethodValue("FA", AssayValue.belowDetection(0.01), null));
+        au.add(4, new MethodValue("FA", AssayValue.belowDetection(0.02), null));
+        AnalyteColumn col = au.build(p.samples().size(), MethodSelector.FIRST);
+        DetectionLimits limits = DetectionLimits.of(col);
+        PairExtraction.Extracted e = PairExtraction.extract(p, col, limits);
+        assertEquals(0.01, e.pairs().get(0).original().limit());
+        assertEquals(0.01, e.pairs().get(0).duplicate().limit());
+        assertTrue(limits.describe().contains("FA 0.01"), limits.describe());
+    }
 }

@@ -66,7 +66,7 @@ class PrecisionMeasuresTest {
                     AssayValue.detected(A[i], 0.01), AssayValue.detected(B[i], 0.01)));
         }
         DuplicateSettings tight = new DuplicateSettings(10, false, 90, 30, 20, 5, 10, 10, 11, 50, 200, 7L,
-                List.of());
+                List.of(), 0.01);
         PrecisionSummary s = PrecisionMeasures.summarise(QcRole.PULP_DUPLICATE,
                 PairScreen.screen(pairs, tight), tight);
         assertEquals(RuleOutcome.FAIL, s.rule());

@@ -203,6 +203,61 @@ class ProjectLoaderTest {
         assertEquals(10.0, au.limit(1), 1e-12);
     }
 
+    @Test
+    void aBrokenConfigStopsTheLoadAndIsListedByInspect() throws IOException {
+        Files.writeString(dir.resolve("cupel.yaml"), "ingest: [unclosed\n");
+        Files.writeString(dir.resolve("j.csv"), "sample_id,Au_ppm\nA1,1\n");
+        assertThrows(org.cupel.config.ConfigException.class, () -> ProjectLoader.load(dir));
+        Project p = ProjectLoader.inspect(dir);
+        DataIssue fatal = p.exceptions().withSeverity(DataIssue.Severity.FATAL).get(0);
+        assertEquals("cupel.yaml", fatal.where().file());
+        assertEquals(1, p.samples().size(), "the lab files are still read with the defaults");
+    }
+
+    @Test
+    void anXlsxLabFileGivesTheSameProjectAsItsCsv() throws IOException {
+        Path csvProject = Files.createDirectories(dir.resolve("csv/lab"));
+        Path xlsxProject = Files.createDirectories(dir.resolve("xlsx/lab"));
+        String[][] table = {{"Job: K-1"}, {"Sample ID", "Au_ppm_FA-AAS", "Au_ppm_FA-GRAV", "Ag ppm"},
+            {"A1", "0.5", "", "3"}, {"A2", ">10", "12.5", "<0.5"}, {"A3", "NR", "", "IS"}, {"A4", "-0.005", "", "2.25"}};
+        StringBuilder csv = new StringBuilder();
+        for (String[] r : table) {
+            csv.append(String.join(",", r)).append('\n');
+        }
+        Files.writeString(csvProject.resolve("k1.csv"), csv);
+        try (var wb = new org.apache.poi.xssf.usermodel.XSSFWorkbook();
+             var out = Files.newOutputStream(xlsxProject.resolve("k1.xlsx"))) {
+            var sheet = wb.createSheet("results");
+            for (int r = 0; r < table.length; r++) {
+                var row = sheet.createRow(r);
+                for (int c = 0; c < table[r].length; c++) {
+                    String v = table[r][c];
+                    if (r > 1 && c > 0 && !v.isEmpty() && Character.isDigit(v.charAt(0))) {
+                        row.createCell(c).setCellValue(Double.parseDouble(v));
+                    } else if (!v.isEmpty()) {
+                        row.createCell(c).setCellValue(v);
+                    }
+                }
+            }
+            wb.write(out);
+        }
+        Project a = ProjectLoader.load(dir.resolve("csv"));
+        Project b = ProjectLoader.load(dir.resolve("xlsx"));
+        assertEquals(a.analyteNames(), b.analyteNames());
+        for (String analyte : a.analyteNames()) {
+            AnalyteColumn ca = a.analyte(analyte).orElseThrow();
+            AnalyteColumn cb = b.analyte(analyte).orElseThrow();
+            for (int r = 0; r < a.samples().size(); r++) {
+                assertEquals(a.samples().id(r), b.samples().id(r));
+                assertEquals(ca.value(r), cb.value(r), analyte + " row " + r);
+                assertEquals(ca.method(r), cb.method(r));
+                assertEquals(ca.selectionReason(r), cb.selectionReason(r));
+            }
+        }
+        assertEquals(a.samples().batch(0).id(), b.samples().batch(0).id());
+        assertEquals(a.files().get(0).rowsRead(), b.files().get(0).rowsRead());
+    }
+
     private static void assertListed(DataIssue.Severity severity, String file, long line, String sample, String text) {
         boolean found = project.exceptions().all().stream().anyMatch(i -> i.severity() == severity
                 && i.where().file().equals(file) && i.where().line() == line && i.sampleId().equals(sample)

@@ -6,7 +6,6 @@ import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
 import org.cupel.charts.PointBudget;
 import org.cupel.control.BlankResult;
-import org.cupel.control.BlankSettings;
 import org.cupel.control.Verdict;
 import org.knowm.xchart.AnnotationLine;
 import org.knowm.xchart.AnnotationText;
@@ -29,7 +28,7 @@ public final class BlankChart {
     }
 
     /** @param results the blanks of one analyte, in batch and run order (as {@code BlankReport} lists them) */
-    public static XYChart sequence(List<BlankResult> results, BlankSettings settings) {
+    public static XYChart sequence(List<BlankResult> results) {
         String analyte = results.isEmpty() ? "" : results.get(0).observation().analyte();
         String unit = results.isEmpty() ? "" : results.get(0).observation().unit();
         XYChart chart = new XYChartBuilder().width(ChartStyle.WIDTH).height(ChartStyle.HEIGHT)

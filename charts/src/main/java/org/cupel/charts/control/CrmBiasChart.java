@@ -44,7 +44,7 @@ public final class CrmBiasChart {
             XYSeries p = c.addSeries(s.crm() + " (n = " + s.bias().n() + ")", new double[] {x},
                     new double[] {s.bias().meanBiasPct()}, new double[] {half});
             p.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-            java.awt.Color col = ChartStyle.SERIES[k % ChartStyle.SERIES.length];
+            java.awt.Color col = CrmZScoreChart.CRM_COLOURS[k % CrmZScoreChart.CRM_COLOURS.length];
             p.setMarker(SeriesMarkers.CIRCLE).setMarkerColor(col).setLineColor(col);
         }
         if (usable.isEmpty()) {

@@ -52,26 +52,37 @@ public final class CrmControlChart {
         // Headroom at the top keeps the note box clear of the data.
         c.getStyler().setYAxisMin(lo - (hi - lo) * 0.03).setYAxisMax(hi + (hi - lo) * 0.16).setXAxisMin(0.5).setXAxisMax(n + 0.5);
         double[] ends = {0.5, n + 0.5};
-        line(c, "Certified " + Numbers.significant(lim.certified(), 4), ends, lim.certified(),
+        line(c, "Certified", ends, lim.certified(),
                 ChartStyle.REFERENCE, ChartStyle.solid(1.6f), true);
         line(c, "±2 SD", ends, lim.warnHigh(), ChartStyle.WARNING, ChartStyle.dashed(1.4f), true);
         line(c, "-2 SD", ends, lim.warnLow(), ChartStyle.WARNING, ChartStyle.dashed(1.4f), false);
         line(c, "±3 SD", ends, lim.failHigh(), ChartStyle.FAILURE, ChartStyle.solid(1.8f), true);
         line(c, "-3 SD", ends, lim.failLow(), ChartStyle.FAILURE, ChartStyle.solid(1.8f), false);
         runningMean(c, rs);
+        if (s.projectLimits().available()) {
+            line(c, "Own ±2 SD", ends, s.projectLimits().warnHigh(),
+                    ChartStyle.SECOND, ChartStyle.dotted(1.6f), true);
+            line(c, "project -2 SD", ends, s.projectLimits().warnLow(), ChartStyle.SECOND, ChartStyle.dotted(1.6f),
+                    false);
+        }
         int[] shown = PointBudget.indices(n, PointBudget.DEFAULT);
         points(c, rs, shown, "Pass", r -> r.verdict() == Verdict.PASS, ChartStyle.DATA, SeriesMarkers.CIRCLE, lo, hi);
-        points(c, rs, allIndices(n), "Warning", r -> r.verdict() == Verdict.WARN && !r.isSwap(), ChartStyle.WARNING,
+        points(c, rs, allIndices(n), "Warn", r -> r.verdict() == Verdict.WARN && !r.isSwap(), ChartStyle.WARNING,
                 SeriesMarkers.DIAMOND, lo, hi);
-        points(c, rs, allIndices(n), "Failure", r -> r.verdict() == Verdict.FAIL, ChartStyle.FAILURE,
+        points(c, rs, allIndices(n), "Fail", r -> r.verdict() == Verdict.FAIL, ChartStyle.FAILURE,
                 SeriesMarkers.SQUARE, lo, hi);
         points(c, rs, allIndices(n), "Swap", CrmResult::isSwap, ChartStyle.REDDISH_PURPLE,
                 SeriesMarkers.TRIANGLE_UP, lo, hi);
         batchBoundaries(c, rs);
         offScaleLabels(c, rs, lo, hi);
-        String note = ChartNotes.count(n, Math.min(n, shown.length)) + String.format(Locale.ROOT,
+        // Only passing results are thinned; every flagged result is drawn.
+        long drawn = rs.stream().filter(r -> r.verdict() != Verdict.PASS).count()
+                + java.util.Arrays.stream(shown).filter(i -> rs.get(i).verdict() == Verdict.PASS).count();
+        String note = ChartNotes.count(n, drawn) + String.format(Locale.ROOT,
                 "; certified %s %s, limits ±2 and ±3 × certificate SD %s %s", Numbers.significant(lim.certified(), 4), unit,
-                Numbers.significant(lim.sd(), 3), unit);
+                Numbers.significant(lim.sd(), 3), unit)
+                + (s.projectLimits().available() ? "; own ±2 SD from the project's " + s.projectLimits().n()
+                + " results" : "");
         ChartNote.add(c, note);
         return c;
     }
@@ -139,8 +150,8 @@ public final class CrmControlChart {
             double v = rs.get(i).point().value().value();
             if (v < lo || v > hi) {
                 double y = v > hi ? hi - (hi - lo) * 0.045 : lo + (hi - lo) * 0.045;
-                String label = rs.get(i).point().value().display()
-                        + (rs.get(i).isSwap() ? " (" + rs.get(i).swapWith() + "?)" : "");
+                String label = rs.get(i).point().value().display() + " off scale"
+                        + (rs.get(i).isSwap() ? ": " + rs.get(i).swapWith() + "?" : "");
                 c.addAnnotation(new AnnotationText(label, i + 1.0, y, false));
             }
         }

@@ -66,7 +66,7 @@ public final class CrmZScoreChart {
                 XYSeries xs = c.addSeries(s.crm() + " (n = " + judged.size() + ")", x, y);
                 xs.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
                 xs.setMarker(MARKERS[k % MARKERS.length]).setLineStyle(ChartStyle.solid(0.8f));
-                java.awt.Color col = ChartStyle.SERIES[k % ChartStyle.SERIES.length];
+                java.awt.Color col = CRM_COLOURS[k % CRM_COLOURS.length];
                 xs.setMarkerColor(col).setLineColor(col);
             }
             k++;
@@ -74,11 +74,15 @@ public final class CrmZScoreChart {
         double[] ends = {0, maxX};
         band(c, "±2 SD", 2, ChartStyle.WARNING);
         band(c, "±3 SD", 3, ChartStyle.FAILURE);
-        XYSeries zero = c.addSeries("Certified (z = 0)", ends, new double[] {0, 0});
+        XYSeries zero = c.addSeries("z = 0", ends, new double[] {0, 0});
         zero.setMarker(SeriesMarkers.NONE).setLineColor(ChartStyle.REFERENCE).setLineStyle(ChartStyle.solid(1.2f));
         ChartNote.add(c, ChartNotes.count(total, drawn) + "; swaps left out; |z| clipped at 6");
         return c;
     }
+
+    /** Okabe–Ito colours other than the orange and vermillion that mean warning and failure limits. */
+    static final java.awt.Color[] CRM_COLOURS = {ChartStyle.BLUE, ChartStyle.REDDISH_PURPLE, ChartStyle.BLUISH_GREEN,
+        ChartStyle.SKY_BLUE, ChartStyle.BLACK, ChartStyle.GREY};
 
     private static final org.knowm.xchart.style.markers.Marker[] MARKERS = {SeriesMarkers.CIRCLE,
         SeriesMarkers.SQUARE, SeriesMarkers.DIAMOND, SeriesMarkers.TRIANGLE_UP, SeriesMarkers.TRIANGLE_DOWN};

@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.cupel.assay.Numbers;
+import org.cupel.config.CupelConfig;
 import org.cupel.charts.control.BlankChart;
 import org.cupel.charts.control.CarryOverChart;
 import org.cupel.control.BlankReport;
@@ -17,13 +18,26 @@ import org.cupel.control.Verdict;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
+import org.cupel.report.Reference;
 
 /** Blanks: summary per analyte, the blanks that did not pass with their preceding sample, and the charts. */
 public final class BlankSection {
     private BlankSection() {
     }
 
+    static final List<Reference> REFERENCES = List.of(
+            new Reference("Spearman, C.", 1904, "The proof and measurement of association between two things",
+                    "American Journal of Psychology 15"),
+            new Reference("Zar, J. H.", 1972, "Significance testing of the Spearman rank correlation coefficient",
+                    "Journal of the American Statistical Association 67"));
+
+    /** With every threshold described as the default (use {@link #build(BlankReport, CupelConfig)} in reports). */
     public static ReportSection build(BlankReport report) {
+        return build(report, CupelConfig.defaults());
+    }
+
+    /** @param config the project config, to say which thresholds the user set */
+    public static ReportSection build(BlankReport report, CupelConfig config) {
         BlankSettings s = report.settings();
         List<ReportBlock> blocks = new ArrayList<>();
         int fails = report.summaries().stream().mapToInt(BlankSummary::fail).sum();
@@ -32,14 +46,16 @@ public final class BlankSection {
                 fails + " blank results failed, " + carry + " of them right after a high-grade sample (probable "
                         + "carry-over)."));
         blocks.add(new ReportBlock.Paragraph("A blank fails above " + Numbers.compact(s.failMultiple())
-                + "× the detection limit of its method and warns above " + Numbers.compact(s.warnMultiple())
-                + "× (common practice; some use 10× for failure), unless an absolute threshold is set for the analyte"
+                + "× the detection limit of its method" + origin(config, "failMultiple", "5×") + " and warns above "
+                + Numbers.compact(s.warnMultiple()) + "×" + origin(config, "warnMultiple", "3×")
+                + " (common practice is 5× and 3×; some use 10× for failure), unless an absolute threshold is set "
+                + "for the analyte"
                 + (s.absolute().isEmpty() ? "" : " (set for " + String.join(", ", new java.util.TreeSet<>(
                         s.absolute().keySet())) + ")") + ". A result exactly at a threshold is not above it. "
                 + "A blank below detection passes at its limit; one whose detection limit is above the failure "
                 + "threshold cannot be judged. A failing blank is flagged as probable carry-over when the sample "
                 + "run before it assayed at least " + Numbers.compact(s.highGradeMultiple())
-                + "× the failure threshold. Across the project, blanks are compared with the grade of the preceding "
+                + "× the failure threshold" + origin(config, "highGradeMultiple", "10×") + ". Across the project, blanks are compared with the grade of the preceding "
                 + "sample by Spearman's rank correlation (Spearman 1904; p by the t approximation, Zar 1972) and "
                 + "by least squares of blank on preceding grade (the slope is the average fraction carried over)."));
         blocks.add(new ReportBlock.Table(summaryTable(report)));
@@ -52,7 +68,7 @@ public final class BlankSection {
             }
             blocks.add(new ReportBlock.Figure("blanks-" + sum.analyte(), sum.analyte() + " blanks in run order with the "
                     + "warning and failure thresholds and the grade of the sample run before each blank; failed blanks "
-                    + "are named; dotted lines separate batches.", () -> BlankChart.sequence(rs, s)));
+                    + "are named; dotted lines separate batches.", () -> BlankChart.sequence(rs)));
             blocks.add(new ReportBlock.Figure("blank-carry-over-" + sum.analyte(), sum.analyte() + " blank against the "
                     + "grade of the preceding sample (log axes), with lines for 1 % and 0.1 % carried over.",
                     () -> CarryOverChart.scatter(rs, sum.relation())));
@@ -61,7 +77,7 @@ public final class BlankSection {
         headlines.put("blankResults", report.results().size());
         headlines.put("blankFailures", fails);
         headlines.put("blankCarryOver", carry);
-        return new ReportSection("blanks", "Blanks", blocks, headlines);
+        return new ReportSection("blanks", "Blanks", blocks, headlines, REFERENCES);
     }
 
     static ReportTable summaryTable(BlankReport report) {
@@ -102,6 +118,12 @@ public final class BlankSection {
                 List.of("Blank", "Batch", "Position", "Analyte", "Result", "Fail above", "Verdict", "Rule",
                         "Preceding sample", "Its grade", "Blank ÷ grade", "Carry-over"), rows,
                 rows.isEmpty() ? "Every blank passed." : "");
+    }
+
+    /** " (user setting blanks.x; default 5×)" or " (default)". */
+    private static String origin(CupelConfig config, String key, String defaultValue) {
+        return config.isUserSet("blanks." + key) ? " (user setting blanks." + key + "; default " + defaultValue + ")"
+                : " (default)";
     }
 
     static String num(double v, int digits) {

@@ -11,9 +11,13 @@ import org.cupel.control.InsertionRates;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
+import org.cupel.report.Reference;
 
 /** Insertion rates of CRMs, blanks and each duplicate type per batch and overall, against the targets. */
 public final class InsertionRateSection {
+    static final Reference ABZALOV = new Reference("Abzalov, M.", 2008, "Quality control of assay data: a review of "
+            + "procedures for measuring and monitoring precision and accuracy", "Exploration and Mining Geology 17");
+
     private InsertionRateSection() {
     }
 
@@ -28,7 +32,7 @@ public final class InsertionRateSection {
         for (InsertionRate r : rates.overall().rates()) {
             headlines.put("insertionRate " + r.role(), r.rate());
         }
-        return new ReportSection("insertion-rates", "Insertion rates", blocks, headlines);
+        return new ReportSection("insertion-rates", "Insertion rates", blocks, headlines, List.of(ABZALOV));
     }
 
     static ReportTable table(InsertionRates rates) {

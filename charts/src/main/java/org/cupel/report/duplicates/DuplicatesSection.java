@@ -62,6 +62,7 @@ public final class DuplicatesSection {
 
     private static void analyteBlocks(DuplicateReport report, List<ReportBlock> blocks, Map<String, Object> headlines) {
         String a = report.analyte();
+        blocks.add(new ReportBlock.Paragraph(a + ": " + report.detectionLimits() + "."));
         for (DuplicateSetResult set : report.sets()) {
             PrecisionSummary p = set.precision();
             ReportBlock.Level level = p.rule() == RuleOutcome.FAIL ? ReportBlock.Level.FAIL
@@ -76,22 +77,26 @@ public final class DuplicatesSection {
                 headlines.put(key + ".rmsCvPercent", round(100 * p.rmsCv().value(), 2));
             }
             headlines.put(key + ".rule", p.rule().name());
-            long flagged = set.batches().stream().filter(BatchPrecision::flagged).count();
-            headlines.put(key + ".batchesFailing", flagged);
+            headlines.put(key + ".batchesFailingRule", set.batches().stream().filter(BatchPrecision::failsRule).count());
+            headlines.put(key + ".batchesLessPrecise",
+                    set.batches().stream().filter(BatchPrecision::lessPrecise).count());
             if (set.bias().meanRelativeBias().available()) {
                 headlines.put(key + ".meanRelativeBiasPercent", round(100 * set.bias().meanRelativeBias().value(), 2));
             }
         }
         blocks.add(new ReportBlock.Table(precisionTable(report)));
         blocks.add(new ReportBlock.Table(batchTable(report)));
-        List<BatchPrecision> flagged = report.flaggedBatches();
+        List<BatchPrecision> flagged = report.sets().stream().flatMap(x -> x.batches().stream())
+                .filter(BatchPrecision::lessPrecise).toList();
         if (!flagged.isEmpty()) {
-            StringBuilder sb = new StringBuilder(a + ": batches failing the acceptance rule: ");
+            StringBuilder sb = new StringBuilder(a + ": batches significantly less precise than their set: ");
             for (int i = 0; i < flagged.size(); i++) {
                 BatchPrecision b = flagged.get(i);
                 sb.append(i == 0 ? "" : "; ").append(b.batch().isEmpty() ? "(no batch)" : b.batch()).append(" (")
                         .append(b.precision().type().label()).append(", ")
-                        .append(pct1(b.precision().percentWithinLimit().value() / 100)).append(" within)");
+                        .append("RMS CV ").append(pct2(b.precision().rmsCv().value())).append(", ")
+                        .append(fmt(b.dispersion().ratio(), 2)).append("× the set's, p = ")
+                        .append(p(b.dispersion().pValue())).append(')');
             }
             blocks.add(new ReportBlock.Callout(ReportBlock.Level.FAIL, sb.toString()));
         }
@@ -195,13 +200,19 @@ public final class DuplicatesSection {
                 rows.add(List.of(b.batch().isEmpty() ? "(no batch)" : b.batch(), s.type().label(),
                         Integer.toString(p.pairs()), Integer.toString(p.usedRelative()),
                         value(p.percentWithinLimit(), 1, ""), p.rule().name().toLowerCase(Locale.ROOT).replace('_', ' '),
-                        p.rmsCv().available() ? pct2(p.rmsCv().value()) : p.rmsCv().note()));
+                        p.rmsCv().available() ? pct2(p.rmsCv().value()) : p.rmsCv().note(),
+                        b.dispersion().available() ? fmt(b.dispersion().ratio(), 3) : "",
+                        b.dispersion().available() ? p(b.dispersion().pValue()) : b.dispersion().note(),
+                        b.lessPrecise() ? "less precise than the set" : ""));
             }
         }
         return new ReportTable("duplicates-batches-" + r.analyte(), r.analyte() + ": precision by batch",
-                List.of("Batch", "Type", "Pairs", "Used (relative)", "% within limit", "Rule", "RMS CV"), rows,
-                "A batch fails when fewer than the required share of its pairs lie within the type's HARD limit; "
-                        + "with few pairs per batch one wide pair decides, so read failures beside the RMS CV.");
+                List.of("Batch", "Type", "Pairs", "Used (relative)", "% within limit", "Rule", "RMS CV",
+                        "RMS CV / set's", "p (chi-square)", "Flag"), rows,
+                "A batch fails the rule when fewer than the required share of its pairs lie within the type's HARD "
+                        + "limit; with few pairs per batch one wide pair decides. The chi-square test of the batch's "
+                        + "RMS CV against the set's (NIST/SEMATECH e-Handbook 7.2.3.1) flags a batch that is "
+                        + "significantly less precise.");
     }
 
     private static ReportTable modelTable(DuplicateReport r) {

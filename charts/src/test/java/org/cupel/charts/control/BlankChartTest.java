@@ -44,7 +44,7 @@ class BlankChartTest {
     @Test
     void sequenceChartHasBlanksThresholdsAndFailures(@TempDir Path dir) throws IOException {
         BlankReport r = BlankFixture.report();
-        XYChart c = BlankChart.sequence(r.results(), r.settings());
+        XYChart c = BlankChart.sequence(r.results());
         assertTrue(c.getSeriesMap().containsKey("Failed blank"));
         assertTrue(c.getSeriesMap().containsKey("Preceding sample"));
         assertEquals(60, c.getSeriesMap().get("Fail above 5×DL").getXData().length);

@@ -14,7 +14,7 @@ import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
 import org.cupel.assay.SourceLocation;
 import org.cupel.censored.AnalyteCensoring;
-import org.cupel.censored.KaplanMeier;
+import org.cupel.censored.CensoredSettings;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
@@ -44,7 +44,7 @@ class DetectionLimitSectionTest {
         st.add("NR", batch, 27, QcRole.ROUTINE, "", new SourceLocation("mn.csv", 28, 0));
         SampleTable samples = st.build();
         return AnalyteCensoring.of(col.build(samples.size(), MethodSelector.FIRST), samples,
-                KaplanMeier.Options.DEFAULTS);
+                CensoredSettings.DEFAULTS);
     }
 
     @Test

@@ -72,6 +72,19 @@ class ControlSectionsTest {
                 List.of(row.get(0), row.get(4), row.get(6), row.get(8), row.get(9), row.get(10), row.get(11)));
         assertTrue(table(s, "blank-summary").note().contains("at least 3"));
         assertEquals(2, s.blocks().stream().filter(b -> b instanceof ReportBlock.Figure).count());
+        assertEquals(2, s.references().size());
+        String rules = ((ReportBlock.Paragraph) s.blocks().get(1)).text();
+        assertTrue(rules.contains("5× the detection limit of its method (default)"), rules);
+    }
+
+    @Test
+    void blankSectionSaysWhichThresholdTheUserSet() {
+        BlankReport rep = BlankReview.review(List.of(), new BlankSettings(10, 3, 10, java.util.Map.of()));
+        ReportSection s = BlankSection.build(rep, org.cupel.config.CupelConfig.fromYaml("blanks:\n  failMultiple: 10\n",
+                "cupel.yaml"));
+        String rules = ((ReportBlock.Paragraph) s.blocks().get(1)).text();
+        assertTrue(rules.contains("10× the detection limit of its method (user setting blanks.failMultiple; default 5×)"),
+                rules);
     }
 
     @Test

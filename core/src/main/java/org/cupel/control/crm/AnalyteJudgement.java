@@ -170,19 +170,14 @@ final class AnalyteJudgement {
         double[] values = judgedResults.stream().mapToDouble(r -> r.point().value().value()).toArray();
         BiasEstimate bias = BiasEstimate.of(values, lim.certified(), settings.confidence());
         ProjectLimits pl = ProjectLimits.of(values, settings.projectLimitsMinN());
+        Map<String, Integer> order = new java.util.HashMap<>();
+        for (int i = 0; i < cs.points().size(); i++) {
+            order.put(cs.points().get(i).sampleId(), i);
+        }
         List<RuleFinding> f = new ArrayList<>(findings.get(s));
-        f.sort(Comparator.comparingInt(x -> indexOf(cs, x.sampleId())));
+        f.sort(Comparator.comparingInt(x -> order.getOrDefault(x.sampleId(), Integer.MAX_VALUE)));
         return new SeriesReview(cs.analyte(), cs.certificate(), lim, pl, results, bias,
                 DriftAnalysis.of(judgedResults, settings), f);
-    }
-
-    private static int indexOf(CrmSeries cs, String sampleId) {
-        for (int i = 0; i < cs.points().size(); i++) {
-            if (cs.points().get(i).sampleId().equals(sampleId)) {
-                return i;
-            }
-        }
-        return Integer.MAX_VALUE;
     }
 
     private CrmResult judgedResult(CrmSeries cs, CrmPoint p, double zi, double runningMean, List<CrmRule> rules) {

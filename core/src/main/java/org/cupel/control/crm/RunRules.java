@@ -129,18 +129,27 @@ public final class RunRules {
     /**
      * Westgard R₄s within one batch: a result above +2 SD and another below −2 SD in the same batch. The
      * signal is the later of the two extreme results; both are involved. Results need not be adjacent.
+     * Results of one batch are contiguous in series order, so only the current batch is searched.
      */
     private static List<RuleViolation> rangeWithinBatch(CrmRule rule, double[] z, int[] batch) {
         List<RuleViolation> out = new ArrayList<>();
+        int batchStart = 0;
+        int lastHigh = -1;
+        int lastLow = -1;
         for (int i = 0; i < z.length; i++) {
-            if (Math.abs(z[i]) <= 2) {
-                continue;
+            if (i > 0 && batch[i] != batch[i - 1]) {
+                batchStart = i;
+                lastHigh = -1;
+                lastLow = -1;
             }
-            for (int j = 0; j < i; j++) {
-                if (batch[j] == batch[i] && z[j] * z[i] < 0 && Math.abs(z[j]) > 2) {
-                    out.add(new RuleViolation(rule, i, List.of(j, i)));
-                    break;
-                }
+            int opposite = z[i] > 2 ? lastLow : z[i] < -2 ? lastHigh : -1;
+            if (opposite >= batchStart && opposite >= 0) {
+                out.add(new RuleViolation(rule, i, List.of(opposite, i)));
+            }
+            if (z[i] > 2 && lastHigh < 0) {
+                lastHigh = i;
+            } else if (z[i] < -2 && lastLow < 0) {
+                lastLow = i;
             }
         }
         return out;

@@ -1,0 +1,40 @@
+package org.cupel.duplicates;
+
+import org.apache.commons.math3.distribution.ChiSquaredDistribution;
+
+/**
+ * Whether one batch's pairs are less precise than the set they belong to: the chi-square test for a
+ * variance against a known value (NIST/SEMATECH e-Handbook of Statistical Methods, 2012, section 7.2.3.1,
+ * "Chi-square test for the variance"), applied to relative errors. With nᵢ pair CVs in the batch, a set RMS
+ * CV of s₀ and batch RMS CV s, T = n·s²/s₀² is compared with χ²(n) (each CVᵢ² = dᵢ²/(2mᵢ²) estimates the
+ * relative variance with one degree of freedom); the p-value is the upper tail. s₀ is estimated from the
+ * whole set, so the test is approximate and conservative when the batch is a large part of the set.
+ *
+ * @param ratio s / s₀
+ * @param statistic T
+ * @param df n
+ * @param pValue upper-tail p-value, NaN when not computed (see note)
+ * @param note empty when computed; else why not
+ */
+public record BatchDispersion(double ratio, double statistic, int df, double pValue, String note) {
+
+    public BatchDispersion {
+        note = note == null ? "" : note;
+    }
+
+    public static BatchDispersion test(Estimate batchRmsCv, Estimate setRmsCv) {
+        if (!batchRmsCv.available() || !setRmsCv.available() || !(setRmsCv.value() > 0)) {
+            return new BatchDispersion(Double.NaN, Double.NaN, batchRmsCv.n(), Double.NaN,
+                    "needs the RMS CV of the batch and of the set");
+        }
+        int n = batchRmsCv.n();
+        double ratio = batchRmsCv.value() / setRmsCv.value();
+        double t = n * ratio * ratio;
+        double p = 1.0 - new ChiSquaredDistribution(null, n).cumulativeProbability(t);
+        return new BatchDispersion(ratio, t, n, p, "");
+    }
+
+    public boolean available() {
+        return note.isEmpty();
+    }
+}

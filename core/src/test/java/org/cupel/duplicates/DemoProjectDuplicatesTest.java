@@ -1,0 +1,42 @@
+package org.cupel.duplicates;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.Writer;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.cupel.assay.QcRole;
+import org.cupel.demo.DemoGenerator;
+import org.cupel.demo.DemoSettings;
+import org.cupel.demo.DemoSummary;
+import org.cupel.demo.PlantedProblem;
+import org.cupel.ingest.ProjectLoader;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The demo project plants one pulp batch with six times the pulp-duplicate error; the analysis must find it. */
+class DemoProjectDuplicatesTest {
+    @TempDir
+    Path dir;
+
+    @Test
+    void plantedPoorPulpBatchIsTheOneFlaggedAsLessPrecise() throws Exception {
+        DemoSummary summary = DemoGenerator.generate(DemoSettings.defaults(), relative -> {
+            Path p = dir.resolve(relative);
+            Files.createDirectories(p.getParent());
+            return Files.newBufferedWriter(p);
+        });
+        PlantedProblem planted = summary.planted().stream()
+                .filter(p -> p.kind() == PlantedProblem.Kind.POOR_PULP_PRECISION).findFirst().orElseThrow();
+        List<DuplicateReport> reports = PairExtraction.analyse(ProjectLoader.load(dir), DuplicateSettings.DEFAULTS,
+                "Au", QcRole.PULP_DUPLICATE);
+        DuplicateSetResult pulp = reports.get(0).sets().get(0);
+        List<BatchPrecision> lessPrecise = pulp.batches().stream().filter(BatchPrecision::lessPrecise).toList();
+        assertEquals(1, lessPrecise.size(), lessPrecise.toString());
+        String batch = lessPrecise.get(0).batch();
+        assertTrue(planted.where().contains(batch), planted.where() + " vs " + batch);
+        assertTrue(lessPrecise.get(0).failsRule());
+    }
+}
