@@ -5,7 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.cupel.censored.AnalyteCensoring;
-import org.cupel.censored.KaplanMeier;
+import org.cupel.censored.CensoredSettings;
 import org.cupel.control.BatchReview;
 import org.cupel.control.crm.CrmReview;
 import org.cupel.duplicates.DuplicateSettings;
@@ -49,7 +49,7 @@ public final class QcAppendix {
         sections.add(InsertionRateSection.build(batches.insertion()));
         sections.add(VerdictSection.build(batches.verdicts(), batches.reassay()));
         sections.add(DataExceptionsSection.build(project));
-        sections.add(DetectionLimitSection.build(AnalyteCensoring.of(project, KaplanMeier.Options.DEFAULTS)));
+        sections.add(DetectionLimitSection.build(AnalyteCensoring.of(project, CensoredSettings.from(project.config()))));
         sections.add(CrmSection.of(crms));
         sections.add(BlankSection.build(batches.blanks()));
         sections.add(DuplicatesSection.build(PairExtraction.analyse(project, duplicates),
