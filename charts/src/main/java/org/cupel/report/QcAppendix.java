@@ -51,7 +51,7 @@ public final class QcAppendix {
         sections.add(DataExceptionsSection.build(project));
         sections.add(DetectionLimitSection.build(AnalyteCensoring.of(project, CensoredSettings.from(project.config()))));
         sections.add(CrmSection.of(crms));
-        sections.add(BlankSection.build(batches.blanks()));
+        sections.add(BlankSection.build(batches.blanks(), project.config()));
         sections.add(DuplicatesSection.build(PairExtraction.analyse(project, duplicates),
                 path -> project.config().isUserSet(path)));
         testwork.ifPresent(r -> sections.add(TestworkSection.build(r)));

@@ -43,8 +43,8 @@ public final class BlankSection {
         int fails = report.summaries().stream().mapToInt(BlankSummary::fail).sum();
         int carry = report.summaries().stream().mapToInt(BlankSummary::carryOver).sum();
         blocks.add(new ReportBlock.Callout(fails > 0 ? ReportBlock.Level.FAIL : ReportBlock.Level.PASS,
-                fails + " blank results failed, " + carry + " of them right after a high-grade sample (probable "
-                        + "carry-over)."));
+                "Blank results failed: " + fails + " of " + report.results().size() + "; right after a high-grade "
+                        + "sample (probable carry-over): " + carry + "."));
         blocks.add(new ReportBlock.Paragraph("A blank fails above " + Numbers.compact(s.failMultiple())
                 + "× the detection limit of its method" + origin(config, "failMultiple", "5×") + " and warns above "
                 + Numbers.compact(s.warnMultiple()) + "×" + origin(config, "warnMultiple", "3×")
@@ -87,11 +87,10 @@ public final class BlankSection {
             rows.add(List.of(s.analyte(), Integer.toString(s.n()), Integer.toString(s.pass()), Integer.toString(s.warn()),
                     Integer.toString(s.fail()), Integer.toString(s.cannotJudge()), Integer.toString(s.missing()),
                     Integer.toString(s.carryOver()), num(r.spearmanRho(), 3) + " (n = " + r.nRank() + ")",
-                    pValue(r.spearmanP()), num(r.slope(), 3) + " ± " + num(r.slopeStdErr(), 2) + " (n = "
-                            + r.nRegression() + ")", pValue(r.slopeP())));
+                    pValue(r.spearmanP()), slope(r), pValue(r.slopeP())));
         }
-        String notes = String.join(" ", report.summaries().stream().map(s -> s.relation().note())
-                .filter(n -> !n.isEmpty()).map(n -> n + ".").toList());
+        String notes = String.join(" ", report.summaries().stream().filter(s -> !s.relation().note().isEmpty())
+                .map(s -> s.analyte() + ": " + s.relation().note() + ".").toList());
         return new ReportTable("blank-summary", "Blank results per analyte",
                 List.of("Analyte", "n", "Pass", "Warn", "Fail", "Cannot judge", "Missing", "Carry-over",
                         "Spearman ρ", "p (ρ)", "Slope ± SE", "p (slope)"), rows,
@@ -124,6 +123,12 @@ public final class BlankSection {
     private static String origin(CupelConfig config, String key, String defaultValue) {
         return config.isUserSet("blanks." + key) ? " (user setting blanks." + key + "; default " + defaultValue + ")"
                 : " (default)";
+    }
+
+    /** "0.0031 ± 0.00018 (n = 17)", or "– (n = 2)" when there is no slope. */
+    static String slope(CarryOverRelation r) {
+        String n = " (n = " + r.nRegression() + ")";
+        return Double.isNaN(r.slope()) ? "–" + n : num(r.slope(), 3) + " ± " + num(r.slopeStdErr(), 2) + n;
     }
 
     static String num(double v, int digits) {
