@@ -73,7 +73,7 @@ class ReportCommandTest {
     @Test
     void theDemoProjectIsReportedUnderItsName(@TempDir Path dir) throws Exception {
         Path qc = dir.resolve("qc-appendix");
-        assertEquals(0, run("report", "--demo", "--out", qc.toString(), "--screen"), err.toString());
+        assertEquals(0, run("report", "--demo", "--out", qc.toString(), "--quiet"), err.toString());
         String json = Files.readString(qc.resolve("summary.json"));
         assertTrue(json.contains("\"project\" : \"Vellmar Hills gold-silver project\""), json);
     }
