@@ -9,7 +9,8 @@ import java.util.Map;
 import org.cupel.config.CupelConfig;
 
 /**
- * Section "Methods and references": every source the other sections cite, numbered in order of first
+ * Section "Methods and references": every source the other sections cite (found by author and year in
+ * their text, see {@link Citations}, or listed in {@link ReportSection#references()}), numbered in order of first
  * citation with the sections citing it, the sources of the report format itself, and the settings the
  * user changed in the project config (each section's tables name the thresholds they apply and whether
  * each comes from a published source, common practice or a user setting).
@@ -31,8 +32,18 @@ public final class MethodsSection {
     public static ReportSection build(List<ReportSection> cited, CupelConfig config) {
         Map<String, List<String>> citedIn = new LinkedHashMap<>();
         Map<String, Reference> byCitation = new LinkedHashMap<>();
+        List<String> missing = new ArrayList<>();
         for (ReportSection s : cited) {
-            for (Reference r : s.references()) {
+            List<Reference> refs = new ArrayList<>(s.references());
+            for (Citations.Cited c : Citations.in(s)) {
+                var entry = Bibliography.find(c.names(), c.year());
+                if (entry.isPresent()) {
+                    refs.add(entry.get().reference());
+                } else if (!citedInOwnList(s, c) && !missing.contains(c.asWritten())) {
+                    missing.add(c.asWritten());
+                }
+            }
+            for (Reference r : refs) {
                 byCitation.putIfAbsent(r.citation(), r);
                 List<String> where = citedIn.computeIfAbsent(r.citation(), k -> new ArrayList<>());
                 if (!where.contains(s.title())) {
@@ -54,7 +65,13 @@ public final class MethodsSection {
                 + "charts, and the thresholds in force with their origin: a published source, common practice in "
                 + "assay QC, or a setting made in the project config. The sources are listed here."));
         blocks.add(new ReportBlock.Table(new ReportTable("references", "References",
-                List.of("No.", "Source", "Cited in"), rows, "")));
+                List.of("No.", "Source", "Cited in"), rows, "Sources found cited by author and year in the sections' "
+                        + "text, and those the sections list; journal details are to be checked against the "
+                        + "publications before the appendix is published.")));
+        if (!missing.isEmpty()) {
+            blocks.add(new ReportBlock.Callout(ReportBlock.Level.WARN, "Cited in the text but without a full "
+                    + "reference in Cupel's bibliography: " + String.join("; ", missing) + "."));
+        }
         List<List<String>> settings = new ArrayList<>();
         flatten("", config.tree(), settings);
         blocks.add(new ReportBlock.Paragraph(settings.isEmpty()
@@ -67,8 +84,15 @@ public final class MethodsSection {
         }
         Map<String, Object> h = new LinkedHashMap<>();
         h.put("references", rows.size());
+        h.put("citationsWithoutReference", missing.size());
         h.put("userSettings", settings.size());
         return new ReportSection(ID, "Methods and references", blocks, h);
+    }
+
+    /** A citation that names a source the section already lists in full ("Okabe & Ito 2008"). */
+    private static boolean citedInOwnList(ReportSection s, Citations.Cited c) {
+        return s.references().stream().anyMatch(r -> r.year() == c.year()
+                && c.names().contains(r.authors().split("[,\\s]+")[0]));
     }
 
     private static void flatten(String prefix, JsonNode node, List<List<String>> out) {

@@ -51,12 +51,15 @@ public final class QcAppendix {
         sections.add(DataExceptionsSection.build(project));
         sections.add(DetectionLimitSection.build(AnalyteCensoring.of(project, CensoredSettings.from(project.config()))));
         sections.add(CrmSection.of(crms));
-        sections.add(BlankSection.build(batches.blanks()));
+        sections.add(BlankSection.build(batches.blanks(), project.config()));
         sections.add(DuplicatesSection.build(PairExtraction.analyse(project, duplicates),
                 path -> project.config().isUserSet(path)));
         testwork.ifPresent(r -> sections.add(TestworkSection.build(r)));
-        sections.add(MethodsSection.build(sections, project.config()));
-        sections.add(CautionsSection.build());
+        ReportSection cautions = CautionsSection.build();
+        List<ReportSection> citing = new ArrayList<>(sections);
+        citing.add(cautions);
+        sections.add(MethodsSection.build(citing, project.config()));
+        sections.add(cautions);
         return new QcReport(project.name(), selection, generated, sections);
     }
 

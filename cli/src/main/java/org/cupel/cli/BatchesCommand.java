@@ -21,6 +21,7 @@ import org.cupel.control.crm.CrmReview;
 import org.cupel.ingest.ProjectLoader;
 import org.cupel.project.Project;
 import org.cupel.report.CsvTables;
+import org.cupel.report.control.InsertionRateSection;
 import org.cupel.report.control.VerdictSection;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -95,9 +96,7 @@ final class BatchesCommand implements Callable<Integer> {
         for (BatchVerdict v : review.verdicts()) {
             for (VerdictReason r : v.reasons()) {
                 any = true;
-                out.println("  " + v.batch() + "  " + label(r.verdict()) + "  "
-                        + (r.sampleId().isEmpty() ? "" : r.sampleId() + " [" + r.role() + ", " + r.rule() + "]: ")
-                        + r.reason());
+                out.println("  " + v.batch() + "  " + label(r.verdict()) + "  " + VerdictSection.reason(r));
             }
         }
         if (!any) {
@@ -121,8 +120,7 @@ final class BatchesCommand implements Callable<Integer> {
         printInsertion(out, review);
     }
 
-    private static final List<String> SHORT = List.of("CRM", "Blank", "Field dup", "Coarse dup", "Pulp dup",
-            "Lab repeat", "Umpire");
+    private static final List<String> SHORT = InsertionRateSection.SHORT_NAMES;
 
     private static void printInsertion(PrintWriter out, BatchReview review) {
         List<String> headers = new ArrayList<>(List.of("Batch", "Routine"));
@@ -144,14 +142,8 @@ final class BatchesCommand implements Callable<Integer> {
             cells.add(String.join(", ", low));
             t.row(cells.toArray());
         }
-        List<String> targets = new ArrayList<>();
-        List<InsertionRate> overall = review.insertion().overall().rates();
-        for (int i = 0; i < overall.size(); i++) {
-            if (overall.get(i).target() > 0) {
-                targets.add(SHORT.get(i) + " " + percent(overall.get(i).target()));
-            }
-        }
-        out.println("Insertion rates: count (per routine sample); targets " + String.join(", ", targets));
+        out.println("Insertion rates: count (per routine sample); targets "
+                + InsertionRateSection.targets(review.insertion()));
         t.print(out);
     }
 

@@ -20,7 +20,7 @@ final class BlankTables {
         for (BlankSummary s : report.summaries()) {
             CarryOverRelation r = s.relation();
             sum.row(s.analyte(), s.n(), s.pass(), s.warn(), s.fail(), s.cannotJudge(), s.missing(), s.carryOver(),
-                    num(r.spearmanRho(), 3), p(r.spearmanP()), num(r.slope(), 3) + " ± " + num(r.slopeStdErr(), 2),
+                    num(r.spearmanRho(), 3), p(r.spearmanP()), Double.isNaN(r.slope()) ? "-" : num(r.slope(), 3) + " ± " + num(r.slopeStdErr(), 2),
                     p(r.slopeP()));
         }
         out.println("Blanks (fail above " + Numbers.compact(report.settings().failMultiple()) + "×DL, warn above "

@@ -46,6 +46,8 @@ import picocli.CommandLine.Model.CommandSpec;
                 "Examples:", "  cupel duplicates demo-project --analyte Au --charts charts/",
                 "  cupel duplicates pairs.csv --type pulp --json"})
 public final class DuplicatesCommand implements Callable<Integer> {
+    /** Flagged batches printed per set, less precise ones first. */
+    private static final int BATCHES_SHOWN = 20;
 
     @Parameters(index = "0", paramLabel = "<project-folder | pairs.csv>",
             description = "A project folder, or a CSV/XLSX of pairs.")
@@ -175,17 +177,20 @@ public final class DuplicatesCommand implements Callable<Integer> {
         out.println();
         for (DuplicateSetResult s : r.sets()) {
             out.println(s.type().label() + ": " + s.bias().verdict());
-            for (BatchPrecision b : s.batches()) {
-                if (b.flagged()) {
-                    PrecisionSummary bp = b.precision();
-                    out.println("  batch " + (b.batch().isEmpty() ? "(none)" : b.batch()) + ": "
-                            + String.format(Locale.ROOT, "%.1f%%", bp.percentWithinLimit().value()) + " of "
-                            + bp.usedRelative() + " pairs within HARD " + pct(bp.hardLimit(), 0)
-                            + (b.failsRule() ? " (fails the rule)" : "") + ", RMS CV " + interval(bp.rmsCv())
-                            + (b.lessPrecise() ? String.format(Locale.ROOT,
-                            " — less precise than the set (%.1f× its RMS CV, chi-square p = %.2g)",
-                            b.dispersion().ratio(), b.dispersion().pValue()) : ""));
-                }
+            List<BatchPrecision> shown = s.batches().stream().filter(BatchPrecision::flagged)
+                    .sorted(java.util.Comparator.comparing((BatchPrecision b) -> !b.lessPrecise())).toList();
+            for (BatchPrecision b : shown.subList(0, Math.min(BATCHES_SHOWN, shown.size()))) {
+                PrecisionSummary bp = b.precision();
+                out.println("  batch " + (b.batch().isEmpty() ? "(none)" : b.batch()) + ": "
+                        + String.format(Locale.ROOT, "%.1f%%", bp.percentWithinLimit().value()) + " of "
+                        + bp.usedRelative() + " pairs within HARD " + pct(bp.hardLimit(), 0)
+                        + (b.failsRule() ? " (fails the rule)" : "") + ", RMS CV " + interval(bp.rmsCv())
+                        + (b.lessPrecise() ? String.format(Locale.ROOT,
+                        " — less precise than the set (%.1f× its RMS CV, chi-square p = %.2g)",
+                        b.dispersion().ratio(), b.dispersion().pValue()) : ""));
+            }
+            if (shown.size() > BATCHES_SHOWN) {
+                out.println("  ... " + (shown.size() - BATCHES_SHOWN) + " more flagged batches (all in --json)");
             }
             List<OutlierPair> o = s.outliers();
             if (!o.isEmpty()) {

@@ -86,7 +86,7 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
                     : "passing control " + table.id(rows[next]));
         }
         int n = 0;
-        String why = table.id(o.row()) + " " + o.rule();
+        String why = table.role(o.row()).label() + " " + table.id(o.row()) + " failed (" + o.rule() + ")";
         for (int k = from; k <= to; k++) {
             int row = rows[k];
             if (!isReassayed(table.role(row))) {

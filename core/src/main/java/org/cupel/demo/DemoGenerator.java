@@ -30,7 +30,7 @@ import org.cupel.assay.QcRole;
  *       SD over the programme (about +0.16 SD per batch at the default size): late batches fail.</li>
  *   <li>One CRM registered as {@value DemoCrm#SWAP_REGISTERED} is really {@value DemoCrm#SWAP_ACTUAL} (a swap),
  *       at about a third of the programme.</li>
- *   <li>One blank right after a 9.2 g/t Au sample carries {@value #CARRY_OVER} of it over (Au about 0.21 g/t).</li>
+ *   <li>One blank right after a 9.2 g/t Au sample carries {@value DemoLabModel#CARRY_OVER} of it over (Au about 0.21 g/t).</li>
  *   <li>One batch (at 60 % of the programme) has pulp duplicates six times as scattered as the others.</li>
  *   <li>Au above 10 ppm and Ag above 100 ppm are reported {@code >10}, {@code >100} and re-assayed by
  *       fire assay with gravimetric finish in {@code lab/<JOB>-GRAV.csv}; below-detection values are
@@ -49,20 +49,10 @@ public final class DemoGenerator {
     /** Suffix of the lab's repeat rows (one of the ingest's default repeat markers). */
     public static final String REPEAT_SUFFIX = "-R";
     static final double DRIFT_TOTAL_SD = 4.0;
-    static final double CARRY_OVER = 0.023;
     static final double UMPIRE_BIAS = 1.03;
     static final int UMPIRE_GROUP = 5;
     static final double HIGH_GRADE_AU = 9.2;
     static final double HIGH_GRADE_AG = 85;
-    static final double CRM_LAB_SD_FRACTION = 0.75;
-    static final double FIELD_SD = 0.55;
-    static final double FIELD_NUGGET_SD = 1.3;
-    static final double FIELD_NUGGET_SHARE = 0.1;
-    static final double COARSE_SD = 0.22;
-    static final double PULP_SD = 0.07;
-    static final double POOR_PULP_FACTOR = 6;
-    static final double REPEAT_SD = 0.04;
-    static final double GRAV_RSD = 0.015;
     private static final LocalDate FIRST_REPORT = LocalDate.of(2025, 3, 3);
 
     private final DemoSettings settings;
@@ -73,6 +63,7 @@ public final class DemoGenerator {
     private final DemoRandom testworkRandom;
     private final DrillHoles holes;
     private final PlantedBatches plan;
+    private final DemoLabModel lab;
     private final List<String> files = new ArrayList<>();
     private final EnumMap<QcRole, Long> registered = new EnumMap<>(QcRole.class);
     private final List<Submission> pendingUmpire = new ArrayList<>();
@@ -95,6 +86,7 @@ public final class DemoGenerator {
         this.random = root.split();
         this.holes = new DrillHoles(random, analytes);
         this.plan = new PlantedBatches(settings.batches());
+        this.lab = new DemoLabModel(random, analytes, crms, settings.batches(), plan.poorPulp);
     }
 
     /** Writes the whole demo project into {@code sink}. */
@@ -160,7 +152,7 @@ public final class DemoGenerator {
         for (int i = 0; i < size; i++) {
             DrillInterval iv = holes.next();
             Submission s = new Submission(QcRole.ROUTINE, iv, null, null, iv.grade());
-            s.values = measure(s.truth);
+            s.values = lab.measure(s.truth);
             routine.add(s);
         }
         Submission carryHigh = j == 0 ? plantBatchProblems(b, routine) : null;
@@ -182,11 +174,16 @@ public final class DemoGenerator {
         boolean swapHere = b == plan.swap && j == 0;
         String code = swapHere ? DemoCrm.SWAP_REGISTERED : crms.get(globalBlock % crms.size()).code();
         globalBlock++;
-        order.add(random.below(order.size() + 1), crm(code, b, swapHere));
+        int at = random.below(order.size() + 1);
+        Submission crm = lab.crm(code, b, swapHere);
+        if (swapHere) {
+            log.swap = crm;
+        }
+        order.add(at, crm);
         if (carryHigh == null) {
-            order.add(random.below(order.size() + 1), blank());
+            order.add(random.below(order.size() + 1), lab.blank());
         } else {
-            Submission blank = contaminatedBlank(carryHigh);
+            Submission blank = lab.contaminatedBlank(carryHigh);
             order.add(order.indexOf(carryHigh) + 1, blank);
             log.carryBlank = blank;
         }
@@ -196,13 +193,13 @@ public final class DemoGenerator {
     private void addDuplicates(List<Submission> order, Submission r, Submission fd, Submission cd, Submission pd,
                                int b) {
         if (r == fd) {
-            order.add(duplicate(QcRole.FIELD_DUPLICATE, r, b));
+            order.add(lab.duplicate(QcRole.FIELD_DUPLICATE, r, b));
         }
         if (r == cd) {
-            order.add(duplicate(QcRole.COARSE_DUPLICATE, r, b));
+            order.add(lab.duplicate(QcRole.COARSE_DUPLICATE, r, b));
         }
         if (r == pd) {
-            Submission dup = duplicate(QcRole.PULP_DUPLICATE, r, b);
+            Submission dup = lab.duplicate(QcRole.PULP_DUPLICATE, r, b);
             order.add(dup);
             if (b == plan.poorPulp) {
                 log.poorPulp.add(dup);
@@ -217,7 +214,7 @@ public final class DemoGenerator {
             high = special(routine, false);
             high.truth[0] = HIGH_GRADE_AU;
             high.truth[1] = HIGH_GRADE_AG;
-            high.values = measure(high.truth);
+            high.values = lab.measure(high.truth);
             log.carryHigh = high;
         }
         if (b == plan.neverReceived) {
@@ -265,83 +262,6 @@ public final class DemoGenerator {
         double floor = 10 * DemoAnalyte.GOLD.detectionLimit();
         for (int t = 0; mineralised && t < 5 && s.values[0] < floor; t++) {
             s = from.get(random.below(from.size()));
-        }
-        return s;
-    }
-
-    // ---------------------------------------------------------------- measurement
-
-    private double[] measure(double[] truth) {
-        double[] v = new double[analytes.size()];
-        for (int a = 0; a < v.length; a++) {
-            v[a] = measure(analytes.get(a), truth[a]);
-        }
-        return v;
-    }
-
-    private double measure(DemoAnalyte a, double truth) {
-        return truth * random.logFactor(DemoAnalyte.ANALYTICAL_RSD) + a.absoluteSd() * random.gaussian();
-    }
-
-    private Submission duplicate(QcRole role, Submission original, int b) {
-        double[] truth = new double[analytes.size()];
-        for (int a = 0; a < truth.length; a++) {
-            DemoAnalyte an = analytes.get(a);
-            double g = original.truth[a] * random.logFactor(samplingSd(role, an, b));
-            truth[a] = an.capBelowUpper() ? Math.min(g, 0.8 * an.upperLimit()) : g;
-        }
-        Submission d = new Submission(role, original.interval, original, null, truth);
-        d.values = measure(truth);
-        return d;
-    }
-
-    private double samplingSd(QcRole role, DemoAnalyte a, int b) {
-        switch (role) {
-            case FIELD_DUPLICATE:
-                return a.nugget() * (random.uniform() < FIELD_NUGGET_SHARE ? FIELD_NUGGET_SD : FIELD_SD);
-            case COARSE_DUPLICATE:
-                return a.nugget() * COARSE_SD;
-            case PULP_DUPLICATE:
-                return b == plan.poorPulp ? POOR_PULP_FACTOR * PULP_SD : PULP_SD;
-            default:
-                return REPEAT_SD;
-        }
-    }
-
-    private Submission crm(String registeredCode, int b, boolean swap) {
-        DemoCrm material = DemoCrm.byCode(crms, swap ? DemoCrm.SWAP_ACTUAL : registeredCode);
-        double[] truth = material.certified().clone();
-        if (material.code().equals(DemoCrm.DRIFTING)) {
-            truth[0] += PlantedBatches.driftSd(b, settings.batches()) * material.sd()[0];
-        }
-        Submission s = new Submission(QcRole.CRM, null, null, registeredCode, truth);
-        s.values = new double[truth.length];
-        for (int a = 0; a < truth.length; a++) {
-            s.values[a] = truth[a] + CRM_LAB_SD_FRACTION * material.sd()[a] * random.gaussian();
-        }
-        if (swap) {
-            log.swap = s;
-        }
-        return s;
-    }
-
-    /** A barren blank: true grade 0.4 DL with a constant error of 0.25 DL, so nearly always below detection. */
-    private Submission blank() {
-        double[] truth = new double[analytes.size()];
-        Submission s = new Submission(QcRole.BLANK, null, null, null, truth);
-        s.values = new double[truth.length];
-        for (int a = 0; a < truth.length; a++) {
-            double dl = analytes.get(a).detectionLimit();
-            truth[a] = 0.4 * dl;
-            s.values[a] = 0.4 * dl + 0.25 * dl * random.gaussian();
-        }
-        return s;
-    }
-
-    private Submission contaminatedBlank(Submission high) {
-        Submission s = blank();
-        for (int a = 0; a < s.values.length; a++) {
-            s.values[a] += CARRY_OVER * high.values[a];
         }
         return s;
     }
@@ -398,23 +318,15 @@ public final class DemoGenerator {
                 }
                 w.row(s.id, s.values, s.rowCode, s.typoText);
                 if (s.labRepeat) {
-                    w.row(s.id + REPEAT_SUFFIX, measure(repeatTruth(s)), null, null);
+                    w.row(s.id + REPEAT_SUFFIX, lab.measure(lab.repeatTruth(s)), null, null);
                     labRepeats++;
                 }
             }
             if (b == plan.duplicateRow) {
                 Submission d = log.duplicateRow;
-                w.row(d.id, measure(d.truth), null, null);
+                w.row(d.id, lab.measure(d.truth), null, null);
             }
         }
-    }
-
-    private double[] repeatTruth(Submission s) {
-        double[] t = new double[s.truth.length];
-        for (int a = 0; a < t.length; a++) {
-            t[a] = s.truth[a] * random.logFactor(REPEAT_SD);
-        }
-        return t;
     }
 
     private void writeReassays(int b, List<Submission> order) throws IOException {
@@ -439,7 +351,7 @@ public final class DemoGenerator {
                 log.overLimitAg += s.values[1] > analytes.get(1).upperLimit() ? 1 : 0;
                 double[] v = new double[2];
                 for (int a = 0; a < 2; a++) {
-                    v[a] = s.truth[a] * random.logFactor(GRAV_RSD) + grav.get(a).absoluteSd() * random.gaussian();
+                    v[a] = s.truth[a] * random.logFactor(DemoLabModel.GRAV_RSD) + grav.get(a).absoluteSd() * random.gaussian();
                 }
                 w.row(s.id, v, null, null);
             }
@@ -462,7 +374,7 @@ public final class DemoGenerator {
                 u.id = "VU" + DrillHoles.pad(++umpireTicket, 7);
                 double[] v = new double[2];
                 for (int a = 0; a < 2; a++) {
-                    v[a] = measure(cols.get(a), truth[a]);
+                    v[a] = lab.measure(cols.get(a), truth[a]);
                 }
                 registerLine(line, u);
                 w.row(u.id, v, null, null);

@@ -43,11 +43,11 @@ final class PlantLog {
                 ids(List.of(carryBlank, carryHigh)), String.format(Locale.ROOT,
                 "blank %s right after %s (Au %.3f g/t) reports Au %.3f g/t: %.1f %% carry-over.",
                 carryBlank.id, carryHigh.id, carryHigh.values[0], carryBlank.values[0],
-                100 * DemoGenerator.CARRY_OVER)));
+                100 * DemoLabModel.CARRY_OVER)));
         out.add(new PlantedProblem(Kind.POOR_PULP_PRECISION, DemoGenerator.labFile(plan.poorPulp), ids(poorPulp),
                 String.format(Locale.ROOT, "the %d pulp duplicates of this batch scatter with log SD %.2f instead of"
-                        + " %.2f.", poorPulp.size(), DemoGenerator.POOR_PULP_FACTOR * DemoGenerator.PULP_SD,
-                        DemoGenerator.PULP_SD)));
+                        + " %.2f.", poorPulp.size(), DemoLabModel.POOR_PULP_FACTOR * DemoLabModel.PULP_SD,
+                        DemoLabModel.PULP_SD)));
         out.add(new PlantedProblem(Kind.OVER_LIMIT_REASSAY, reassayFiles.size() + " re-assay files lab/*-GRAV.csv",
                 ids(overLimit), String.format(Locale.ROOT, "%d Au results >%s and %d Ag results >%s, re-assayed by"
                         + " FA-GRAV; below-detection values are written <DL, and -DL in batches %s.", overLimitAu,

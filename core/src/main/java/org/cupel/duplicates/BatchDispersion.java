@@ -8,7 +8,11 @@ import org.apache.commons.math3.distribution.ChiSquaredDistribution;
  * "Chi-square test for the variance"), applied to relative errors. With nᵢ pair CVs in the batch, a set RMS
  * CV of s₀ and batch RMS CV s, T = n·s²/s₀² is compared with χ²(n) (each CVᵢ² = dᵢ²/(2mᵢ²) estimates the
  * relative variance with one degree of freedom); the p-value is the upper tail. s₀ is estimated from the
- * whole set, so the test is approximate and conservative when the batch is a large part of the set.
+ * whole set, so the test is approximate and conservative when the batch is a large part of the set. It
+ * assumes one relative error over the set's grade range: where precision worsens towards the detection limit,
+ * batches of mostly low-grade pairs read as less precise, and with many batches about α of them are flagged
+ * by chance. (A form standardised by the fitted σ_c model was tried and rejected: it is dominated by the
+ * model's misfit near zero, where σ_c is small and lab rounding is not.)
  *
  * @param ratio s / s₀
  * @param statistic T

@@ -17,7 +17,8 @@ import org.cupel.assay.QcRole;
  * @param pulpHardLimitPercent HARD limit of pulp duplicates, % (default 10, common practice)
  * @param labRepeatHardLimitPercent HARD limit of lab repeats (pulp repeats in the same lab), % (default 10)
  * @param umpireHardLimitPercent HARD limit of umpire checks (pulps sent to a second lab), % (default 10)
- * @param thGroupSize pairs per Thompson–Howarth group (default 11, after Thompson and Howarth 1978)
+ * @param thGroupSize pairs per Thompson–Howarth group (default 11, the group size of Thompson and Howarth 1978;
+ *     recalled from memory, not re-checked in the paper)
  * @param thMinimumPairs fewest usable pairs for a precision model (default 50, common practice)
  * @param bootstrapResamples bootstrap resamples for intervals (default 1000)
  * @param bootstrapSeed seed of every bootstrap, so reruns give the same intervals (default 20240601)

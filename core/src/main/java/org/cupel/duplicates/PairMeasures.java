@@ -22,7 +22,7 @@ public final class PairMeasures {
     /**
      * Half absolute relative difference HARD = |a − b| / (a + b) (Shaw, W.J., 1997, "Validation of
      * sampling and assaying quality for bankable feasibility studies", in: The Resource Database Towards
-     * 2000, AusIMM, Wollongong). Defined for a + b &gt; 0.
+     * 2000, AusIMM, Wollongong; citation details recalled from memory). Defined for a + b &gt; 0.
      */
     public static double hard(double a, double b) {
         return Math.abs(a - b) / (a + b);

@@ -8,7 +8,8 @@ final class LabColumns {
         "certificate no", "work order", "lab job"};
     static final String[] DATE = {"date", "date reported", "reported", "date received", "received", "report date"};
     static final String[] POSITION = {"position", "pos", "seq", "sequence", "order", "run order", "tray position"};
-    static final String[] ROLE = {"qc role", "role", "qc type", "qc", "sample type", "type"};
+    // Not "type" or "sample type": those often describe the material (core, RC chips), not the QC role.
+    static final String[] ROLE = {"qc role", "role", "qc type", "qc", "qc code", "control type"};
     static final String[] REFERENCE = {"reference", "ref", "crm", "crm code", "standard", "original",
         "original id", "original sample", "parent", "parent id"};
     /** First-cell texts of a row under the header that states each column's detection limit. */

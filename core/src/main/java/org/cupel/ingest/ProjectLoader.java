@@ -78,7 +78,21 @@ public final class ProjectLoader {
         }
     }
 
-    /** The lab files of a project, in name order. */
+    /**
+     * Name order without the extension first, so that {@code OAL-00001.csv} (the batch) comes before
+     * {@code OAL-00001-GRAV.csv} (its re-assays): a sample's batch and position are those of the first file
+     * that holds it, and later files add candidate results.
+     */
+    static final java.util.Comparator<Path> BY_NAME = java.util.Comparator
+            .comparing((Path p) -> stem(p.getFileName().toString()))
+            .thenComparing(p -> p.getFileName().toString());
+
+    private static String stem(String name) {
+        int dot = name.lastIndexOf('.');
+        return dot > 0 ? name.substring(0, dot) : name;
+    }
+
+    /** The lab files of a project, in name order (see {@link #BY_NAME}). */
     public static List<Path> labFiles(Path folder) {
         Path lab = folder.resolve(LAB_DIR);
         Path dir = Files.isDirectory(lab) ? lab : folder;
@@ -86,7 +100,7 @@ public final class ProjectLoader {
             return s.filter(Files::isRegularFile)
                     .filter(p -> isTable(p.getFileName().toString()))
                     .filter(p -> dir == lab || !isProjectFile(p.getFileName().toString()))
-                    .sorted()
+                    .sorted(BY_NAME)
                     .toList();
         } catch (IOException e) {
             throw new InputException(dir + ": the folder could not be listed (" + e.getMessage()
@@ -129,36 +143,21 @@ public final class ProjectLoader {
 
         Project run() {
             requireFolder(folder);
-            // Each lab file is joined as soon as it is read, so only one file's rows are held as objects
-            // at a time (a million-row project would not fit a 2 GiB heap otherwise). The register is
-            // read first for the join; its failure, the join's issues and the catalog's failure are
-            // listed in the order they had when every file was read first.
-            Path registerFile = folder.resolve(REGISTER);
-            InputException registerFailure = null;
-            SampleRegister register = null;
-            try {
-                register = Files.isRegularFile(registerFile) ? RegisterReader.read(registerFile, REGISTER) : null;
-            } catch (InputException e) {
-                registerFailure = e;
-            }
             Map<String, GradeUnit> units = configuredUnits();
-            ExceptionRegister joined = new ExceptionRegister();
-            SampleJoin join = new SampleJoin(register, units, joined);
+            SampleRegister register = readRegister();
+            SampleJoin join = new SampleJoin(register, units, exceptions);
+            // One lab file in memory at a time: each is joined as soon as it is read.
             readLabs(file -> {
                 for (LabColumn c : file.columns()) {
                     units.putIfAbsent(c.analyte().analyte(), c.analyte().unit());
                 }
                 join.add(file);
             });
-            if (registerFailure != null) {
-                fail(REGISTER, "sample register", registerFailure);
-            }
-            CatalogReader.Result catalog = readCatalog(units);
             join.finishRegister();
+            CatalogReader.Result catalog = readCatalog(units);
             SampleTable table = join.buildSamples();
             CrmCatalog crms = catalog == null ? CrmCatalog.empty() : catalog.catalog();
             join.checkReferences(table, crms, catalog != null);
-            joined.all().forEach(exceptions::add);
             if (catalog == null && table.rowsWithRole(QcRole.CRM).length > 0) {
                 exceptions.warn(org.cupel.assay.SourceLocation.ofFile(CATALOG), "", "",
                         "the project has CRM samples but no CRM catalog, so their results cannot be judged",
@@ -178,7 +177,7 @@ public final class ProjectLoader {
             return new Project(name, folder, config, table, columns, crms, exceptions, accounts);
         }
 
-        private void readLabs(java.util.function.Consumer<LabFile> join) {
+        private void readLabs(java.util.function.Consumer<LabFile> sink) {
             List<Path> files = labFiles(folder);
             if (files.isEmpty()) {
                 fail(LAB_DIR, "lab results", new InputException(folder.resolve(LAB_DIR) + ": no lab result files "
@@ -187,14 +186,27 @@ public final class ProjectLoader {
             LabFileReader reader = new LabFileReader(settings);
             for (Path f : files) {
                 String name = displayName(f);
-                LabFile read;
+                LabFile file;
                 try {
-                    read = reader.read(f, name);
+                    file = reader.read(f, name);
                 } catch (InputException e) {
                     fail(name, "lab results", e);
                     continue;
                 }
-                join.accept(read);
+                sink.accept(file);
+            }
+        }
+
+        private SampleRegister readRegister() {
+            Path f = folder.resolve(REGISTER);
+            if (!Files.isRegularFile(f)) {
+                return null;
+            }
+            try {
+                return RegisterReader.read(f, REGISTER);
+            } catch (InputException e) {
+                fail(REGISTER, "sample register", e);
+                return null;
             }
         }
 
@@ -211,6 +223,7 @@ public final class ProjectLoader {
             }
         }
 
+        /** {@code ingest.units}; analytes not listed take the unit of the first column seen. */
         private Map<String, GradeUnit> configuredUnits() {
             Map<String, GradeUnit> units = new LinkedHashMap<>();
             settings.units().forEach((analyte, symbol) -> units.put(analyte, GradeUnit.parse(symbol)

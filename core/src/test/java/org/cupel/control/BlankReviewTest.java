@@ -88,6 +88,21 @@ class BlankReviewTest {
     }
 
     @Test
+    void absoluteThresholdFromTheConfig() {
+        BlankReport r = BlankReview.review(project(planted(), "blanks:\n  absolute:\n    Au: {fail: 0.25}\n"));
+        assertEquals(0.25, r.results().get(0).threshold().fail(), 0);
+        assertEquals(Verdict.FAIL, r.results().get(0).verdict().verdict()); // 0.3 > 0.25
+        assertEquals(Verdict.PASS, r.results().get(1).verdict().verdict()); // 0.02, no separate warning level
+    }
+
+    @Test
+    void badSettingIsAConfigErrorNamingTheSection() {
+        var e = org.junit.jupiter.api.Assertions.assertThrows(org.cupel.config.ConfigException.class,
+                () -> BlankReview.review(project(planted(), "blanks:\n  failMultipel: 10\n")));
+        assertTrue(e.getMessage().contains("section 'blanks'"), e.getMessage());
+    }
+
+    @Test
     void missingLimitFallsBackToTheMethodLimit() {
         Sequences s = new Sequences().batch("J1", "RB").au("J1-1", AssayValue.detected(1.0, 0.01))
                 .au("J1-2", AssayValue.detected(0.04));

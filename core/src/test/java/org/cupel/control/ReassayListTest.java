@@ -65,6 +65,7 @@ class ReassayListTest {
         assertEquals(List.of("J-3", "J-4", "J-6", "J-8", "J-9"), ids(l));
         assertEquals(List.of("J-5", "J-7"), l.entries().get(0).triggeredBy());
         assertEquals(2, l.brackets().size());
+        assertEquals("CRM J-5 failed (1-3s); CRM J-7 failed (1-3s)", l.entries().get(0).reason());
     }
 
     @Test

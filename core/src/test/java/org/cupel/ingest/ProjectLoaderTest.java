@@ -258,6 +258,19 @@ class ProjectLoaderTest {
         assertEquals(a.files().get(0).rowsRead(), b.files().get(0).rowsRead());
     }
 
+    @Test
+    void aBatchFileIsReadBeforeItsReassayFileSoPositionsAreTheBatchs() throws IOException {
+        Files.createDirectories(dir.resolve("lab"));
+        Files.writeString(dir.resolve("lab/J-1.csv"), "Job: J-1\nsample_id,Au_ppm_FA-AAS\nA1,0.2\nA2,>10\n");
+        Files.writeString(dir.resolve("lab/J-1-GRAV.csv"), "Job: J-1\nsample_id,Au_ppm_FA-GRAV\nA2,12.2\n");
+        Project p = ProjectLoader.load(dir);
+        assertEquals(List.of("lab/J-1.csv", "lab/J-1-GRAV.csv"), p.files().stream().map(FileAccount::file).toList());
+        int a2 = p.samples().rowOf("A2").orElseThrow();
+        assertEquals(2, p.samples().position(a2));
+        assertEquals("lab/J-1.csv", p.samples().batch(a2).file());
+        assertEquals(12.2, p.analyte("Au").orElseThrow().number(a2), 0.0);
+    }
+
     private static void assertListed(DataIssue.Severity severity, String file, long line, String sample, String text) {
         boolean found = project.exceptions().all().stream().anyMatch(i -> i.severity() == severity
                 && i.where().file().equals(file) && i.where().line() == line && i.sampleId().equals(sample)

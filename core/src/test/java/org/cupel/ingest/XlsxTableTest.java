@@ -76,6 +76,16 @@ class XlsxTableTest {
         assertThrows(InputException.class, () -> TableReader.read(xlsx));
     }
 
+    @Test
+    void aWorkbookOverTheSizeCapIsRefusedWithTheFix() throws IOException {
+        Path big = dir.resolve("big.xlsx");
+        try (var f = new java.io.RandomAccessFile(big.toFile(), "rw")) {
+            f.setLength(XlsxSheetReader.MAX_FILE_BYTES + 1);
+        }
+        InputException e = assertThrows(InputException.class, () -> TableReader.read(big));
+        assertTrue(e.getMessage().contains("save the sheet as CSV"), e.getMessage());
+    }
+
     private static void writeWorkbook(Path file, boolean withFormula) throws IOException {
         try (XSSFWorkbook wb = new XSSFWorkbook(); OutputStream out = Files.newOutputStream(file)) {
             Sheet s = wb.createSheet("Assays");

@@ -74,6 +74,27 @@ class RecoveryAnalysisTest {
         assertEquals(ab.verdict(), ab.verdictCensoredAtZero(), "no censored assays");
     }
 
+    /**
+     * Two conditions with five tight replicates each and means 0.05 pp apart: the 90% CI of the difference
+     * lies well inside ±0.5 pp, so the TOST (Schuirmann 1987) shows equivalence.
+     */
+    @Test
+    void tightReplicatesWithinTheMarginAreEquivalent() {
+        List<Smelt> s = new ArrayList<>();
+        double[][] slag = {{1.10, 1.12, 1.09, 1.11, 1.10}, {1.105, 1.095, 1.115, 1.085, 1.10}};
+        for (int c = 0; c < 2; c++) {
+            for (int r = 0; r < 5; r++) {
+                String cond = c == 0 ? "A" : "B";
+                s.add(Fixtures.smelt(cond + r, cond, 100, Fixtures.button(30, 30),
+                        Fixtures.slag(90, AssayValue.detected(slag[c][r]))));
+            }
+        }
+        RecoveryResult r = RecoveryAnalysis.run(Fixtures.testwork(List.of(10.1, 9.9), s), RecoverySettings.DEFAULTS);
+        PairComparison ab = r.comparisons().get(0);
+        assertEquals(ComparisonVerdict.EQUIVALENT, ab.verdict());
+        assertTrue(ab.tost().p() < 0.05);
+    }
+
     /** Balance reconciliation keeps the constraint exactly and moves values within their uncertainty. */
     @Test
     void reconciledBalanceCloses() {

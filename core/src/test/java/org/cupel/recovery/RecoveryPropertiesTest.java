@@ -3,7 +3,6 @@ package org.cupel.recovery;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.List;
-import java.util.Map;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
@@ -87,9 +86,5 @@ class RecoveryPropertiesTest {
                 }
             }
         }
-    }
-
-    static Map<String, AssayValue> au(double v) {
-        return Map.of("Au", AssayValue.detected(v));
     }
 }

@@ -40,11 +40,10 @@ public final class DifferenceChart {
                 ci.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line).setMarker(SeriesMarkers.NONE)
                         .setLineColor(ChartStyle.DATA).setLineStyle(ChartStyle.solid(2.5f)).setShowInLegend(i == 0);
                 if (i == 0) {
-                    ci.setLabel(Math.round(result.settings().confidence() * 100) + "% CI (Welch)");
+                    ci.setLabel(Math.round(result.settings().confidence() * 100) + "% CI (Welch, per pair; verdicts "
+                            + "use Holm-adjusted p)");
                 }
             }
-            chart.addAnnotation(new AnnotationText(p.first() + " − " + p.second() + ": " + p.verdict().label(),
-                    p.welch().difference(), y + 0.3, false));
             XYSeries d = chart.addSeries("d-" + i, new double[] {p.welch().difference()}, new double[] {y});
             d.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter).setMarker(SeriesMarkers.DIAMOND)
                     .setMarkerColor(ChartStyle.REFERENCE).setShowInLegend(false);
@@ -56,6 +55,13 @@ public final class DifferenceChart {
                 .setShowInLegend(false);
         double pad = 0.08 * (hi - lo);
         chart.getStyler().setXAxisMin(lo - pad).setXAxisMax(hi + pad);
+        for (int i = 0; i < pairs.size(); i++) {
+            PairComparison p = pairs.get(i);
+            // Labels are centred on their point; keep them off the plot edges so long names stay whole.
+            double x = Math.max(lo + 0.25 * (hi - lo), Math.min(hi - 0.25 * (hi - lo), p.welch().difference()));
+            chart.addAnnotation(new AnnotationText(p.first() + " − " + p.second() + ": " + p.verdict().label(), x,
+                    pairs.size() - i + 0.3, false));
+        }
         return chart;
     }
 

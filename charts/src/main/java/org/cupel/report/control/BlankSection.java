@@ -18,18 +18,11 @@ import org.cupel.control.Verdict;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
-import org.cupel.report.Reference;
 
 /** Blanks: summary per analyte, the blanks that did not pass with their preceding sample, and the charts. */
 public final class BlankSection {
     private BlankSection() {
     }
-
-    static final List<Reference> REFERENCES = List.of(
-            new Reference("Spearman, C.", 1904, "The proof and measurement of association between two things",
-                    "American Journal of Psychology 15"),
-            new Reference("Zar, J. H.", 1972, "Significance testing of the Spearman rank correlation coefficient",
-                    "Journal of the American Statistical Association 67"));
 
     /** With every threshold described as the default (use {@link #build(BlankReport, CupelConfig)} in reports). */
     public static ReportSection build(BlankReport report) {
@@ -43,8 +36,8 @@ public final class BlankSection {
         int fails = report.summaries().stream().mapToInt(BlankSummary::fail).sum();
         int carry = report.summaries().stream().mapToInt(BlankSummary::carryOver).sum();
         blocks.add(new ReportBlock.Callout(fails > 0 ? ReportBlock.Level.FAIL : ReportBlock.Level.PASS,
-                fails + " blank results failed, " + carry + " of them right after a high-grade sample (probable "
-                        + "carry-over)."));
+                "Blank results failed: " + fails + " of " + report.results().size() + "; right after a high-grade "
+                        + "sample (probable carry-over): " + carry + "."));
         blocks.add(new ReportBlock.Paragraph("A blank fails above " + Numbers.compact(s.failMultiple())
                 + "× the detection limit of its method" + origin(config, "failMultiple", "5×") + " and warns above "
                 + Numbers.compact(s.warnMultiple()) + "×" + origin(config, "warnMultiple", "3×")
@@ -77,7 +70,7 @@ public final class BlankSection {
         headlines.put("blankResults", report.results().size());
         headlines.put("blankFailures", fails);
         headlines.put("blankCarryOver", carry);
-        return new ReportSection("blanks", "Blanks", blocks, headlines, REFERENCES);
+        return new ReportSection("blanks", "Blanks", blocks, headlines);
     }
 
     static ReportTable summaryTable(BlankReport report) {
@@ -87,11 +80,10 @@ public final class BlankSection {
             rows.add(List.of(s.analyte(), Integer.toString(s.n()), Integer.toString(s.pass()), Integer.toString(s.warn()),
                     Integer.toString(s.fail()), Integer.toString(s.cannotJudge()), Integer.toString(s.missing()),
                     Integer.toString(s.carryOver()), num(r.spearmanRho(), 3) + " (n = " + r.nRank() + ")",
-                    pValue(r.spearmanP()), num(r.slope(), 3) + " ± " + num(r.slopeStdErr(), 2) + " (n = "
-                            + r.nRegression() + ")", pValue(r.slopeP())));
+                    pValue(r.spearmanP()), slope(r), pValue(r.slopeP())));
         }
-        String notes = String.join(" ", report.summaries().stream().map(s -> s.relation().note())
-                .filter(n -> !n.isEmpty()).map(n -> n + ".").toList());
+        String notes = String.join(" ", report.summaries().stream().filter(s -> !s.relation().note().isEmpty())
+                .map(s -> s.analyte() + ": " + s.relation().note() + ".").toList());
         return new ReportTable("blank-summary", "Blank results per analyte",
                 List.of("Analyte", "n", "Pass", "Warn", "Fail", "Cannot judge", "Missing", "Carry-over",
                         "Spearman ρ", "p (ρ)", "Slope ± SE", "p (slope)"), rows,
@@ -124,6 +116,12 @@ public final class BlankSection {
     private static String origin(CupelConfig config, String key, String defaultValue) {
         return config.isUserSet("blanks." + key) ? " (user setting blanks." + key + "; default " + defaultValue + ")"
                 : " (default)";
+    }
+
+    /** "0.0031 ± 0.00018 (n = 17)", or "– (n = 2)" when there is no slope. */
+    static String slope(CarryOverRelation r) {
+        String n = " (n = " + r.nRegression() + ")";
+        return Double.isNaN(r.slope()) ? "–" + n : num(r.slope(), 3) + " ± " + num(r.slopeStdErr(), 2) + n;
     }
 
     static String num(double v, int digits) {

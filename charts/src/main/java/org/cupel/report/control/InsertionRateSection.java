@@ -11,13 +11,9 @@ import org.cupel.control.InsertionRates;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
-import org.cupel.report.Reference;
 
 /** Insertion rates of CRMs, blanks and each duplicate type per batch and overall, against the targets. */
 public final class InsertionRateSection {
-    static final Reference ABZALOV = new Reference("Abzalov, M.", 2008, "Quality control of assay data: a review of "
-            + "procedures for measuring and monitoring precision and accuracy", "Exploration and Mining Geology 17");
-
     private InsertionRateSection() {
     }
 
@@ -32,14 +28,16 @@ public final class InsertionRateSection {
         for (InsertionRate r : rates.overall().rates()) {
             headlines.put("insertionRate " + r.role(), r.rate());
         }
-        return new ReportSection("insertion-rates", "Insertion rates", blocks, headlines, List.of(ABZALOV));
+        return new ReportSection("insertion-rates", "Insertion rates", blocks, headlines);
     }
+
+    /** Column names of {@link InsertionRates#ROLES}, in that order. */
+    public static final List<String> SHORT_NAMES = List.of("CRM", "Blank", "Field dup.", "Coarse dup.", "Pulp dup.",
+            "Lab repeat", "Umpire");
 
     static ReportTable table(InsertionRates rates) {
         List<String> columns = new ArrayList<>(List.of("Batch", "Samples", "Routine"));
-        for (InsertionRate r : rates.overall().rates()) {
-            columns.add(capital(r.role()) + (r.target() > 0 ? " (target " + percent(r.target()) + ")" : ""));
-        }
+        columns.addAll(SHORT_NAMES);
         columns.add("Below target");
         List<List<String>> rows = new ArrayList<>();
         for (BatchInsertion b : rates.batches()) {
@@ -47,7 +45,8 @@ public final class InsertionRateSection {
         }
         rows.add(row(rates.overall()));
         return new ReportTable("insertion-rates", "Insertion rates per batch and overall", columns, rows,
-                "Rate = samples of the type ÷ routine samples of the batch (1 in 20 = one per 20 routine samples). Targets: about 1 in 20 each (common practice); "
+                "Count (rate): rate = samples of the type ÷ routine samples of the batch (1 in 20 = 5 %). Targets: "
+                        + targets(rates) + "; about 1 in 20 each is common practice; "
                         + "Abzalov (2008, Exploration and Mining Geology 17) gives field duplicates 5–10 %, pulp "
                         + "duplicates 3–5 %, standards 3–5 % and about 5 % to an umpire lab.");
     }
@@ -56,10 +55,11 @@ public final class InsertionRateSection {
         List<String> row = new ArrayList<>(List.of(b.batch(), Integer.toString(b.nSamples()),
                 Integer.toString(b.nRoutine())));
         List<String> low = new ArrayList<>();
-        for (InsertionRate r : b.rates()) {
-            row.add(r.count() + " · " + (Double.isNaN(r.rate()) ? "–" : percent(r.rate())) + " (" + r.oneIn() + ")");
+        for (int i = 0; i < b.rates().size(); i++) {
+            InsertionRate r = b.rates().get(i);
+            row.add(Double.isNaN(r.rate()) ? Integer.toString(r.count()) : r.count() + " (" + percent(r.rate()) + ")");
             if (r.belowTarget()) {
-                low.add(r.role());
+                low.add(SHORT_NAMES.get(i));
             }
         }
         row.add(low.isEmpty() ? "" : String.join(", ", low));
@@ -67,10 +67,18 @@ public final class InsertionRateSection {
     }
 
     static String percent(double fraction) {
-        return Numbers.significant(100 * fraction, 2) + " %";
+        return Numbers.significant(100 * fraction, 2) + "%";
     }
 
-    private static String capital(String s) {
-        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
+    /** "CRM 5 %, Blank 5 %, ..." for the roles with a target. */
+    public static String targets(InsertionRates rates) {
+        List<String> out = new ArrayList<>();
+        List<InsertionRate> overall = rates.overall().rates();
+        for (int i = 0; i < overall.size(); i++) {
+            if (overall.get(i).target() > 0) {
+                out.add(SHORT_NAMES.get(i) + " " + percent(overall.get(i).target()));
+            }
+        }
+        return out.isEmpty() ? "none" : String.join(", ", out);
     }
 }

@@ -67,11 +67,10 @@ public final class VerdictSection {
             }
             List<String> reasons = new ArrayList<>();
             for (VerdictReason r : v.reasons()) {
-                reasons.add(r.sampleId().isEmpty() ? r.reason()
-                        : r.sampleId() + " [" + r.role() + ", " + r.rule() + "]: " + r.reason());
+                reasons.add(reason(r));
             }
             rows.add(List.of(v.batch(), v.lab(), Integer.toString(v.nSamples()), label(v.verdict()),
-                    String.join("; ", per), String.join(" | ", reasons)));
+                    String.join("; ", per), String.join("; ", reasons)));
         }
         return new ReportTable("batch-verdicts", "Verdict per batch",
                 List.of("Batch", "Lab", "Samples", "Verdict", "Per analyte (control results)", "Reasons"), rows,
@@ -100,6 +99,11 @@ public final class VerdictSection {
         return new ReportTable("reassay-brackets", "Re-assay brackets per failed control",
                 List.of("Failed control", "Role", "Batch", "Analyte", "Rule", "Positions", "Samples", "Bounded by"),
                 rows, "");
+    }
+
+    /** The reason as its source wrote it (it names the sample), then the control's role and rule. */
+    public static String reason(VerdictReason r) {
+        return r.sampleId().isEmpty() ? r.reason() : r.reason() + " [" + r.role() + ": " + r.rule() + "]";
     }
 
     public static String label(Verdict v) {

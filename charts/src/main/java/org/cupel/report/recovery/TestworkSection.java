@@ -43,7 +43,8 @@ public final class TestworkSection {
         blocks.add(new ReportBlock.Table(comparisons(r)));
         for (String a : r.analytes()) {
             blocks.add(new ReportBlock.Figure("recovery-differences-" + a, a + ": difference between each pair of "
-                    + "conditions with its Welch CI, against zero and the equivalence margin.",
+                    + "conditions with its Welch CI (per pair, not adjusted; the verdicts use the Holm-adjusted p), "
+                    + "against zero and the equivalence margin.",
                     () -> DifferenceChart.of(r, a)));
         }
         blocks.add(new ReportBlock.Table(balance(r)));

@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.EnumMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import org.cupel.assay.Numbers;
@@ -198,10 +197,10 @@ final class AnalyteJudgement {
     }
 
     private static String describe(CrmSeries cs, CrmPoint p, double zi) {
-        return String.format(Locale.ROOT, "%s %s %s %s %s is %s SD %s certified %s", p.sampleId(), cs.crm(),
-                cs.analyte().name(), p.value().display(), cs.analyte().unit().symbol(),
-                Numbers.significant(Math.abs(zi), 2), zi >= 0 ? "above" : "below",
-                Numbers.significant(cs.certificate().certifiedValue(), 4));
+        // Concatenation rather than String.format: this runs once per CRM result.
+        return p.sampleId() + ' ' + cs.crm() + ' ' + cs.analyte().name() + ' ' + p.value().display() + ' '
+                + cs.analyte().unit().symbol() + " is " + Numbers.significant(Math.abs(zi), 2) + " SD "
+                + (zi >= 0 ? "above" : "below") + " certified " + Numbers.significant(cs.certificate().certifiedValue(), 4);
     }
 
     private String swapReason(CrmSeries cs, CrmPoint p, double zi, String swap) {

@@ -29,10 +29,7 @@ public record MedianInterval(int n, double median, double low, double high, doub
         double median = n % 2 == 1 ? s[n / 2] : (s[n / 2 - 1] + s[n / 2]) / 2;
         double tail = (1 - confidence) / 2;
         BinomialDistribution b = new BinomialDistribution(null, n, 0.5);
-        int r = 0;
-        while (r + 1 <= (n + 1) / 2 && b.cumulativeProbability(r) <= tail) {
-            r++;
-        }
+        int r = largestRank(b, n, tail);
         if (r == 0) {
             return new MedianInterval(n, median, Double.NaN, Double.NaN, Double.NaN,
                     "n = " + n + " is too small for a distribution-free " + Math.round(confidence * 100)
@@ -40,6 +37,24 @@ public record MedianInterval(int n, double median, double low, double high, doub
         }
         double coverage = 1 - 2 * b.cumulativeProbability(r - 1);
         return new MedianInterval(n, median, s[r - 1], s[n - r], coverage, "");
+    }
+
+    /**
+     * The largest r ≤ (n + 1)/2 with P(B ≤ r − 1) ≤ tail, or 0. The search starts at the normal
+     * approximation n/2 − z·√n/2 and steps to the exact rank, so large n cost a few CDF evaluations.
+     */
+    private static int largestRank(BinomialDistribution b, int n, double tail) {
+        double z = new org.apache.commons.math3.distribution.NormalDistribution(null, 0, 1)
+                .inverseCumulativeProbability(1 - tail);
+        int max = (n + 1) / 2;
+        int r = (int) Math.max(0, Math.min(max, Math.floor(n / 2.0 - z * Math.sqrt(n) / 2)));
+        while (r > 0 && b.cumulativeProbability(r - 1) > tail) {
+            r--;
+        }
+        while (r + 1 <= max && b.cumulativeProbability(r) <= tail) {
+            r++;
+        }
+        return r;
     }
 
     public boolean estimated() {

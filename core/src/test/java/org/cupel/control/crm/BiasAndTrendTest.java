@@ -64,6 +64,24 @@ class BiasAndTrendTest {
     }
 
     @Test
+    void medianIntervalRanksMatchR() throws IOException {
+        var ref = ReferenceData.columns("median_ranks.csv");
+        for (int k = 0; k < ref.get("n").length; k++) {
+            int n = (int) ref.get("n")[k];
+            double[] x = new double[n];
+            for (int i = 0; i < n; i++) {
+                x[i] = i + 1;
+            }
+            MedianInterval m = MedianInterval.of(x, 0.95);
+            // Exact: with x = 1..n the interval ends are the ranks themselves.
+            assertEquals(ref.get("r")[k], m.low(), 0.0, "n = " + n);
+            assertEquals(n - ref.get("r")[k] + 1, m.high(), 0.0, "n = " + n);
+            // 1e-9: binomial CDF by R's pbinom and Commons Math's regularized beta.
+            assertEquals(ref.get("coverage")[k], m.coverage(), 1e-9, "n = " + n);
+        }
+    }
+
+    @Test
     void smallSamplesSayWhyNothingIsEstimated() {
         // Sign-test interval: 2·0.5⁵ = 0.0625 > 0.05, so n = 5 has no 95 % interval (Conover 1999, 3.2).
         assertFalse(MedianInterval.of(new double[] {1, 2, 3, 4, 5}, 0.95).estimated());
