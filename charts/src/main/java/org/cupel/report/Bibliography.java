@@ -58,9 +58,9 @@ final class Bibliography {
                     "Journal of Quality Technology 16(4), 237-239"),
             e("Shaw", 1997, "Shaw, W. J.", "Validation of sampling and assaying quality for bankable feasibility "
                     + "studies", "The Resource Database Towards 2000, AusIMM, Melbourne"),
-            e("Smee", 2024, "Smee, B. W., Bloom, L., Arne, D. and Heberlein, D.", "Reference material mix-ups in "
-                    + "assay quality control (title to be checked)", "Geochemistry: Exploration, Environment, "
-                    + "Analysis 24"),
+            e("Smee", 2024, "Smee, B. W., Bloom, L., Arne, D. and Heberlein, D.", "Article on the use and "
+                    + "mix-up of reference materials in assay quality control (exact title not verified here)",
+                    "Geochemistry: Exploration, Environment, Analysis 24"),
             e("Spearman", 1904, "Spearman, C.", "The proof and measurement of association between two things",
                     "American Journal of Psychology 15(1), 72-101"),
             e("Stanley", 2007, "Stanley, C. R. and Lawie, D.", "Average relative error in geochemical "

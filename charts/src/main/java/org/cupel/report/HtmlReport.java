@@ -100,7 +100,7 @@ public final class HtmlReport {
             out.append("<tr>");
             for (String cell : row) {
                 out.append(TableLimit.isNumeric(cell) ? "<td class=\"n\">"
-                        : DATE.matcher(cell).matches() ? "<td class=\"d\">" : "<td>").append(e(cell))
+                        : keepWhole(cell) ? "<td class=\"d\">" : "<td>").append(e(cell))
                         .append("</td>");
             }
             out.append("</tr>\n");
@@ -121,6 +121,11 @@ public final class HtmlReport {
         out.append("<figure class=\"chart\">\n<img src=\"").append(e(files.chart(f))).append("\" alt=\"")
                 .append(e(f.caption())).append("\">\n<figcaption>").append(e(f.caption()))
                 .append("</figcaption>\n</figure>\n");
+    }
+
+    /** Dates, IDs and file names: short tokens without spaces that read badly when broken at a hyphen. */
+    private static boolean keepWhole(String cell) {
+        return DATE.matcher(cell).matches() || cell.length() <= 28 && cell.indexOf(' ') < 0;
     }
 
     static String label(ReportBlock.Level level) {

@@ -12,7 +12,7 @@ final class HtmlStyle {
             "html{font-size:16px}",
             "body{margin:0;color:var(--ink);background:#fff;font-family:\"DejaVu Sans\",\"Segoe UI\",Helvetica,Arial,"
                     + "sans-serif;line-height:1.5}",
-            "header,nav,main,footer{max-width:62rem;margin:0 auto;padding:0 1.5rem}",
+            "header,nav,main,footer{max-width:68rem;margin:0 auto;padding:0 1.5rem}",
             "header{padding-top:2rem;padding-bottom:1rem}", "header::after{content:\"\";display:block;margin-top:1rem;border-bottom:3px solid var(--accent)}",
             ".kicker{margin:0;text-transform:uppercase;letter-spacing:.12em;font-size:.8rem;color:var(--accent);"
                     + "font-weight:bold}",

@@ -34,23 +34,24 @@ class ReportCommandTest {
         assertEquals("", err.toString(), "no progress bar when stderr is not a terminal");
     }
 
+    // Screen resolution keeps these runs cheap; print resolution is covered by ReportWriterTest.
     @Test
     void anExistingFolderNeedsForce(@TempDir Path dir) {
         Path qc = dir.resolve("qc");
-        assertEquals(0, run("report", MESSY.toString(), "--out", qc.toString(), "--quiet"));
+        assertEquals(0, run("report", MESSY.toString(), "--out", qc.toString(), "--screen", "--quiet"));
         assertEquals(CupelCommand.INPUT_ERROR, run("report", MESSY.toString(), "--out", qc.toString()));
         assertTrue(err.toString().contains("--force"), err.toString());
-        assertEquals(0, run("report", MESSY.toString(), "--out", qc.toString(), "--force", "--pdf-size", "letter"));
+        assertEquals(0, run("report", MESSY.toString(), "--out", qc.toString(), "--force", "--pdf-size", "letter", "--screen"));
     }
 
     @Test
     void selectsBatchesForAWeeklyReview(@TempDir Path dir) throws Exception {
         Path full = dir.resolve("full");
         Path week = dir.resolve("week");
-        assertEquals(0, run("report", MESSY.toString(), "--out", full.toString()));
+        assertEquals(0, run("report", MESSY.toString(), "--out", full.toString(), "--screen"));
         String batches = Files.readString(full.resolve("tables/scope-batches.csv"));
         String firstBatch = batches.split("\r\n")[1].split(",")[0];
-        assertEquals(0, run("report", MESSY.toString(), "--out", week.toString(), "--batch", firstBatch));
+        assertEquals(0, run("report", MESSY.toString(), "--out", week.toString(), "--batch", firstBatch, "--screen"));
         String selected = Files.readString(week.resolve("tables/scope-batches.csv"));
         assertEquals(2, selected.split("\r\n").length, "header and the one batch: " + selected);
         assertTrue(Files.readString(week.resolve("summary.json")).contains("batches " + firstBatch));
@@ -73,7 +74,7 @@ class ReportCommandTest {
     @Test
     void theDemoProjectIsReportedUnderItsName(@TempDir Path dir) throws Exception {
         Path qc = dir.resolve("qc-appendix");
-        assertEquals(0, run("report", "--demo", "--out", qc.toString(), "--screen"), err.toString());
+        assertEquals(0, run("report", "--demo", "--out", qc.toString(), "--screen", "--quiet"), err.toString());
         String json = Files.readString(qc.resolve("summary.json"));
         assertTrue(json.contains("\"project\" : \"Vellmar Hills gold-silver project\""), json);
     }

@@ -143,13 +143,18 @@ public final class ProjectLoader {
 
         Project run() {
             requireFolder(folder);
-            List<LabFile> labs = readLabs();
-            Map<String, GradeUnit> units = reportingUnits(labs);
+            Map<String, GradeUnit> units = configuredUnits();
             SampleRegister register = readRegister();
-            CatalogReader.Result catalog = readCatalog(units);
             SampleJoin join = new SampleJoin(register, units, exceptions);
-            labs.forEach(join::add);
+            // One lab file in memory at a time: each is joined as soon as it is read.
+            readLabs(file -> {
+                for (LabColumn c : file.columns()) {
+                    units.putIfAbsent(c.analyte().analyte(), c.analyte().unit());
+                }
+                join.add(file);
+            });
             join.finishRegister();
+            CatalogReader.Result catalog = readCatalog(units);
             SampleTable table = join.buildSamples();
             CrmCatalog crms = catalog == null ? CrmCatalog.empty() : catalog.catalog();
             join.checkReferences(table, crms, catalog != null);
@@ -172,23 +177,24 @@ public final class ProjectLoader {
             return new Project(name, folder, config, table, columns, crms, exceptions, accounts);
         }
 
-        private List<LabFile> readLabs() {
+        private void readLabs(java.util.function.Consumer<LabFile> sink) {
             List<Path> files = labFiles(folder);
             if (files.isEmpty()) {
                 fail(LAB_DIR, "lab results", new InputException(folder.resolve(LAB_DIR) + ": no lab result files "
                         + "(expected .csv, .tsv, .txt or .xlsx files in lab/); put the lab's result files there."));
             }
             LabFileReader reader = new LabFileReader(settings);
-            List<LabFile> out = new ArrayList<>();
             for (Path f : files) {
                 String name = displayName(f);
+                LabFile file;
                 try {
-                    out.add(reader.read(f, name));
+                    file = reader.read(f, name);
                 } catch (InputException e) {
                     fail(name, "lab results", e);
+                    continue;
                 }
+                sink.accept(file);
             }
-            return out;
         }
 
         private SampleRegister readRegister() {
@@ -217,17 +223,13 @@ public final class ProjectLoader {
             }
         }
 
-        private Map<String, GradeUnit> reportingUnits(List<LabFile> labs) {
+        /** {@code ingest.units}; analytes not listed take the unit of the first column seen. */
+        private Map<String, GradeUnit> configuredUnits() {
             Map<String, GradeUnit> units = new LinkedHashMap<>();
             settings.units().forEach((analyte, symbol) -> units.put(analyte, GradeUnit.parse(symbol)
                     .orElseThrow(() -> new ConfigException(config.source() + ": ingest.units." + analyte + " is '"
                             + symbol + "', not a unit Cupel knows (expected ppb, ppm, g/t, mg/kg, %, oz/st or oz/lt); "
                             + "correct it in cupel.yaml."))));
-            for (LabFile f : labs) {
-                for (LabColumn c : f.columns()) {
-                    units.putIfAbsent(c.analyte().analyte(), c.analyte().unit());
-                }
-            }
             return units;
         }
 

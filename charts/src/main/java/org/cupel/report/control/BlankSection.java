@@ -18,18 +18,11 @@ import org.cupel.control.Verdict;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
-import org.cupel.report.Reference;
 
 /** Blanks: summary per analyte, the blanks that did not pass with their preceding sample, and the charts. */
 public final class BlankSection {
     private BlankSection() {
     }
-
-    static final List<Reference> REFERENCES = List.of(
-            new Reference("Spearman, C.", 1904, "The proof and measurement of association between two things",
-                    "American Journal of Psychology 15"),
-            new Reference("Zar, J. H.", 1972, "Significance testing of the Spearman rank correlation coefficient",
-                    "Journal of the American Statistical Association 67"));
 
     /** With every threshold described as the default (use {@link #build(BlankReport, CupelConfig)} in reports). */
     public static ReportSection build(BlankReport report) {
@@ -77,7 +70,7 @@ public final class BlankSection {
         headlines.put("blankResults", report.results().size());
         headlines.put("blankFailures", fails);
         headlines.put("blankCarryOver", carry);
-        return new ReportSection("blanks", "Blanks", blocks, headlines, REFERENCES);
+        return new ReportSection("blanks", "Blanks", blocks, headlines);
     }
 
     static ReportTable summaryTable(BlankReport report) {

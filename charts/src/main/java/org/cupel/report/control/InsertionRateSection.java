@@ -11,13 +11,9 @@ import org.cupel.control.InsertionRates;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
-import org.cupel.report.Reference;
 
 /** Insertion rates of CRMs, blanks and each duplicate type per batch and overall, against the targets. */
 public final class InsertionRateSection {
-    static final Reference ABZALOV = new Reference("Abzalov, M.", 2008, "Quality control of assay data: a review of "
-            + "procedures for measuring and monitoring precision and accuracy", "Exploration and Mining Geology 17");
-
     private InsertionRateSection() {
     }
 
@@ -32,7 +28,7 @@ public final class InsertionRateSection {
         for (InsertionRate r : rates.overall().rates()) {
             headlines.put("insertionRate " + r.role(), r.rate());
         }
-        return new ReportSection("insertion-rates", "Insertion rates", blocks, headlines, List.of(ABZALOV));
+        return new ReportSection("insertion-rates", "Insertion rates", blocks, headlines);
     }
 
     /** Column names of {@link InsertionRates#ROLES}, in that order. */

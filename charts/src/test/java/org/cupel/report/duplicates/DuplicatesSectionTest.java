@@ -25,6 +25,7 @@ class DuplicatesSectionTest {
         assertEquals(Math.round(10000 * rms) / 100.0, s.headlines().get("Au.pulp_duplicate.rmsCvPercent"));
         String settings = ((ReportBlock.Paragraph) s.blocks().get(1)).text();
         assertTrue(settings.contains("common practice"), settings);
+        assertTrue(s.references().stream().anyMatch(r -> r.authors().startsWith("Miller")));
     }
 
     @Test

@@ -126,6 +126,16 @@ class CrmReviewTest {
     }
 
     @Test
+    void anUnknownRuleIdInTheConfigIsAnErrorNamingIt() {
+        var cfg = CupelConfig.fromYaml("crm:\n  rules:\n    9-9s: fail\n", "cupel.yaml");
+        var p = planted().project(cfg);
+        var e = org.junit.jupiter.api.Assertions.assertThrows(org.cupel.config.ConfigException.class,
+                () -> CrmReview.of(p));
+        assertTrue(e.getMessage().contains("cupel.yaml") && e.getMessage().contains("unknown CRM rule '9-9s'"),
+                e.getMessage());
+    }
+
+    @Test
     void plantedDriftIsFoundByTrendEwmaAndCusum() {
         CrmFixture f = new CrmFixture().certificate("MID", 2.50, 0.10);
         for (int i = 0; i < 30; i++) {
