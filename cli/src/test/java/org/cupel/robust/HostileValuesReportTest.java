@@ -125,6 +125,16 @@ class HostileValuesReportTest {
         assertTrue(cells.stream().anyMatch(c -> c.startsWith("'=JOB(1)")), "the batch is kept, neutralised");
     }
 
+    /** Guarantee 6 on summary.json: the project is also degenerate (8 pairs, too few for Thompson–Howarth; 2 CRM results). */
+    @Test
+    void summaryJsonHoldsNoUnexplainedNaN() throws IOException {
+        List<String> unexplained = new ArrayList<>();
+        DegenerateNumbersTest.collect("summary", com.fasterxml.jackson.databind.json.JsonMapper.builder()
+                .enable(com.fasterxml.jackson.core.json.JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS).build()
+                .readTree(out.resolve("summary.json").toFile()), false, unexplained);
+        assertEquals(List.of(), unexplained);
+    }
+
     @Test
     void noHostileValueReachesAFileName() throws IOException {
         try (Stream<Path> s = Files.walk(out)) {
