@@ -67,7 +67,9 @@ public final class CupelCommand implements Callable<Integer> {
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
             boolean isInput = ex instanceof InputException || ex instanceof ConfigException;
-            String message = ex.getMessage() == null ? ex.getClass().getSimpleName() : ex.getMessage();
+            // One line per error: a message may quote a cell or parser text that holds line breaks.
+            String message = ex.getMessage() == null ? ex.getClass().getSimpleName()
+                    : ex.getMessage().strip().replaceAll("\\s*\\R\\s*", " ");
             err.println((isInput ? "cupel: " : "cupel: internal error: ") + message);
             if (top.verbose) {
                 ex.printStackTrace(err);
