@@ -64,9 +64,24 @@ public final class CupelConfig {
         } catch (JsonProcessingException e) {
             var loc = e.getLocation();
             String where = loc == null ? sourceName : sourceName + ":" + loc.getLineNr() + ":" + loc.getColumnNr();
-            throw new ConfigException(where + ": not valid YAML (" + e.getOriginalMessage()
+            throw new ConfigException(where + ": not valid YAML (" + oneLine(e.getOriginalMessage())
                     + "). Fix the syntax, or remove the file to use the defaults.", e);
         }
+    }
+
+    /**
+     * The parser's explanation without its echo of the offending text and position lines (those are
+     * indented), so that the message stays one line on the terminal and the position is given once.
+     */
+    private static String oneLine(String parserMessage) {
+        if (parserMessage == null) {
+            return "unreadable";
+        }
+        String kept = parserMessage.lines()
+                .filter(l -> !l.isBlank() && !Character.isWhitespace(l.charAt(0)))
+                .map(String::strip)
+                .collect(java.util.stream.Collectors.joining("; "));
+        return kept.isEmpty() ? parserMessage.strip().replaceAll("\\s+", " ") : kept;
     }
 
     /** Where the settings came from: a file name or "(defaults)". */

@@ -23,9 +23,12 @@ public record Estimate(double value, double ciLow, double ciHigh, int n, String 
         return new Estimate(value, ciLow, ciHigh, n, note);
     }
 
-    /** A point estimate without interval. */
+    /** Why a point estimate has no interval: its NaN bounds must not reach an output unexplained. */
+    public static final String NO_INTERVAL = "point estimate; no confidence interval is computed for it";
+
+    /** A point estimate without interval (the note says so). */
     public static Estimate point(double value, int n) {
-        return new Estimate(value, Double.NaN, Double.NaN, n, "");
+        return new Estimate(value, Double.NaN, Double.NaN, n, Double.isNaN(value) ? "" : NO_INTERVAL);
     }
 
     public static Estimate unavailable(int n, String reason) {

@@ -1,0 +1,103 @@
+package org.cupel.robust;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.File;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.stream.Stream;
+import org.cupel.cli.CupelCommand;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Guarantees 3 and 7 with real processes: a {@code cupel report} killed part-way leaves the previous
+ * complete report (or none), never a mix; two runs with the same {@code SOURCE_DATE_EPOCH} give
+ * byte-identical CSV and JSON. The in-process checks of the same writer are in ReportWriterTest and
+ * ReportCommandTest (--force).
+ */
+class ReportProcessTest {
+    private static final Path MESSY = Path.of(System.getProperty("cupel.testdata"), "fixtures", "ingest",
+            "messy-project");
+
+    @Test
+    void aKilledRunLeavesThePreviousReportWhole(@TempDir Path dir) throws Exception {
+        Path out = dir.resolve("qc");
+        assertEquals(0, report(out, false).waitFor());
+        Map<String, String> previous = HostileValuesReportTest.hashes(out);
+        Process p = report(out, true);
+        waitForTemporaryFolder(dir, p);
+        p.destroyForcibly().waitFor();
+        assertEquals(previous, HostileValuesReportTest.hashes(out), "the previous report, untouched");
+    }
+
+    @Test
+    void aKilledFirstRunLeavesNoReport(@TempDir Path dir) throws Exception {
+        Path out = dir.resolve("qc");
+        Process p = report(out, false);
+        waitForTemporaryFolder(dir, p);
+        p.destroyForcibly().waitFor();
+        if (Files.exists(out)) {
+            assertTrue(Files.exists(out.resolve("summary.json")) && Files.exists(out.resolve(".cupel-report")),
+                    "the run finished before the kill: then the folder is complete");
+        } else {
+            assertFalse(Files.exists(out));
+        }
+    }
+
+    @Test
+    void twoRunsWithTheSameSourceDateEpochGiveIdenticalCsvAndJson(@TempDir Path dir) throws Exception {
+        Path a = dir.resolve("a");
+        Path b = dir.resolve("b");
+        assertEquals(0, report(a, false).waitFor());
+        assertEquals(0, report(b, false).waitFor());
+        Map<String, String> ha = dataFiles(a);
+        assertTrue(ha.containsKey("summary.json") && ha.keySet().stream().anyMatch(k -> k.endsWith(".csv")));
+        assertEquals(ha, dataFiles(b));
+    }
+
+    /** A report run of the messy fixture in its own JVM, with the test class path. */
+    private static Process report(Path out, boolean force) throws IOException {
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        List<String> cmd = new java.util.ArrayList<>(List.of(java, "-Djava.awt.headless=true", "-cp",
+                System.getProperty("java.class.path"), CupelCommand.class.getName(), "report", MESSY.toString(),
+                "--out", out.toString(), "--quiet"));
+        if (force) {
+            cmd.add("--force");
+        }
+        ProcessBuilder pb = new ProcessBuilder(cmd).redirectErrorStream(true)
+                .redirectOutput(new File(out + ".log"));
+        pb.environment().put("SOURCE_DATE_EPOCH", "1767225600");
+        return pb.start();
+    }
+
+    /** Waits until the run has started writing (its temporary folder appears) or has ended. */
+    private static void waitForTemporaryFolder(Path dir, Process p) throws IOException, InterruptedException {
+        while (p.isAlive()) {
+            try (Stream<Path> s = Files.list(dir)) {
+                if (s.anyMatch(x -> x.getFileName().toString().contains(".cupel-tmp-")
+                        && Files.exists(x.resolve("charts")))) {
+                    return;
+                }
+            }
+            Thread.sleep(20);
+        }
+    }
+
+    private static Map<String, String> dataFiles(Path out) throws IOException {
+        Map<String, String> all = HostileValuesReportTest.hashes(out);
+        Map<String, String> data = new TreeMap<>();
+        all.forEach((k, v) -> {
+            if (k.endsWith(".csv") || k.endsWith(".json")) {
+                data.put(k, v.substring(0, v.indexOf(' ')));
+            }
+        });
+        return data;
+    }
+}
