@@ -85,7 +85,7 @@ public final class HtmlReport {
     private void callout(ReportBlock.Callout c) {
         String level = c.level().name().toLowerCase(Locale.ROOT);
         out.append("<div class=\"callout ").append(level).append("\"><strong>").append(label(c.level()))
-                .append("</strong> ").append(e(c.text())).append("</div>\n");
+                .append("</strong> ").append(e(body(c))).append("</div>\n");
     }
 
     private void table(ReportTable t) {
@@ -136,6 +136,21 @@ public final class HtmlReport {
             case CAUTION: return "Caution.";
             default: return "Note.";
         }
+    }
+
+    /**
+     * The callout's text without a leading repeat of its label ("Caution: ..." under the label "Caution."),
+     * which core results sometimes carry so that they read on their own in the CLI.
+     */
+    static String body(ReportBlock.Callout c) {
+        String word = label(c.level()).replace(".", "");
+        String t = c.text().strip();
+        if (t.regionMatches(true, 0, word, 0, word.length()) && t.length() > word.length()
+                && t.charAt(word.length()) == ':') {
+            t = t.substring(word.length() + 1).strip();
+            return t.isEmpty() ? t : Character.toUpperCase(t.charAt(0)) + t.substring(1);
+        }
+        return t;
     }
 
     /** Section anchors come from sanitised IDs, so a hostile ID cannot break out of the attribute. */

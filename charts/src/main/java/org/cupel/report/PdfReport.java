@@ -141,7 +141,7 @@ public final class PdfReport {
         box.setSpacingAfter(8f);
         Phrase text = new Phrase();
         text.add(new Chunk(HtmlReport.label(c.level()) + " ", fonts.bodyBold()));
-        text.add(new Chunk(c.text(), fonts.body()));
+        text.add(new Chunk(HtmlReport.body(c), fonts.body()));
         PdfPCell cell = new PdfPCell(text);
         cell.setBorder(Rectangle.LEFT);
         cell.setBorderWidthLeft(4f);

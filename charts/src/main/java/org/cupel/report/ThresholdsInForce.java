@@ -22,7 +22,6 @@ import org.cupel.recovery.RecoverySettings;
  */
 final class ThresholdsInForce {
     private static final String PRACTICE = "common practice";
-    private static final String WESTGARD = CrmRule.Source.WESTGARD.citation();
 
     private final CupelConfig config;
     private final List<List<String>> rows = new ArrayList<>();
@@ -56,7 +55,7 @@ final class ThresholdsInForce {
         for (Map.Entry<CrmRule, RuleAction> e : s.actions().entrySet()) {
             if (e.getValue() != RuleAction.OFF) {
                 add("crm.rules." + e.getKey().id(), e.getValue().name().toLowerCase(java.util.Locale.ROOT),
-                        "CRM run rule: " + e.getKey().description(), e.getKey().source().citation());
+                        "CRM run rule: " + e.getKey().description(), shortCitation(e.getKey().source()));
             }
         }
         add("crm.ewmaLambda", s.ewmaLambda(), "EWMA weight λ of the drift check", PRACTICE);
@@ -71,6 +70,15 @@ final class ThresholdsInForce {
         add("crm.confidence", s.confidence(), "level of bias and slope intervals", PRACTICE);
         add("crm.projectLimitsMinN", s.projectLimitsMinN(), "results needed before project limits are shown",
                 PRACTICE);
+    }
+
+    /** Author and year only ("Westgard et al. 1981"); the full reference is in the references table. */
+    private static String shortCitation(CrmRule.Source source) {
+        switch (source) {
+            case WESTGARD: return "Westgard et al. 1981";
+            case WESTERN_ELECTRIC: return "Western Electric 1956";
+            default: return "Nelson 1984";
+        }
     }
 
     private void blanks(BlankSettings s) {

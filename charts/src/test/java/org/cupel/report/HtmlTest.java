@@ -9,6 +9,13 @@ import net.jqwik.api.Property;
 import org.junit.jupiter.api.Test;
 
 class HtmlTest {
+    @Test
+    void aCalloutDoesNotRepeatItsLabel() {
+        assertEquals("Fire assay is hazardous.", HtmlReport.body(new ReportBlock.Callout(ReportBlock.Level.CAUTION,
+                "Caution: fire assay is hazardous.")));
+        assertEquals("Caution: keep.", HtmlReport.body(new ReportBlock.Callout(ReportBlock.Level.INFO, "Caution: keep.")));
+    }
+
     /** Expected text follows the OWASP XSS Prevention Cheat Sheet, rule 1 (the five characters to escape). */
     @Test
     void escapesTheFiveSpecialCharacters() {
