@@ -11,9 +11,9 @@ import org.cupel.config.CupelConfig;
 /**
  * Section "Methods and references": every source the other sections cite (found by author and year in
  * their text, see {@link Citations}, or listed in {@link ReportSection#references()}), numbered in order of first
- * citation with the sections citing it, the sources of the report format itself, and the settings the
- * user changed in the project config (each section's tables name the thresholds they apply and whether
- * each comes from a published source, common practice or a user setting).
+ * citation with the sections citing it, the sources of the report format itself, the thresholds in force
+ * with their origin (published source, common practice or user setting; {@link ThresholdsInForce}), and the
+ * settings the user changed in the project config.
  */
 public final class MethodsSection {
     public static final String ID = "methods";
@@ -72,6 +72,10 @@ public final class MethodsSection {
             blocks.add(new ReportBlock.Callout(ReportBlock.Level.WARN, "Cited in the text but without a full "
                     + "reference in Cupel's bibliography: " + String.join("; ", missing) + "."));
         }
+        blocks.add(new ReportBlock.Paragraph("The thresholds in force, as the analyses applied them, and where "
+                + "each comes from:"));
+        ReportTable thresholds = ThresholdsInForce.table(config);
+        blocks.add(new ReportBlock.Table(thresholds));
         List<List<String>> settings = new ArrayList<>();
         flatten("", config.tree(), settings);
         blocks.add(new ReportBlock.Paragraph(settings.isEmpty()
@@ -86,6 +90,7 @@ public final class MethodsSection {
         h.put("references", rows.size());
         h.put("citationsWithoutReference", missing.size());
         h.put("userSettings", settings.size());
+        h.put("thresholds", thresholds.rows().size());
         return new ReportSection(ID, "Methods and references", blocks, h);
     }
 

@@ -60,12 +60,12 @@ record PdfFonts(BaseFont regular, BaseFont bold) {
         return new Font(regular, 8.5f, Font.NORMAL, MUTED);
     }
 
-    Font tableHead() {
-        return new Font(bold, PdfReport.TABLE_FONT, Font.NORMAL, INK);
+    Font tableHead(float size) {
+        return new Font(bold, size, Font.NORMAL, INK);
     }
 
-    Font tableBody() {
-        return new Font(regular, PdfReport.TABLE_FONT, Font.NORMAL, INK);
+    Font tableBody(float size) {
+        return new Font(regular, size, Font.NORMAL, INK);
     }
 
     Font frame() {

@@ -44,6 +44,9 @@ public final class PdfReport {
     static final float MARGIN_TOP = 66f;
     static final float MARGIN_BOTTOM = 58f;
     static final float TABLE_FONT = 7.8f;
+    /** Tables of many columns print smaller, so that their cells wrap less on a portrait page. */
+    static final float WIDE_TABLE_FONT = 6.6f;
+    static final int WIDE_TABLE_COLUMNS = 8;
 
     private final QcReport report;
     private final ReportFiles files;
@@ -153,7 +156,8 @@ public final class PdfReport {
     private void addTable(Chapter ch, ReportTable t) {
         PdfPTable table = new PdfPTable(t.columns().size());
         float available = doc.getPageSize().getWidth() - 2 * MARGIN_X;
-        float[] widths = PdfTableWidths.of(t, fonts.bold(), fonts.regular(), TABLE_FONT, available);
+        float size = t.columns().size() >= WIDE_TABLE_COLUMNS ? WIDE_TABLE_FONT : TABLE_FONT;
+        float[] widths = PdfTableWidths.of(t, fonts.bold(), fonts.regular(), size, available);
         float sum = 0;
         for (float w : widths) {
             sum += w;
@@ -175,7 +179,7 @@ public final class PdfReport {
         caption.setPaddingBottom(4f);
         table.addCell(caption);
         for (String c : t.columns()) {
-            PdfPCell cell = new PdfPCell(new Phrase(c, fonts.tableHead()));
+            PdfPCell cell = new PdfPCell(new Phrase(c, fonts.tableHead(size)));
             cell.setBackgroundColor(new Color(234, 236, 240));
             cell.setBorder(Rectangle.BOTTOM);
             cell.setBorderWidthBottom(1f);
@@ -186,7 +190,7 @@ public final class PdfReport {
         int shown = Math.min(rows.size(), TableLimit.SHOWN);
         for (int r = 0; r < shown; r++) {
             for (String v : rows.get(r)) {
-                PdfPCell cell = new PdfPCell(new Phrase(v, fonts.tableBody()));
+                PdfPCell cell = new PdfPCell(new Phrase(v, fonts.tableBody(size)));
                 cell.setBorder(Rectangle.BOTTOM);
                 cell.setBorderColor(new Color(205, 209, 215));
                 cell.setBorderWidthBottom(0.5f);

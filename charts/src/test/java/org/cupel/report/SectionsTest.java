@@ -64,6 +64,28 @@ class SectionsTest {
                 + "(1981). A multi-rule Shewhart chart"));
     }
 
+    // Defaults and their origins are those documented in the settings records' javadoc (BlankSettings:
+    // 5 and 3 × DL, common practice; CrmSettings: 1-3s fail after Westgard et al. 1981).
+    @Test
+    void methodsListTheThresholdsInForceWithTheirOrigin() {
+        org.cupel.config.CupelConfig config = org.cupel.config.CupelConfig.fromYaml(
+                "blanks:\n  failMultiple: 10\ncrm:\n  rules:\n    4-1s: warn\n", "cupel.yaml");
+        ReportTable t = table(MethodsSection.build(List.of(), config), "thresholds");
+        assertEquals(List.of("blanks.failMultiple", "10", "a blank fails above this × DL", "user setting"),
+                row(t, "blanks.failMultiple"));
+        assertEquals("3", row(t, "blanks.warnMultiple").get(1));
+        assertEquals("common practice", row(t, "blanks.warnMultiple").get(3));
+        assertEquals("user setting", row(t, "crm.rules.4-1s").get(3));
+        assertEquals("fail", row(t, "crm.rules.1-3s").get(1));
+        assertTrue(row(t, "crm.rules.1-3s").get(3).startsWith("Westgard"));
+        assertEquals("30", row(t, "duplicates.fieldHardLimitPercent").get(1));
+        assertTrue(t.rows().stream().noneMatch(r -> r.get(0).equals("crm.rules.R-4s")), "rules off are not listed");
+    }
+
+    private static List<String> row(ReportTable t, String setting) {
+        return t.rows().stream().filter(r -> r.get(0).equals(setting)).findFirst().orElseThrow();
+    }
+
     private static ReportTable table(ReportSection s, String id) {
         return s.blocks().stream().filter(b -> b instanceof ReportBlock.Table t && t.table().id().equals(id))
                 .map(b -> ((ReportBlock.Table) b).table()).findFirst().orElseThrow();

@@ -11,7 +11,8 @@ import picocli.CommandLine.Option;
 /**
  * The {@code cupel} command. Subcommands are thin: they parse options, call core analyses and chart
  * rendering, and print. Exit codes: 0 ok, 1 QC failures found (with {@code --fail-on-qc}), 2 usage or
- * input error, 3 internal error.
+ * input error, 3 internal error (also when the input does not fit in the Java heap: see
+ * {@link #outOfMemory}).
  */
 @Command(name = "cupel",
         mixinStandardHelpOptions = true,
@@ -31,6 +32,7 @@ import picocli.CommandLine.Option;
             DuplicatesCommand.class,
             RecoveryCommand.class,
             ReportCommand.class,
+            AnalyseCommand.class,
         })
 public final class CupelCommand implements Callable<Integer> {
 
@@ -84,7 +86,23 @@ public final class CupelCommand implements Callable<Integer> {
             err.flush();
             return INPUT_ERROR;
         });
-        return cl.execute(args);
+        try {
+            return cl.execute(args);
+        } catch (OutOfMemoryError e) {
+            return outOfMemory(e, err);
+        }
+    }
+
+    /**
+     * The one-sentence message for an input too large for the heap, instead of a stack trace. Exit 3:
+     * the input is valid, the run was not given the memory it needs.
+     */
+    static int outOfMemory(OutOfMemoryError e, PrintWriter err) {
+        long maxMiB = Runtime.getRuntime().maxMemory() / (1024 * 1024);
+        err.println("cupel: the input does not fit in the Java heap (" + maxMiB + " MiB, " + e.getMessage()
+                + "); run again with a larger heap, for example CUPEL_JAVA_OPTS=-Xmx8g (see docs/performance.md).");
+        err.flush();
+        return INTERNAL_ERROR;
     }
 
     /** Version from the jar manifest, or "development" when run from classes. */

@@ -28,7 +28,7 @@ class CheckCommandTest {
         assertTrue(r.out.contains("Project: Messy ingest fixture (18 samples in 2 batches)"), r.out);
         assertTrue(r.out.matches("(?s).*lab/batch-A\\.csv\\s+lab results\\s+21\\s+16\\s+5\\s+yes.*"), r.out);
         assertTrue(r.out.matches("(?s).*\\nCRM\\s+2\\n.*"), r.out);
-        assertTrue(r.out.matches("(?s).*\\nAu\\s+g/t\\s+FA-GRAV 4, FA-AAS 9.*"), r.out);
+        assertTrue(r.out.matches("(?s).*\\nAu\\s+g/t\\s+FA-AAS 9, FA-GRAV 4.*"), r.out);
         assertTrue(r.out.contains("Exceptions register ("), r.out);
         assertTrue(r.out.contains("lab/batch-A.csv:22"), r.out);
     }

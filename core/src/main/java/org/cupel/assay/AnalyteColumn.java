@@ -110,75 +110,137 @@ public final class AnalyteColumn {
         return new Builder(analyte);
     }
 
-    /** Collects results row by row; a row may receive several. */
+    /**
+     * Collects results row by row; a row may receive several. The first result of each row is kept in
+     * primitive arrays (a million-row project has ten million cells: one object per cell would not fit a
+     * 2 GiB heap); only rows that receive a second result keep their candidates as objects.
+     */
     public static final class Builder {
+        private static final byte ABSENT = -1;
         private final Analyte analyte;
-        private final Map<Integer, Object> byRow = new HashMap<>();
+        private final List<String> methods = new ArrayList<>();
+        private final Map<String, Short> methodIdx = new HashMap<>();
+        private final Map<Integer, List<MethodValue>> several = new HashMap<>();
+        private byte[] qualifiers = new byte[0];
+        private double[] values = new double[0];
+        private double[] limits = new double[0];
+        private byte[] missing = new byte[0];
+        private short[] methodOf = new short[0];
+        private String[] sourceFile = new String[0];
+        private long[] sourceLine = new long[0];
+        private int[] sourceColumn = new int[0];
 
         private Builder(Analyte analyte) {
             this.analyte = analyte;
+            methods.add("");
+            methodIdx.put("", (short) 0);
         }
 
         public Analyte analyte() {
             return analyte;
         }
 
-        @SuppressWarnings("unchecked")
         public void add(int row, MethodValue result) {
-            Object prior = byRow.get(row);
-            if (prior == null) {
-                byRow.put(row, result);
-            } else if (prior instanceof MethodValue) {
-                List<MethodValue> list = new ArrayList<>(2);
-                list.add((MethodValue) prior);
-                list.add(result);
-                byRow.put(row, list);
-            } else {
-                ((List<MethodValue>) prior).add(result);
+            ensureCapacity(row + 1);
+            if (qualifiers[row] == ABSENT) {
+                keepFirst(row, result);
+                return;
             }
+            List<MethodValue> all = several.get(row);
+            if (all == null) {
+                all = new ArrayList<>(2);
+                all.add(first(row));
+                several.put(row, all);
+            }
+            all.add(result);
         }
 
-        @SuppressWarnings("unchecked")
+        private void keepFirst(int row, MethodValue result) {
+            AssayValue v = result.value();
+            qualifiers[row] = (byte) v.qualifier().ordinal();
+            values[row] = v.value();
+            limits[row] = v.limit();
+            missing[row] = (byte) v.missingReason().ordinal();
+            methodOf[row] = methodIdx.computeIfAbsent(result.method(), k -> {
+                methods.add(k);
+                return (short) (methods.size() - 1);
+            });
+            SourceLocation where = result.source();
+            sourceFile[row] = where == null ? null : where.file();
+            sourceLine[row] = where == null ? 0 : where.line();
+            sourceColumn[row] = where == null ? 0 : where.column();
+        }
+
+        private MethodValue first(int row) {
+            SourceLocation where = sourceFile[row] == null ? null
+                    : new SourceLocation(sourceFile[row], sourceLine[row], sourceColumn[row]);
+            return new MethodValue(methods.get(methodOf[row]), new AssayValue(QUALIFIERS[qualifiers[row]],
+                    values[row], limits[row], REASONS[missing[row]]), where);
+        }
+
+        private void ensureCapacity(int size) {
+            int old = qualifiers.length;
+            if (size <= old) {
+                return;
+            }
+            int capacity = Math.max(size, Math.max(16, old + (old >> 1)));
+            qualifiers = Arrays.copyOf(qualifiers, capacity);
+            Arrays.fill(qualifiers, old, capacity, ABSENT);
+            values = Arrays.copyOf(values, capacity);
+            limits = Arrays.copyOf(limits, capacity);
+            missing = Arrays.copyOf(missing, capacity);
+            methodOf = Arrays.copyOf(methodOf, capacity);
+            sourceFile = Arrays.copyOf(sourceFile, capacity);
+            sourceLine = Arrays.copyOf(sourceLine, capacity);
+            sourceColumn = Arrays.copyOf(sourceColumn, capacity);
+        }
+
         public AnalyteColumn build(int rowCount, MethodSelector selector) {
-            List<String> methods = new ArrayList<>();
-            Map<String, Short> methodIdx = new HashMap<>();
-            methods.add("");
-            methodIdx.put("", (short) 0);
             AnalyteColumn col = new AnalyteColumn(analyte, rowCount, methods);
             Arrays.fill(col.qualifiers, (byte) Qualifier.MISSING.ordinal());
             Arrays.fill(col.values, Double.NaN);
             Arrays.fill(col.limits, Double.NaN);
             Arrays.fill(col.missing, (byte) MissingReason.NOT_ANALYSED.ordinal());
-            for (Map.Entry<Integer, Object> e : byRow.entrySet()) {
-                int row = e.getKey();
-                MethodValue chosen;
-                if (e.getValue() instanceof MethodValue) {
-                    chosen = (MethodValue) e.getValue();
-                } else {
-                    List<MethodValue> all = (List<MethodValue>) e.getValue();
-                    MethodSelector.Selection s = selector.select(analyte, all);
-                    chosen = all.get(s.index());
-                    List<MethodValue> ordered = new ArrayList<>(all.size());
-                    ordered.add(chosen);
-                    for (int i = 0; i < all.size(); i++) {
-                        if (i != s.index()) {
-                            ordered.add(all.get(i));
-                        }
-                    }
-                    col.candidatesByRow.put(row, List.copyOf(ordered));
-                    col.selectionReasons.put(row, s.reason());
+            int filled = Math.min(rowCount, qualifiers.length);
+            for (int row = 0; row < filled; row++) {
+                if (qualifiers[row] == ABSENT) {
+                    continue;
                 }
-                AssayValue v = chosen.value();
-                col.qualifiers[row] = (byte) v.qualifier().ordinal();
-                col.values[row] = v.value();
-                col.limits[row] = v.limit();
-                col.missing[row] = (byte) v.missingReason().ordinal();
-                col.methodIndex[row] = methodIdx.computeIfAbsent(chosen.method(), k -> {
-                    methods.add(k);
-                    return (short) (methods.size() - 1);
-                });
+                List<MethodValue> all = several.get(row);
+                if (all == null) {
+                    col.qualifiers[row] = qualifiers[row];
+                    col.values[row] = values[row];
+                    col.limits[row] = limits[row];
+                    col.missing[row] = missing[row];
+                    col.methodIndex[row] = methodOf[row];
+                } else {
+                    choose(col, row, all, selector);
+                }
             }
             return col;
+        }
+
+        private void choose(AnalyteColumn col, int row, List<MethodValue> all, MethodSelector selector) {
+            MethodSelector.Selection s = selector.select(analyte, all);
+            MethodValue chosen = all.get(s.index());
+            List<MethodValue> ordered = new ArrayList<>(all.size());
+            ordered.add(chosen);
+            for (int i = 0; i < all.size(); i++) {
+                if (i != s.index()) {
+                    ordered.add(all.get(i));
+                }
+            }
+            col.candidatesByRow.put(row, List.copyOf(ordered));
+            col.selectionReasons.put(row, s.reason());
+            AssayValue v = chosen.value();
+            col.qualifiers[row] = (byte) v.qualifier().ordinal();
+            col.values[row] = v.value();
+            col.limits[row] = v.limit();
+            col.missing[row] = (byte) v.missingReason().ordinal();
+            col.methodIndex[row] = methodIdx.computeIfAbsent(chosen.method(), k -> {
+                methods.add(k);
+                return (short) (methods.size() - 1);
+            });
         }
     }
 }

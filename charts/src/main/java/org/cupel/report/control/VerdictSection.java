@@ -30,11 +30,15 @@ public final class VerdictSection {
         int unjudged = BatchVerdicts.count(verdicts, Verdict.CANNOT_JUDGE);
         blocks.add(new ReportBlock.Callout(failed > 0 ? ReportBlock.Level.FAIL : warned > 0 ? ReportBlock.Level.WARN
                 : ReportBlock.Level.PASS, verdicts.size() + " batches: " + failed + " failed, " + warned + " warned, "
-                + unjudged + " could not be judged; " + reassay.entries().size() + " sample results to re-assay."));
+                + unjudged + " could not be judged; " + reassay.entries().size() + " sample results to re-assay."
+                + batchList(verdicts, Verdict.FAIL, " Failed: ") + batchList(verdicts, Verdict.WARN, " Warned: ")));
         blocks.add(new ReportBlock.Paragraph("A batch takes the worst verdict of its control results for each "
                 + "analyte (fail over warn over cannot judge over pass), and the worst over analytes. A batch "
                 + "without a control result for an analyte cannot be judged for it. Re-assay (common practice): "
                 + scope(reassay.scope())));
+        if (failed + warned > 0) {
+            blocks.add(new ReportBlock.Table(actionTable(verdicts)));
+        }
         blocks.add(new ReportBlock.Table(verdictTable(verdicts)));
         blocks.add(new ReportBlock.Table(reassayTable(reassay)));
         if (!reassay.brackets().isEmpty()) {
@@ -75,6 +79,37 @@ public final class VerdictSection {
         return new ReportTable("batch-verdicts", "Verdict per batch",
                 List.of("Batch", "Lab", "Samples", "Verdict", "Per analyte (control results)", "Reasons"), rows,
                 "Reasons list every control result that did not pass, with the rule that decided it.");
+    }
+
+    private static String batchList(List<BatchVerdict> verdicts, Verdict verdict, String label) {
+        List<String> ids = verdicts.stream().filter(v -> v.verdict() == verdict).map(BatchVerdict::batch).toList();
+        return ids.isEmpty() ? "" : label + String.join(", ", ids) + ".";
+    }
+
+    /**
+     * The batches a reviewer acts on, failed before warned, one row per control result that did not pass,
+     * so that each reason reads on its own line.
+     */
+    static ReportTable actionTable(List<BatchVerdict> verdicts) {
+        List<List<String>> rows = new ArrayList<>();
+        for (Verdict level : List.of(Verdict.FAIL, Verdict.WARN)) {
+            for (BatchVerdict v : verdicts) {
+                if (v.verdict() != level) {
+                    continue;
+                }
+                for (AnalyteVerdict a : v.analytes()) {
+                    for (VerdictReason r : a.reasons()) {
+                        if (r.verdict() == Verdict.FAIL || r.verdict() == Verdict.WARN) {
+                            rows.add(List.of(v.batch(), label(v.verdict()), r.analyte(), r.sampleId(), r.role(),
+                                    r.rule(), label(r.verdict()), r.reason()));
+                        }
+                    }
+                }
+            }
+        }
+        return new ReportTable("batches-to-act-on", "Failed and warned batches",
+                List.of("Batch", "Batch verdict", "Analyte", "Control", "Role", "Rule", "Result", "Reason"), rows,
+                "Failed batches first, then warned ones; one row per control result that did not pass.");
     }
 
     /** The re-assay list as a table; also written by {@code cupel batches --reassay-csv}. */

@@ -59,6 +59,14 @@ class ControlSectionsTest {
         assertEquals(List.of("S7", "S8", "S9", "S10"), re.rows().stream().map(x -> x.get(0)).toList());
         assertEquals(1, s.headlines().get("batchesFailed"));
         assertEquals(4, s.headlines().get("reassayResults"));
+        ReportTable act = table(s, "batches-to-act-on");
+        assertEquals(List.of(List.of("J1", "fail", "Au", "S6", "blank", "blank > 5×DL", "fail",
+                "S6 Au: 0.3 g/t is above 0.025 g/t")), act.rows(), "only the result that did not pass");
+        assertTrue(((ReportBlock.Callout) s.blocks().get(0)).text().endsWith("Failed: J1."));
+        assertTrue(s.blocks().indexOf(s.blocks().stream().filter(b -> b instanceof ReportBlock.Table x
+                && x.table().id().equals("batches-to-act-on")).findFirst().orElseThrow())
+                < s.blocks().indexOf(s.blocks().stream().filter(b -> b instanceof ReportBlock.Table x
+                && x.table().id().equals("batch-verdicts")).findFirst().orElseThrow()), "failures lead");
     }
 
     @Test

@@ -1,0 +1,94 @@
+package org.cupel.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.concurrent.Callable;
+import org.cupel.project.InputException;
+import org.cupel.report.GenerationTime;
+import org.cupel.report.QcAppendix;
+import org.cupel.report.QcReport;
+import org.cupel.report.ReportSection;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/**
+ * {@code cupel analyse}: every analysis of the QC appendix (ingest, detection limits, CRMs, blanks,
+ * duplicates, verdicts, tables) without drawing a chart or writing a file. It prints each section's
+ * headline figures and how long the ingest and the analyses took, so it doubles as the end-to-end
+ * benchmark (bench/run-e2e.sh).
+ */
+@Command(name = "analyse", aliases = "analyze", mixinStandardHelpOptions = true,
+        description = {"Run every analysis of the QC appendix on a project, without charts or output files,",
+                "and print the headline figures of each section with the ingest and analysis times."},
+        footer = {"", "Examples:",
+                "  cupel analyse demo-project",
+                "  cupel analyse my-project --json-summary",
+                "  CUPEL_JAVA_OPTS=-Xmx4g cupel analyse big-project"})
+public final class AnalyseCommand implements Callable<Integer> {
+
+    @Parameters(paramLabel = "<project-folder>",
+            description = "The project folder (cupel.yaml, register.csv, crm-catalog.csv, lab/).")
+    Path projectFolder;
+
+    @Option(names = {"--json-summary", "--json"}, description = "Print the summary as JSON.")
+    boolean json;
+
+    @Spec
+    CommandSpec spec;
+
+    /** What the command prints: sizes, the two phase times, and each section's headline figures. */
+    record Summary(String project, int samples, int analytes, long ingestMillis, long analysisMillis,
+                   List<SectionHeadlines> sections) {
+    }
+
+    /** One section's id, title and headline figures. */
+    record SectionHeadlines(String id, String title, Map<String, Object> headlines) {
+    }
+
+    @Override
+    public Integer call() {
+        if (!Files.isDirectory(projectFolder)) {
+            throw new InputException(projectFolder + " is not a folder; give the project folder that holds "
+                    + "register.csv and lab/");
+        }
+        long start = System.nanoTime();
+        ReportInputs inputs = ReportInputs.load(projectFolder);
+        long loaded = System.nanoTime();
+        QcReport report = QcAppendix.build(inputs.project(), inputs.testwork(), "all batches",
+                GenerationTime.from(System.getenv(), Clock.systemUTC()));
+        long analysed = System.nanoTime();
+        Summary summary = new Summary(inputs.project().name(), inputs.project().samples().size(),
+                inputs.project().analytes().size(), (loaded - start) / 1_000_000, (analysed - loaded) / 1_000_000,
+                report.sections().stream()
+                        .map(s -> new SectionHeadlines(s.id(), s.title(), new TreeMap<>(s.headlines())))
+                        .toList());
+        PrintWriter out = spec.commandLine().getOut();
+        if (json) {
+            Json.print(out, summary);
+        } else {
+            print(out, summary);
+        }
+        return CupelCommand.OK;
+    }
+
+    private static void print(PrintWriter out, Summary s) {
+        out.printf("%s: %d samples, %d analytes; ingest %d ms, analyses %d ms%n", s.project(), s.samples(),
+                s.analytes(), s.ingestMillis(), s.analysisMillis());
+        TextTable table = new TextTable("Section", "Headline", "Value");
+        for (SectionHeadlines section : s.sections()) {
+            for (Map.Entry<String, Object> e : section.headlines().entrySet()) {
+                table.row(section.title(), e.getKey(), String.valueOf(e.getValue()));
+            }
+        }
+        table.print(out);
+        out.flush();
+    }
+}

@@ -1,0 +1,134 @@
+package org.cupel.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Collectors;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Every planted problem of the demo project (docs/demo.md, "Planted problems") shows where a reviewer of the
+ * QC appendix looks for it: the CSV table of its section and summary.json. The planted IDs are facts of the
+ * demo generator (default seed), not of the analyses, so these are checks against outside facts.
+ * The report runs once for the class, at screen resolution to keep it cheap.
+ */
+class DemoAppendixTest {
+    @TempDir
+    static Path dir;
+    private static Path qc;
+    private static String runErrors;
+
+    @BeforeAll
+    static void writeTheDemoAppendix() {
+        qc = dir.resolve("qc");
+        StringWriter err = new StringWriter();
+        int code = CupelCommand.run(new String[] {"report", "--demo", "--out", qc.toString(), "--screen", "--quiet"},
+                new PrintWriter(new StringWriter(), true), new PrintWriter(err, true));
+        runErrors = code + " " + err;
+        assertEquals(0, code, runErrors);
+    }
+
+    private static List<String> table(String name) throws IOException {
+        return Files.readAllLines(qc.resolve("tables").resolve(name), StandardCharsets.UTF_8);
+    }
+
+    private static List<String> rows(String name, String... needles) throws IOException {
+        return table(name).stream().filter(line -> {
+            for (String n : needles) {
+                if (!line.contains(n)) {
+                    return false;
+                }
+            }
+            return true;
+        }).collect(Collectors.toList());
+    }
+
+    private static String json() throws IOException {
+        return Files.readString(qc.resolve("summary.json"));
+    }
+
+    // Planted problem 1: VHC-23 Au drifts to +4 SD; late batches fail.
+    @Test
+    void theDriftingCrmFailsAndIsFoundDrifting() throws IOException {
+        List<String> drift = rows("crm-drift.csv", "VHC-23,Au,");
+        assertEquals(1, drift.size(), String.join("\n", table("crm-drift.csv")));
+        assertTrue(drift.get(0).contains("read high"), drift.get(0));
+        for (String other : new String[] {"VHC-11,Au,", "VHC-35,Au,", "VHC-48,Au,"}) {
+            assertTrue(rows("crm-drift.csv", other).get(0).endsWith(",none"), other + " is not planted to drift");
+        }
+        assertTrue(!rows("crm-violations.csv", "VHC-23,Au,", ",fail,").isEmpty());
+        assertTrue(rows("crm-violations.csv", ",fail,").stream().allMatch(r -> r.startsWith("VHC-23,Au,")),
+                "only VHC-23 Au fails: " + String.join("\n", rows("crm-violations.csv", ",fail,")));
+        for (String late : new String[] {"OAL-00020", "OAL-00021", "OAL-00022", "OAL-00023", "OAL-00024",
+            "OAL-00025"}) {
+            List<String> verdict = rows("batch-verdicts.csv", late + ",");
+            assertTrue(verdict.get(0).contains(",fail,") && verdict.get(0).contains("VHC-23"), verdict.get(0));
+        }
+        assertTrue(json().contains("\"crmDriftingSeries\" : 1"), "summary.json counts the drifting series");
+    }
+
+    // Planted problem 2: VH0001006 labelled VHC-11 carries VHC-35 material.
+    @Test
+    void theSwappedCrmIsAProbableSwapNotALabFailure() throws IOException {
+        List<String> swaps = rows("crm-swaps.csv", "VH0001006,OAL-00009,VHC-11,");
+        assertEquals(2, swaps.size(), "Au and Ag: " + String.join("\n", table("crm-swaps.csv")));
+        assertTrue(swaps.stream().allMatch(s -> s.contains(",VHC-35,") && s.contains("not a lab failure")));
+        assertTrue(rows("crm-violations.csv", "VH0001006").isEmpty(), "a swap is not a rule violation");
+        assertTrue(rows("batch-verdicts.csv", "OAL-00009,").get(0).contains("probable swap"));
+        assertTrue(!rows("batch-verdicts.csv", "OAL-00009,").get(0).contains(",fail,"));
+        assertTrue(rows("reassay-list.csv", "OAL-00009,").isEmpty(), "a swap asks for the insertion record, not re-assay");
+        assertTrue(json().contains("\"crmSwaps\" : 2"));
+    }
+
+    // Planted problem 3: blank VH0001397 at 0.208 g/t Au after the 8.95 g/t VH0001396.
+    @Test
+    void theContaminatedBlankFailsItsBatchAndListsTheSamplesAfterIt() throws IOException {
+        List<String> blank = rows("blank-findings.csv", "VH0001397,OAL-00012,", ",Au,");
+        assertEquals(1, blank.size());
+        assertTrue(blank.get(0).contains(",fail,") && blank.get(0).contains("VH0001396")
+                && blank.get(0).endsWith(",yes"), "fails as carry-over after VH0001396: " + blank.get(0));
+        assertTrue(rows("blank-findings.csv", ",fail,").size() == 1, "only the planted blank fails");
+        assertTrue(rows("batch-verdicts.csv", "OAL-00012,").get(0).contains(",fail,"));
+        for (String after : new String[] {"VH0001398", "VH0001399", "VH0001400"}) {
+            assertEquals(1, rows("reassay-list.csv", after + ",OAL-00012,", ",Au,", "VH0001397").size(), after);
+        }
+        assertTrue(rows("reassay-list.csv", "VH0001396,").isEmpty(), "the sample before the blank is not re-assayed");
+        assertTrue(json().contains("\"blankCarryOver\" : 1") && json().contains("\"blankFailures\" : 1"));
+    }
+
+    // Planted problem 4: OAL-00016's pulp duplicates have log SD 0.42 instead of 0.07.
+    @Test
+    void thePoorPulpPrecisionBatchIsFlagged() throws IOException {
+        List<String> flagged = rows("duplicates-batches-Au.csv", "less precise than the set");
+        assertEquals(List.of("OAL-00016,pulp duplicate"),
+                flagged.stream().map(r -> r.substring(0, r.indexOf(",", r.indexOf(",") + 1))).collect(Collectors.toList()),
+                "only the planted batch and type: " + String.join("\n", flagged));
+    }
+
+    // Planted problem 5: 7 Au and 4 Ag over-limit values, each re-assayed by FA-GRAV.
+    @Test
+    void theGravimetricReassaysAreCountedByMethod() throws IOException {
+        assertTrue(rows("detection-limits.csv", "Au (ppm)", "FA-GRAV: 7").size() == 1,
+                String.join("\n", table("detection-limits.csv")));
+        assertTrue(rows("detection-limits.csv", "Ag (ppm)", "FA-GRAV: 4").size() == 1);
+    }
+
+    // Planted problems 6-8: the three data exceptions, each with file and line.
+    @Test
+    void theDataExceptionsNameFileLineAndValue() throws IOException {
+        assertEquals(1, rows("data-exceptions.csv", "lab/OAL-00014.csv,", "VH0001635", "already on line").size());
+        assertEquals(1, rows("data-exceptions.csv", "lab/OAL-00019.csv,", ",2,VH0002273,O.317,").size());
+        assertEquals(1, rows("data-exceptions.csv", "register.csv,", "VH0000644", "not received").size());
+        assertEquals(4, table("data-exceptions.csv").size(), "header and exactly the three planted exceptions");
+        assertTrue(json().contains("\"excluded\" : 3"));
+    }
+}
