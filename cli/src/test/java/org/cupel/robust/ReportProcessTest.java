@@ -13,6 +13,7 @@ import java.util.Map;
 import java.util.TreeMap;
 import java.util.stream.Stream;
 import org.cupel.cli.CupelCommand;
+import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -26,10 +27,22 @@ class ReportProcessTest {
     private static final Path MESSY = Path.of(System.getProperty("cupel.testdata"), "fixtures", "ingest",
             "messy-project");
 
+    @TempDir
+    static Path runs;
+
+    /** The two complete runs, started together (one per core): the determinism pair and the "previous report". */
+    @BeforeAll
+    static void twoCompleteRuns() throws Exception {
+        Process a = report(runs.resolve("a"), false);
+        Process b = report(runs.resolve("b"), false);
+        assertEquals(0, a.waitFor());
+        assertEquals(0, b.waitFor());
+    }
+
     @Test
     void aKilledRunLeavesThePreviousReportWhole(@TempDir Path dir) throws Exception {
         Path out = dir.resolve("qc");
-        assertEquals(0, report(out, false).waitFor());
+        copyTree(runs.resolve("a"), out);
         Map<String, String> previous = HostileValuesReportTest.hashes(out);
         Process p = report(out, true);
         waitForTemporaryFolder(dir, p);
@@ -52,14 +65,23 @@ class ReportProcessTest {
     }
 
     @Test
-    void twoRunsWithTheSameSourceDateEpochGiveIdenticalCsvAndJson(@TempDir Path dir) throws Exception {
-        Path a = dir.resolve("a");
-        Path b = dir.resolve("b");
-        assertEquals(0, report(a, false).waitFor());
-        assertEquals(0, report(b, false).waitFor());
-        Map<String, String> ha = dataFiles(a);
+    void twoRunsWithTheSameSourceDateEpochGiveIdenticalCsvAndJson() throws Exception {
+        Map<String, String> ha = dataFiles(runs.resolve("a"));
         assertTrue(ha.containsKey("summary.json") && ha.keySet().stream().anyMatch(k -> k.endsWith(".csv")));
-        assertEquals(ha, dataFiles(b));
+        assertEquals(ha, dataFiles(runs.resolve("b")));
+    }
+
+    private static void copyTree(Path from, Path to) throws IOException {
+        try (Stream<Path> s = Files.walk(from)) {
+            for (Path p : s.toList()) {
+                Path t = to.resolve(from.relativize(p).toString());
+                if (Files.isDirectory(p)) {
+                    Files.createDirectories(t);
+                } else {
+                    Files.copy(p, t, java.nio.file.StandardCopyOption.COPY_ATTRIBUTES);
+                }
+            }
+        }
     }
 
     /** A report run of the messy fixture in its own JVM, with the test class path. */

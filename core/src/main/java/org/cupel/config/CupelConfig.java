@@ -109,6 +109,14 @@ public final class CupelConfig {
         JsonNode merged = merge(YAML.valueToTree(defaults), user);
         try {
             return YAML.treeToValue(merged, type);
+        } catch (com.fasterxml.jackson.databind.exc.ValueInstantiationException e) {
+            // The settings record rejected a value: its own IllegalArgumentException says why in the user's
+            // terms; anything else (a null from an empty value) must not surface as a Java class name.
+            Throwable cause = e.getCause();
+            String why = cause instanceof IllegalArgumentException && cause.getMessage() != null ? cause.getMessage()
+                    : "a value is empty or of the wrong kind, for example a key with nothing after its colon";
+            throw new ConfigException(source + ": section '" + name + "' has a setting Cupel cannot use ("
+                    + why + "). Check the key names and value types against docs/config.md.", e);
         } catch (JsonProcessingException | IllegalArgumentException e) {
             String msg = e instanceof JsonProcessingException
                     ? ((JsonProcessingException) e).getOriginalMessage() : e.getMessage();
