@@ -29,6 +29,12 @@ public record DemoSummary(List<String> files, Map<QcRole, Long> registered, long
         planted = List.copyOf(planted);
     }
 
+    /** The planted problem of one kind; every kind is planted once. */
+    public PlantedProblem planted(PlantedProblem.Kind kind) {
+        return planted.stream().filter(p -> p.kind() == kind).findFirst()
+                .orElseThrow(() -> new IllegalArgumentException("no planted problem of kind " + kind));
+    }
+
     /** Register rows of every role. */
     public long registeredTotal() {
         return registered.values().stream().mapToLong(Long::longValue).sum();

@@ -3,10 +3,7 @@ package org.cupel.demo;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.BufferedWriter;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -44,16 +41,12 @@ class DemoControlFindingsTest {
 
     @BeforeAll
     static void load() throws IOException {
-        summary = DemoGenerator.generate(DemoSettings.defaults(), relative -> {
-            Path file = dir.resolve(relative);
-            Files.createDirectories(file.getParent());
-            return new BufferedWriter(Files.newBufferedWriter(file, StandardCharsets.UTF_8));
-        });
+        summary = DemoOnDisk.write(dir);
         project = ProjectLoader.load(dir);
     }
 
     private static List<String> planted(Kind kind) {
-        return summary.planted().stream().filter(p -> p.kind() == kind).findFirst().orElseThrow().sampleIds();
+        return summary.planted(kind).sampleIds();
     }
 
     @Test

@@ -4,9 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.BufferedWriter;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -40,11 +38,7 @@ class DemoIngestCompatibilityTest {
 
     @BeforeAll
     static void write() throws IOException {
-        summary = DemoGenerator.generate(DemoSettings.defaults(), relative -> {
-            Path file = dir.resolve(relative);
-            Files.createDirectories(file.getParent());
-            return new BufferedWriter(Files.newBufferedWriter(file, StandardCharsets.UTF_8));
-        });
+        summary = DemoOnDisk.write(dir);
     }
 
     private static List<Path> labFiles() throws IOException {
@@ -82,7 +76,7 @@ class DemoIngestCompatibilityTest {
                 }
             }
         }
-        PlantedProblem typo = summary.planted().stream().filter(p -> p.kind() == Kind.TEXT_TYPO).findFirst().orElseThrow();
+        PlantedProblem typo = summary.planted(Kind.TEXT_TYPO);
         assertEquals(typo.sampleIds(), unreadable);
         assertTrue(below > 100, "below detection " + below);
         assertTrue(above >= 4, "above the upper limit " + above);

@@ -36,7 +36,7 @@ class DemoPlantedProblemsTest {
     }
 
     private static PlantedProblem planted(Kind kind) {
-        return summary.planted().stream().filter(p -> p.kind() == kind).findFirst().orElseThrow();
+        return summary.planted(kind);
     }
 
     private static List<LabRow> primaryRowsWithRole(String role) {

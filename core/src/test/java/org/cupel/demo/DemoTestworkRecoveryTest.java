@@ -2,10 +2,7 @@ package org.cupel.demo;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import java.io.BufferedWriter;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import org.cupel.ingest.ValueConventions;
 import org.cupel.recovery.ComparisonVerdict;
@@ -33,11 +30,7 @@ class DemoTestworkRecoveryTest {
 
     @BeforeAll
     static void analyse() throws IOException {
-        DemoGenerator.generate(DemoSettings.defaults(), relative -> {
-            Path file = dir.resolve(relative);
-            Files.createDirectories(file.getParent());
-            return new BufferedWriter(Files.newBufferedWriter(file, StandardCharsets.UTF_8));
-        });
+        DemoOnDisk.write(dir);
         testwork = TestworkReader.read(dir, RecoverySettings.DEFAULTS, ValueConventions.DEFAULTS);
         result = RecoveryAnalysis.run(testwork, RecoverySettings.DEFAULTS);
     }

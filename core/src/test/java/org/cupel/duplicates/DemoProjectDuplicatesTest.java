@@ -3,13 +3,10 @@ package org.cupel.duplicates;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.Writer;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.cupel.assay.QcRole;
-import org.cupel.demo.DemoGenerator;
-import org.cupel.demo.DemoSettings;
+import org.cupel.demo.DemoOnDisk;
 import org.cupel.demo.DemoSummary;
 import org.cupel.demo.PlantedProblem;
 import org.cupel.ingest.ProjectLoader;
@@ -23,13 +20,8 @@ class DemoProjectDuplicatesTest {
 
     @Test
     void plantedPoorPulpBatchIsTheOneFlaggedAsLessPrecise() throws Exception {
-        DemoSummary summary = DemoGenerator.generate(DemoSettings.defaults(), relative -> {
-            Path p = dir.resolve(relative);
-            Files.createDirectories(p.getParent());
-            return Files.newBufferedWriter(p);
-        });
-        PlantedProblem planted = summary.planted().stream()
-                .filter(p -> p.kind() == PlantedProblem.Kind.POOR_PULP_PRECISION).findFirst().orElseThrow();
+        DemoSummary summary = DemoOnDisk.write(dir);
+        PlantedProblem planted = summary.planted(PlantedProblem.Kind.POOR_PULP_PRECISION);
         List<DuplicateReport> reports = PairExtraction.analyse(ProjectLoader.load(dir), DuplicateSettings.DEFAULTS,
                 "Au", QcRole.PULP_DUPLICATE);
         DuplicateSetResult pulp = reports.get(0).sets().get(0);
