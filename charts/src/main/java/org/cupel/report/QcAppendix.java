@@ -4,12 +4,7 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import org.cupel.censored.AnalyteCensoring;
-import org.cupel.censored.CensoredSettings;
 import org.cupel.control.BatchReview;
-import org.cupel.control.crm.CrmReview;
-import org.cupel.duplicates.DuplicateSettings;
-import org.cupel.duplicates.PairExtraction;
 import org.cupel.project.Project;
 import org.cupel.project.ProjectSummary;
 import org.cupel.recovery.RecoveryResult;
@@ -40,19 +35,22 @@ public final class QcAppendix {
      */
     public static QcReport build(Project project, Optional<RecoveryResult> testwork, String selection,
                                  Instant generated) {
-        CrmReview crms = CrmReview.of(project);
-        BatchReview batches = BatchReview.of(project, crms.outcomes());
-        DuplicateSettings duplicates = project.config().section("duplicates", DuplicateSettings.class,
-                DuplicateSettings.DEFAULTS);
+        return build(project, AppendixAnalyses.of(project), testwork, selection, generated);
+    }
+
+    /** The report of {@code project} from analyses already computed (so a caller can time them). */
+    public static QcReport build(Project project, AppendixAnalyses analyses, Optional<RecoveryResult> testwork,
+                                 String selection, Instant generated) {
+        BatchReview batches = analyses.batches();
         List<ReportSection> sections = new ArrayList<>();
         sections.add(ScopeSection.build(ProjectSummary.of(project), selection));
         sections.add(InsertionRateSection.build(batches.insertion()));
         sections.add(VerdictSection.build(batches.verdicts(), batches.reassay()));
         sections.add(DataExceptionsSection.build(project));
-        sections.add(DetectionLimitSection.build(AnalyteCensoring.of(project, CensoredSettings.from(project.config()))));
-        sections.add(CrmSection.of(crms));
+        sections.add(DetectionLimitSection.build(analyses.censoring()));
+        sections.add(CrmSection.of(analyses.crms()));
         sections.add(BlankSection.build(batches.blanks(), project.config()));
-        sections.add(DuplicatesSection.build(PairExtraction.analyse(project, duplicates),
+        sections.add(DuplicatesSection.build(analyses.duplicates(),
                 path -> project.config().isUserSet(path)));
         testwork.ifPresent(r -> sections.add(TestworkSection.build(r)));
         ReportSection cautions = CautionsSection.build();

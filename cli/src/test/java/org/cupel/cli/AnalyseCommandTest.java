@@ -27,6 +27,7 @@ class AnalyseCommandTest {
                 new PrintWriter(out), new PrintWriter(err)), err.toString());
         String json = out.toString();
         assertTrue(json.contains("\"ingestMillis\"") && json.contains("\"analysisMillis\""), json);
+        assertTrue(json.contains("\"stageMillis\"") && json.contains("\"duplicates\"") && json.contains("\"tables\""), json);
         assertTrue(json.contains("\"id\" : \"duplicates\""), json);
         try (var s = java.nio.file.Files.walk(dir)) {
             assertEquals(filesBefore, s.count(), "analyse writes no file");
