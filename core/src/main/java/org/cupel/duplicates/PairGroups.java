@@ -63,7 +63,7 @@ public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, 
             }
             mean[j] = sumM / groupSize;
             rms[j] = Math.sqrt(sumD2 / (2.0 * groupSize));
-            med[j] = PrecisionMeasures.median(buffer);
+            med[j] = PrecisionMeasures.medianInPlace(buffer, groupSize);
         }
         int dropped = n - g * groupSize;
         return new PairGroups(groupSize, mean, med, rms, dropped, dropped > 0 ? sortedMeans[g * groupSize] : Double.NaN);
