@@ -90,6 +90,13 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
                 batchTestAlpha);
     }
 
+    public DuplicateSettings withBootstrapMaxPairs(int maxPairs) {
+        return new DuplicateSettings(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent,
+                fieldHardLimitPercent, coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent,
+                umpireHardLimitPercent, thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, maxPairs,
+                precisionGrades, batchTestAlpha);
+    }
+
     public DuplicateSettings withPrecisionGrades(List<Double> grades) {
         return new DuplicateSettings(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent,
                 fieldHardLimitPercent, coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent,

@@ -1,7 +1,5 @@
 package org.cupel.duplicates;
 
-import java.util.Arrays;
-
 /**
  * Pairs sorted by pair mean and cut into consecutive groups of equal size from the lowest mean; the
  * remainder at the top is dropped (the grouping of Thompson and Howarth 1978, "A new approach to the
@@ -17,6 +15,8 @@ import java.util.Arrays;
  */
 public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, double[] rmsSd, int dropped,
                          double droppedFromMean) {
+    /** Runs this short are sorted by insertion before {@link #sortOrder} merges them. */
+    private static final int RUN = 32;
 
     public PairGroups {
         means = means.clone();
@@ -71,21 +71,59 @@ public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, 
 
     /**
      * The order that sorts pairs by mean, ties broken by |d|, so that the grouping and everything computed
-     * from it does not depend on the order the pairs were given in.
+     * from it does not depend on the order the pairs were given in. A stable merge sort of primitive indices
+     * (equal keys keep their input order, as {@code Arrays.sort} of objects would), without boxing.
      */
     static int[] sortOrder(double[] means, double[] absDiff) {
-        Integer[] idx = new Integer[means.length];
-        for (int i = 0; i < idx.length; i++) {
-            idx[i] = i;
+        int n = means.length;
+        int[] order = new int[n];
+        for (int i = 0; i < n; i++) {
+            order[i] = i;
         }
-        Arrays.sort(idx, (x, y) -> {
-            int c = Double.compare(means[x], means[y]);
-            return c != 0 ? c : Double.compare(absDiff[x], absDiff[y]);
-        });
-        int[] out = new int[idx.length];
-        for (int i = 0; i < out.length; i++) {
-            out[i] = idx[i];
+        int[] scratch = new int[n];
+        for (int from = 0; from < n; from += RUN) {
+            insertionSort(order, from, Math.min(n, from + RUN), means, absDiff);
         }
-        return out;
+        for (int width = RUN; width < n; width *= 2) {
+            for (int from = 0; from < n - width; from += 2 * width) {
+                merge(order, scratch, from, from + width, Math.min(n, from + 2 * width), means, absDiff);
+            }
+        }
+        return order;
+    }
+
+    private static int compare(int x, int y, double[] means, double[] absDiff) {
+        int c = Double.compare(means[x], means[y]);
+        return c != 0 ? c : Double.compare(absDiff[x], absDiff[y]);
+    }
+
+    private static void insertionSort(int[] order, int from, int to, double[] means, double[] absDiff) {
+        for (int i = from + 1; i < to; i++) {
+            int x = order[i];
+            int j = i - 1;
+            while (j >= from && compare(order[j], x, means, absDiff) > 0) {
+                order[j + 1] = order[j];
+                j--;
+            }
+            order[j + 1] = x;
+        }
+    }
+
+    /** Merges order[from, mid) and order[mid, to), taking from the left run on ties (stability). */
+    private static void merge(int[] order, int[] scratch, int from, int mid, int to, double[] means,
+                              double[] absDiff) {
+        if (compare(order[mid - 1], order[mid], means, absDiff) <= 0) {
+            return;
+        }
+        System.arraycopy(order, from, scratch, from, to - from);
+        int i = from;
+        int j = mid;
+        for (int k = from; k < to; k++) {
+            if (j >= to || (i < mid && compare(scratch[i], scratch[j], means, absDiff) <= 0)) {
+                order[k] = scratch[i++];
+            } else {
+                order[k] = scratch[j++];
+            }
+        }
     }
 }
