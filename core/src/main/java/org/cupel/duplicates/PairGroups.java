@@ -15,7 +15,7 @@ package org.cupel.duplicates;
  */
 public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, double[] rmsSd, int dropped,
                          double droppedFromMean) {
-    /** Runs this short are sorted by insertion before {@link #sortOrder} merges them. */
+    /** Runs this short are sorted by insertion before {@link #sortByMeanThenDiff} merges them. */
     private static final int RUN = 32;
 
     public PairGroups {
@@ -70,59 +70,68 @@ public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, 
     }
 
     /**
-     * The order that sorts pairs by mean, ties broken by |d|, so that the grouping and everything computed
-     * from it does not depend on the order the pairs were given in. A stable merge sort of primitive indices
-     * (equal keys keep their input order, as {@code Arrays.sort} of objects would), without boxing.
+     * Sorts pairs by mean, ties broken by |d|, so that the grouping and everything computed from it does not
+     * depend on the order the pairs were given in: {@code means} and {@code absDiff} are reordered together, in
+     * place. A merge sort of the values themselves (no index indirection, no boxing); pairs with equal mean and
+     * |d| are interchangeable, so only the sorted values matter.
      */
-    static int[] sortOrder(double[] means, double[] absDiff) {
+    static void sortByMeanThenDiff(double[] means, double[] absDiff) {
         int n = means.length;
-        int[] order = new int[n];
-        for (int i = 0; i < n; i++) {
-            order[i] = i;
-        }
-        int[] scratch = new int[n];
         for (int from = 0; from < n; from += RUN) {
-            insertionSort(order, from, Math.min(n, from + RUN), means, absDiff);
+            insertionSort(means, absDiff, from, Math.min(n, from + RUN));
         }
+        double[] m = means;
+        double[] d = absDiff;
+        double[] mOut = new double[n];
+        double[] dOut = new double[n];
         for (int width = RUN; width < n; width *= 2) {
-            for (int from = 0; from < n - width; from += 2 * width) {
-                merge(order, scratch, from, from + width, Math.min(n, from + 2 * width), means, absDiff);
+            for (int from = 0; from < n; from += 2 * width) {
+                merge(m, d, mOut, dOut, from, Math.min(n, from + width), Math.min(n, from + 2 * width));
             }
+            double[] t = m;
+            m = mOut;
+            mOut = t;
+            t = d;
+            d = dOut;
+            dOut = t;
         }
-        return order;
+        if (m != means) {
+            System.arraycopy(m, 0, means, 0, n);
+            System.arraycopy(d, 0, absDiff, 0, n);
+        }
     }
 
-    private static int compare(int x, int y, double[] means, double[] absDiff) {
-        int c = Double.compare(means[x], means[y]);
-        return c != 0 ? c : Double.compare(absDiff[x], absDiff[y]);
+    private static boolean after(double m1, double d1, double m2, double d2) {
+        int c = Double.compare(m1, m2);
+        return c > 0 || (c == 0 && Double.compare(d1, d2) > 0);
     }
 
-    private static void insertionSort(int[] order, int from, int to, double[] means, double[] absDiff) {
+    private static void insertionSort(double[] m, double[] d, int from, int to) {
         for (int i = from + 1; i < to; i++) {
-            int x = order[i];
+            double xm = m[i];
+            double xd = d[i];
             int j = i - 1;
-            while (j >= from && compare(order[j], x, means, absDiff) > 0) {
-                order[j + 1] = order[j];
+            while (j >= from && after(m[j], d[j], xm, xd)) {
+                m[j + 1] = m[j];
+                d[j + 1] = d[j];
                 j--;
             }
-            order[j + 1] = x;
+            m[j + 1] = xm;
+            d[j + 1] = xd;
         }
     }
 
-    /** Merges order[from, mid) and order[mid, to), taking from the left run on ties (stability). */
-    private static void merge(int[] order, int[] scratch, int from, int mid, int to, double[] means,
-                              double[] absDiff) {
-        if (compare(order[mid - 1], order[mid], means, absDiff) <= 0) {
-            return;
-        }
-        System.arraycopy(order, from, scratch, from, to - from);
+    /** Merges the sorted runs [from, mid) and [mid, to) of (m, d) into (mOut, dOut). */
+    private static void merge(double[] m, double[] d, double[] mOut, double[] dOut, int from, int mid, int to) {
         int i = from;
         int j = mid;
         for (int k = from; k < to; k++) {
-            if (j >= to || (i < mid && compare(scratch[i], scratch[j], means, absDiff) <= 0)) {
-                order[k] = scratch[i++];
+            if (j >= to || (i < mid && !after(m[i], d[i], m[j], d[j]))) {
+                mOut[k] = m[i];
+                dOut[k] = d[i++];
             } else {
-                order[k] = scratch[j++];
+                mOut[k] = m[j];
+                dOut[k] = d[j++];
             }
         }
     }

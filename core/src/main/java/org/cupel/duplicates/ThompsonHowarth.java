@@ -52,13 +52,9 @@ public final class ThompsonHowarth {
             m[i] = PairMeasures.mean(a[i], b[i]);
             d[i] = PairMeasures.absDifference(a[i], b[i]);
         }
-        int[] order = PairGroups.sortOrder(m, d);
-        double[] sm = new double[n];
-        double[] sd = new double[n];
-        for (int i = 0; i < n; i++) {
-            sm[i] = m[order[i]];
-            sd[i] = d[order[i]];
-        }
+        double[] sm = m.clone();
+        double[] sd = d.clone();
+        PairGroups.sortByMeanThenDiff(sm, sd);
         PairGroups groups = PairGroups.ofSorted(sm, sd, settings.thGroupSize());
         SimpleRegression thLine = line(groups.means(), groups.medianAbsDiff());
         SimpleRegression rmsLine = line(groups.means(), groups.rmsSd());
