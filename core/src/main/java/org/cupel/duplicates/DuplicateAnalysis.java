@@ -2,6 +2,7 @@ package org.cupel.duplicates;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -31,10 +32,14 @@ public final class DuplicateAnalysis {
     public static DuplicateReport run(String analyte, String unit, List<DuplicatePair> pairs,
                                       List<OrphanDuplicate> orphans, double[] grades, DuplicateSettings settings,
                                       String detectionLimits) {
+        Map<QcRole, List<DuplicatePair>> byType = new EnumMap<>(QcRole.class);
+        for (DuplicatePair p : pairs) {
+            byType.computeIfAbsent(p.type(), k -> new ArrayList<>()).add(p);
+        }
         List<DuplicateSetResult> sets = new ArrayList<>();
         for (QcRole type : TYPE_ORDER) {
-            List<DuplicatePair> ofType = pairs.stream().filter(p -> p.type() == type).toList();
-            if (!ofType.isEmpty()) {
+            List<DuplicatePair> ofType = byType.get(type);
+            if (ofType != null) {
                 sets.add(analyseSet(analyte, unit, type, ofType, grades, settings));
             }
         }
@@ -63,7 +68,8 @@ public final class DuplicateAnalysis {
         }
         List<BatchPrecision> out = new ArrayList<>();
         for (Map.Entry<String, List<DuplicatePair>> e : byBatch.entrySet()) {
-            PrecisionSummary p = PrecisionMeasures.summarise(type, PairScreen.screen(e.getValue(), settings), settings);
+            PrecisionSummary p = PrecisionMeasures.summariseBatch(type, PairScreen.screen(e.getValue(), settings),
+                    settings);
             out.add(new BatchPrecision(e.getKey(), p, BatchDispersion.test(p.rmsCv(), setRmsCv),
                     settings.batchTestAlpha()));
         }

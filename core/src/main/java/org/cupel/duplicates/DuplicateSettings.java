@@ -22,6 +22,10 @@ import org.cupel.assay.QcRole;
  * @param thMinimumPairs fewest usable pairs for a precision model (default 50, common practice)
  * @param bootstrapResamples bootstrap resamples for intervals (default 1000)
  * @param bootstrapSeed seed of every bootstrap, so reruns give the same intervals (default 20240601)
+ * @param bootstrapMaxPairs largest number of pairs a statistic is bootstrapped over (default 5000, at least
+ *     1000); above it the RMS CV, σ₀, k and P_c get large-sample normal intervals instead, because the
+ *     bootstrap's cost grows with pairs × resamples while at that size both intervals agree within the
+ *     bootstrap's own Monte Carlo error (checked in {@code LargeSampleAgreementTest})
  * @param precisionGrades grades at which to state precision; empty means the project's CRM grades
  * @param batchTestAlpha significance level of the test of a batch's RMS CV against its set's (default 0.01)
  */
@@ -30,20 +34,29 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
                                 double coarseHardLimitPercent, double pulpHardLimitPercent,
                                 double labRepeatHardLimitPercent, double umpireHardLimitPercent, int thGroupSize,
                                 int thMinimumPairs, int bootstrapResamples, long bootstrapSeed,
-                                List<Double> precisionGrades, double batchTestAlpha) {
+                                int bootstrapMaxPairs, List<Double> precisionGrades, double batchTestAlpha) {
+
+    /** Smallest allowed {@link #bootstrapMaxPairs()}: below it the normal approximation is not relied on. */
+    public static final int LARGE_SAMPLE_MINIMUM = 1000;
 
     public static final DuplicateSettings DEFAULTS = new DuplicateSettings(10, false, 90, 30, 20, 10, 10, 10, 11,
-            50, 1000, 20240601L, List.of(), 0.01);
+            50, 1000, 20240601L, 5000, List.of(), 0.01);
 
     public DuplicateSettings {
         precisionGrades = precisionGrades == null ? List.of() : List.copyOf(precisionGrades);
         if (!(limitMultipleOfDetection >= 0) || !(acceptancePercent > 0 && acceptancePercent <= 100)
                 || thGroupSize < 3 || thMinimumPairs < thGroupSize * 2 || bootstrapResamples < 100
-                || !(batchTestAlpha > 0 && batchTestAlpha < 1)) {
+                || bootstrapMaxPairs < LARGE_SAMPLE_MINIMUM || !(batchTestAlpha > 0 && batchTestAlpha < 1)) {
             throw new IllegalArgumentException("duplicates settings out of range: limitMultipleOfDetection >= 0, "
                     + "0 < acceptancePercent <= 100, thGroupSize >= 3, thMinimumPairs >= 2 groups, "
-                    + "bootstrapResamples >= 100, 0 < batchTestAlpha < 1");
+                    + "bootstrapResamples >= 100, bootstrapMaxPairs >= " + LARGE_SAMPLE_MINIMUM
+                    + ", 0 < batchTestAlpha < 1");
         }
+    }
+
+    /** Whether a statistic over {@code pairs} pairs gets the bootstrap interval (else the large-sample one). */
+    public boolean bootstraps(int pairs) {
+        return pairs <= bootstrapMaxPairs;
     }
 
     /** The HARD limit of a duplicate type as a fraction (0.10 for 10 %). */
@@ -73,13 +86,21 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
     public DuplicateSettings withLimitMultipleOfDetection(double multiple) {
         return new DuplicateSettings(multiple, censoredAtHalfLimit, acceptancePercent, fieldHardLimitPercent,
                 coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent, umpireHardLimitPercent,
-                thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, precisionGrades, batchTestAlpha);
+                thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, bootstrapMaxPairs, precisionGrades,
+                batchTestAlpha);
+    }
+
+    public DuplicateSettings withBootstrapMaxPairs(int maxPairs) {
+        return new DuplicateSettings(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent,
+                fieldHardLimitPercent, coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent,
+                umpireHardLimitPercent, thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, maxPairs,
+                precisionGrades, batchTestAlpha);
     }
 
     public DuplicateSettings withPrecisionGrades(List<Double> grades) {
         return new DuplicateSettings(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent,
                 fieldHardLimitPercent, coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent,
-                umpireHardLimitPercent, thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, grades,
-                batchTestAlpha);
+                umpireHardLimitPercent, thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, bootstrapMaxPairs,
+                grades, batchTestAlpha);
     }
 }

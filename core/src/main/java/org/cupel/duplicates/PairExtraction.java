@@ -1,6 +1,7 @@
 package org.cupel.duplicates;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.OptionalInt;
 import org.cupel.assay.AnalyteColumn;
@@ -32,32 +33,57 @@ public final class PairExtraction {
 
     /** As {@link #extract(Project, AnalyteColumn)}, filling in limits the values do not state from {@code limits}. */
     public static Extracted extract(Project project, AnalyteColumn column, DetectionLimits limits) {
-        SampleTable samples = project.samples();
-        List<DuplicatePair> pairs = new ArrayList<>();
-        List<OrphanDuplicate> orphans = new ArrayList<>();
-        for (int row = 0; row < samples.size(); row++) {
-            QcRole role = samples.role(row);
-            if (!role.isDuplicate()) {
-                continue;
+        return Pairing.of(project.samples()).extract(column, limits);
+    }
+
+    /**
+     * Which row every duplicate row pairs with, found once per project: the same for every analyte, and the
+     * look-up of the original's ID is the costly part of pairing.
+     *
+     * @param duplicateRows duplicate rows in table order
+     * @param originalRows the original's row for each, or −1 when it has none
+     * @param orphanReasons why a duplicate has no original, null where it has one
+     */
+    private record Pairing(SampleTable samples, int[] duplicateRows, int[] originalRows, String[] orphanReasons) {
+        static Pairing of(SampleTable samples) {
+            int[] dup = new int[samples.size()];
+            int[] orig = new int[samples.size()];
+            String[] why = new String[samples.size()];
+            int k = 0;
+            for (int row = 0; row < samples.size(); row++) {
+                if (!samples.role(row).isDuplicate()) {
+                    continue;
+                }
+                String ref = samples.reference(row);
+                OptionalInt original = ref.isBlank() ? OptionalInt.empty() : samples.rowOf(ref);
+                dup[k] = row;
+                orig[k] = original.orElse(-1);
+                why[k] = original.isPresent() ? null : ref.isBlank() ? "no original sample ID is given"
+                        : "original sample " + ref + " is not in the project";
+                k++;
             }
-            String id = samples.id(row);
-            String ref = samples.reference(row);
-            String batch = samples.batch(row).id();
-            if (ref.isBlank()) {
-                orphans.add(new OrphanDuplicate(id, ref, batch, role, "no original sample ID is given"));
-                continue;
-            }
-            OptionalInt original = samples.rowOf(ref);
-            if (original.isEmpty()) {
-                orphans.add(new OrphanDuplicate(id, ref, batch, role,
-                        "original sample " + ref + " is not in the project"));
-                continue;
-            }
-            int o = original.getAsInt();
-            pairs.add(new DuplicatePair(id, ref, batch, role, limits.complete(column.value(o), column.method(o)),
-                    limits.complete(column.value(row), column.method(row))));
+            return new Pairing(samples, Arrays.copyOf(dup, k), Arrays.copyOf(orig, k), Arrays.copyOf(why, k));
         }
-        return new Extracted(pairs, orphans);
+
+        Extracted extract(AnalyteColumn column, DetectionLimits limits) {
+            List<DuplicatePair> pairs = new ArrayList<>();
+            List<OrphanDuplicate> orphans = new ArrayList<>();
+            for (int i = 0; i < duplicateRows.length; i++) {
+                int row = duplicateRows[i];
+                String id = samples.id(row);
+                String ref = samples.reference(row);
+                String batch = samples.batch(row).id();
+                QcRole role = samples.role(row);
+                int o = originalRows[i];
+                if (o < 0) {
+                    orphans.add(new OrphanDuplicate(id, ref, batch, role, orphanReasons[i]));
+                    continue;
+                }
+                pairs.add(new DuplicatePair(id, ref, batch, role, limits.complete(column.value(o), column.method(o)),
+                        limits.complete(column.value(row), column.method(row))));
+            }
+            return new Extracted(pairs, orphans);
+        }
     }
 
     /** The duplicate report of every analyte of the project, precision stated at the CRM grades by default. */
@@ -79,13 +105,14 @@ public final class PairExtraction {
                     + String.join(", ", project.analyteNames()) + ".");
         }
         List<DuplicateReport> out = new ArrayList<>();
+        Pairing pairing = Pairing.of(project.samples());
         for (AnalyteColumn column : project.analytes().values()) {
             String name = column.analyte().name();
             if (analyte != null && !analyte.equals(name)) {
                 continue;
             }
             DetectionLimits limits = DetectionLimits.of(column);
-            Extracted all = extract(project, column, limits);
+            Extracted all = pairing.extract(column, limits);
             Extracted e = type == null ? all : new Extracted(
                     all.pairs().stream().filter(p -> p.type() == type).toList(),
                     all.orphans().stream().filter(o -> o.type() == type).toList());

@@ -1,7 +1,5 @@
 package org.cupel.duplicates;
 
-import java.util.Arrays;
-
 /**
  * Pairs sorted by pair mean and cut into consecutive groups of equal size from the lowest mean; the
  * remainder at the top is dropped (the grouping of Thompson and Howarth 1978, "A new approach to the
@@ -17,6 +15,8 @@ import java.util.Arrays;
  */
 public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, double[] rmsSd, int dropped,
                          double droppedFromMean) {
+    /** Runs this short are sorted by insertion before {@link #sortByMeanThenDiff} merges them. */
+    private static final int RUN = 32;
 
     public PairGroups {
         means = means.clone();
@@ -63,29 +63,76 @@ public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, 
             }
             mean[j] = sumM / groupSize;
             rms[j] = Math.sqrt(sumD2 / (2.0 * groupSize));
-            med[j] = PrecisionMeasures.median(buffer);
+            med[j] = PrecisionMeasures.medianInPlace(buffer, groupSize);
         }
         int dropped = n - g * groupSize;
         return new PairGroups(groupSize, mean, med, rms, dropped, dropped > 0 ? sortedMeans[g * groupSize] : Double.NaN);
     }
 
     /**
-     * The order that sorts pairs by mean, ties broken by |d|, so that the grouping and everything computed
-     * from it does not depend on the order the pairs were given in.
+     * Sorts pairs by mean, ties broken by |d|, so that the grouping and everything computed from it does not
+     * depend on the order the pairs were given in: {@code means} and {@code absDiff} are reordered together, in
+     * place. A merge sort of the values themselves (no index indirection, no boxing); pairs with equal mean and
+     * |d| are interchangeable, so only the sorted values matter.
      */
-    static int[] sortOrder(double[] means, double[] absDiff) {
-        Integer[] idx = new Integer[means.length];
-        for (int i = 0; i < idx.length; i++) {
-            idx[i] = i;
+    static void sortByMeanThenDiff(double[] means, double[] absDiff) {
+        int n = means.length;
+        for (int from = 0; from < n; from += RUN) {
+            insertionSort(means, absDiff, from, Math.min(n, from + RUN));
         }
-        Arrays.sort(idx, (x, y) -> {
-            int c = Double.compare(means[x], means[y]);
-            return c != 0 ? c : Double.compare(absDiff[x], absDiff[y]);
-        });
-        int[] out = new int[idx.length];
-        for (int i = 0; i < out.length; i++) {
-            out[i] = idx[i];
+        double[] m = means;
+        double[] d = absDiff;
+        double[] mOut = new double[n];
+        double[] dOut = new double[n];
+        for (int width = RUN; width < n; width *= 2) {
+            for (int from = 0; from < n; from += 2 * width) {
+                merge(m, d, mOut, dOut, from, Math.min(n, from + width), Math.min(n, from + 2 * width));
+            }
+            double[] t = m;
+            m = mOut;
+            mOut = t;
+            t = d;
+            d = dOut;
+            dOut = t;
         }
-        return out;
+        if (m != means) {
+            System.arraycopy(m, 0, means, 0, n);
+            System.arraycopy(d, 0, absDiff, 0, n);
+        }
+    }
+
+    private static boolean after(double m1, double d1, double m2, double d2) {
+        int c = Double.compare(m1, m2);
+        return c > 0 || (c == 0 && Double.compare(d1, d2) > 0);
+    }
+
+    private static void insertionSort(double[] m, double[] d, int from, int to) {
+        for (int i = from + 1; i < to; i++) {
+            double xm = m[i];
+            double xd = d[i];
+            int j = i - 1;
+            while (j >= from && after(m[j], d[j], xm, xd)) {
+                m[j + 1] = m[j];
+                d[j + 1] = d[j];
+                j--;
+            }
+            m[j + 1] = xm;
+            d[j + 1] = xd;
+        }
+    }
+
+    /** Merges the sorted runs [from, mid) and [mid, to) of (m, d) into (mOut, dOut). */
+    private static void merge(double[] m, double[] d, double[] mOut, double[] dOut, int from, int mid, int to) {
+        int i = from;
+        int j = mid;
+        for (int k = from; k < to; k++) {
+            if (j >= to || (i < mid && !after(m[i], d[i], m[j], d[j]))) {
+                mOut[k] = m[i];
+                dOut[k] = d[i++];
+            } else {
+                mOut[k] = m[j];
+                dOut[k] = d[j++];
+            }
+        }
     }
 }

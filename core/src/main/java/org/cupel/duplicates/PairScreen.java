@@ -15,6 +15,8 @@ import org.cupel.assay.Qualifier;
  * of the error (common practice; see Stanley and Lawie 2008 on precision near detection).
  */
 public final class PairScreen {
+    private static final ExclusionReason[] REASONS = ExclusionReason.values();
+
     private PairScreen() {
     }
 
@@ -30,22 +32,22 @@ public final class PairScreen {
         int nr = 0;
         int limitUnknown = 0;
         int substituted = 0;
-        Map<ExclusionReason, Integer> exAbs = new EnumMap<>(ExclusionReason.class);
-        Map<ExclusionReason, Integer> exRel = new EnumMap<>(ExclusionReason.class);
+        int[] exAbs = new int[REASONS.length];
+        int[] exRel = new int[REASONS.length];
         for (int i = 0; i < n; i++) {
             DuplicatePair p = pairs.get(i);
             ExclusionReason hard = unusable(p.original(), p.duplicate());
             if (hard != null) {
-                exAbs.merge(hard, 1, Integer::sum);
-                exRel.merge(hard, 1, Integer::sum);
+                exAbs[hard.ordinal()]++;
+                exRel[hard.ordinal()]++;
                 continue;
             }
             boolean censored = p.original().qualifier() == Qualifier.BELOW_DETECTION
                     || p.duplicate().qualifier() == Qualifier.BELOW_DETECTION;
             if (censored) {
-                exAbs.merge(ExclusionReason.BELOW_DETECTION, 1, Integer::sum);
+                exAbs[ExclusionReason.BELOW_DETECTION.ordinal()]++;
                 if (!settings.censoredAtHalfLimit()) {
-                    exRel.merge(ExclusionReason.BELOW_DETECTION, 1, Integer::sum);
+                    exRel[ExclusionReason.BELOW_DETECTION.ordinal()]++;
                     continue;
                 }
             } else {
@@ -60,7 +62,7 @@ public final class PairScreen {
             if (Double.isNaN(limit)) {
                 limitUnknown++;
             } else if (PairMeasures.mean(a, b) < settings.limitMultipleOfDetection() * limit) {
-                exRel.merge(ExclusionReason.BELOW_LIMIT_MULTIPLE, 1, Integer::sum);
+                exRel[ExclusionReason.BELOW_LIMIT_MULTIPLE.ordinal()]++;
                 continue;
             }
             if (censored) {
@@ -76,7 +78,18 @@ public final class PairScreen {
                         java.util.Arrays.copyOf(absB, na)),
                 new ScreenedPairs.Members(java.util.Arrays.copyOf(relRows, nr), java.util.Arrays.copyOf(relA, nr),
                         java.util.Arrays.copyOf(relB, nr)),
-                exAbs, exRel, limitUnknown, substituted);
+                counts(exAbs), counts(exRel), limitUnknown, substituted);
+    }
+
+    /** The reasons with a non-zero count (counted in an array: a map update per pair dominated screening). */
+    private static Map<ExclusionReason, Integer> counts(int[] byOrdinal) {
+        Map<ExclusionReason, Integer> out = new EnumMap<>(ExclusionReason.class);
+        for (ExclusionReason r : REASONS) {
+            if (byOrdinal[r.ordinal()] > 0) {
+                out.put(r, byOrdinal[r.ordinal()]);
+            }
+        }
+        return out;
     }
 
     private static ExclusionReason unusable(AssayValue a, AssayValue b) {

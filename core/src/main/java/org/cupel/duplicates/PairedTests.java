@@ -1,17 +1,26 @@
 package org.cupel.duplicates;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.Arrays;
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.math3.stat.inference.TTest;
 import org.apache.commons.math3.stat.inference.WilcoxonSignedRankTest;
-import org.apache.commons.math3.stat.ranking.NaNStrategy;
-import org.apache.commons.math3.stat.ranking.NaturalRanking;
-import org.apache.commons.math3.stat.ranking.TiesStrategy;
 
 /** Tests of whether duplicates read systematically higher or lower than their originals. */
 public final class PairedTests {
     /** Commons Math computes the exact signed-rank distribution up to this n. */
     private static final int EXACT_LIMIT = 30;
+    /** 10^0 … 10^22, every one exact in double precision. */
+    private static final double[] POWERS_OF_TEN = new double[23];
+    private static final MathContext TWELVE_DIGITS = new MathContext(12);
+
+    static {
+        POWERS_OF_TEN[0] = 1;
+        for (int i = 1; i < POWERS_OF_TEN.length; i++) {
+            POWERS_OF_TEN[i] = POWERS_OF_TEN[i - 1] * 10;
+        }
+    }
 
     private PairedTests() {
     }
@@ -57,16 +66,17 @@ public final class PairedTests {
         for (int i = 0; i < n; i++) {
             abs[i] = roundedMagnitude(d[i]);
         }
-        double[] ranks = new NaturalRanking(NaNStrategy.FAILED, TiesStrategy.AVERAGE).rank(abs);
+        double[] sorted = abs.clone();
+        Arrays.sort(sorted);
         double wPlus = 0;
         for (int i = 0; i < n; i++) {
             if (d[i] > 0) {
-                wPlus += ranks[i];
+                wPlus += midRank(sorted, abs[i]);
             }
         }
         double total = n * (n + 1) / 2.0;
         double w = Math.min(wPlus, total - wPlus);
-        double tieTerm = tieTerm(abs);
+        double tieTerm = tieTerm(sorted);
         if (n <= EXACT_LIMIT && tieTerm == 0) {
             double p = new WilcoxonSignedRankTest().wilcoxonSignedRankTest(d, new double[n], true);
             return new TestResult(name, w, Double.NaN, Math.min(1.0, p), n, "exact distribution", "");
@@ -92,16 +102,58 @@ public final class PairedTests {
     }
 
     /**
-     * |x| to 12 significant digits: assay values are decimals, and without rounding 0.35 − 0.33 and
-     * 0.33 − 0.31 differ in the last binary digit and would not rank as the tie they are.
+     * The 1-based rank of {@code v} in {@code sorted}, ties given the mean of their ranks: (first + last)/2 for a
+     * run of equal values at ranks first..last (as Commons Math's {@code NaturalRanking} with
+     * {@code TiesStrategy.AVERAGE} computes it, without sorting boxed pairs).
      */
-    private static double roundedMagnitude(double x) {
-        return new java.math.BigDecimal(Math.abs(x)).round(new java.math.MathContext(12)).doubleValue();
+    private static double midRank(double[] sorted, double v) {
+        int first = firstAbove(sorted, v, false);
+        int last = firstAbove(sorted, v, true) - 1;
+        return (first + last + 2) / 2.0;
     }
 
-    private static double tieTerm(double[] abs) {
-        double[] s = abs.clone();
-        Arrays.sort(s);
+    /** The first index whose value is above v (or at least v, when {@code strictly} is false). */
+    private static int firstAbove(double[] sorted, double v, boolean strictly) {
+        int lo = 0;
+        int hi = sorted.length;
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            if (strictly ? sorted[mid] <= v : sorted[mid] < v) {
+                lo = mid + 1;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
+    }
+
+    /**
+     * |x| to 12 significant digits, rounding half up: assay values are decimals, and without rounding
+     * 0.35 − 0.33 and 0.33 − 0.31 differ in the last binary digit and would not rank as the tie they are.
+     * Equal to {@code new BigDecimal(|x|).round(new MathContext(12)).doubleValue()}, which it falls back on
+     * where the fast route cannot be sure: |x|·10^p (p making it a 12-digit number, p ≤ 22 so 10^p is exact)
+     * is within half an ulp (below 1e-4) of the exact product, so unless its fraction lies within 1e-3 of ½ it
+     * rounds to the same integer L; L / 10^p, a correctly rounded division of two exact doubles, is then the
+     * double nearest the decimal L·10^−p, which is what {@code BigDecimal.doubleValue} returns.
+     */
+    static double roundedMagnitude(double x) {
+        double v = Math.abs(x);
+        if (v > 0 && v < Double.POSITIVE_INFINITY) {
+            int p = 11 - (int) Math.floor(Math.log10(v));
+            if (p >= 0 && p < POWERS_OF_TEN.length) {
+                double scaled = v * POWERS_OF_TEN[p];
+                double floor = Math.floor(scaled);
+                double fraction = scaled - floor;
+                if (scaled >= 1e11 && scaled < 1e12 && Math.abs(fraction - 0.5) > 1e-3) {
+                    return (fraction > 0.5 ? floor + 1 : floor) / POWERS_OF_TEN[p];
+                }
+            }
+        }
+        return new BigDecimal(v).round(TWELVE_DIGITS).doubleValue();
+    }
+
+    /** The tie correction Σ(t³ − t) over runs of equal values in {@code sorted}. */
+    private static double tieTerm(double[] s) {
         double sum = 0;
         int i = 0;
         while (i < s.length) {

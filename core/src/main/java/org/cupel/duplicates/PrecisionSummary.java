@@ -18,7 +18,8 @@ import org.cupel.assay.QcRole;
  * @param acceptancePercent the share of pairs required within the limit, %
  * @param percentWithinLimit share of relative pairs with HARD at or below the limit, %
  * @param rule whether the share meets the acceptance rule
- * @param rmsCv RMS CV as a fraction with its bootstrap 95 % interval
+ * @param rmsCv RMS CV as a fraction with its 95 % interval (bootstrap, or large-sample above
+ *     {@link DuplicateSettings#bootstrapMaxPairs()} pairs); a point estimate for a batch
  * @param meanCv arithmetic mean of the pair CVs as a fraction: biased low, for comparison only
  * @param medianHard median HARD as a fraction
  * @param repeatabilitySd s_r in the analyte's unit

@@ -24,7 +24,9 @@ import org.apache.commons.math3.stat.regression.SimpleRegression;
  * slope are σ₀ and k directly.
  *
  * <p>Intervals for σ₀, k and P_c come from a seeded bootstrap over pairs: pairs are drawn with replacement,
- * regrouped and both lines refitted.
+ * regrouped and both lines refitted. Above {@link DuplicateSettings#bootstrapMaxPairs()} pairs, where that costs
+ * pairs × resamples and the normal approximation is close, they are normal intervals from the HC3 covariance of
+ * each line over its groups ({@link RobustLine}).
  */
 public final class ThompsonHowarth {
     private ThompsonHowarth() {
@@ -50,13 +52,9 @@ public final class ThompsonHowarth {
             m[i] = PairMeasures.mean(a[i], b[i]);
             d[i] = PairMeasures.absDifference(a[i], b[i]);
         }
-        int[] order = PairGroups.sortOrder(m, d);
-        double[] sm = new double[n];
-        double[] sd = new double[n];
-        for (int i = 0; i < n; i++) {
-            sm[i] = m[order[i]];
-            sd[i] = d[order[i]];
-        }
+        double[] sm = m.clone();
+        double[] sd = d.clone();
+        PairGroups.sortByMeanThenDiff(sm, sd);
         PairGroups groups = PairGroups.ofSorted(sm, sd, settings.thGroupSize());
         SimpleRegression thLine = line(groups.means(), groups.medianAbsDiff());
         SimpleRegression rmsLine = line(groups.means(), groups.rmsSd());
@@ -64,18 +62,15 @@ public final class ThompsonHowarth {
                 NormalDifferenceConstants.SIGMA_PER_MEDIAN * thLine.getSlope());
         PrecisionModel rms = new PrecisionModel(rmsLine.getIntercept(), rmsLine.getSlope());
 
-        Replicates reps = bootstrap(sm, sd, settings);
-        String how = "95 % percentile bootstrap over pairs, " + settings.bootstrapResamples() + " resamples, seed "
-                + settings.bootstrapSeed();
+        Uncertainties u = settings.bootstraps(n) ? bootstrap(sm, sd, settings)
+                : largeSample(groups, settings.bootstrapMaxPairs());
         ModelFit thFit = new ModelFit("Thompson–Howarth (median |d|)", thLine.getIntercept(), thLine.getSlope(),
-                thLine.getRSquare(), th, estimate(th.sigma0(), reps.thSigma0, n, how), estimate(th.k(), reps.thK, n, how));
+                thLine.getRSquare(), th, u.th().sigma0(th, n), u.th().k(th, n));
         ModelFit rmsFit = new ModelFit("RMS SD regression (Stanley & Lawie 2008)", rmsLine.getIntercept(),
-                rmsLine.getSlope(), rmsLine.getRSquare(), rms, estimate(rms.sigma0(), reps.rmsSigma0, n, how),
-                estimate(rms.k(), reps.rmsK, n, how));
+                rmsLine.getSlope(), rmsLine.getRSquare(), rms, u.rms().sigma0(rms, n), u.rms().k(rms, n));
         List<GradePrecision> atGrades = new ArrayList<>();
         for (double c : grades) {
-            atGrades.add(new GradePrecision(c, precision(th, reps.thSigma0, reps.thK, c, n, how),
-                    precision(rms, reps.rmsSigma0, reps.rmsK, c, n, how)));
+            atGrades.add(new GradePrecision(c, precision(u.th(), th, c, n), precision(u.rms(), rms, c, n)));
         }
         return new PrecisionModelResult("", n, groups, thFit, rmsFit,
                 controlLine(90, NormalDifferenceConstants.P90, th, m, d),
@@ -115,45 +110,100 @@ public final class ThompsonHowarth {
         return r;
     }
 
-    private static Estimate estimate(double value, double[] replicates, int n, String how) {
-        double[] ci = Bootstrap.percentileInterval(replicates);
-        return Estimate.of(value, ci[0], ci[1], n, how);
-    }
-
-    private static Estimate precision(PrecisionModel model, double[] s0, double[] k, double c, int n, String how) {
+    private static Estimate precision(Uncertainty u, PrecisionModel model, double c, int n) {
         if (!(c > 0)) {
             return Estimate.unavailable(n, "precision is stated at positive grades only");
         }
-        double[] reps = new double[s0.length];
-        for (int r = 0; r < reps.length; r++) {
-            reps[r] = new PrecisionModel(s0[r], k[r]).precisionAt(c);
-        }
-        return estimate(model.precisionAt(c), reps, n, how);
+        return u.precisionAt(model, c, n);
     }
 
-    private static final class Replicates {
-        final double[] thSigma0;
-        final double[] thK;
-        final double[] rmsSigma0;
-        final double[] rmsK;
+    /** The uncertainty of the Thompson–Howarth model and of the RMS SD model. */
+    private record Uncertainties(Uncertainty th, Uncertainty rms) {
+    }
 
-        Replicates(int resamples) {
-            thSigma0 = new double[resamples];
-            thK = new double[resamples];
-            rmsSigma0 = new double[resamples];
-            rmsK = new double[resamples];
+    /** Where the 95 % intervals of one fitted model's σ₀, k and P_c come from. */
+    private interface Uncertainty {
+        Estimate sigma0(PrecisionModel model, int n);
+
+        Estimate k(PrecisionModel model, int n);
+
+        Estimate precisionAt(PrecisionModel model, double c, int n);
+    }
+
+    /** Percentile intervals of the bootstrap replicates of σ₀ and k (and of P_c computed from each pair). */
+    private record Replicates(double[] sigma0, double[] k, String how) implements Uncertainty {
+        @Override
+        public Estimate sigma0(PrecisionModel model, int n) {
+            return estimate(model.sigma0(), Bootstrap.percentileInterval(sigma0), n, how);
+        }
+
+        @Override
+        public Estimate k(PrecisionModel model, int n) {
+            return estimate(model.k(), Bootstrap.percentileInterval(k), n, how);
+        }
+
+        @Override
+        public Estimate precisionAt(PrecisionModel model, double c, int n) {
+            double[] reps = new double[sigma0.length];
+            for (int r = 0; r < reps.length; r++) {
+                reps[r] = new PrecisionModel(sigma0[r], k[r]).precisionAt(c);
+            }
+            return estimate(model.precisionAt(c), Bootstrap.percentileInterval(reps), n, how);
         }
     }
 
     /**
-     * Resampling the pairs keeps them in sorted order when each pair is simply repeated as often as it was
-     * drawn, so no resample needs sorting again.
+     * Normal intervals from the HC3 covariance of the model's line over the groups: σ₀ and k are the line's
+     * intercept and slope (times 1.048358 for Thompson–Howarth), and P_c = (2/c)·σ₀ + 2k is linear in them,
+     * so Var P_c = (2/c)²·Var σ₀ + 4·Var k + 2·(2/c)·2·Cov(σ₀, k). The group points are treated as
+     * independent, which holds closely when the groups are many and each holds different pairs.
      */
-    private static Replicates bootstrap(double[] sortedM, double[] sortedD, DuplicateSettings settings) {
+    private record LineCovariance(RobustLine line, String how) implements Uncertainty {
+        @Override
+        public Estimate sigma0(PrecisionModel model, int n) {
+            return estimate(model.sigma0(), NormalInterval.around(model.sigma0(), line.interceptVariance()), n, how);
+        }
+
+        @Override
+        public Estimate k(PrecisionModel model, int n) {
+            return estimate(model.k(), NormalInterval.around(model.k(), line.slopeVariance()), n, how);
+        }
+
+        @Override
+        public Estimate precisionAt(PrecisionModel model, double c, int n) {
+            double p = model.precisionAt(c);
+            return estimate(p, NormalInterval.around(p, line.varianceOf(2 / c, 2)), n, how);
+        }
+    }
+
+    private static Estimate estimate(double value, double[] ci, int n, String how) {
+        return Estimate.of(value, ci[0], ci[1], n, how);
+    }
+
+    /** Thompson–Howarth and RMS SD uncertainty from the HC3 covariance of their lines over the groups. */
+    private static Uncertainties largeSample(PairGroups groups, int bootstrapMaxPairs) {
+        String how = "95 % normal interval from HC3 standard errors (MacKinnon and White 1985) of the line over "
+                + groups.groups() + " groups; bootstrap skipped above duplicates.bootstrapMaxPairs = "
+                + bootstrapMaxPairs + " pairs";
+        double[] means = groups.means();
+        return new Uncertainties(new LineCovariance(RobustLine.fit(means, groups.medianAbsDiff())
+                .scaled(NormalDifferenceConstants.SIGMA_PER_MEDIAN), how),
+                new LineCovariance(RobustLine.fit(means, groups.rmsSd()), how));
+    }
+
+    /**
+     * Thompson–Howarth and RMS SD replicates from one seeded bootstrap over pairs. Resampling the pairs keeps
+     * them in sorted order when each pair is simply repeated as often as it was drawn, so no resample needs
+     * sorting again.
+     */
+    private static Uncertainties bootstrap(double[] sortedM, double[] sortedD, DuplicateSettings settings) {
         int n = sortedM.length;
         int resamples = settings.bootstrapResamples();
         SplittableRandom random = new SplittableRandom(settings.bootstrapSeed());
-        Replicates out = new Replicates(resamples);
+        double[] thSigma0 = new double[resamples];
+        double[] thK = new double[resamples];
+        double[] rmsSigma0 = new double[resamples];
+        double[] rmsK = new double[resamples];
         double[] rm = new double[n];
         double[] rd = new double[n];
         for (int r = 0; r < resamples; r++) {
@@ -169,12 +219,14 @@ public final class ThompsonHowarth {
             PairGroups g = PairGroups.ofSorted(rm, rd, settings.thGroupSize());
             double[] th = leastSquares(g.means(), g.medianAbsDiff());
             double[] rms = leastSquares(g.means(), g.rmsSd());
-            out.thSigma0[r] = NormalDifferenceConstants.SIGMA_PER_MEDIAN * th[0];
-            out.thK[r] = NormalDifferenceConstants.SIGMA_PER_MEDIAN * th[1];
-            out.rmsSigma0[r] = rms[0];
-            out.rmsK[r] = rms[1];
+            thSigma0[r] = NormalDifferenceConstants.SIGMA_PER_MEDIAN * th[0];
+            thK[r] = NormalDifferenceConstants.SIGMA_PER_MEDIAN * th[1];
+            rmsSigma0[r] = rms[0];
+            rmsK[r] = rms[1];
         }
-        return out;
+        String how = "95 % percentile bootstrap over pairs, " + resamples + " resamples, seed "
+                + settings.bootstrapSeed();
+        return new Uncertainties(new Replicates(thSigma0, thK, how), new Replicates(rmsSigma0, rmsK, how));
     }
 
     /** Intercept and slope of the ordinary least-squares line; NaN when x does not vary. */

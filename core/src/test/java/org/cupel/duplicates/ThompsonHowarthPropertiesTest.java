@@ -10,7 +10,7 @@ import net.jqwik.api.Property;
 
 class ThompsonHowarthPropertiesTest {
     private static final DuplicateSettings SETTINGS = new DuplicateSettings(10, false, 90, 30, 20, 10, 10, 10, 11,
-            50, 100, 5L, List.of(), 0.01);
+            50, 100, 5L, 5000, List.of(), 0.01);
 
     /** Thompson–Howarth sorts pairs by mean, so the order the pairs arrive in must not matter. */
     @Property(tries = 100)

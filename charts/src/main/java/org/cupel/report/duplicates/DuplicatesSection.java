@@ -167,8 +167,9 @@ public final class DuplicatesSection {
         return String.format(Locale.ROOT, "Acceptance: %s of pairs within HARD %s (field), %s (coarse reject), %s "
                         + "(pulp), %s (lab repeat), %s (umpire) — %s. Pairs with a below-detection member are %s; "
                         + "pairs with mean below %s× the detection limit are left out of relative measures (%s). "
-                        + "Intervals: %d bootstrap resamples, seed %d. Thompson–Howarth: groups of %d, at least %d "
-                        + "pairs.",
+                        + "Intervals: %d bootstrap resamples, seed %d, for statistics over up to %d pairs; above that, "
+                        + "large-sample normal intervals (HC3 standard errors for the precision models). "
+                        + "Thompson–Howarth: groups of %d, at least %d pairs.",
                 compact(s.acceptancePercent()) + " %", compact(s.fieldHardLimitPercent()) + " %",
                 compact(s.coarseHardLimitPercent()) + " %", compact(s.pulpHardLimitPercent()) + " %",
                 compact(s.labRepeatHardLimitPercent()) + " %", compact(s.umpireHardLimitPercent()) + " %",
@@ -179,7 +180,7 @@ public final class DuplicatesSection {
                 s.censoredAtHalfLimit() ? "taken at half the limit in relative measures" : "not used in relative "
                         + "measures", compact(s.limitMultipleOfDetection()),
                 userSet.test("duplicates.limitMultipleOfDetection") ? "user setting" : "common practice default",
-                s.bootstrapResamples(), s.bootstrapSeed(), s.thGroupSize(), s.thMinimumPairs());
+                s.bootstrapResamples(), s.bootstrapSeed(), s.bootstrapMaxPairs(), s.thGroupSize(), s.thMinimumPairs());
     }
 
     private static boolean anyUserSet(Predicate<String> userSet, String... keys) {
