@@ -19,9 +19,9 @@ import org.cupel.assay.Numbers;
  * <pre>  pe_j = pe_{j+1} + A_j / (A_j + B_j) · (1 − pe_{j+1}),   pe_{m+1} = 0.</pre>
  * The r-th smallest detect of interval j plots at {@code (1 − pe_j) + (pe_j − pe_{j+1}) · r / (A_j + 1)}
  * and the r-th nondetect at {@code DL_j} at {@code (1 − pe_j) · r / (C_j + 1)} (plotting constant 0).
- * Least squares of {@code ln(detect)} on the normal quantile {@code Φ⁻¹(p)} gives intercept a and slope
- * b; each nondetect is imputed as {@code exp(a + b Φ⁻¹(p))}, and the statistics are the ordinary ones
- * of detects plus imputed values ("robust ROS"). Nondetects whose limit exceeds the largest detect have
+ * Least squares of {@code ln(detect)} on the normal quantile {@code Φ⁻¹(p)} ({@link NormalQuantile},
+ * Wichura's AS 241) gives intercept a and slope b; each nondetect is imputed as {@code exp(a + b Φ⁻¹(p))},
+ * and the statistics are the ordinary ones of detects plus imputed values ("robust ROS"). Nondetects whose limit exceeds the largest detect have
  * {@code A_j = 0}, so {@code pe_j = pe_{j+1}} and their plotting positions spread below that exceedance
  * probability, as Helsel–Cohn's counting gives; they carry little information and the result says so.
  */
