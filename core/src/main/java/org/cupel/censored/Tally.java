@@ -175,6 +175,8 @@ final class Tally {
         private int[] slotCounts = new int[64];
         private int shift = 64 - 6;
         private int used;
+        private long lastBits;
+        private int lastSlot = -1;
 
         void add(double x) {
             add(x, 1);
@@ -182,6 +184,11 @@ final class Tally {
 
         void add(double x, int count) {
             long bits = Double.doubleToRawLongBits(x);
+            // Neighbouring rows often repeat a value (one detection limit per lab file): skip the probe.
+            if (lastSlot >= 0 && bits == lastBits) {
+                slotCounts[lastSlot] += count;
+                return;
+            }
             int mask = keys.length - 1;
             int slot = slot(bits);
             while (slotCounts[slot] != 0 && keys[slot] != bits) {
@@ -192,8 +199,11 @@ final class Tally {
                 used++;
             }
             slotCounts[slot] += count;
+            lastBits = bits;
+            lastSlot = slot;
             if (2 * used > keys.length) {
                 grow();
+                lastSlot = -1;
             }
         }
 
