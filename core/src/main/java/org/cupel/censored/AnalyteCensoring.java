@@ -1,11 +1,10 @@
 package org.cupel.censored;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
-import java.util.TreeSet;
 import org.cupel.assay.AnalyteColumn;
-import org.cupel.assay.AssayValue;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.Qualifier;
 import org.cupel.assay.SampleTable;
@@ -44,8 +43,8 @@ public record AnalyteCensoring(String analyteLabel, List<Double> detectionLimits
     }
 
     public static AnalyteCensoring of(AnalyteColumn column, SampleTable samples, CensoredSettings settings) {
-        TreeSet<Double> dls = new TreeSet<>();
-        TreeSet<Double> uls = new TreeSet<>();
+        Tally.Counter dls = new Tally.Counter();
+        Tally.Counter uls = new Tally.Counter();
         int below = 0;
         int above = 0;
         int missing = 0;
@@ -67,12 +66,13 @@ public record AnalyteCensoring(String analyteLabel, List<Double> detectionLimits
                 dls.add(limit);
             }
         }
-        List<AssayValue> routine = new ArrayList<>();
-        for (int row : samples.rowsWithRole(QcRole.ROUTINE)) {
-            routine.add(column.value(row));
-        }
-        CensoredAnalysis analysis = CensoredAnalysis.of(CensoredSample.of(routine), settings);
-        return new AnalyteCensoring(column.analyte().label(), new ArrayList<>(dls), new ArrayList<>(uls),
+        CensoredSample routine = CensoredSample.of(column, samples.rowsWithRole(QcRole.ROUTINE));
+        CensoredAnalysis analysis = CensoredAnalysis.of(routine, settings);
+        return new AnalyteCensoring(column.analyte().label(), distinct(dls), distinct(uls),
                 column.size() - missing, below, above, missing, column.reportedMethodCounts(), analysis);
+    }
+
+    private static List<Double> distinct(Tally.Counter limits) {
+        return Arrays.stream(limits.tally().distinctValues()).boxed().toList();
     }
 }

@@ -1,6 +1,7 @@
 package org.cupel.censored;
 
 import org.apache.commons.math3.special.Erf;
+import org.apache.commons.math3.stat.descriptive.moment.Mean;
 
 /**
  * Log-likelihood of a normal model for censored observations on the analysis scale y (x itself for the
@@ -14,29 +15,86 @@ import org.apache.commons.math3.special.Erf;
 final class CensoredLikelihood {
     private static final double LOG_SQRT_2PI = 0.5 * Math.log(2 * Math.PI);
 
-    private final double[] exact;
-    private final double[] exactWeight;
+    private final double exactCount;
+    private final double exactMean;
+    private final double exactSumSquares;
+    private final double jacobian;
     private final double[] low;
     private final double[] high;
     private final double[] censoredWeight;
-    private final boolean logScale;
 
     /** Value, gradient (∂/∂μ, ∂/∂τ) and Hessian (μμ, μτ, ττ) at one θ. */
     record Evaluation(double value, double gMu, double gTau, double hMuMu, double hMuTau, double hTauTau) {
     }
 
     /**
-     * Identical observations enter once with a weight (their count): assay values are rounded, so a large
-     * sample has far fewer distinct values than rows, and each evaluation costs only the distinct ones.
+     * The detects enter through their count W, mean ȳ and sum of squared deviations
+     * {@code S = Σ (y_i − ȳ)²} only: {@code Σ z_i = W(ȳ − μ)/σ} and {@code Σ z_i² = (S + W(ȳ − μ)²)/σ²}, so
+     * an evaluation costs nothing per detect. Identical censored observations enter once with their count
+     * as weight (assay limits repeat).
+     *
+     * @param jacobian {@code Σ y_i} over the detects for the lognormal model, 0 for the normal
      */
-    CensoredLikelihood(double[] exact, double[] exactWeight, double[] low, double[] high, double[] censoredWeight,
-                       boolean logScale) {
-        this.exact = exact;
-        this.exactWeight = exactWeight;
+    private CensoredLikelihood(double exactCount, double exactMean, double exactSumSquares, double jacobian, double[] low,
+                       double[] high, double[] censoredWeight) {
+        this.exactCount = exactCount;
+        this.exactMean = exactMean;
+        this.exactSumSquares = exactSumSquares;
+        this.jacobian = jacobian;
         this.low = low;
         this.high = high;
         this.censoredWeight = censoredWeight;
-        this.logScale = logScale;
+    }
+
+    /** The likelihood of {@code s} on the scale y = x, or y = ln x when {@code logScale}. */
+    static CensoredLikelihood of(CensoredSample s, boolean logScale) {
+        Tally detects = s.detectTally();
+        double[] y = new double[detects.distinct()];
+        for (int i = 0; i < y.length; i++) {
+            y[i] = scale(detects.value(i), logScale);
+        }
+        double[] w = detects.weights();
+        double mean = y.length == 0 ? Double.NaN : new Mean().evaluate(y, w);
+        double sumSquares = 0;
+        double sum = 0;
+        for (int i = 0; i < y.length; i++) {
+            sumSquares += w[i] * (y[i] - mean) * (y[i] - mean);
+            sum += w[i] * y[i];
+        }
+        Tally below = s.belowTally();
+        Tally above = s.aboveTally();
+        CensoredSample.IntervalGroups intervals = s.intervalGroups();
+        int groups = below.distinct() + above.distinct() + intervals.distinct();
+        double[] lo = new double[groups];
+        double[] hi = new double[groups];
+        double[] cw = new double[groups];
+        int g = 0;
+        for (int i = 0; i < below.distinct(); i++, g++) {
+            lo[g] = Double.NEGATIVE_INFINITY;
+            hi[g] = scale(below.value(i), logScale);
+            cw[g] = below.count(i);
+        }
+        for (int i = 0; i < above.distinct(); i++, g++) {
+            lo[g] = scale(above.value(i), logScale);
+            hi[g] = Double.POSITIVE_INFINITY;
+            cw[g] = above.count(i);
+        }
+        for (int i = 0; i < intervals.distinct(); i++, g++) {
+            lo[g] = scale(intervals.low()[i], logScale);
+            hi[g] = scale(intervals.high()[i], logScale);
+            cw[g] = intervals.counts()[i];
+        }
+        return new CensoredLikelihood(detects.size(), mean, sumSquares, logScale ? sum : 0, lo, hi, cw);
+    }
+
+    /** Mean of the detects on the analysis scale. */
+    double detectMean() {
+        return exactMean;
+    }
+
+    /** Variance (divisor W − 1) of the detects on the analysis scale. */
+    double detectVariance() {
+        return exactSumSquares / (exactCount - 1);
     }
 
     Evaluation evaluate(double mu, double tau) {
@@ -47,16 +105,16 @@ final class CensoredLikelihood {
         double hmm = 0;
         double hmt = 0;
         double htt = 0;
-        for (int i = 0; i < exact.length; i++) {
-            double y = exact[i];
-            double w = exactWeight[i];
-            double z = (y - mu) / sigma;
-            v += w * (-LOG_SQRT_2PI - 0.5 * z * z - tau - (logScale ? y : 0));
-            gm += w * z / sigma;
-            gt += w * (z * z - 1);
-            hmm += -w / (sigma * sigma);
-            hmt += -2 * w * z / sigma;
-            htt += -2 * w * z * z;
+        if (exactCount > 0) {
+            double w = exactCount;
+            double sumZ = w * (exactMean - mu) / sigma;
+            double sumZ2 = (exactSumSquares + w * (exactMean - mu) * (exactMean - mu)) / (sigma * sigma);
+            v = w * (-LOG_SQRT_2PI - tau) - 0.5 * sumZ2 - jacobian;
+            gm = sumZ / sigma;
+            gt = sumZ2 - w;
+            hmm = -w / (sigma * sigma);
+            hmt = -2 * sumZ / sigma;
+            htt = -2 * sumZ2;
         }
         double[] da = new double[5];
         double[] db = new double[5];
@@ -80,6 +138,10 @@ final class CensoredLikelihood {
             htt += w * ((db[4] - da[4]) / p - pt * pt / (p * p));
         }
         return new Evaluation(v, gm, gt, hmm, hmt, htt);
+    }
+
+    private static double scale(double x, boolean log) {
+        return log && Double.isFinite(x) ? Math.log(x) : x;
     }
 
     /** Φ(zb) − Φ(za), computed on the side of the distribution where it does not lose digits. */

@@ -62,8 +62,8 @@ public final class CensoredMle {
             return failed(distribution, CensoredSummary.notApplicable(method, n, nCens, why));
         }
         boolean log = distribution == Distribution.LOGNORMAL;
-        CensoredLikelihood lik = likelihood(sample, log);
-        double[] theta = start(sample, log);
+        CensoredLikelihood lik = CensoredLikelihood.of(sample, log);
+        double[] theta = start(lik);
         int it = 0;
         CensoredLikelihood.Evaluation e = lik.evaluate(theta[0], theta[1]);
         boolean converged = false;
@@ -107,82 +107,20 @@ public final class CensoredMle {
         if (sample.size() == 0) {
             return "no values";
         }
-        double[] detects = sample.detects();
-        if (detects.length < 2 || detects[0] == detects[detects.length - 1]) {
+        Tally detects = sample.detectTally();
+        if (detects.size() < 2 || detects.value(0) == detects.value(detects.distinct() - 1)) {
             return "not applicable: fewer than two different detected values, so the spread cannot be estimated";
         }
-        if (d == Distribution.LOGNORMAL && detects[0] <= 0) {
+        if (d == Distribution.LOGNORMAL && detects.value(0) <= 0) {
             return "not applicable: a lognormal needs positive values and a detect is zero or negative";
         }
         return null;
     }
 
-    private static CensoredLikelihood likelihood(CensoredSample s, boolean log) {
-        int nd = s.count(Censoring.DETECTED);
-        double[] exact = new double[nd];
-        double[][] bounds = new double[s.size() - nd][];
-        int k = 0;
-        int c = 0;
-        for (int i = 0; i < s.size(); i++) {
-            if (s.kind(i) == Censoring.DETECTED) {
-                exact[k++] = log ? Math.log(s.lower(i)) : s.lower(i);
-            } else {
-                double lo = s.kind(i) == Censoring.BELOW ? Double.NEGATIVE_INFINITY : scale(s.lower(i), log);
-                bounds[c++] = new double[] {lo, scale(s.upper(i), log)};
-            }
-        }
-        java.util.Arrays.sort(exact);
-        java.util.Arrays.sort(bounds, java.util.Comparator.<double[]>comparingDouble(b -> b[0])
-                .thenComparingDouble(b -> b[1]));
-        double[][] ex = runs(exact.length, i -> new double[] {exact[i]});
-        double[][] ce = runs(bounds.length, i -> bounds[i]);
-        return new CensoredLikelihood(column(ex, 0), column(ex, 1), column(ce, 0), column(ce, 1),
-                column(ce, 2), log);
-    }
-
-    /** Sorted keys collapsed to distinct keys followed by their count. */
-    private static double[][] runs(int n, java.util.function.IntFunction<double[]> key) {
-        List<double[]> out = new ArrayList<>();
-        int i = 0;
-        while (i < n) {
-            double[] kk = key.apply(i);
-            int j = i + 1;
-            while (j < n && java.util.Arrays.equals(key.apply(j), kk)) {
-                j++;
-            }
-            double[] row = java.util.Arrays.copyOf(kk, kk.length + 1);
-            row[kk.length] = j - i;
-            out.add(row);
-            i = j;
-        }
-        return out.toArray(new double[0][]);
-    }
-
-    private static double[] column(double[][] rows, int col) {
-        double[] out = new double[rows.length];
-        for (int i = 0; i < rows.length; i++) {
-            out[i] = rows[i][col];
-        }
-        return out;
-    }
-
-    private static double scale(double x, boolean log) {
-        return log && Double.isFinite(x) ? Math.log(x) : x;
-    }
-
     /** Mean and SD of the detects: close enough for Newton–Raphson with step halving. */
-    private static double[] start(CensoredSample s, boolean log) {
-        double[] d = s.detects();
-        double sum = 0;
-        double sumSq = 0;
-        for (double x : d) {
-            double y = log ? Math.log(x) : x;
-            sum += y;
-            sumSq += y * y;
-        }
-        double mean = sum / d.length;
-        double var = Math.max((sumSq - d.length * mean * mean) / (d.length - 1), 1e-12);
-        return new double[] {mean, 0.5 * Math.log(var)};
+    private static double[] start(CensoredLikelihood lik) {
+        double var = Math.max(lik.detectVariance(), 1e-12);
+        return new double[] {lik.detectMean(), 0.5 * Math.log(var)};
     }
 
     /** −H⁻¹g when H is negative definite; otherwise a scaled gradient step uphill. */

@@ -1,8 +1,10 @@
 package org.cupel.censored;
 
 import java.util.Arrays;
-import java.util.TreeSet;
+import java.util.Comparator;
+import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.AssayValue;
+import org.cupel.assay.Qualifier;
 
 /**
  * The non-missing values of one analyte as censored observations: detects, values below a detection
@@ -16,30 +18,58 @@ public final class CensoredSample {
     private final double[] lower;
     private final double[] upper;
     private final int missing;
+    /** Detected values, limits of values below detection, limits of values above range: sorted once here. */
+    private final Tally detects;
+    private final Tally belowLimits;
+    private final Tally aboveLimits;
+    private final IntervalGroups intervals;
 
     private CensoredSample(Censoring[] kinds, double[] lower, double[] upper, int missing) {
         this.kinds = kinds;
         this.lower = lower;
         this.upper = upper;
         this.missing = missing;
+        Tally.Counter d = new Tally.Counter();
+        Tally.Counter b = new Tally.Counter();
+        Tally.Counter a = new Tally.Counter();
+        int nIntervals = 0;
+        for (int i = 0; i < kinds.length; i++) {
+            switch (kinds[i]) {
+                case DETECTED -> d.add(lower[i]);
+                case BELOW -> b.add(upper[i]);
+                case ABOVE -> a.add(lower[i]);
+                case INTERVAL -> nIntervals++;
+            }
+        }
+        this.detects = d.tally();
+        this.belowLimits = b.tally();
+        this.aboveLimits = a.tally();
+        this.intervals = IntervalGroups.of(kinds, lower, upper, nIntervals);
     }
 
     /** The sample of the given values; missing values are counted, not used. */
     public static CensoredSample of(Iterable<AssayValue> values) {
         Builder b = builder();
         for (AssayValue v : values) {
-            switch (v.qualifier()) {
-                case DETECTED -> b.detected(v.value());
-                case BELOW_DETECTION -> b.below(v.value());
-                case ABOVE_UPPER_LIMIT -> b.above(v.value());
-                default -> b.missing();
-            }
+            b.add(v.qualifier(), v.value());
+        }
+        return b.build();
+    }
+
+    /**
+     * The sample of the reported values of {@code column} at {@code rows}, the same as {@link #of(Iterable)}
+     * of their {@link AnalyteColumn#value(int)}s, read from the column's arrays without making the values.
+     */
+    public static CensoredSample of(AnalyteColumn column, int[] rows) {
+        Builder b = new Builder(rows.length);
+        for (int row : rows) {
+            b.add(column.qualifier(row), column.number(row));
         }
         return b.build();
     }
 
     public static Builder builder() {
-        return new Builder();
+        return new Builder(64);
     }
 
     /** Observations used. */
@@ -66,13 +96,12 @@ public final class CensoredSample {
     }
 
     public int count(Censoring kind) {
-        int c = 0;
-        for (Censoring k : kinds) {
-            if (k == kind) {
-                c++;
-            }
-        }
-        return c;
+        return switch (kind) {
+            case DETECTED -> detects.size();
+            case BELOW -> belowLimits.size();
+            case ABOVE -> aboveLimits.size();
+            case INTERVAL -> intervals.size();
+        };
     }
 
     public int censoredCount() {
@@ -91,27 +120,47 @@ public final class CensoredSample {
 
     /** The detected values, ascending. */
     public double[] detects() {
-        return boundsOf(Censoring.DETECTED, lower);
+        return detects.expand();
     }
 
     /** The limits of the values below detection, one per value, ascending. */
     public double[] belowLimits() {
-        return boundsOf(Censoring.BELOW, upper);
+        return belowLimits.expand();
     }
 
     /** The limits of the values above the upper range, one per value, ascending. */
     public double[] aboveLimits() {
-        return boundsOf(Censoring.ABOVE, lower);
+        return aboveLimits.expand();
     }
 
     /** The distinct detection limits of the values below detection, ascending. */
     public double[] distinctBelowLimits() {
-        return distinct(belowLimits());
+        return belowLimits.distinctValues();
     }
 
     /** The distinct upper limits of the values above range, ascending. */
     public double[] distinctAboveLimits() {
-        return distinct(aboveLimits());
+        return aboveLimits.distinctValues();
+    }
+
+    /** The detected values as distinct values with counts. */
+    Tally detectTally() {
+        return detects;
+    }
+
+    /** The limits of the values below detection as distinct limits with counts. */
+    Tally belowTally() {
+        return belowLimits;
+    }
+
+    /** The limits of the values above range as distinct limits with counts. */
+    Tally aboveTally() {
+        return aboveLimits;
+    }
+
+    /** The interval-censored values as distinct intervals with counts. */
+    IntervalGroups intervalGroups() {
+        return intervals;
     }
 
     /** Every value and limit multiplied by {@code factor > 0} (a unit change). */
@@ -141,35 +190,69 @@ public final class CensoredSample {
         return new CensoredSample(k, lo, hi, 0);
     }
 
-    private double[] boundsOf(Censoring kind, double[] bound) {
-        double[] out = new double[count(kind)];
-        int k = 0;
-        for (int i = 0; i < kinds.length; i++) {
-            if (kinds[i] == kind) {
-                out[k++] = bound[i];
+    /**
+     * The distinct intervals {@code (low, high]} of the interval-censored values, ordered by low then high,
+     * each with its count.
+     */
+    record IntervalGroups(double[] low, double[] high, int[] counts) {
+        static IntervalGroups of(Censoring[] kinds, double[] lower, double[] upper, int n) {
+            double[][] pairs = new double[n][];
+            int k = 0;
+            for (int i = 0; i < kinds.length; i++) {
+                if (kinds[i] == Censoring.INTERVAL) {
+                    pairs[k++] = new double[] {lower[i], upper[i]};
+                }
             }
+            Arrays.sort(pairs, Comparator.<double[]>comparingDouble(p -> p[0]).thenComparingDouble(p -> p[1]));
+            double[] lo = new double[n];
+            double[] hi = new double[n];
+            int[] c = new int[n];
+            int g = -1;
+            for (double[] p : pairs) {
+                if (g < 0 || Double.compare(p[0], lo[g]) != 0 || Double.compare(p[1], hi[g]) != 0) {
+                    g++;
+                    lo[g] = p[0];
+                    hi[g] = p[1];
+                }
+                c[g]++;
+            }
+            return new IntervalGroups(Arrays.copyOf(lo, g + 1), Arrays.copyOf(hi, g + 1), Arrays.copyOf(c, g + 1));
         }
-        Arrays.sort(out);
-        return out;
-    }
 
-    private static double[] distinct(double[] sorted) {
-        TreeSet<Double> set = new TreeSet<>();
-        for (double d : sorted) {
-            set.add(d);
+        int size() {
+            int s = 0;
+            for (int c : counts) {
+                s += c;
+            }
+            return s;
         }
-        return set.stream().mapToDouble(Double::doubleValue).toArray();
+
+        int distinct() {
+            return counts.length;
+        }
     }
 
     /** Collects observations one at a time. */
     public static final class Builder {
-        private Censoring[] kinds = new Censoring[64];
-        private double[] lower = new double[64];
-        private double[] upper = new double[64];
+        private Censoring[] kinds;
+        private double[] lower;
+        private double[] upper;
         private int size;
         private int missing;
 
-        private Builder() {
+        private Builder(int capacity) {
+            kinds = new Censoring[Math.max(capacity, 1)];
+            lower = new double[kinds.length];
+            upper = new double[kinds.length];
+        }
+
+        private void add(Qualifier qualifier, double value) {
+            switch (qualifier) {
+                case DETECTED -> detected(value);
+                case BELOW_DETECTION -> below(value);
+                case ABOVE_UPPER_LIMIT -> above(value);
+                default -> missing();
+            }
         }
 
         public Builder detected(double value) {

@@ -1,7 +1,6 @@
 package org.cupel.censored;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import org.cupel.assay.Numbers;
 
@@ -77,27 +76,28 @@ public final class KaplanMeier {
         if (why != null) {
             return new Result(List.of(), Double.NaN, Double.NaN, CensoredSummary.notApplicable(METHOD, n, nCens, why));
         }
-        double[] detects = sample.detects();
-        double[] limits = sample.belowLimits();
+        Tally detects = sample.detectTally();
+        Tally limits = sample.belowTally();
         List<Step> descending = new ArrayList<>();
         double f = 1;
-        int j = detects.length - 1;
-        while (j >= 0) {
-            double x = detects[j];
+        int g = detects.distinct() - 1;
+        while (g >= 0) {
+            double x = detects.value(g);
             int d = 0;
-            while (j >= 0 && detects[j] == x) {
-                d++;
-                j--;
+            // == rather than the tally's bitwise distinctness: −0.0 and 0.0 are one step.
+            while (g >= 0 && detects.value(g) == x) {
+                d += detects.count(g);
+                g--;
             }
-            int r = j + 1 + d + countAtOrBelow(limits, x);
+            int r = detects.before(g + 1) + d + limits.countAtOrBelow(x);
             descending.add(new Step(x, r, d, f));
             f *= 1 - d / (double) r;
         }
         List<Step> steps = new ArrayList<>(descending);
         java.util.Collections.reverse(steps);
-        double lowestDetect = detects[0];
-        double at = options.lowestMass() == LowestMass.AT_LOWEST_LIMIT && limits.length > 0
-                ? Math.min(limits[0], lowestDetect) : lowestDetect;
+        double lowestDetect = detects.value(0);
+        double at = options.lowestMass() == LowestMass.AT_LOWEST_LIMIT && limits.size() > 0
+                ? Math.min(limits.value(0), lowestDetect) : lowestDetect;
         return new Result(steps, f, at, summarise(steps, f, at, n, nCens, options));
     }
 
@@ -187,17 +187,6 @@ public final class KaplanMeier {
             }
         }
         return Estimate.of(steps.get(steps.size() - 1).value(), "");
-    }
-
-    private static int countAtOrBelow(double[] sorted, double x) {
-        int i = Arrays.binarySearch(sorted, x);
-        if (i < 0) {
-            return -i - 1;
-        }
-        while (i + 1 < sorted.length && sorted[i + 1] == x) {
-            i++;
-        }
-        return i + 1;
     }
 
     private static double sq(double v) {

@@ -1,10 +1,11 @@
 package org.cupel.censored;
 
+import java.util.AbstractList;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import org.apache.commons.math3.distribution.NormalDistribution;
-import org.apache.commons.math3.stat.regression.SimpleRegression;
+import java.util.Objects;
+import java.util.RandomAccess;
 import org.cupel.assay.Numbers;
 
 /**
@@ -18,9 +19,9 @@ import org.cupel.assay.Numbers;
  * <pre>  pe_j = pe_{j+1} + A_j / (A_j + B_j) · (1 − pe_{j+1}),   pe_{m+1} = 0.</pre>
  * The r-th smallest detect of interval j plots at {@code (1 − pe_j) + (pe_j − pe_{j+1}) · r / (A_j + 1)}
  * and the r-th nondetect at {@code DL_j} at {@code (1 − pe_j) · r / (C_j + 1)} (plotting constant 0).
- * Least squares of {@code ln(detect)} on the normal quantile {@code Φ⁻¹(p)} gives intercept a and slope
- * b; each nondetect is imputed as {@code exp(a + b Φ⁻¹(p))}, and the statistics are the ordinary ones
- * of detects plus imputed values ("robust ROS"). Nondetects whose limit exceeds the largest detect have
+ * Least squares of {@code ln(detect)} on the normal quantile {@code Φ⁻¹(p)} ({@link NormalQuantile},
+ * Wichura's AS 241) gives intercept a and slope b; each nondetect is imputed as {@code exp(a + b Φ⁻¹(p))},
+ * and the statistics are the ordinary ones of detects plus imputed values ("robust ROS"). Nondetects whose limit exceeds the largest detect have
  * {@code A_j = 0}, so {@code pe_j = pe_{j+1}} and their plotting positions spread below that exceedance
  * probability, as Helsel–Cohn's counting gives; they carry little information and the result says so.
  */
@@ -30,8 +31,6 @@ public final class Ros {
     public static final int MIN_DETECTS = 3;
     /** Above this censored fraction the estimates rest mostly on the fitted line (Helsel 2012). */
     public static final double HEAVY_CENSORING = 0.80;
-
-    private static final NormalDistribution STANDARD_NORMAL = new NormalDistribution(null, 0, 1);
 
     /** One observation on the probability plot. */
     public record Point(double plottingPosition, double normalQuantile, double value, boolean detected,
@@ -49,7 +48,8 @@ public final class Ros {
     public record Result(List<Point> points, double[] limits, double[] exceedance, double intercept, double slope,
                          CensoredSummary summary) {
         public Result {
-            points = List.copyOf(points);
+            // The fit's own points are an immutable view; copying it would make the million points it avoids.
+            points = points instanceof Plot ? points : List.copyOf(points);
         }
     }
 
@@ -85,10 +85,10 @@ public final class Ros {
             return new Result(List.of(), new double[0], new double[0], Double.NaN, Double.NaN,
                     CensoredSummary.notApplicable(METHOD, n, nCens, why));
         }
-        double[] detects = sample.detects();
-        double[] nd = sample.belowLimits();
-        double[] limits = sample.distinctBelowLimits();
-        if (limits.length == 0 || detects[0] < limits[0]) {
+        Tally detects = sample.detectTally();
+        Tally nd = sample.belowTally();
+        double[] limits = nd.distinctValues();
+        if (limits.length == 0 || detects.value(0) < limits[0]) {
             double[] withZero = new double[limits.length + 1];
             System.arraycopy(limits, 0, withZero, 1, limits.length);
             limits = withZero;
@@ -99,40 +99,97 @@ public final class Ros {
         int[] c = new int[m];
         for (int j = 0; j < m; j++) {
             double hi = j + 1 < m ? limits[j + 1] : Double.POSITIVE_INFINITY;
-            a[j] = lowerBound(detects, hi) - lowerBound(detects, limits[j]);
-            b[j] = upperBound(nd, limits[j]) + lowerBound(detects, limits[j]);
-            c[j] = upperBound(nd, limits[j]) - lowerBound(nd, limits[j]);
+            a[j] = detects.countBelow(hi) - detects.countBelow(limits[j]);
+            b[j] = nd.countAtOrBelow(limits[j]) + detects.countBelow(limits[j]);
+            c[j] = nd.countAtOrBelow(limits[j]) - nd.countBelow(limits[j]);
         }
         double[] pe = new double[m + 1];
         for (int j = m - 1; j >= 0; j--) {
             pe[j] = pe[j + 1] + (a[j] + b[j] == 0 ? 0 : a[j] / (double) (a[j] + b[j])) * (1 - pe[j + 1]);
         }
-        List<Point> points = new ArrayList<>(n);
-        SimpleRegression reg = new SimpleRegression(true);
+        double[] line = regression(detects, limits, pe, a);
+        double intercept = line[0];
+        double slope = line[1];
+        List<Tally> values = new ArrayList<>();
+        values.add(detects);
         for (int j = 0; j < m; j++) {
-            int from = lowerBound(detects, limits[j]);
-            for (int r = 1; r <= a[j]; r++) {
-                double p = (1 - pe[j]) + (pe[j] - pe[j + 1]) * r / (a[j] + 1.0);
-                double z = STANDARD_NORMAL.inverseCumulativeProbability(p);
-                double x = detects[from + r - 1];
-                reg.addData(z, Math.log(x));
-                points.add(new Point(p, z, x, true, limits[j]));
-            }
+            values.add(imputed(pe, c, j, intercept, slope));
         }
-        double intercept = reg.getIntercept();
-        double slope = reg.getSlope();
-        for (int j = 0; j < m; j++) {
-            for (int r = 1; r <= c[j]; r++) {
-                double p = (1 - pe[j]) * r / (c[j] + 1.0);
-                double z = STANDARD_NORMAL.inverseCumulativeProbability(p);
-                points.add(new Point(p, z, Math.exp(intercept + slope * z), false, limits[j]));
-            }
-        }
-        double[] values = points.stream().mapToDouble(Point::value).toArray();
         List<String> notes = notes(sample, detects, limits, c);
-        CensoredSummary summary = OrdinarySummary.of(METHOD, values, nCens, notes,
+        CensoredSummary summary = OrdinarySummary.of(METHOD, Tally.union(values), nCens, notes,
                 nCens == 0 ? null : "no closed-form standard error for ROS (Helsel 2012 suggests the bootstrap)");
+        Plot points = new Plot(detects, limits, pe, a, c, intercept, slope);
         return new Result(points, limits, Arrays.copyOf(pe, m), intercept, slope, summary);
+    }
+
+    /** Plotting position of the r-th smallest detect (from 1) of interval j. */
+    private static double detectPosition(double[] pe, int[] a, int j, int r) {
+        return (1 - pe[j]) + (pe[j] - pe[j + 1]) * r / (a[j] + 1.0);
+    }
+
+    /** Plotting position of the r-th nondetect (from 1) at limit j. */
+    private static double nondetectPosition(double[] pe, int[] c, int j, int r) {
+        return (1 - pe[j]) * r / (c[j] + 1.0);
+    }
+
+    /**
+     * Least squares of ln(detect) on the normal quantile of its plotting position: intercept and slope of
+     * {@code y = a + b z} from the centred sums {@code b = Σ(z − z̄)(y − ȳ) / Σ(z − z̄)²},
+     * {@code a = ȳ − b z̄}. Interval j holds the detects {@code [DL_j, DL_{j+1})}, which are whole runs of
+     * the tally, so the detects are walked run by run and each run's logarithm is taken once.
+     */
+    private static double[] regression(Tally detects, double[] limits, double[] pe, int[] a) {
+        int n = detects.size();
+        double[] y = new double[detects.distinct()];
+        double sumY = 0;
+        for (int i = 0; i < y.length; i++) {
+            y[i] = Math.log(detects.value(i));
+            sumY += detects.count(i) * y[i];
+        }
+        double[] z = new double[n];
+        double sumZ = 0;
+        int k = 0;
+        for (int j = 0; j < limits.length; j++) {
+            for (int r = 1; r <= a[j]; r++) {
+                z[k] = NormalQuantile.of(detectPosition(pe, a, j, r));
+                sumZ += z[k++];
+            }
+        }
+        double meanY = sumY / n;
+        double meanZ = sumZ / n;
+        double szz = 0;
+        double szy = 0;
+        k = 0;
+        for (int i = 0; i < y.length; i++) {
+            double dy = y[i] - meanY;
+            for (int end = k + detects.count(i); k < end; k++) {
+                double dz = z[k] - meanZ;
+                szz += dz * dz;
+                szy += dz * dy;
+            }
+        }
+        double slope = szy / szz;
+        return new double[] {meanY - slope * meanZ, slope};
+    }
+
+    /** The imputed values {@code exp(a + b z)} of the nondetects at limit j. */
+    private static Tally imputed(double[] pe, int[] c, int j, double intercept, double slope) {
+        double[] v = new double[c[j]];
+        for (int r = 1; r <= c[j]; r++) {
+            v[r - 1] = imputedValue(NormalQuantile.of(nondetectPosition(pe, c, j, r)), intercept, slope);
+        }
+        // Monotone in r up to rounding of the quantile function: sort only when that is not enough.
+        if (slope < 0) {
+            reverse(v);
+        }
+        if (!ascending(v)) {
+            Arrays.sort(v);
+        }
+        return Tally.ofSorted(v);
+    }
+
+    private static double imputedValue(double z, double intercept, double slope) {
+        return Math.exp(intercept + slope * z);
     }
 
     private static String notApplicable(CensoredSample sample) {
@@ -148,24 +205,24 @@ public final class Ros {
             return "not applicable: " + detects + " detect" + (detects == 1 ? "" : "s") + "; ROS needs at least "
                     + MIN_DETECTS + " to fit a line";
         }
-        if (sample.detects()[0] <= 0) {
+        Tally d = sample.detectTally();
+        if (d.value(0) <= 0) {
             return "not applicable: ROS fits logarithms and a detect is zero or negative";
         }
-        double[] d = sample.detects();
-        if (d[0] == d[d.length - 1]) {
+        if (d.value(0) == d.value(d.distinct() - 1)) {
             return "not applicable: every detect has the same value, so no line can be fitted";
         }
         return null;
     }
 
-    private static List<String> notes(CensoredSample sample, double[] detects, double[] limits, int[] c) {
+    private static List<String> notes(CensoredSample sample, Tally detects, double[] limits, int[] c) {
         List<String> notes = new ArrayList<>();
         notes.add("Helsel–Cohn plotting positions, lognormal fit on detects, nondetects imputed from the line");
         if (sample.censoredFraction() > HEAVY_CENSORING) {
             notes.add("warning: " + Math.round(100 * sample.censoredFraction())
                     + " % of values are censored (above 80 %): the estimates rest mostly on the fitted line");
         }
-        double largest = detects[detects.length - 1];
+        double largest = detects.value(detects.distinct() - 1);
         int above = 0;
         for (int j = 0; j < limits.length; j++) {
             if (limits[j] > largest) {
@@ -181,33 +238,78 @@ public final class Ros {
         return notes;
     }
 
-    /** Index of the first element {@code ≥ x} in sorted data. */
-    private static int lowerBound(double[] sorted, double x) {
-        int lo = 0;
-        int hi = sorted.length;
-        while (lo < hi) {
-            int mid = (lo + hi) >>> 1;
-            if (sorted[mid] < x) {
-                lo = mid + 1;
-            } else {
-                hi = mid;
-            }
+    private static void reverse(double[] v) {
+        for (int i = 0, k = v.length - 1; i < k; i++, k--) {
+            double t = v[i];
+            v[i] = v[k];
+            v[k] = t;
         }
-        return lo;
     }
 
-    /** Index of the first element {@code > x} in sorted data. */
-    private static int upperBound(double[] sorted, double x) {
-        int lo = 0;
-        int hi = sorted.length;
-        while (lo < hi) {
-            int mid = (lo + hi) >>> 1;
-            if (sorted[mid] <= x) {
-                lo = mid + 1;
-            } else {
-                hi = mid;
+    private static boolean ascending(double[] v) {
+        for (int i = 1; i < v.length; i++) {
+            if (Double.compare(v[i - 1], v[i]) > 0) {
+                return false;
             }
         }
-        return lo;
+        return true;
+    }
+
+    /**
+     * The points of a fit, made when asked for from the fit's counts with the same formulas as the fit
+     * (detects of each interval in ascending order, then the nondetects of each limit): a million-value
+     * sample needs no million point objects unless a caller walks them all.
+     */
+    private static final class Plot extends AbstractList<Point> implements RandomAccess {
+        private final Tally detects;
+        private final double[] limits;
+        private final double[] pe;
+        private final int[] a;
+        private final int[] c;
+        private final double intercept;
+        private final double slope;
+        /** First point of detect interval j, then of nondetect block j: {@code start[j]}, {@code start[m + j]}. */
+        private final int[] start;
+
+        Plot(Tally detects, double[] limits, double[] pe, int[] a, int[] c, double intercept, double slope) {
+            this.detects = detects;
+            this.limits = limits;
+            this.pe = pe;
+            this.a = a;
+            this.c = c;
+            this.intercept = intercept;
+            this.slope = slope;
+            int m = limits.length;
+            this.start = new int[2 * m + 1];
+            for (int k = 0; k < 2 * m; k++) {
+                start[k + 1] = start[k] + (k < m ? a[k] : c[k - m]);
+            }
+        }
+
+        @Override
+        public Point get(int i) {
+            Objects.checkIndex(i, size());
+            int k = Arrays.binarySearch(start, i);
+            k = k >= 0 ? k : -k - 2;
+            while (start[k + 1] == i) {
+                k++;
+            }
+            int m = limits.length;
+            int r = i - start[k] + 1;
+            if (k < m) {
+                double p = detectPosition(pe, a, k, r);
+                double x = detects.orderStatistic(detects.countBelow(limits[k]) + r - 1);
+                return new Point(p, NormalQuantile.of(p), x, true, limits[k]);
+            }
+            int j = k - m;
+            double p = nondetectPosition(pe, c, j, r);
+            double z = NormalQuantile.of(p);
+            return new Point(p, z, imputedValue(z, intercept, slope), false, limits[j]);
+        }
+
+        @Override
+        public int size() {
+            return start[start.length - 1];
+        }
     }
 }

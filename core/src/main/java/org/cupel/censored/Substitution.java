@@ -45,20 +45,26 @@ public final class Substitution {
         if (n == 0) {
             return CensoredSummary.notApplicable(method(rule), 0, 0, "no values");
         }
-        double[] v = new double[n];
-        for (int i = 0; i < n; i++) {
-            v[i] = switch (sample.kind(i)) {
-                case DETECTED -> sample.lower(i);
-                case BELOW -> rule.fraction() * sample.upper(i);
-                case ABOVE -> sample.lower(i);
-                case INTERVAL -> (sample.lower(i) + sample.upper(i)) / 2;
-            };
+        CensoredSample.IntervalGroups intervals = sample.intervalGroups();
+        Tally.Counter filled = new Tally.Counter();
+        add(filled, sample.detectTally(), 1);
+        add(filled, sample.belowTally(), rule.fraction());
+        add(filled, sample.aboveTally(), 1);
+        for (int g = 0; g < intervals.distinct(); g++) {
+            filled.add((intervals.low()[g] + intervals.high()[g]) / 2, intervals.counts()[g]);
         }
         List<String> notes = new ArrayList<>();
         notes.add("comparison only: values below detection replaced by " + rule.label()
                 + (sample.count(Censoring.ABOVE) > 0 ? ", values above range by their limit" : ""));
-        return OrdinarySummary.of(method(rule), v, nCens, notes,
+        return OrdinarySummary.of(method(rule), filled.tally(), nCens, notes,
                 nCens == 0 ? null : "no standard error: substituted values are not measurements");
+    }
+
+    /** Each value of {@code t} times {@code factor}, with its count (the distinct values only). */
+    private static void add(Tally.Counter to, Tally t, double factor) {
+        for (int i = 0; i < t.distinct(); i++) {
+            to.add(factor * t.value(i), t.count(i));
+        }
     }
 
     /** All four rules, in the order of {@link Rule}. */

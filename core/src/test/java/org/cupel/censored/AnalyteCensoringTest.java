@@ -28,4 +28,23 @@ class AnalyteCensoringTest {
         assertEquals(au.values(), au.methodCounts().values().stream().mapToInt(Integer::intValue).sum());
         assertEquals(p.analyteNames().size(), all.size());
     }
+
+    @Test
+    void sampleReadFromTheColumnEqualsTheSampleOfItsValues() {
+        Project p = ProjectLoader.load(Path.of(System.getProperty("cupel.testdata", "../testdata"), "fixtures",
+                "ingest", "messy-project"));
+        int[] rows = p.samples().rowsWithRole(org.cupel.assay.QcRole.ROUTINE);
+        for (org.cupel.assay.AnalyteColumn column : p.analytes().values()) {
+            List<org.cupel.assay.AssayValue> values = java.util.Arrays.stream(rows).mapToObj(column::value).toList();
+            CensoredSample direct = CensoredSample.of(column, rows);
+            CensoredSample viaValues = CensoredSample.of(values);
+            assertEquals(viaValues.size(), direct.size());
+            assertEquals(viaValues.missingCount(), direct.missingCount());
+            for (int i = 0; i < direct.size(); i++) {
+                assertEquals(viaValues.kind(i), direct.kind(i));
+                assertEquals(viaValues.lower(i), direct.lower(i), 0);
+                assertEquals(viaValues.upper(i), direct.upper(i), 0);
+            }
+        }
+    }
 }
