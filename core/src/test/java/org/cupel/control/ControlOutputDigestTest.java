@@ -2,6 +2,7 @@ package org.cupel.control;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import com.fasterxml.jackson.annotation.JsonIgnoreProperties;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
@@ -16,6 +17,7 @@ import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.cupel.assay.AssayValue;
 import org.cupel.control.crm.CrmResult;
 import org.cupel.control.crm.CrmReview;
 import org.cupel.control.crm.SeriesReview;
@@ -39,15 +41,24 @@ class ControlOutputDigestTest {
             .enable(SerializationFeature.INDENT_OUTPUT)
             .enable(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS)
             .disable(SerializationFeature.FAIL_ON_EMPTY_BEANS)
+            .addMixIn(AssayValue.class, WithoutDerivedFlags.class)
             .build();
+
+    /**
+     * Jackson also writes AssayValue's isMissing / isCensored / isDetected, in an order that reflection
+     * does not fix from one run to the next; they follow from the qualifier, so the digest leaves them out.
+     */
+    @JsonIgnoreProperties({"missing", "censored", "detected"})
+    private interface WithoutDerivedFlags {
+    }
 
     @TempDir
     Path dir;
 
     @ParameterizedTest
     @CsvSource({
-        "2500, 20260302, 47e089ef7abad140f29114a89b6feecff04e96b70178ed2efdb065ace634b29b",
-        "12000, 7, 9cb9adf350435c168fa57457553b3ec2792f82ed6de4b83431dd412e90a65e1a",
+        "2500, 20260302, 2164d8fbb4fb8ed3ccdcb07da5923e4a37c8c5151a254be157e65d5052696836",
+        "12000, 7, b7a72558a9ae8e71896e9eed78ef9636d759fbbde398cb65a9e45b1ef78ed14e",
     })
     void outputsAreUnchanged(int samples, long seed, String expected) throws Exception {
         DemoGenerator.generate(new DemoSettings(samples, seed), rel -> {
