@@ -114,6 +114,25 @@ public final class BatchSequence {
         return rowsByBatch[b].clone();
     }
 
+    /** Row {@code k} of batch {@code b} in run order (0 = first), without copying the batch. */
+    public int row(int b, int k) {
+        return rowsByBatch[b][k];
+    }
+
+    /** {@code rows} in sequence order: batch by batch, each in run order. */
+    public int[] inRunOrder(int[] rows) {
+        long[] keys = new long[rows.length];
+        for (int k = 0; k < rows.length; k++) {
+            keys[k] = ((long) batchOfRow[rows[k]] << 32) | indexInBatch[rows[k]];
+        }
+        Arrays.sort(keys);
+        int[] out = new int[rows.length];
+        for (int k = 0; k < keys.length; k++) {
+            out[k] = rowsByBatch[(int) (keys[k] >>> 32)][(int) keys[k]];
+        }
+        return out;
+    }
+
     /** Samples in batch {@code b}. */
     public int batchSize(int b) {
         return rowsByBatch[b].length;
