@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
@@ -33,11 +34,7 @@ public final class BatchVerdicts {
 
     /** As {@link #judge(SampleTable, List)}, with the table's batch sequence already built. */
     public static List<BatchVerdict> judge(SampleTable table, BatchSequence seq, List<ControlOutcome> outcomes) {
-        Set<String> names = new TreeSet<>();
-        for (ControlOutcome o : outcomes) {
-            names.add(o.analyte());
-        }
-        List<String> analytes = List.copyOf(names);
+        List<String> analytes = analyteNames(outcomes);
         Map<String, Integer> analyteIndex = new HashMap<>();
         analytes.forEach(a -> analyteIndex.put(a, analyteIndex.size()));
         // One bucket per batch and analyte, filled by a counting sort: no scan of a batch per analyte.
@@ -98,6 +95,15 @@ public final class BatchVerdicts {
             i = j;
         }
         return mine;
+    }
+
+    /** The analytes of the outcomes in name order (a hash set first: a million outcomes name ten analytes). */
+    static List<String> analyteNames(List<ControlOutcome> outcomes) {
+        Set<String> names = new HashSet<>();
+        for (ControlOutcome o : outcomes) {
+            names.add(o.analyte());
+        }
+        return List.copyOf(new TreeSet<>(names));
     }
 
     /** Whether any batch failed (the {@code --fail-on-qc} test). */

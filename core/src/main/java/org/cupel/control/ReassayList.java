@@ -5,7 +5,6 @@ import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.TreeSet;
 import java.util.function.IntFunction;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
@@ -45,7 +44,7 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
     /** As {@link #build(SampleTable, List, ReassaySettings)}, with the table's batch sequence already built. */
     public static ReassayList build(SampleTable table, BatchSequence seq, List<ControlOutcome> outcomes,
                                     ReassaySettings settings) {
-        List<String> analytes = List.copyOf(new TreeSet<>(outcomes.stream().map(ControlOutcome::analyte).toList()));
+        List<String> analytes = BatchVerdicts.analyteNames(outcomes);
         Map<String, Integer> analyteIndex = new HashMap<>();
         analytes.forEach(a -> analyteIndex.put(a, analyteIndex.size()));
         List<ControlOutcome> triggers = outcomes.stream().filter(ControlOutcome::triggersReassay)
