@@ -25,15 +25,18 @@ public record BatchReview(List<BatchVerdict> verdicts, ReassayList reassay, Blan
 
     /** @param otherOutcomes outcomes of other control reviews (CRMs), in any order; may be empty */
     public static BatchReview of(Project project, List<ControlOutcome> otherOutcomes) {
-        BlankReport blanks = BlankReview.review(project);
-        List<ControlOutcome> all = new ArrayList<>(otherOutcomes);
-        all.addAll(blanks.outcomes());
+        BatchSequence seq = BatchSequence.of(project.samples());
+        BlankReport blanks = BlankReview.review(project, seq);
+        List<ControlOutcome> blankOutcomes = blanks.outcomes();
+        List<ControlOutcome> all = new ArrayList<>(otherOutcomes.size() + blankOutcomes.size());
+        all.addAll(otherOutcomes);
+        all.addAll(blankOutcomes);
         ReassaySettings reassay = project.config().section("reassay", ReassaySettings.class, ReassaySettings.DEFAULTS);
         InsertionSettings insertion = project.config().section("insertion", InsertionSettings.class,
                 InsertionSettings.DEFAULTS);
-        return new BatchReview(BatchVerdicts.judge(project.samples(), all),
-                ReassayList.build(project.samples(), all, reassay), blanks,
-                InsertionRates.compute(project.samples(), insertion), all);
+        return new BatchReview(BatchVerdicts.judge(project.samples(), seq, all),
+                ReassayList.build(project.samples(), seq, all, reassay), blanks,
+                InsertionRates.compute(project.samples(), seq, insertion), all);
     }
 
     public boolean anyBatchFailed() {

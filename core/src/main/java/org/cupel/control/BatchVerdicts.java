@@ -1,11 +1,16 @@
 package org.cupel.control;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
+import org.cupel.assay.Batch;
 import org.cupel.assay.SampleTable;
 
 /**
@@ -24,23 +29,81 @@ public final class BatchVerdicts {
      * @return one verdict per batch (lab and batch ID, see {@link BatchSequence}), in the table's order
      */
     public static List<BatchVerdict> judge(SampleTable table, List<ControlOutcome> outcomes) {
-        Set<String> analytes = new TreeSet<>();
-        for (ControlOutcome o : outcomes) {
-            analytes.add(o.analyte());
+        return judge(table, BatchSequence.of(table), outcomes);
+    }
+
+    /** As {@link #judge(SampleTable, List)}, with the table's batch sequence already built. */
+    public static List<BatchVerdict> judge(SampleTable table, BatchSequence seq, List<ControlOutcome> outcomes) {
+        List<String> analytes = analyteNames(outcomes);
+        Map<String, Integer> analyteIndex = new HashMap<>();
+        analytes.forEach(a -> analyteIndex.put(a, analyteIndex.size()));
+        // One bucket per batch and analyte, filled by a counting sort: no scan of a batch per analyte.
+        int na = analytes.size();
+        int[] bucket = new int[outcomes.size()];
+        int[] start = new int[seq.size() * na + 1];
+        for (int i = 0; i < bucket.length; i++) {
+            ControlOutcome o = outcomes.get(i);
+            bucket[i] = seq.batchOf(o.row()) * na + analyteIndex.get(o.analyte());
+            start[bucket[i] + 1]++;
         }
-        BatchSequence seq = BatchSequence.of(table);
-        List<List<ControlOutcome>> byBatch = new ArrayList<>();
+        for (int k = 1; k < start.length; k++) {
+            start[k] += start[k - 1];
+        }
+        int[] next = Arrays.copyOf(start, start.length - 1);
+        long[] keys = new long[bucket.length];
+        for (int i = 0; i < bucket.length; i++) {
+            // Run order within the batch (= position, then row), then the order given.
+            keys[next[bucket[i]]++] = ((long) seq.indexInBatch(outcomes.get(i).row()) << 32) | i;
+        }
+        List<BatchVerdict> out = new ArrayList<>(seq.size());
         for (int b = 0; b < seq.size(); b++) {
-            byBatch.add(new ArrayList<>());
-        }
-        for (ControlOutcome o : outcomes) {
-            byBatch.get(seq.batchOf(o.row())).add(o);
-        }
-        List<BatchVerdict> out = new ArrayList<>();
-        for (int b = 0; b < byBatch.size(); b++) {
-            out.add(batch(table, seq.batch(b), seq.batchSize(b), byBatch.get(b), analytes));
+            List<AnalyteVerdict> per = new ArrayList<>(na);
+            Verdict batchVerdict = na == 0 ? Verdict.CANNOT_JUDGE : Verdict.PASS;
+            for (int a = 0; a < na; a++) {
+                int from = start[b * na + a];
+                int to = start[b * na + a + 1];
+                Arrays.sort(keys, from, to);
+                AnalyteVerdict av = analyte(table, analytes.get(a), inOrder(outcomes, keys, from, to));
+                per.add(av);
+                batchVerdict = batchVerdict.worst(av.verdict());
+            }
+            Batch batch = seq.batch(b);
+            out.add(new BatchVerdict(batch.id(), batch.lab(), seq.batchSize(b), batchVerdict, per));
         }
         return out;
+    }
+
+    /**
+     * The outcomes of one bucket in run order. Several outcomes of one row (rare) are put in order of rule,
+     * reason and verdict, so the result does not depend on the order the sources listed them.
+     */
+    private static List<ControlOutcome> inOrder(List<ControlOutcome> outcomes, long[] keys, int from, int to) {
+        List<ControlOutcome> mine = new ArrayList<>(to - from);
+        for (int k = from; k < to; k++) {
+            mine.add(outcomes.get((int) keys[k]));
+        }
+        Comparator<ControlOutcome> ties = Comparator.comparing(ControlOutcome::rule)
+                .thenComparing(ControlOutcome::reason).thenComparing(o -> o.verdict().ordinal());
+        for (int i = 0; i < mine.size(); ) {
+            int j = i + 1;
+            while (j < mine.size() && mine.get(j).row() == mine.get(i).row()) {
+                j++;
+            }
+            if (j - i > 1) {
+                mine.subList(i, j).sort(ties);
+            }
+            i = j;
+        }
+        return mine;
+    }
+
+    /** The analytes of the outcomes in name order (a hash set first: a million outcomes name ten analytes). */
+    static List<String> analyteNames(List<ControlOutcome> outcomes) {
+        Set<String> names = new HashSet<>();
+        for (ControlOutcome o : outcomes) {
+            names.add(o.analyte());
+        }
+        return List.copyOf(new TreeSet<>(names));
     }
 
     /** Whether any batch failed (the {@code --fail-on-qc} test). */
@@ -53,34 +116,12 @@ public final class BatchVerdicts {
         return (int) verdicts.stream().filter(b -> b.verdict() == v).count();
     }
 
-    private static BatchVerdict batch(SampleTable table, org.cupel.assay.Batch batch, int size,
-                                      List<ControlOutcome> outcomes, Set<String> analytes) {
-        List<AnalyteVerdict> per = new ArrayList<>();
-        Verdict batchVerdict = analytes.isEmpty() ? Verdict.CANNOT_JUDGE : Verdict.PASS;
-        for (String analyte : analytes) {
-            AnalyteVerdict av = analyte(table, analyte, outcomes);
-            per.add(av);
-            batchVerdict = batchVerdict.worst(av.verdict());
-        }
-        return new BatchVerdict(batch.id(), batch.lab(), size, batchVerdict, per);
-    }
-
-    private static AnalyteVerdict analyte(SampleTable table, String analyte, List<ControlOutcome> outcomes) {
-        List<ControlOutcome> mine = new ArrayList<>();
-        for (ControlOutcome o : outcomes) {
-            if (o.analyte().equals(analyte)) {
-                mine.add(o);
-            }
-        }
+    private static AnalyteVerdict analyte(SampleTable table, String analyte, List<ControlOutcome> mine) {
         if (mine.isEmpty()) {
             return new AnalyteVerdict(analyte, Verdict.CANNOT_JUDGE, 0, List.of(new VerdictReason("", 0, "",
                     analyte, Verdict.CANNOT_JUDGE, "no controls", "no control result for " + analyte
                     + " in this batch")));
         }
-        // Sort so the result does not depend on the order the sources listed their outcomes.
-        mine.sort(Comparator.comparingInt((ControlOutcome o) -> table.position(o.row()))
-                .thenComparingInt(ControlOutcome::row).thenComparing(ControlOutcome::rule)
-                .thenComparing(ControlOutcome::reason).thenComparing(o -> o.verdict().ordinal()));
         Verdict v = Verdict.PASS;
         Set<VerdictReason> reasons = new LinkedHashSet<>();
         for (ControlOutcome o : mine) {

@@ -23,11 +23,16 @@ public final class BlankReview {
 
     /** Every blank of every analyte of the project, with the settings of config section {@code blanks}. */
     public static BlankReport review(Project project) {
+        return review(project, BatchSequence.of(project.samples()));
+    }
+
+    /** As {@link #review(Project)}, with the batch sequence of the project's table already built. */
+    public static BlankReport review(Project project, BatchSequence seq) {
         BlankSettings settings = project.config().section("blanks", BlankSettings.class, BlankSettings.DEFAULTS);
+        int[] blanks = seq.inRunOrder(project.samples().rowsWithRole(QcRole.BLANK));
         List<BlankObservation> all = new ArrayList<>();
-        BatchSequence seq = BatchSequence.of(project.samples());
         for (AnalyteColumn col : project.analytes().values()) {
-            all.addAll(observations(project.samples(), seq, col));
+            all.addAll(observations(project.samples(), seq, col, blanks));
         }
         return review(all, settings);
     }
@@ -38,23 +43,26 @@ public final class BlankReview {
      * the same analyte and method elsewhere in the project.
      */
     public static List<BlankObservation> observations(SampleTable table, BatchSequence seq, AnalyteColumn col) {
-        Map<String, Double> methodLimit = methodLimits(col);
+        return observations(table, seq, col, seq.inRunOrder(table.rowsWithRole(QcRole.BLANK)));
+    }
+
+    private static List<BlankObservation> observations(SampleTable table, BatchSequence seq, AnalyteColumn col,
+                                                       int[] blanksInRunOrder) {
+        Map<String, Double> methodLimit = null;
         String unit = col.analyte().unit().symbol();
-        List<BlankObservation> out = new ArrayList<>();
-        for (int b = 0; b < seq.size(); b++) {
-            for (int row : seq.rows(b)) {
-                if (table.role(row) != QcRole.BLANK) {
-                    continue;
-                }
-                int prev = seq.preceding(row);
-                double dl = col.limit(row);
-                if (!(dl > 0) || col.qualifier(row) == org.cupel.assay.Qualifier.ABOVE_UPPER_LIMIT) {
-                    dl = methodLimit.getOrDefault(col.method(row), Double.NaN);
-                }
-                out.add(new BlankObservation(row, table.id(row), seq.batch(b).id(), table.position(row),
-                        col.analyte().name(), unit, col.value(row), dl, prev < 0 ? "" : table.id(prev),
-                        prev < 0 ? AssayValue.missing(MissingReason.NONE) : col.value(prev)));
+        String analyte = col.analyte().name();
+        List<BlankObservation> out = new ArrayList<>(blanksInRunOrder.length);
+        for (int row : blanksInRunOrder) {
+            int prev = seq.preceding(row);
+            double dl = col.limit(row);
+            if (!(dl > 0) || col.qualifier(row) == org.cupel.assay.Qualifier.ABOVE_UPPER_LIMIT) {
+                // Only blanks without a usable limit of their own need the scan of the whole column.
+                methodLimit = methodLimit == null ? methodLimits(col) : methodLimit;
+                dl = methodLimit.getOrDefault(col.method(row), Double.NaN);
             }
+            out.add(new BlankObservation(row, table.id(row), seq.batch(seq.batchOf(row)).id(), table.position(row),
+                    analyte, unit, col.value(row), dl, prev < 0 ? "" : table.id(prev),
+                    prev < 0 ? AssayValue.missing(MissingReason.NONE) : col.value(prev)));
         }
         return out;
     }
@@ -64,9 +72,15 @@ public final class BlankReview {
         Map<String, List<BlankResult>> byAnalyte = new LinkedHashMap<>();
         Map<String, Integer> missing = new HashMap<>();
         Map<String, String> units = new HashMap<>();
-        List<BlankResult> results = new ArrayList<>();
+        List<BlankResult> results = new ArrayList<>(observations.size());
+        List<BlankResult> current = null;
+        String currentAnalyte = null;
         for (BlankObservation o : observations) {
-            byAnalyte.computeIfAbsent(o.analyte(), k -> new ArrayList<>());
+            if (!o.analyte().equals(currentAnalyte)) {
+                // Observations come analyte by analyte: look the analyte up once per run of it.
+                currentAnalyte = o.analyte();
+                current = byAnalyte.computeIfAbsent(currentAnalyte, k -> new ArrayList<>());
+            }
             units.put(o.analyte(), o.unit());
             if (o.value().isMissing()) {
                 missing.merge(o.analyte(), 1, Integer::sum);
@@ -74,7 +88,7 @@ public final class BlankReview {
             }
             BlankResult r = judge(o, settings);
             results.add(r);
-            byAnalyte.get(o.analyte()).add(r);
+            current.add(r);
         }
         List<BlankSummary> summaries = new ArrayList<>();
         for (Map.Entry<String, List<BlankResult>> e : byAnalyte.entrySet()) {
@@ -102,6 +116,14 @@ public final class BlankReview {
         boolean carry = v.verdict() == Verdict.FAIL && t != null && !prev.isMissing()
                 && prev.qualifier() != org.cupel.assay.Qualifier.BELOW_DETECTION
                 && prev.value() >= settings.highGradeMultiple() * t.fail();
+        ControlOutcome outcome = ControlOutcome.described(o.row(), o.analyte(), v.verdict(), v.rule(),
+                () -> reason(o, v, carry), v.verdict() == Verdict.FAIL);
+        return new BlankResult(o, t, v, ratio, ratioNote, carry, outcome);
+    }
+
+    /** "B12 Au: 0.3 g/t is above the failure threshold 0.025 g/t; follows S11 at 9.1 g/t (probable carry-over)". */
+    private static String reason(BlankObservation o, BlankVerdict v, boolean carry) {
+        AssayValue prev = o.precedingGrade();
         String reason = o.sampleId() + " " + o.analyte() + ": " + v.explanation();
         if (!prev.isMissing() && v.verdict() != Verdict.PASS) {
             reason += "; follows " + o.precedingId() + " at " + prev.display() + " " + o.unit();
@@ -109,9 +131,7 @@ public final class BlankReview {
         if (carry) {
             reason += " (probable carry-over)";
         }
-        ControlOutcome outcome = new ControlOutcome(o.row(), o.analyte(), v.verdict(), v.rule(), reason,
-                v.verdict() == Verdict.FAIL);
-        return new BlankResult(o, t, v, ratio, ratioNote, carry, outcome);
+        return reason;
     }
 
     private static BlankSummary summary(String analyte, String unit, List<BlankResult> rs, int missing) {

@@ -1,9 +1,10 @@
 package org.cupel.control;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.apache.commons.math3.distribution.TDistribution;
-import org.apache.commons.math3.stat.correlation.SpearmansCorrelation;
+import org.apache.commons.math3.stat.correlation.PearsonsCorrelation;
 import org.apache.commons.math3.stat.regression.SimpleRegression;
 import org.cupel.assay.AssayValue;
 
@@ -61,8 +62,41 @@ public final class CarryOver {
                     + " has the same value");
             return new double[] {Double.NaN, Double.NaN};
         }
-        double rho = new SpearmansCorrelation().correlation(x, y);
+        double rho = new PearsonsCorrelation().correlation(averageRanks(x), averageRanks(y));
         return new double[] {rho, correlationP(rho, n)};
+    }
+
+    /**
+     * Ranks 1…n with ties given the mean of their ranks, as Commons Math's {@code NaturalRanking} (ties
+     * AVERAGE) gives them to {@code SpearmansCorrelation}, but from one primitive sort: the rank of x is
+     * (first + last) / 2 over the 1-based positions of its value in sorted order, the same exact halves.
+     */
+    static double[] averageRanks(double[] x) {
+        double[] sorted = x.clone();
+        Arrays.sort(sorted);
+        double[] rank = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            int first = bound(sorted, x[i], false);
+            int last = bound(sorted, x[i], true) - 1;
+            rank[i] = (first + last + 2) / 2.0;
+        }
+        return rank;
+    }
+
+    /** First index whose value is above {@code v} ({@code after}) or not below it, in Double.compare order. */
+    private static int bound(double[] sorted, double v, boolean after) {
+        int lo = 0;
+        int hi = sorted.length;
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            int c = Double.compare(sorted[mid], v);
+            if (c < 0 || (after && c == 0)) {
+                lo = mid + 1;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
     }
 
     /** Two-sided p of a correlation coefficient by the t approximation on n−2 degrees of freedom. */

@@ -26,13 +26,20 @@ public record InsertionRates(List<BatchInsertion> batches, BatchInsertion overal
     }
 
     public static InsertionRates compute(SampleTable table, InsertionSettings settings) {
-        BatchSequence seq = BatchSequence.of(table);
+        return compute(table, BatchSequence.of(table), settings);
+    }
+
+    /** As {@link #compute(SampleTable, InsertionSettings)}, with the table's batch sequence already built. */
+    public static InsertionRates compute(SampleTable table, BatchSequence seq, InsertionSettings settings) {
         int nb = seq.size();
         int[][] counts = new int[nb][QcRole.values().length];
         int[] all = new int[QcRole.values().length];
-        for (int row = 0; row < table.size(); row++) {
-            counts[seq.batchOf(row)][table.role(row).ordinal()]++;
-            all[table.role(row).ordinal()]++;
+        for (QcRole role : QcRole.values()) {
+            int[] rows = table.rowsWithRole(role);
+            for (int row : rows) {
+                counts[seq.batchOf(row)][role.ordinal()]++;
+            }
+            all[role.ordinal()] = rows.length;
         }
         List<BatchInsertion> batches = new ArrayList<>(nb);
         for (int b = 0; b < nb; b++) {

@@ -1,10 +1,11 @@
 package org.cupel.control;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.IntFunction;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
 
@@ -29,37 +30,67 @@ import org.cupel.assay.SampleTable;
 public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brackets,
                           ReassaySettings.Scope scope) {
 
+    private static final Verdict[] VERDICTS = Verdict.values();
+
     public ReassayList {
         entries = List.copyOf(entries);
         brackets = List.copyOf(brackets);
     }
 
     public static ReassayList build(SampleTable table, List<ControlOutcome> outcomes, ReassaySettings settings) {
-        BatchSequence seq = BatchSequence.of(table);
-        Map<String, Map<Integer, Verdict>> status = new HashMap<>();
-        for (ControlOutcome o : outcomes) {
-            status.computeIfAbsent(o.analyte(), k -> new HashMap<>()).merge(o.row(), o.verdict(), Verdict::worst);
-        }
+        return build(table, BatchSequence.of(table), outcomes, settings);
+    }
+
+    /** As {@link #build(SampleTable, List, ReassaySettings)}, with the table's batch sequence already built. */
+    public static ReassayList build(SampleTable table, BatchSequence seq, List<ControlOutcome> outcomes,
+                                    ReassaySettings settings) {
+        List<String> analytes = BatchVerdicts.analyteNames(outcomes);
+        Map<String, Integer> analyteIndex = new HashMap<>();
+        analytes.forEach(a -> analyteIndex.put(a, analyteIndex.size()));
         List<ControlOutcome> triggers = outcomes.stream().filter(ControlOutcome::triggersReassay)
-                .sorted(java.util.Comparator.comparingInt((ControlOutcome o) -> seq.batchOf(o.row()))
+                .sorted(Comparator.comparingInt((ControlOutcome o) -> seq.batchOf(o.row()))
                         .thenComparingInt(o -> seq.indexInBatch(o.row())).thenComparing(ControlOutcome::analyte)
                         .thenComparing(ControlOutcome::rule))
                 .toList();
-        Map<String, Builder> byKey = new LinkedHashMap<>();
+        // Worst verdict of each row per analyte, as ordinal + 1 (0: no outcome), for the analytes that
+        // trigger a re-assay (no other is ever read).
+        byte[][] status = new byte[analytes.size()][];
+        for (ControlOutcome o : triggers) {
+            int a = analyteIndex.get(o.analyte());
+            status[a] = status[a] == null ? new byte[table.size()] : status[a];
+        }
+        for (ControlOutcome o : outcomes) {
+            byte[] st = status[analyteIndex.get(o.analyte())];
+            if (st != null) {
+                Verdict v = st[o.row()] == 0 ? o.verdict() : VERDICTS[st[o.row()] - 1].worst(o.verdict());
+                st[o.row()] = (byte) (v.ordinal() + 1);
+            }
+        }
+        long[] startOfBatch = new long[seq.size()];
+        for (int b = 1; b < startOfBatch.length; b++) {
+            startOfBatch[b] = startOfBatch[b - 1] + seq.batchSize(b - 1);
+        }
+        // Entries keyed by place in the sequence, then analyte name: sorting the keys gives the list's order.
+        Map<Long, Builder> byKey = new HashMap<>();
         List<ReassayBracket> brackets = new ArrayList<>();
         for (ControlOutcome o : triggers) {
-            brackets.add(bracket(table, seq, o, status.get(o.analyte()), settings.scope(), byKey));
+            int a = analyteIndex.get(o.analyte());
+            brackets.add(bracket(table, seq, o, status[a], settings.scope(), row -> byKey.computeIfAbsent(
+                    (startOfBatch[seq.batchOf(row)] + seq.indexInBatch(row)) * analytes.size() + a,
+                    key -> new Builder(row, o.analyte()))));
         }
-        List<Builder> sorted = new ArrayList<>(byKey.values());
-        sorted.sort(java.util.Comparator.comparingInt((Builder x) -> seq.batchOf(x.row))
-                .thenComparingInt(x -> seq.indexInBatch(x.row)).thenComparing(x -> x.analyte));
-        return new ReassayList(sorted.stream().map(x -> x.build(table, seq)).toList(), brackets, settings.scope());
+        long[] keys = byKey.keySet().stream().mapToLong(Long::longValue).sorted().toArray();
+        List<ReassayEntry> entries = new ArrayList<>(keys.length);
+        for (long key : keys) {
+            entries.add(byKey.get(key).build(table, seq));
+        }
+        return new ReassayList(entries, brackets, settings.scope());
     }
 
-    private static ReassayBracket bracket(SampleTable table, BatchSequence seq, ControlOutcome o,
-                                          Map<Integer, Verdict> status, ReassaySettings.Scope scope,
-                                          Map<String, Builder> byKey) {
-        int[] rows = seq.rows(seq.batchOf(o.row()));
+    private static ReassayBracket bracket(SampleTable table, BatchSequence seq, ControlOutcome o, byte[] status,
+                                          ReassaySettings.Scope scope, IntFunction<Builder> entry) {
+        int b = seq.batchOf(o.row());
+        int size = seq.batchSize(b);
         int at = seq.indexInBatch(o.row());
         boolean blank = table.role(o.row()) == QcRole.BLANK;
         int from;
@@ -67,51 +98,51 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
         String note;
         if (scope == ReassaySettings.Scope.WHOLE_BATCH) {
             from = 0;
-            to = rows.length - 1;
+            to = size - 1;
             note = "whole batch";
         } else if (blank) {
-            int next = nextPassing(table, rows, at, +1, status, true);
+            int next = nextPassing(table, seq, b, at, +1, status, true);
             from = at + 1;
-            to = next < 0 ? rows.length - 1 : next - 1;
+            to = next < 0 ? size - 1 : next - 1;
             note = "after the blank, up to " + (next < 0 ? "the end of the batch (no passing blank after it)"
-                    : "passing blank " + table.id(rows[next]));
+                    : "passing blank " + table.id(seq.row(b, next)));
         } else {
-            int prev = nextPassing(table, rows, at, -1, status, false);
-            int next = nextPassing(table, rows, at, +1, status, false);
+            int prev = nextPassing(table, seq, b, at, -1, status, false);
+            int next = nextPassing(table, seq, b, at, +1, status, false);
             from = prev < 0 ? 0 : prev + 1;
-            to = next < 0 ? rows.length - 1 : next - 1;
+            to = next < 0 ? size - 1 : next - 1;
             note = "from " + (prev < 0 ? "the start of the batch (no passing control before it)"
-                    : "passing control " + table.id(rows[prev])) + " to "
+                    : "passing control " + table.id(seq.row(b, prev))) + " to "
                     + (next < 0 ? "the end of the batch (no passing control after it)"
-                    : "passing control " + table.id(rows[next]));
+                    : "passing control " + table.id(seq.row(b, next)));
         }
         int n = 0;
         String why = table.role(o.row()).label() + " " + table.id(o.row()) + " failed (" + o.rule() + ")";
         for (int k = from; k <= to; k++) {
-            int row = rows[k];
+            int row = seq.row(b, k);
             if (!isReassayed(table.role(row))) {
                 continue;
             }
             n++;
-            byKey.computeIfAbsent(row + "\u0000" + o.analyte(), key -> new Builder(row, o.analyte()))
-                    .add(table.id(o.row()), why);
+            entry.apply(row).add(table.id(o.row()), why);
         }
-        int fromPosition = from <= to ? table.position(rows[from]) : table.position(o.row());
-        int toPosition = from <= to ? table.position(rows[to]) : table.position(o.row());
-        return new ReassayBracket(table.id(o.row()), table.role(o.row()).label(), seq.batch(seq.batchOf(o.row())).id(),
+        int fromPosition = from <= to ? table.position(seq.row(b, from)) : table.position(o.row());
+        int toPosition = from <= to ? table.position(seq.row(b, to)) : table.position(o.row());
+        return new ReassayBracket(table.id(o.row()), table.role(o.row()).label(), seq.batch(b).id(),
                 o.analyte(), o.rule(), fromPosition, toPosition, n, note);
     }
 
-    /** Index of the nearest passing control in direction {@code step}, or -1. */
-    private static int nextPassing(SampleTable table, int[] rows, int at, int step, Map<Integer, Verdict> status,
+    /** Index in batch {@code b} of the nearest passing control in direction {@code step}, or -1. */
+    private static int nextPassing(SampleTable table, BatchSequence seq, int b, int at, int step, byte[] status,
                                    boolean blanksOnly) {
-        for (int k = at + step; k >= 0 && k < rows.length; k += step) {
-            QcRole role = table.role(rows[k]);
+        for (int k = at + step; k >= 0 && k < seq.batchSize(b); k += step) {
+            int row = seq.row(b, k);
+            QcRole role = table.role(row);
             if (blanksOnly ? role != QcRole.BLANK : !isControl(role)) {
                 continue;
             }
-            Verdict v = status.get(rows[k]);
-            if (v == Verdict.PASS || v == Verdict.WARN) {
+            int v = status[row] - 1;
+            if (v == Verdict.PASS.ordinal() || v == Verdict.WARN.ordinal()) {
                 return k;
             }
         }

@@ -1,90 +1,154 @@
 package org.cupel.control.crm;
 
 import java.util.ArrayList;
-import java.util.Comparator;
-import java.util.EnumMap;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import org.cupel.assay.Numbers;
 import org.cupel.control.Verdict;
 import org.cupel.project.CrmCatalog;
 import org.cupel.project.CrmCertificate;
 
-/** Steps (1) to (4) of {@link CrmReview} for the CRM series of one analyte. */
+/**
+ * Steps (1) to (4) of {@link CrmReview} for the CRM series of one analyte, and the lab-wide drift over
+ * them. Works on primitive arrays per series; the rules a result completes are kept as a bit set over
+ * {@link CrmRule} ordinals, and no sentence is written here ({@link ResultWording} does, on demand).
+ */
 final class AnalyteJudgement {
+    /** The rules of a judged result that violated none. */
+    static final List<String> NO_RULE = List.of("no rule violated");
+    private static final List<String> SWAP = List.of(CrmReview.SWAP_RULE);
+    private static final CrmRule[] RULES = CrmRule.values();
+
     private final List<CrmSeries> series;
     private final CrmSettings settings;
     private final Map<CrmRule, RuleAction> actions;
     /** Per series: z of every result. */
-    private final List<double[]> z = new ArrayList<>();
+    private final double[][] z;
     /** Per series: swap label of every result, empty when none. */
-    private final List<String[]> swaps = new ArrayList<>();
+    private final String[][] swaps;
     /** Per series: indices of the judged (non-swap) results. */
-    private final List<int[]> judged = new ArrayList<>();
-    /** Per series and result: the rules whose pattern the result completes. */
-    private final List<List<List<CrmRule>>> hits = new ArrayList<>();
-    private final List<List<RuleFinding>> findings = new ArrayList<>();
+    private final int[][] judged;
+    /** Per series and result: bit {@code 1 << ordinal} for each rule whose pattern the result completes. */
+    private final int[][] hits;
+    /** Per series: findings with the index of their signalling result, in the order found. */
+    private final List<List<Found>> findings = new ArrayList<>();
+    /** Every judged result of the analyte in time order (batch date, position, row): series and index. */
+    private int[] mergedSeries;
+    private int[] mergedIndex;
+
+    private record Found(int signal, RuleFinding finding) {
+    }
+
+    /** What {@link #judge} gives: the reviews per series and the drift over all of them. */
+    record Judged(List<SeriesReview> series, SeriesDrift labDrift) {
+    }
 
     private AnalyteJudgement(List<CrmSeries> series, CrmSettings settings) {
         this.series = series;
         this.settings = settings;
         this.actions = settings.actions();
+        int n = series.size();
+        this.z = new double[n][];
+        this.swaps = new String[n][];
+        this.judged = new int[n][];
+        this.hits = new int[n][];
     }
 
-    static List<SeriesReview> judge(List<CrmSeries> series, CrmCatalog catalog, CrmSettings settings) {
+    static Judged judge(List<CrmSeries> series, CrmCatalog catalog, CrmSettings settings) {
         AnalyteJudgement j = new AnalyteJudgement(series, settings);
         j.scoreAndFindSwaps(catalog);
+        j.mergeJudgedInTimeOrder();
         j.applyRulesWithinSeries();
         j.applyRangeRuleWithinBatches();
         List<SeriesReview> out = new ArrayList<>();
+        List<List<CrmResult>> results = new ArrayList<>();
         for (int s = 0; s < series.size(); s++) {
-            out.add(j.review(s));
+            SeriesReview r = j.review(s);
+            out.add(r);
+            results.add(r.results());
         }
-        return out;
+        return new Judged(out, j.labDrift(results));
     }
 
     private void scoreAndFindSwaps(CrmCatalog catalog) {
-        for (CrmSeries s : series) {
-            CertifiedLimits lim = CertifiedLimits.of(s.certificate());
-            List<CrmCertificate> others = catalog.forAnalyte(s.analyte().name()).stream()
-                    .map(c -> c.unit() == s.certificate().unit() ? c : c.in(s.certificate().unit())).toList();
-            int n = s.points().size();
+        for (int s = 0; s < series.size(); s++) {
+            CrmSeries cs = series.get(s);
+            CertifiedLimits lim = CertifiedLimits.of(cs.certificate());
+            List<CrmCertificate> others = catalog.forAnalyte(cs.analyte().name()).stream()
+                    .map(c -> c.unit() == cs.certificate().unit() ? c : c.in(cs.certificate().unit())).toList();
+            int n = cs.points().size();
             double[] zs = new double[n];
             String[] sw = new String[n];
-            List<Integer> keep = new ArrayList<>();
-            List<List<CrmRule>> h = new ArrayList<>();
+            int[] keep = new int[n];
+            int kept = 0;
             for (int i = 0; i < n; i++) {
-                CrmPoint p = s.points().get(i);
+                CrmPoint p = cs.points().get(i);
                 zs[i] = lim.z(p.value().value());
                 Optional<String> m = Math.abs(zs[i]) > 3
-                        ? SwapCheck.match(p.value(), s.certificate(), others, settings.swapWithinSd(),
+                        ? SwapCheck.match(p.value(), cs.certificate(), others, settings.swapWithinSd(),
                         settings.blankLevelMultiple())
                         : Optional.empty();
                 sw[i] = m.orElse("");
                 if (m.isEmpty()) {
-                    keep.add(i);
+                    keep[kept++] = i;
                 }
-                h.add(new ArrayList<>());
             }
-            z.add(zs);
-            swaps.add(sw);
-            judged.add(keep.stream().mapToInt(Integer::intValue).toArray());
-            hits.add(h);
+            z[s] = zs;
+            swaps[s] = sw;
+            judged[s] = Arrays.copyOf(keep, kept);
+            hits[s] = new int[n];
             findings.add(new ArrayList<>());
         }
     }
 
+    /**
+     * Merges the judged results of every series, each already in time order, by (batch order, position,
+     * row): the order R₄s reads batches in and the lab-wide drift runs in.
+     */
+    private void mergeJudgedInTimeOrder() {
+        int total = 0;
+        for (int[] j : judged) {
+            total += j.length;
+        }
+        mergedSeries = new int[total];
+        mergedIndex = new int[total];
+        int[] head = new int[series.size()];
+        for (int k = 0; k < total; k++) {
+            int best = -1;
+            for (int s = 0; s < series.size(); s++) {
+                if (head[s] < judged[s].length && (best < 0 || before(s, judged[s][head[s]], best,
+                        judged[best][head[best]]))) {
+                    best = s;
+                }
+            }
+            mergedSeries[k] = best;
+            mergedIndex[k] = judged[best][head[best]++];
+        }
+    }
+
+    private boolean before(int s, int i, int t, int j) {
+        CrmPoint a = series.get(s).points().get(i);
+        CrmPoint b = series.get(t).points().get(j);
+        if (a.batchOrder() != b.batchOrder()) {
+            return a.batchOrder() < b.batchOrder();
+        }
+        if (a.position() != b.position()) {
+            return a.position() < b.position();
+        }
+        return a.row() < b.row();
+    }
+
     private void applyRulesWithinSeries() {
         for (int s = 0; s < series.size(); s++) {
-            int[] idx = judged.get(s);
+            int[] idx = judged[s];
             double[] zj = new double[idx.length];
             int[] batch = new int[idx.length];
             for (int k = 0; k < idx.length; k++) {
-                zj[k] = z.get(s)[idx[k]];
+                zj[k] = z[s][idx[k]];
                 batch[k] = series.get(s).points().get(idx[k]).batchOrder();
             }
-            for (CrmRule rule : CrmRule.values()) {
+            for (CrmRule rule : RULES) {
                 if (rule == CrmRule.W_R_4S || actions.get(rule) == RuleAction.OFF) {
                     continue;
                 }
@@ -104,110 +168,100 @@ final class AnalyteJudgement {
         if (actions.get(CrmRule.W_R_4S) == RuleAction.OFF) {
             return;
         }
-        List<int[]> all = new ArrayList<>();
-        for (int s = 0; s < series.size(); s++) {
-            for (int i : judged.get(s)) {
-                all.add(new int[] {s, i});
-            }
-        }
-        all.sort(Comparator.comparingInt((int[] a) -> point(a).batchOrder())
-                .thenComparingInt(a -> point(a).position()).thenComparingInt(a -> point(a).row()));
-        double[] zs = new double[all.size()];
-        int[] batch = new int[all.size()];
+        double[] zs = new double[mergedSeries.length];
+        int[] batch = new int[mergedSeries.length];
         for (int k = 0; k < zs.length; k++) {
-            zs[k] = z.get(all.get(k)[0])[all.get(k)[1]];
-            batch[k] = point(all.get(k)).batchOrder();
+            zs[k] = z[mergedSeries[k]][mergedIndex[k]];
+            batch[k] = series.get(mergedSeries[k]).points().get(mergedIndex[k]).batchOrder();
         }
         for (RuleViolation v : RunRules.evaluate(CrmRule.W_R_4S, zs, batch)) {
-            int[] sig = all.get(v.signal());
-            int[] seriesOf = v.involved().stream().mapToInt(k -> all.get(k)[0]).toArray();
-            int[] pointOf = v.involved().stream().mapToInt(k -> all.get(k)[1]).toArray();
-            record(CrmRule.W_R_4S, sig[0], sig[1], seriesOf, pointOf);
+            int[] seriesOf = v.involved().stream().mapToInt(k -> mergedSeries[k]).toArray();
+            int[] pointOf = v.involved().stream().mapToInt(k -> mergedIndex[k]).toArray();
+            record(CrmRule.W_R_4S, mergedSeries[v.signal()], mergedIndex[v.signal()], seriesOf, pointOf);
         }
-    }
-
-    private CrmPoint point(int[] seriesAndIndex) {
-        return series.get(seriesAndIndex[0]).points().get(seriesAndIndex[1]);
     }
 
     private void record(CrmRule rule, int s, int signal, int[] involvedSeries, int[] involvedPoints) {
-        hits.get(s).get(signal).add(rule);
+        hits[s][signal] |= 1 << rule.ordinal();
         List<String> ids = new ArrayList<>();
         for (int k = 0; k < involvedPoints.length; k++) {
             int sk = involvedSeries.length == 1 ? involvedSeries[0] : involvedSeries[k];
             ids.add(series.get(sk).points().get(involvedPoints[k]).sampleId());
         }
         CrmPoint p = series.get(s).points().get(signal);
-        findings.get(s).add(new RuleFinding(rule.id(), rule.description(), rule.source().citation(),
-                actions.get(rule), series.get(s).crm(), series.get(s).analyte().name(), p.sampleId(), p.batchId(),
-                ids));
+        findings.get(s).add(new Found(signal, new RuleFinding(rule.id(), rule.description(),
+                rule.source().citation(), actions.get(rule), series.get(s).crm(), series.get(s).analyte().name(),
+                p.sampleId(), p.batchId(), ids)));
     }
 
     private SeriesReview review(int s) {
         CrmSeries cs = series.get(s);
         CertifiedLimits lim = CertifiedLimits.of(cs.certificate());
-        List<CrmResult> results = new ArrayList<>();
-        List<CrmResult> judgedResults = new ArrayList<>();
+        ResultWording wording = ResultWording.of(cs, settings);
+        int n = cs.points().size();
+        List<CrmResult> results = new ArrayList<>(n);
+        List<CrmResult> judgedResults = new ArrayList<>(judged[s].length);
+        double[] values = new double[judged[s].length];
         double sum = 0;
         int count = 0;
-        for (int i = 0; i < cs.points().size(); i++) {
+        for (int i = 0; i < n; i++) {
             CrmPoint p = cs.points().get(i);
-            double zi = z.get(s)[i];
-            String swap = swaps.get(s)[i];
+            double zi = z[s][i];
+            String swap = swaps[s][i];
             CrmResult r;
             if (!swap.isEmpty()) {
-                r = new CrmResult(p, zi, ZBand.of(zi), count == 0 ? Double.NaN : sum / count, Verdict.WARN,
-                        List.of(CrmReview.SWAP_RULE), swapReason(cs, p, zi, swap), false, swap);
+                r = new CrmResult(p, zi, ZBand.of(zi), count == 0 ? Double.NaN : sum / count, Verdict.WARN, SWAP,
+                        false, swap, wording);
             } else {
+                values[count] = p.value().value();
                 sum += p.value().value();
                 count++;
-                r = judgedResult(cs, p, zi, sum / count, hits.get(s).get(i));
+                r = judgedResult(p, zi, sum / count, hits[s][i], wording);
                 judgedResults.add(r);
             }
             results.add(r);
         }
-        double[] values = judgedResults.stream().mapToDouble(r -> r.point().value().value()).toArray();
         BiasEstimate bias = BiasEstimate.of(values, lim.certified(), settings.confidence());
         ProjectLimits pl = ProjectLimits.of(values, settings.projectLimitsMinN());
-        Map<String, Integer> order = new java.util.HashMap<>();
-        for (int i = 0; i < cs.points().size(); i++) {
-            order.put(cs.points().get(i).sampleId(), i);
-        }
-        List<RuleFinding> f = new ArrayList<>(findings.get(s));
-        f.sort(Comparator.comparingInt(x -> order.getOrDefault(x.sampleId(), Integer.MAX_VALUE)));
+        // Findings in series order of their signal (stable: the order found breaks ties).
+        List<Found> found = new ArrayList<>(findings.get(s));
+        found.sort((a, b) -> Integer.compare(a.signal(), b.signal()));
         return new SeriesReview(cs.analyte(), cs.certificate(), lim, pl, results, bias,
-                DriftAnalysis.of(judgedResults, settings), f);
+                DriftAnalysis.of(judgedResults, settings), found.stream().map(Found::finding).toList());
     }
 
-    private CrmResult judgedResult(CrmSeries cs, CrmPoint p, double zi, double runningMean, List<CrmRule> rules) {
+    /**
+     * The verdict from the rules the result completes, listed in the order they were found: the
+     * within-series rules in {@link CrmRule} order, then R₄s.
+     */
+    private CrmResult judgedResult(CrmPoint p, double zi, double runningMean, int ruleBits, ResultWording wording) {
+        if (ruleBits == 0) {
+            return new CrmResult(p, zi, ZBand.of(zi), runningMean, Verdict.PASS, NO_RULE, false, "", wording);
+        }
         Verdict v = Verdict.PASS;
         boolean reassay = false;
-        EnumMap<CrmRule, Boolean> seen = new EnumMap<>(CrmRule.class);
         List<String> ids = new ArrayList<>();
-        for (CrmRule r : rules) {
-            if (seen.put(r, true) == null) {
+        for (CrmRule r : RULES) {
+            if (r != CrmRule.W_R_4S && (ruleBits & 1 << r.ordinal()) != 0) {
                 ids.add(r.id());
                 v = v.worst(actions.get(r).verdict());
                 reassay |= actions.get(r) == RuleAction.FAIL;
             }
         }
-        String reason = describe(cs, p, zi) + (ids.isEmpty() ? "" : " (" + String.join(", ", ids) + ")");
-        return new CrmResult(p, zi, ZBand.of(zi), runningMean, v, ids.isEmpty() ? List.of("no rule violated") : ids,
-                reason, reassay, "");
+        if ((ruleBits & 1 << CrmRule.W_R_4S.ordinal()) != 0) {
+            ids.add(CrmRule.W_R_4S.id());
+            v = v.worst(actions.get(CrmRule.W_R_4S).verdict());
+            reassay |= actions.get(CrmRule.W_R_4S) == RuleAction.FAIL;
+        }
+        return new CrmResult(p, zi, ZBand.of(zi), runningMean, v, ids, reassay, "", wording);
     }
 
-    private static String describe(CrmSeries cs, CrmPoint p, double zi) {
-        // Concatenation rather than String.format: this runs once per CRM result.
-        return p.sampleId() + ' ' + cs.crm() + ' ' + cs.analyte().name() + ' ' + p.value().display() + ' '
-                + cs.analyte().unit().symbol() + " is " + Numbers.significant(Math.abs(zi), 2) + " SD "
-                + (zi >= 0 ? "above" : "below") + " certified " + Numbers.significant(cs.certificate().certifiedValue(), 4);
-    }
-
-    private String swapReason(CrmSeries cs, CrmPoint p, double zi, String swap) {
-        String match = swap.equals(SwapCheck.BLANK) ? "is at blank level (≤ " + Numbers.compact(
-                settings.blankLevelMultiple()) + "× its detection limit)"
-                : "lies within " + Numbers.compact(settings.swapWithinSd()) + " SD of CRM " + swap;
-        return describe(cs, p, zi) + " but " + match + ": probable swap or mislabel, not a lab failure; check the "
-                + "insertion record";
+    /** Drift of every judged result of the analyte, all CRMs together, in time order. */
+    private SeriesDrift labDrift(List<List<CrmResult>> results) {
+        List<CrmResult> all = new ArrayList<>(mergedSeries.length);
+        for (int k = 0; k < mergedSeries.length; k++) {
+            all.add(results.get(mergedSeries[k]).get(mergedIndex[k]));
+        }
+        return DriftAnalysis.of(all, settings);
     }
 }

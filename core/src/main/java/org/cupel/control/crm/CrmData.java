@@ -2,17 +2,18 @@ package org.cupel.control.crm;
 
 import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
-import java.util.LinkedHashMap;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.AssayValue;
 import org.cupel.assay.Batch;
 import org.cupel.assay.MissingReason;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
+import org.cupel.project.CrmCatalog;
 import org.cupel.project.CrmCertificate;
 import org.cupel.project.Project;
 
@@ -33,59 +34,83 @@ public record CrmData(List<CrmSeries> series, List<CrmException> exceptions) {
 
     public static CrmData of(Project project) {
         SampleTable t = project.samples();
-        int[] batchOrder = batchOrder(t.batches());
-        Map<String, List<CrmPoint>> byKey = new LinkedHashMap<>();
-        Map<String, CrmCertificate> certs = new LinkedHashMap<>();
-        Map<String, AnalyteColumn> cols = new LinkedHashMap<>();
-        List<CrmException> exceptions = new ArrayList<>();
-        for (CrmCertificate c : project.catalog().all()) {
-            if (project.analytes().containsKey(c.analyte())) {
-                String key = c.code() + "\u0000" + c.analyte();
-                byKey.put(key, new ArrayList<>());
-                certs.put(key, c);
-                cols.put(key, project.analytes().get(c.analyte()));
+        CrmCatalog catalog = project.catalog();
+        List<AnalyteColumn> cols = List.copyOf(project.analytes().values());
+        List<String> codes = List.copyOf(catalog.codes());
+        // Series slot of every (code, analyte) with a certificate, -1 for none; series in catalog order.
+        Map<String, Integer> codeIndex = new HashMap<>();
+        int[][] slot = new int[codes.size()][cols.size()];
+        List<CrmCertificate> certs = new ArrayList<>();
+        List<AnalyteColumn> slotCols = new ArrayList<>();
+        for (int c = 0; c < codes.size(); c++) {
+            codeIndex.put(codes.get(c), c);
+            Arrays.fill(slot[c], -1);
+        }
+        for (CrmCertificate c : catalog.all()) {
+            int a = cols.indexOf(project.analytes().get(c.analyte()));
+            if (a >= 0) {
+                slot[codeIndex.get(c.code())][a] = certs.size();
+                certs.add(c);
+                slotCols.add(cols.get(a));
             }
         }
-        for (int row : t.rowsWithRole(QcRole.CRM)) {
+        List<List<CrmPoint>> points = new ArrayList<>();
+        certs.forEach(c -> points.add(new ArrayList<>()));
+        int[] crmRows = t.rowsWithRole(QcRole.CRM);
+        int[] batchOrder = batchOrder(t.batches());
+        int[] orderOfRow = new int[t.size()];
+        for (int row : crmRows) {
+            orderOfRow[row] = batchOrder[t.batchIndex(row)];
+        }
+        // Rows in series order (batch date, then position), so every series fills already sorted.
+        int[] ordered = org.cupel.control.BatchSequence.inRunOrder(t, crmRows, orderOfRow,
+                new int[t.batches().size() + 1]);
+        List<Keyed> exceptions = new ArrayList<>();
+        for (int row : ordered) {
             String code = t.reference(row);
+            Integer c = codeIndex.get(code);
             Batch b = t.batch(row);
-            for (AnalyteColumn col : project.analytes().values()) {
+            for (int a = 0; a < cols.size(); a++) {
+                AnalyteColumn col = cols.get(a);
                 AssayValue v = col.value(row);
                 if (v.isMissing() && v.missingReason() == MissingReason.NOT_ANALYSED) {
                     continue;
                 }
                 String analyte = col.analyte().name();
-                Optional<CrmCertificate> cert = project.catalog().find(code, analyte);
-                if (!project.catalog().contains(code)) {
-                    exceptions.add(new CrmException(row, t.id(row), b.id(), code, analyte, v.display(), "unknown CRM code",
-                            code.isEmpty() ? "CRM without a code: add the CRM code to the register's reference column"
-                                    : "unknown CRM code '" + code + "': add it to crm-catalog.csv or correct the "
-                                    + "register"));
-                } else if (cert.isEmpty()) {
+                // Exceptions keep the order of the table (row, then analyte), whatever order rows are read in.
+                long key = (long) row * cols.size() + a;
+                if (c == null) {
+                    exceptions.add(new Keyed(key, new CrmException(row, t.id(row), b.id(), code, analyte, v.display(),
+                            "unknown CRM code", code.isEmpty()
+                            ? "CRM without a code: add the CRM code to the register's reference column"
+                            : "unknown CRM code '" + code + "': add it to crm-catalog.csv or correct the register")));
+                } else if (slot[c][a] < 0) {
                     continue;
                 } else if (v.isCensored()) {
-                    exceptions.add(new CrmException(row, t.id(row), b.id(), code, analyte, v.display(), "censored CRM result",
-                            "censored CRM result cannot be compared with the certified value: ask the lab for "
-                                    + "a re-assay with a suitable method"));
+                    exceptions.add(new Keyed(key, new CrmException(row, t.id(row), b.id(), code, analyte, v.display(),
+                            "censored CRM result", "censored CRM result cannot be compared with the certified "
+                            + "value: ask the lab for a re-assay with a suitable method")));
                 } else if (v.isMissing()) {
-                    exceptions.add(new CrmException(row, t.id(row), b.id(), code, analyte, v.display(), "no CRM result",
-                            "no CRM result (" + v.display() + "): the batch has no control from this CRM"));
+                    exceptions.add(new Keyed(key, new CrmException(row, t.id(row), b.id(), code, analyte, v.display(),
+                            "no CRM result", "no CRM result (" + v.display() + "): the batch has no control from "
+                            + "this CRM")));
                 } else {
-                    byKey.get(code + "\u0000" + analyte).add(new CrmPoint(row, t.id(row), b.id(),
-                            batchOrder[t.batchIndex(row)], b.reported(), t.position(row), v));
+                    points.get(slot[c][a]).add(new CrmPoint(row, t.id(row), b.id(), orderOfRow[row], b.reported(),
+                            t.position(row), v));
                 }
             }
         }
+        exceptions.sort(Comparator.comparingLong(Keyed::key));
         List<CrmSeries> series = new ArrayList<>();
-        Comparator<CrmPoint> order = Comparator.comparingInt(CrmPoint::batchOrder)
-                .thenComparingInt(CrmPoint::position).thenComparingInt(CrmPoint::row);
-        for (Map.Entry<String, List<CrmPoint>> e : byKey.entrySet()) {
-            if (!e.getValue().isEmpty()) {
-                e.getValue().sort(order);
-                series.add(new CrmSeries(cols.get(e.getKey()).analyte(), certs.get(e.getKey()), e.getValue()));
+        for (int k = 0; k < certs.size(); k++) {
+            if (!points.get(k).isEmpty()) {
+                series.add(new CrmSeries(slotCols.get(k).analyte(), certs.get(k), points.get(k)));
             }
         }
-        return new CrmData(series, exceptions);
+        return new CrmData(series, exceptions.stream().map(Keyed::exception).toList());
+    }
+
+    private record Keyed(long key, CrmException exception) {
     }
 
     /** Rank of each batch by date (undated batches last), ties in the order read. */

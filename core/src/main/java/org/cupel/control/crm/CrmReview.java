@@ -1,7 +1,6 @@
 package org.cupel.control.crm;
 
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -54,17 +53,18 @@ public record CrmReview(CrmSettings settings, List<SeriesReview> series, List<An
         List<SeriesReview> reviews = new ArrayList<>();
         List<AnalyteReview> analytes = new ArrayList<>();
         for (Map.Entry<String, List<CrmSeries>> e : byAnalyte.entrySet()) {
-            List<SeriesReview> forAnalyte = AnalyteJudgement.judge(e.getValue(), catalog, settings);
-            reviews.addAll(forAnalyte);
-            analytes.add(new AnalyteReview(e.getKey(), labDrift(forAnalyte, settings),
-                    biasVsGrade(e.getKey(), forAnalyte, settings)));
+            AnalyteJudgement.Judged judged = AnalyteJudgement.judge(e.getValue(), catalog, settings);
+            reviews.addAll(judged.series());
+            analytes.add(new AnalyteReview(e.getKey(), judged.labDrift(),
+                    biasVsGrade(e.getKey(), judged.series(), settings)));
         }
         return new CrmReview(settings, reviews, analytes, data.exceptions());
     }
 
     /** Every judged CRM result and every exception, in the common form batch verdicts consume. */
     public List<ControlOutcome> outcomes() {
-        List<ControlOutcome> out = new ArrayList<>();
+        List<ControlOutcome> out = new ArrayList<>(series.stream().mapToInt(SeriesReview::n).sum()
+                + exceptions.size());
         for (SeriesReview s : series) {
             for (CrmResult r : s.results()) {
                 out.add(r.outcome(s.analyte().name()));
@@ -90,14 +90,6 @@ public record CrmReview(CrmSettings settings, List<SeriesReview> series, List<An
 
     public long swaps() {
         return series.stream().mapToLong(SeriesReview::swaps).sum();
-    }
-
-    private static SeriesDrift labDrift(List<SeriesReview> forAnalyte, CrmSettings settings) {
-        List<CrmResult> all = new ArrayList<>();
-        forAnalyte.forEach(s -> s.results().stream().filter(r -> !r.isSwap()).forEach(all::add));
-        all.sort(Comparator.comparingInt((CrmResult r) -> r.point().batchOrder())
-                .thenComparingInt(r -> r.point().position()).thenComparingInt(r -> r.point().row()));
-        return DriftAnalysis.of(all, settings);
     }
 
     private static BiasVsGrade biasVsGrade(String analyte, List<SeriesReview> forAnalyte, CrmSettings settings) {

@@ -1,7 +1,6 @@
 package org.cupel.control.crm;
 
 import java.time.LocalDate;
-import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -16,21 +15,23 @@ final class DriftAnalysis {
         int n = judged.size();
         double[] z = new double[n];
         double[] t = new double[n];
-        LocalDate origin = null;
+        long[] day = new long[n];
+        long origin = Long.MAX_VALUE;
         boolean dated = n > 0;
-        for (CrmResult r : judged) {
-            LocalDate d = r.point().date();
+        for (int i = 0; i < n; i++) {
+            LocalDate d = judged.get(i).point().date();
             if (d == null) {
                 dated = false;
-            } else if (origin == null || d.isBefore(origin)) {
-                origin = d;
+            } else {
+                day[i] = d.toEpochDay();
+                origin = Math.min(origin, day[i]);
             }
         }
         for (int i = 0; i < n; i++) {
             z[i] = judged.get(i).z();
-            t[i] = dated ? ChronoUnit.DAYS.between(origin, judged.get(i).point().date()) : i + 1;
+            t[i] = dated ? day[i] - origin : i + 1;
         }
-        String axis = dated ? "days since " + origin : "sequence number (some batches undated)";
+        String axis = dated ? "days since " + LocalDate.ofEpochDay(origin) : "sequence number (some batches undated)";
         String per = dated ? "per day" : "per result";
         LinearFit trend = LinearFit.of(t, z, s.confidence());
         Ewma ewma = Ewma.of(z, 0, 1, s.ewmaLambda(), s.ewmaWidth());
