@@ -9,18 +9,17 @@ import java.util.Arrays;
  * instead of a million map entries and boxed integers.
  */
 public final class IdIndex {
-    private static final int EMPTY = -1;
+    /** A slot holds {@code hash << 32 | number}, so that a probe reads one array; -1 is empty. */
+    private static final long EMPTY = -1;
     private String[] keys;
     private int size;
-    private int[] slots;
-    private int[] hashes;
+    private long[] slots;
 
     /** @param expected how many strings are expected (a hint) */
     public IdIndex(int expected) {
         keys = new String[Math.max(16, expected)];
         int capacity = Integer.highestOneBit(Math.max(16, expected) * 2 - 1) << 1;
-        slots = new int[capacity];
-        hashes = new int[capacity];
+        slots = new long[capacity];
         Arrays.fill(slots, EMPTY);
     }
 
@@ -35,30 +34,37 @@ public final class IdIndex {
 
     /** The number of {@code key}, or -1 when it was not added. */
     public int indexOf(String key) {
-        int h = spread(key.hashCode());
-        int mask = slots.length - 1;
-        for (int s = h & mask; ; s = (s + 1) & mask) {
-            int k = slots[s];
-            if (k == EMPTY) {
-                return -1;
-            }
-            if (hashes[s] == h && keys[k].equals(key)) {
-                return k;
-            }
-        }
+        int s = slotOf(key, spread(key.hashCode()));
+        return slots[s] == EMPTY ? -1 : (int) slots[s];
     }
 
-    /** Adds {@code key}, which must not be present yet, and returns its number. */
+    /** Adds {@code key} and returns its number; when it is already present, returns {@code -1 - its number}. */
     public int add(String key) {
-        if (size == keys.length) {
-            keys = Arrays.copyOf(keys, size * 2);
-        }
         if ((size + 1) * 10L > slots.length * 7L) {
             rehash(slots.length * 2);
         }
+        int h = spread(key.hashCode());
+        int s = slotOf(key, h);
+        if (slots[s] != EMPTY) {
+            return -1 - (int) slots[s];
+        }
+        if (size == keys.length) {
+            keys = Arrays.copyOf(keys, size * 2);
+        }
         keys[size] = key;
-        insert(spread(key.hashCode()), size);
+        slots[s] = (long) h << 32 | size;
         return size++;
+    }
+
+    /** The slot holding {@code key}, else the empty slot where it would go. */
+    private int slotOf(String key, int h) {
+        int mask = slots.length - 1;
+        for (int s = h & mask; ; s = (s + 1) & mask) {
+            long slot = slots[s];
+            if (slot == EMPTY || ((int) (slot >>> 32) == h && keys[(int) slot].equals(key))) {
+                return s;
+            }
+        }
     }
 
     /** The strings in the order added. */
@@ -66,22 +72,17 @@ public final class IdIndex {
         return Arrays.copyOf(keys, size);
     }
 
-    private void insert(int h, int k) {
-        int mask = slots.length - 1;
-        int s = h & mask;
-        while (slots[s] != EMPTY) {
-            s = (s + 1) & mask;
-        }
-        slots[s] = k;
-        hashes[s] = h;
-    }
-
     private void rehash(int capacity) {
-        slots = new int[capacity];
-        hashes = new int[capacity];
+        slots = new long[capacity];
         Arrays.fill(slots, EMPTY);
+        int mask = capacity - 1;
         for (int k = 0; k < size; k++) {
-            insert(spread(keys[k].hashCode()), k);
+            int h = spread(keys[k].hashCode());
+            int s = h & mask;
+            while (slots[s] != EMPTY) {
+                s = (s + 1) & mask;
+            }
+            slots[s] = (long) h << 32 | k;
         }
     }
 

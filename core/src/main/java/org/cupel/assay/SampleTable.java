@@ -134,7 +134,7 @@ public final class SampleTable {
 
         /** As {@link #add(String, Batch, int, QcRole, String, SourceLocation)} with the source's file and line. */
         public int add(String id, Batch batch, int position, QcRole role, String reference, String file, long line) {
-            if (rowById.indexOf(id) >= 0) {
+            if (rowById.add(id) < 0) {
                 throw new IllegalArgumentException("sample ID already present: " + id);
             }
             ensureCapacity(size + 1);
@@ -144,7 +144,6 @@ public final class SampleTable {
             references[size] = reference == null ? "" : reference;
             fileIndex[size] = fileIndex(file);
             lines[size] = line;
-            rowById.add(id);
             return size++;
         }
 

@@ -15,15 +15,17 @@ public final class LabRows {
     private static final Qualifier[] QUALIFIERS = Qualifier.values();
     private static final MissingReason[] REASONS = MissingReason.values();
     private static final QcRole[] ROLES = QcRole.values();
+    /** A lab batch file holds a few hundred rows. */
+    private static final int INITIAL_ROWS = 512;
 
     private final int width;
     private int size;
-    private String[] ids = new String[64];
-    private int[] batches = new int[64];
-    private int[] positions = new int[64];
-    private byte[] roles = new byte[64];
-    private String[] references = new String[64];
-    private long[] lines = new long[64];
+    private String[] ids = new String[INITIAL_ROWS];
+    private int[] batches = new int[INITIAL_ROWS];
+    private int[] positions = new int[INITIAL_ROWS];
+    private byte[] roles = new byte[INITIAL_ROWS];
+    private String[] references = new String[INITIAL_ROWS];
+    private long[] lines = new long[INITIAL_ROWS];
     private byte[] qualifiers;
     private double[] values;
     private double[] limits;
@@ -32,10 +34,10 @@ public final class LabRows {
     /** @param width the number of analyte columns */
     LabRows(int width) {
         this.width = width;
-        qualifiers = new byte[64 * width];
-        values = new double[64 * width];
-        limits = new double[64 * width];
-        missing = new byte[64 * width];
+        qualifiers = new byte[INITIAL_ROWS * width];
+        values = new double[INITIAL_ROWS * width];
+        limits = new double[INITIAL_ROWS * width];
+        missing = new byte[INITIAL_ROWS * width];
     }
 
     public int size() {

@@ -129,8 +129,9 @@ public final class SampleRegister {
             return e < 0 ? -1 : lines[e];
         }
 
+        /** Adds an entry for a sample ID that has none yet ({@link #lineOf} is -1). */
         void add(String sampleId, QcRole role, String reference, String hole, double fromM, double toM, long line) {
-            int n = ids.size();
+            int n = ids.add(sampleId);
             if (n == lines.length) {
                 int cap = n * 2;
                 roles = Arrays.copyOf(roles, cap);
@@ -140,7 +141,6 @@ public final class SampleRegister {
                 to = Arrays.copyOf(to, cap);
                 lines = Arrays.copyOf(lines, cap);
             }
-            ids.add(sampleId);
             roles[n] = (byte) role.ordinal();
             references[n] = reference;
             holes[n] = hole;
