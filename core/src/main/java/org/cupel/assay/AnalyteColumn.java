@@ -107,7 +107,12 @@ public final class AnalyteColumn {
     }
 
     public static Builder builder(Analyte analyte) {
-        return new Builder(analyte);
+        return new Builder(analyte, 0);
+    }
+
+    /** @param expectedRows rows the table is expected to have (a hint that spares growing the arrays) */
+    public static Builder builder(Analyte analyte, int expectedRows) {
+        return new Builder(analyte, expectedRows);
     }
 
     /**
@@ -130,10 +135,14 @@ public final class AnalyteColumn {
         private long[] sourceLine = new long[0];
         private int[] sourceColumn = new int[0];
 
-        private Builder(Analyte analyte) {
+        private String lastMethod = "";
+        private short lastMethodIndex;
+
+        private Builder(Analyte analyte, int expectedRows) {
             this.analyte = analyte;
             methods.add("");
             methodIdx.put("", (short) 0);
+            ensureCapacity(expectedRows);
         }
 
         public Analyte analyte() {
@@ -141,9 +150,31 @@ public final class AnalyteColumn {
         }
 
         public void add(int row, MethodValue result) {
+            AssayValue v = result.value();
+            SourceLocation where = result.source();
+            add(row, v.qualifier(), v.value(), v.limit(), v.missingReason(), result.method(),
+                    where == null ? null : where.file(), where == null ? 0 : where.line(),
+                    where == null ? 0 : where.column());
+        }
+
+        /**
+         * {@link #add(int, MethodValue)} from the parts of the value and its source, without objects for a
+         * row's first result.
+         *
+         * @param file the source file, or null when the result has no source
+         */
+        public void add(int row, Qualifier qualifier, double value, double limit, MissingReason reason, String method,
+                        String file, long line, int column) {
             ensureCapacity(row + 1);
             if (qualifiers[row] == ABSENT) {
-                keepFirst(row, result);
+                qualifiers[row] = (byte) qualifier.ordinal();
+                values[row] = value;
+                limits[row] = limit;
+                missing[row] = (byte) reason.ordinal();
+                methodOf[row] = methodIndex(method == null ? "" : method);
+                sourceFile[row] = file;
+                sourceLine[row] = file == null ? 0 : line;
+                sourceColumn[row] = file == null ? 0 : column;
                 return;
             }
             List<MethodValue> all = several.get(row);
@@ -152,23 +183,20 @@ public final class AnalyteColumn {
                 all.add(first(row));
                 several.put(row, all);
             }
-            all.add(result);
+            all.add(new MethodValue(method, new AssayValue(qualifier, value, limit, reason),
+                    file == null ? null : new SourceLocation(file, line, column)));
         }
 
-        private void keepFirst(int row, MethodValue result) {
-            AssayValue v = result.value();
-            qualifiers[row] = (byte) v.qualifier().ordinal();
-            values[row] = v.value();
-            limits[row] = v.limit();
-            missing[row] = (byte) v.missingReason().ordinal();
-            methodOf[row] = methodIdx.computeIfAbsent(result.method(), k -> {
-                methods.add(k);
-                return (short) (methods.size() - 1);
-            });
-            SourceLocation where = result.source();
-            sourceFile[row] = where == null ? null : where.file();
-            sourceLine[row] = where == null ? 0 : where.line();
-            sourceColumn[row] = where == null ? 0 : where.column();
+        /** Methods are numbered as first results bring them; one column's results mostly share one. */
+        private short methodIndex(String method) {
+            if (!method.equals(lastMethod)) {
+                lastMethodIndex = methodIdx.computeIfAbsent(method, k -> {
+                    methods.add(k);
+                    return (short) (methods.size() - 1);
+                });
+                lastMethod = method;
+            }
+            return lastMethodIndex;
         }
 
         private MethodValue first(int row) {

@@ -22,11 +22,11 @@ public final class SampleTable {
     private final long[] lines;
     private final List<Batch> batches;
     private final List<String> files;
-    private final Map<String, Integer> rowById;
+    private final IdIndex rowById;
 
     private SampleTable(Builder b) {
         int n = b.size;
-        this.ids = Arrays.copyOf(b.ids, n);
+        this.ids = b.rowById.toArray();
         this.batchIndex = Arrays.copyOf(b.batchIndex, n);
         this.positions = Arrays.copyOf(b.positions, n);
         this.roles = Arrays.copyOf(b.roles, n);
@@ -35,7 +35,7 @@ public final class SampleTable {
         this.lines = Arrays.copyOf(b.lines, n);
         this.batches = List.copyOf(b.batches);
         this.files = List.copyOf(b.files);
-        this.rowById = new HashMap<>(b.rowById);
+        this.rowById = b.rowById;
     }
 
     public int size() {
@@ -77,8 +77,8 @@ public final class SampleTable {
     }
 
     public OptionalInt rowOf(String sampleId) {
-        Integer row = rowById.get(sampleId);
-        return row == null ? OptionalInt.empty() : OptionalInt.of(row);
+        int row = rowById.indexOf(sampleId);
+        return row < 0 ? OptionalInt.empty() : OptionalInt.of(row);
     }
 
     public Sample sample(int row) {
@@ -108,9 +108,8 @@ public final class SampleTable {
         return new Builder();
     }
 
-    /** Collects rows one at a time; sample IDs must be unique. */
+    /** Collects rows one at a time; sample IDs must be unique. The builder is spent by {@link #build()}. */
     public static final class Builder {
-        private String[] ids = new String[1024];
         private int[] batchIndex = new int[1024];
         private int[] positions = new int[1024];
         private byte[] roles = new byte[1024];
@@ -122,38 +121,67 @@ public final class SampleTable {
         private final Map<Batch, Integer> batchIndexOf = new HashMap<>();
         private final List<String> files = new ArrayList<>();
         private final Map<String, Integer> fileIndexOf = new HashMap<>();
-        private final Map<String, Integer> rowById = new HashMap<>();
+        private final IdIndex rowById = new IdIndex(1024);
+        private Batch lastBatch;
+        private int lastBatchIndex;
+        private String lastFile;
+        private int lastFileIndex;
 
         /** Adds a sample and returns its row; throws if the ID is already present. */
         public int add(String id, Batch batch, int position, QcRole role, String reference, SourceLocation source) {
-            if (rowById.containsKey(id)) {
+            return add(id, batch, position, role, reference, source.file(), source.line());
+        }
+
+        /** As {@link #add(String, Batch, int, QcRole, String, SourceLocation)} with the source's file and line. */
+        public int add(String id, Batch batch, int position, QcRole role, String reference, String file, long line) {
+            if (rowById.add(id) < 0) {
                 throw new IllegalArgumentException("sample ID already present: " + id);
             }
             ensureCapacity(size + 1);
-            ids[size] = id;
-            batchIndex[size] = batchIndexOf.computeIfAbsent(batch, k -> {
-                batches.add(k);
-                return batches.size() - 1;
-            });
+            batchIndex[size] = batchIndex(batch);
             positions[size] = position;
             roles[size] = (byte) role.ordinal();
             references[size] = reference == null ? "" : reference;
-            fileIndex[size] = fileIndexOf.computeIfAbsent(source.file(), k -> {
-                files.add(k);
-                return files.size() - 1;
-            });
-            lines[size] = source.line();
-            rowById.put(id, size);
+            fileIndex[size] = fileIndex(file);
+            lines[size] = line;
             return size++;
         }
 
+        /** Consecutive rows mostly share batch and file: the last one is looked up without hashing. */
+        private int batchIndex(Batch batch) {
+            if (batch != lastBatch) {
+                lastBatchIndex = batchIndexOf.computeIfAbsent(batch, k -> {
+                    batches.add(k);
+                    return batches.size() - 1;
+                });
+                lastBatch = batch;
+            }
+            return lastBatchIndex;
+        }
+
+        private int fileIndex(String file) {
+            if (!file.equals(lastFile)) {
+                lastFileIndex = fileIndexOf.computeIfAbsent(file, k -> {
+                    files.add(k);
+                    return files.size() - 1;
+                });
+                lastFile = file;
+            }
+            return lastFileIndex;
+        }
+
         public boolean contains(String id) {
-            return rowById.containsKey(id);
+            return rowById.indexOf(id) >= 0;
         }
 
         public OptionalInt rowOf(String id) {
-            Integer row = rowById.get(id);
-            return row == null ? OptionalInt.empty() : OptionalInt.of(row);
+            int row = rowById.indexOf(id);
+            return row < 0 ? OptionalInt.empty() : OptionalInt.of(row);
+        }
+
+        /** The row of {@code id}, or -1. */
+        public int row(String id) {
+            return rowById.indexOf(id);
         }
 
         /** Sets role and reference after the register has been joined to the lab rows. */
@@ -171,11 +199,10 @@ public final class SampleTable {
         }
 
         private void ensureCapacity(int needed) {
-            if (needed <= ids.length) {
+            if (needed <= positions.length) {
                 return;
             }
-            int cap = Math.max(needed, ids.length * 2);
-            ids = Arrays.copyOf(ids, cap);
+            int cap = Math.max(needed, positions.length * 2);
             batchIndex = Arrays.copyOf(batchIndex, cap);
             positions = Arrays.copyOf(positions, cap);
             roles = Arrays.copyOf(roles, cap);

@@ -3,15 +3,14 @@ package org.cupel.ingest;
 import java.io.IOException;
 import java.io.Reader;
 import java.nio.charset.CharacterCodingException;
-import java.util.ArrayList;
-import java.util.List;
 import org.cupel.project.InputException;
 
 /**
  * Splits delimited text into records by hand-written character scanning (no regular expressions):
  * RFC 4180 quoting with doubled quotes and line breaks inside quotes, CR, LF and CRLF line ends, cells
- * trimmed. A field longer than {@link #MAX_FIELD_CHARS} or a record wider than {@link #MAX_CELLS} stops
- * the read with a clear message instead of exhausting memory.
+ * trimmed. Unquoted cells, nearly all of a lab file, are copied in runs from the read buffer into one
+ * reused {@link CellRow}. A field longer than {@link #MAX_FIELD_CHARS} or a record wider than
+ * {@link #MAX_CELLS} stops the read with a clear message instead of exhausting memory.
  */
 final class DelimitedTokenizer {
     /** 1 MB of text in one cell is far beyond any assay value or sample ID; it means a broken quote. */
@@ -26,7 +25,6 @@ final class DelimitedTokenizer {
     private int pos;
     private int end;
     private long line = 1;
-    private final StringBuilder field = new StringBuilder();
 
     DelimitedTokenizer(Reader in, char delimiter, String file) {
         this.in = in;
@@ -34,36 +32,38 @@ final class DelimitedTokenizer {
         this.file = file;
     }
 
-    /** The next record, or {@code null} at the end of the input. An empty line gives one empty cell. */
-    RawRow next() {
-        int c = peek();
-        if (c == EOF) {
-            return null;
+    /**
+     * Reads the next record into {@code row}; false at the end of the input. An empty line gives one
+     * empty cell.
+     */
+    boolean next(CellRow row) {
+        if (peek() == EOF) {
+            return false;
         }
+        row.begin(line);
         long recordLine = line;
-        List<String> cells = new ArrayList<>();
         while (true) {
-            int stop = readField(cells.size() + 1);
-            cells.add(field.toString().strip());
-            if (cells.size() > MAX_CELLS) {
+            int from = row.length();
+            int stop = readField(row, from, row.size() + 1);
+            row.endCell(from);
+            if (row.size() > MAX_CELLS) {
                 throw new InputException(file + ":" + recordLine + ": a row has more than " + MAX_CELLS
                         + " cells, which is not a lab table; check that the file is a delimited text table.");
             }
             if (stop != delimiter) {
-                return new RawRow(recordLine, cells);
+                return true;
             }
         }
     }
 
-    /** Reads one field into {@link #field}; returns the character that ended it (delimiter, '\n' or EOF). */
-    private int readField(int column) {
-        field.setLength(0);
+    /** Reads one field into {@code row}; returns the character that ended it (delimiter, '\n' or EOF). */
+    private int readField(CellRow row, int from, int column) {
         int c = read();
         while (c == ' ' || (c == '\t' && delimiter != '\t')) {
             c = read();
         }
         if (c == '"') {
-            return readQuoted(column);
+            return readQuoted(row, from, column);
         }
         while (true) {
             if (c == delimiter || c == EOF) {
@@ -72,12 +72,34 @@ final class DelimitedTokenizer {
             if (c == '\r' || c == '\n') {
                 return endLine(c);
             }
-            append(c, column);
+            append(row, from, c, column);
+            copyRun(row, from, column);
             c = read();
         }
     }
 
-    private int readQuoted(int column) {
+    /** Copies the plain characters that follow in the buffer (up to a delimiter, line end or NUL) at once. */
+    private void copyRun(CellRow row, int from, int column) {
+        int p = pos;
+        char d = delimiter;
+        while (p < end) {
+            char x = buf[p];
+            if (x == d || x == '\n' || x == '\r' || x == 0) {
+                break;
+            }
+            p++;
+        }
+        if (p == pos) {
+            return;
+        }
+        if (row.cellLength(from) + (p - pos) > MAX_FIELD_CHARS) {
+            throw tooLong(column);
+        }
+        row.append(buf, pos, p);
+        pos = p;
+    }
+
+    private int readQuoted(CellRow row, int from, int column) {
         long openLine = line;
         while (true) {
             int c = read();
@@ -89,28 +111,28 @@ final class DelimitedTokenizer {
             if (c == '"') {
                 if (peek() == '"') {
                     read();
-                    append('"', column);
+                    append(row, from, '"', column);
                     continue;
                 }
-                return afterClosingQuote(column);
+                return afterClosingQuote(row, from, column);
             }
             if (c == '\r') {
                 if (peek() == '\n') {
                     read();
                 }
                 line++;
-                append('\n', column);
+                append(row, from, '\n', column);
             } else {
                 if (c == '\n') {
                     line++;
                 }
-                append(c, column);
+                append(row, from, c, column);
             }
         }
     }
 
     /** Text between a closing quote and the delimiter is kept as written (lenient, as spreadsheets are). */
-    private int afterClosingQuote(int column) {
+    private int afterClosingQuote(CellRow row, int from, int column) {
         while (true) {
             int c = read();
             if (c == delimiter || c == EOF) {
@@ -119,7 +141,7 @@ final class DelimitedTokenizer {
             if (c == '\r' || c == '\n') {
                 return endLine(c);
             }
-            append(c, column);
+            append(row, from, c, column);
         }
     }
 
@@ -131,16 +153,20 @@ final class DelimitedTokenizer {
         return '\n';
     }
 
-    private void append(int c, int column) {
+    private void append(CellRow row, int from, int c, int column) {
         if (c == 0) {
             throw new InputException(file + ":" + line + ":" + column + ": the file contains binary data (a NUL "
                     + "character), expected a text table; export the results as CSV or XLSX.");
         }
-        if (field.length() >= MAX_FIELD_CHARS) {
-            throw new InputException(file + ":" + line + ":" + column + ": a cell is longer than 1 MB, expected "
-                    + "short cell texts; check for an unbalanced quote (\") above this line.");
+        if (row.cellLength(from) >= MAX_FIELD_CHARS) {
+            throw tooLong(column);
         }
-        field.append((char) c);
+        row.append((char) c);
+    }
+
+    private InputException tooLong(int column) {
+        return new InputException(file + ":" + line + ":" + column + ": a cell is longer than 1 MB, expected "
+                + "short cell texts; check for an unbalanced quote (\") above this line.");
     }
 
     private int read() {

@@ -40,17 +40,14 @@ final class DelimiterSniffer {
     /** {header row width (0 when none), widest row width} when split on {@code d}. */
     private static int[] widths(String prefix, char d, Predicate<List<String>> isHeaderRow) {
         DelimitedTokenizer t = new DelimitedTokenizer(new StringReader(prefix), d, "");
+        CellRow r = new CellRow();
         int header = 0;
         int widest = 0;
         try {
-            for (int i = 0; i < SAMPLE_ROWS; i++) {
-                RawRow r = t.next();
-                if (r == null) {
-                    break;
-                }
-                widest = Math.max(widest, r.cells().size());
-                if (header == 0 && r.cells().size() > 1 && isHeaderRow.test(r.cells())) {
-                    header = r.cells().size();
+            for (int i = 0; i < SAMPLE_ROWS && t.next(r); i++) {
+                widest = Math.max(widest, r.size());
+                if (header == 0 && r.size() > 1 && isHeaderRow.test(r.cells())) {
+                    header = r.size();
                 }
             }
         } catch (InputException cutOff) {

@@ -10,10 +10,11 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import org.cupel.assay.AssayValue;
 import org.cupel.assay.Batch;
-import org.cupel.assay.MethodValue;
 import org.cupel.assay.MissingReason;
 import org.cupel.assay.QcRole;
+import org.cupel.assay.Qualifier;
 import org.cupel.assay.SourceLocation;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
@@ -38,8 +39,12 @@ public final class LabFileReader {
     }
 
     public LabFile read(Path path, String displayName) {
-        RawTable t = TableReader.read(path, displayName, TableReader::hasSampleIdColumn, settings.sheet());
-        return new FileRead(t).read();
+        FileRead[] read = new FileRead[1];
+        TableReader.scan(path, displayName, TableReader::hasSampleIdColumn, settings.sheet(), head -> {
+            read[0] = new FileRead(head);
+            return read[0]::readRow;
+        });
+        return read[0].finish();
     }
 
     /** The state of reading one file. */
@@ -57,11 +62,18 @@ public final class LabFileReader {
         private final Map<String, LocalDate> latestDate = new HashMap<>();
         private final Map<String, Integer> nextPosition = new HashMap<>();
         private final Map<String, Long> lineOfId = new HashMap<>();
-        private final List<Pending> pending = new ArrayList<>();
+        /** Batch texts in the order first read, each once, so rows share them. */
+        private final Map<String, Integer> batchKeys = new LinkedHashMap<>();
+        private final List<String> batchTexts = new ArrayList<>();
         private final Set<String> excludedIds = new HashSet<>();
+        private final LabRows kept;
+        private String lastBatch;
+        private int lastBatchKey = -1;
+        private String defaultBatch;
         private long rowsRead;
         private long rowsExcluded;
 
+        /** Checks the header; a problem with it throws (after the rest of the file is read). */
         FileRead(RawTable t) {
             this.t = t;
             this.idCol = t.column(LabColumns.sampleId());
@@ -71,22 +83,24 @@ public final class LabFileReader {
             this.roleCol = t.column(LabColumns.ROLE);
             this.refCol = t.column(LabColumns.REFERENCE);
             issues.addAll(t.warnings());
-        }
-
-        LabFile read() {
             if (idCol < 0) {
                 throw new InputException(t.file() + ":" + t.headerLine() + ": no sample ID column among "
                         + t.columns() + " (expected a header such as 'sample_id' or 'Sample ID'); rename the "
                         + "column holding the sample IDs.");
             }
             findAnalyteColumns();
-            for (RawRow row : t.rows()) {
-                if (!readLimits(row)) {
-                    readRow(row);
-                }
-            }
-            return new LabFile(t.file(), batches(), columns, ignored, labRows(), issues, excludedIds, rowsRead,
+            kept = new LabRows(columns.size());
+        }
+
+        LabFile finish() {
+            return new LabFile(t.file(), batches(), columns, ignored, kept, issues, excludedIds, rowsRead,
                     rowsExcluded);
+        }
+
+        private void readRow(CellRow row) {
+            if (!readLimits(row)) {
+                readSample(row);
+            }
         }
 
         private void findAnalyteColumns() {
@@ -123,13 +137,14 @@ public final class LabFileReader {
         }
 
         /** A detection-limit row under the header sets each column's stated limit; it is not a sample row. */
-        private boolean readLimits(RawRow row) {
-            if (!LabColumns.DETECTION_LIMIT_ROW.contains(RawTable.normalise(row.cell(idCol)))) {
+        private boolean readLimits(CellRow row) {
+            if (!mayNameLimitRow(row) || !LabColumns.DETECTION_LIMIT_ROW.contains(RawTable.normalise(row.cell(idCol)))) {
                 return false;
             }
             for (int i = 0; i < columns.size(); i++) {
                 LabColumn col = columns.get(i);
-                ParsedValue p = values.parse(row.cell(col.index()), Double.NaN, t.at(row, col.index()));
+                ParsedValue p = values.parse(row.cell(col.index()), Double.NaN,
+                        new SourceLocation(t.file(), row.line(), col.index() + 1));
                 if (p.usable() && !p.value().isMissing()) {
                     columns.set(i, new LabColumn(col.index(), col.header(), col.analyte(), p.value().value()));
                 }
@@ -137,10 +152,29 @@ public final class LabFileReader {
             return true;
         }
 
-        private void readRow(RawRow row) {
+        /**
+         * Whether the ID cell may normalise to a detection-limit row name: those all begin with d or l, and
+         * {@link RawTable#normalise} drops leading {@code _ -} and space and lower-cases (only D, d, L and l
+         * lower-case to d or l). Spares normalising the ID of every sample row.
+         */
+        private boolean mayNameLimitRow(CellRow row) {
+            if (row.isEmpty(idCol)) {
+                return false;
+            }
+            char[] s = row.text();
+            for (int i = row.start(idCol); i < row.end(idCol); i++) {
+                char c = s[i];
+                if (c != '_' && c != '-' && !Character.isWhitespace(c)) {
+                    return c == 'd' || c == 'D' || c == 'l' || c == 'L';
+                }
+            }
+            return false;
+        }
+
+        private void readSample(CellRow row) {
             rowsRead++;
             String id = row.cell(idCol);
-            SourceLocation where = t.at(row);
+            SourceLocation where = new SourceLocation(t.file(), row.line(), 0);
             if (id.isEmpty()) {
                 exclude(where, "", String.join(",", row.cells()), "the row has no sample ID",
                         "a sample ID in column '" + t.columns().get(idCol) + "'", "fill in the sample ID or delete the row");
@@ -153,7 +187,8 @@ public final class LabFileReader {
                         "remove the repeated row, or mark a lab repeat with a suffix such as '" + id + " R'");
                 return;
             }
-            String batch = batchCol >= 0 && !row.cell(batchCol).isEmpty() ? row.cell(batchCol) : defaultBatch();
+            int batchKey = batchKey(row);
+            String batch = batchTexts.get(batchKey);
             noteDate(row, batch, id);
             int position = position(row, batch, id);
             QcRole role = role(row, id);
@@ -166,42 +201,75 @@ public final class LabFileReader {
                 }
             }
             int issuesBefore = issues.size();
-            List<LabRow.Result> results = results(row, id);
-            if (results.isEmpty() && issues.size() > issuesBefore) {
+            boolean any = results(row, id, where);
+            if (!any && issues.size() > issuesBefore) {
                 exclude(where, id, "", "no analyte value in the row can be used (see the cells listed)",
                         "at least one readable value", "correct the cells listed for this sample");
                 return;
             }
-            pending.add(new Pending(id, batch, position, role, reference, where, results));
+            kept.keepRow(id, batchKey, position, role, reference, row.line());
         }
 
-        private List<LabRow.Result> results(RawRow row, String id) {
-            List<LabRow.Result> out = new ArrayList<>(columns.size());
+        /** The row's batch (its batch cell, else the file's default) as an index into {@link #batchTexts}. */
+        private int batchKey(CellRow row) {
+            boolean own = batchCol >= 0 && !row.isEmpty(batchCol);
+            if (lastBatch != null && (own ? row.cellEquals(batchCol, lastBatch) : lastBatch.equals(defaultBatch()))) {
+                return lastBatchKey;
+            }
+            String batch = own ? row.cell(batchCol) : defaultBatch();
+            Integer key = batchKeys.get(batch);
+            if (key == null) {
+                key = batchTexts.size();
+                batchKeys.put(batch, key);
+                batchTexts.add(batch);
+            }
+            lastBatch = batchTexts.get(key);
+            lastBatchKey = key;
+            return key;
+        }
+
+        /** Sets the row's usable results in {@link #kept}; whether there is any. */
+        private boolean results(CellRow row, String id, SourceLocation rowAt) {
+            kept.startRow();
+            boolean any = false;
+            char[] text = row.text();
             // One location per row, shared by its values; a cell's own column is set only on an issue.
-            SourceLocation rowAt = t.at(row);
-            for (LabColumn col : columns) {
-                ParsedValue p = values.parse(row.cell(col.index()), col.detectionLimit(), rowAt);
+            for (int c = 0; c < columns.size(); c++) {
+                LabColumn col = columns.get(c);
+                int k = col.index();
+                // A blank cell is no result by that method, not a result: it adds no candidate.
+                if (row.isEmpty(k)) {
+                    continue;
+                }
+                double v = values.plainNumber(text, row.start(k), row.end(k));
+                if (!Double.isNaN(v)) {
+                    kept.setResult(c, Qualifier.DETECTED, v, ValueParser.validLimit(col.detectionLimit()),
+                            MissingReason.NONE);
+                    any = true;
+                    continue;
+                }
+                ParsedValue p = values.parse(row.cell(k), col.detectionLimit(), rowAt);
                 if (p.issue() != null) {
                     DataIssue i = p.issue();
-                    issues.add(new DataIssue(i.severity(), rowAt.atColumn(col.index() + 1), id, i.found(),
+                    issues.add(new DataIssue(i.severity(), rowAt.atColumn(k + 1), id, i.found(),
                             col.header() + ": " + i.problem(), i.expected(), i.fix()));
                 }
-                // A blank cell is no result by that method, not a result: it adds no candidate.
                 if (p.usable() && p.value().missingReason() != MissingReason.BLANK_CELL) {
-                    AnalyteHeader a = col.analyte();
-                    out.add(new LabRow.Result(a.analyte(), a.unit(), new MethodValue(a.method(), p.value(), rowAt)));
+                    AssayValue a = p.value();
+                    kept.setResult(c, a.qualifier(), a.value(), a.limit(), a.missingReason());
+                    any = true;
                 }
             }
-            return out;
+            return any;
         }
 
-        private void noteDate(RawRow row, String batch, String id) {
+        private void noteDate(CellRow row, String batch, String id) {
             if (dateCol < 0 || row.cell(dateCol).isEmpty()) {
                 return;
             }
             Optional<LocalDate> d = DateCells.parse(row.cell(dateCol), settings.dateFormat());
             if (d.isEmpty()) {
-                issues.add(new DataIssue(DataIssue.Severity.WARNING, t.at(row, dateCol), id, row.cell(dateCol),
+                issues.add(new DataIssue(DataIssue.Severity.WARNING, new SourceLocation(t.file(), row.line(), dateCol + 1), id, row.cell(dateCol),
                         "the date cannot be read; the batch date is taken from other rows or the header block",
                         "a date as " + settings.dateFormat() + " (ISO is 2025-03-14)",
                         "write the date as YYYY-MM-DD, or set ingest.dateFormat to DMY or MDY"));
@@ -210,7 +278,7 @@ public final class LabFileReader {
             latestDate.merge(batch, d.get(), (a, b) -> a.isAfter(b) ? a : b);
         }
 
-        private int position(RawRow row, String batch, String id) {
+        private int position(CellRow row, String batch, String id) {
             int inOrder = nextPosition.merge(batch, 1, Integer::sum);
             if (positionCol < 0 || row.cell(positionCol).isEmpty()) {
                 return inOrder;
@@ -223,19 +291,19 @@ public final class LabFileReader {
             } catch (NumberFormatException e) {
                 // reported below
             }
-            issues.add(new DataIssue(DataIssue.Severity.WARNING, t.at(row, positionCol), id, row.cell(positionCol),
+            issues.add(new DataIssue(DataIssue.Severity.WARNING, new SourceLocation(t.file(), row.line(), positionCol + 1), id, row.cell(positionCol),
                     "the position is not a whole number above 0; the row order is used (" + inOrder + ")",
                     "a positive whole number", "correct the position or leave the column out"));
             return inOrder;
         }
 
-        private QcRole role(RawRow row, String id) {
+        private QcRole role(CellRow row, String id) {
             if (roleCol < 0 || row.cell(roleCol).isEmpty()) {
                 return null;
             }
             Optional<QcRole> r = QcRole.parse(row.cell(roleCol));
             if (r.isEmpty()) {
-                issues.add(new DataIssue(DataIssue.Severity.WARNING, t.at(row, roleCol), id, row.cell(roleCol),
+                issues.add(new DataIssue(DataIssue.Severity.WARNING, new SourceLocation(t.file(), row.line(), roleCol + 1), id, row.cell(roleCol),
                         "unknown QC role; the register decides, else the sample is routine",
                         "routine, CRM/STD, blank/BLK, FD, CD, PD, LR or UMP", "correct the role code"));
                 return null;
@@ -244,6 +312,13 @@ public final class LabFileReader {
         }
 
         private String defaultBatch() {
+            if (defaultBatch == null) {
+                defaultBatch = fileBatch();
+            }
+            return defaultBatch;
+        }
+
+        private String fileBatch() {
             String job = first(LabColumns.HB_JOB);
             if (!job.isEmpty()) {
                 return job;
@@ -271,32 +346,23 @@ public final class LabFileReader {
             issues.add(new DataIssue(DataIssue.Severity.EXCLUDED, where, id, found, problem, expected, fix));
         }
 
-        private Map<String, Batch> batchMap() {
-            Map<String, Batch> out = new LinkedHashMap<>();
+        /** The batches of the rows kept, in the order first kept; the kept rows are renumbered to them. */
+        private List<Batch> batches() {
             LocalDate blockDate = DateCells.parse(first(LabColumns.HB_DATE), settings.dateFormat()).orElse(null);
             String lab = first(LabColumns.HB_LAB);
-            for (Pending p : pending) {
-                out.computeIfAbsent(p.batch, b -> new Batch(b, lab,
-                        blockDate != null ? blockDate : latestDate.get(b), t.file()));
+            int[] map = new int[batchTexts.size()];
+            java.util.Arrays.fill(map, -1);
+            List<Batch> out = new ArrayList<>();
+            for (int r = 0; r < kept.size(); r++) {
+                int key = kept.batch(r);
+                if (map[key] < 0) {
+                    String b = batchTexts.get(key);
+                    map[key] = out.size();
+                    out.add(new Batch(b, lab, blockDate != null ? blockDate : latestDate.get(b), t.file()));
+                }
             }
+            kept.remapBatches(map);
             return out;
         }
-
-        private List<Batch> batches() {
-            return new ArrayList<>(batchMap().values());
-        }
-
-        private List<LabRow> labRows() {
-            Map<String, Batch> batches = batchMap();
-            List<LabRow> out = new ArrayList<>(pending.size());
-            for (Pending p : pending) {
-                out.add(new LabRow(p.id, batches.get(p.batch), p.position, p.role, p.reference, p.where, p.results));
-            }
-            return out;
-        }
-    }
-
-    private record Pending(String id, String batch, int position, QcRole role, String reference,
-                           SourceLocation where, List<LabRow.Result> results) {
     }
 }

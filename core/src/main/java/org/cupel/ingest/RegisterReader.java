@@ -2,11 +2,8 @@ package org.cupel.ingest;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Collections;
 import java.util.HashSet;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.cupel.assay.QcRole;
@@ -28,38 +25,69 @@ public final class RegisterReader {
     }
 
     public static SampleRegister read(Path path, String displayName) {
-        RawTable t = TableReader.read(path, displayName, TableReader::hasSampleIdColumn, null);
-        int id = t.column(LabColumns.sampleId());
-        if (id < 0) {
-            throw new InputException(displayName + ":" + t.headerLine() + ": no sample ID column among " + t.columns()
-                    + " (expected 'sample_id'); rename the column holding the submitted sample IDs.");
+        Read[] read = new Read[1];
+        TableReader.scan(path, displayName, TableReader::hasSampleIdColumn, null, head -> {
+            read[0] = new Read(displayName, head);
+            return read[0]::row;
+        });
+        return read[0].finish();
+    }
+
+    /** The state of reading the register. */
+    private static final class Read {
+        private static final NumberScanner PLAIN = new NumberScanner(false, false);
+        private final RawTable t;
+        private final int id;
+        private final int role;
+        private final int ref;
+        private final int hole;
+        private final int from;
+        private final int to;
+        private final SampleRegister.Builder entries;
+        private final Set<String> rejected = new HashSet<>();
+        private final List<DataIssue> issues;
+        private long rowsRead;
+        private long excluded;
+        private String lastRoleText;
+        private Optional<QcRole> lastRole;
+        private String lastHole = "";
+
+        /** Checks the header; a problem with it throws (after the rest of the file is read). */
+        Read(String displayName, RawTable t) {
+            this.t = t;
+            this.id = t.column(LabColumns.sampleId());
+            if (id < 0) {
+                throw new InputException(displayName + ":" + t.headerLine() + ": no sample ID column among "
+                        + t.columns() + " (expected 'sample_id'); rename the column holding the submitted sample IDs.");
+            }
+            this.role = t.column(LabColumns.ROLE);
+            this.ref = t.column(LabColumns.REFERENCE);
+            this.hole = t.column(HOLE);
+            this.from = t.column(FROM);
+            this.to = t.column(TO);
+            this.entries = new SampleRegister.Builder(displayName);
+            this.issues = new ArrayList<>(t.warnings());
         }
-        int role = t.column(LabColumns.ROLE);
-        int ref = t.column(LabColumns.REFERENCE);
-        int hole = t.column(HOLE);
-        int from = t.column(FROM);
-        int to = t.column(TO);
-        Map<String, RegisterEntry> entries = new LinkedHashMap<>();
-        Set<String> rejected = new HashSet<>();
-        List<DataIssue> issues = new ArrayList<>(t.warnings());
-        long excluded = 0;
-        for (RawRow row : t.rows()) {
+
+        void row(CellRow row) {
+            rowsRead++;
             String sampleId = row.cell(id);
-            SourceLocation where = t.at(row);
+            SourceLocation where = new SourceLocation(t.file(), row.line(), 0);
             if (sampleId.isEmpty()) {
                 issues.add(excluded(where, "", String.join(",", row.cells()), "the register row has no sample ID",
                         "a sample ID", "fill in the sample ID or delete the row"));
                 excluded++;
-                continue;
+                return;
             }
-            if (entries.containsKey(sampleId)) {
+            long firstLine = entries.lineOf(sampleId);
+            if (firstLine >= 0) {
                 issues.add(excluded(where, sampleId, sampleId, "sample ID already registered on line "
-                                + entries.get(sampleId).source().line() + "; this row is left out",
+                                + firstLine + "; this row is left out",
                         "each sample ID once", "give the sample a unique ID or delete the repeated row"));
                 excluded++;
-                continue;
+                return;
             }
-            Optional<QcRole> qc = QcRole.parse(row.cell(role));
+            Optional<QcRole> qc = role(row);
             if (qc.isEmpty()) {
                 issues.add(excluded(where, sampleId, row.cell(role), "unknown QC role '" + row.cell(role) + "'; the sample is "
                                 + "left out of the analyses",
@@ -67,7 +95,7 @@ public final class RegisterReader {
                         "correct the role code"));
                 rejected.add(sampleId);
                 excluded++;
-                continue;
+                return;
             }
             String reference = row.cell(ref);
             if (reference.isEmpty() && (qc.get() == QcRole.CRM || qc.get().isDuplicate())) {
@@ -76,16 +104,37 @@ public final class RegisterReader {
                         qc.get() == QcRole.CRM ? "the CRM code in 'reference'" : "the original sample ID in 'reference'",
                         "fill in the reference column"));
             }
-            entries.put(sampleId, new RegisterEntry(sampleId, qc.get(), reference, row.cell(hole),
-                    metres(row.cell(from)), metres(row.cell(to)), where));
+            if (!row.cellEquals(hole, lastHole)) {
+                lastHole = row.cell(hole);
+            }
+            entries.add(sampleId, qc.get(), reference, lastHole, metres(row, from), metres(row, to), row.line());
         }
-        return new SampleRegister(displayName, Collections.unmodifiableMap(entries), Set.copyOf(rejected),
-                List.copyOf(issues), t.rows().size(), excluded);
+
+        /** Consecutive rows mostly repeat a role code: it is parsed when it changes. */
+        private Optional<QcRole> role(CellRow row) {
+            if (lastRoleText == null || !row.cellEquals(role, lastRoleText)) {
+                lastRoleText = row.cell(role);
+                lastRole = QcRole.parse(lastRoleText);
+            }
+            return lastRole;
+        }
+
+        SampleRegister finish() {
+            return entries.build(rejected, issues, rowsRead, excluded);
+        }
     }
 
-    private static double metres(String text) {
+    /** The cell as {@link Double#parseDouble} reads it, NaN when blank or not a number. */
+    private static double metres(CellRow row, int column) {
+        if (row.isEmpty(column)) {
+            return Double.NaN;
+        }
+        double v = Read.PLAIN.scan(row.text(), row.start(column), row.end(column));
+        if (!Double.isNaN(v)) {
+            return v;
+        }
         try {
-            return text.isEmpty() ? Double.NaN : Double.parseDouble(text);
+            return Double.parseDouble(row.cell(column));
         } catch (NumberFormatException e) {
             return Double.NaN;
         }

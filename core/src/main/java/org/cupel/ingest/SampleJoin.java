@@ -5,13 +5,13 @@ import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.OptionalInt;
 import java.util.Set;
 import org.cupel.assay.Analyte;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.MethodSelector;
-import org.cupel.assay.MethodValue;
+import org.cupel.assay.MissingReason;
 import org.cupel.assay.QcRole;
+import org.cupel.assay.Qualifier;
 import org.cupel.assay.SampleTable;
 import org.cupel.assay.SourceLocation;
 import org.cupel.project.CrmCatalog;
@@ -46,46 +46,99 @@ final class SampleJoin {
         file.issues().forEach(exceptions::add);
         excludedLabIds.addAll(file.excludedIds());
         long excluded = file.rowsExcluded();
-        for (LabRow row : file.rows()) {
-            if (register != null && register.rejectedIds().contains(row.sampleId())) {
-                exceptions.exclude(row.source(), row.sampleId(), row.sampleId(),
+        LabRows rows = file.table();
+        FileColumns cols = new FileColumns(file.columns());
+        for (int i = 0; i < rows.size(); i++) {
+            String id = rows.sampleId(i);
+            if (register != null && register.rejectedIds().contains(id)) {
+                exceptions.exclude(new SourceLocation(file.file(), rows.line(i), 0), id, id,
                         "the sample's register row could not be used (see the register), so its result is left out",
                         "a usable register row", "correct the sample's row in the register");
-                excludedLabIds.add(row.sampleId());
+                excludedLabIds.add(id);
                 excluded++;
                 continue;
             }
-            OptionalInt prior = samples.rowOf(row.sampleId());
-            int r = prior.isPresent() ? prior.getAsInt() : addSample(row);
-            for (LabRow.Result result : row.results()) {
-                GradeUnit target = units.get(result.analyte());
-                MethodValue v = result.value();
-                double factor = result.unit().convert(1.0, target);
-                MethodValue converted = factor == 1.0 ? v
-                        : new MethodValue(v.method(), v.value().scaled(factor), v.source());
-                columns.computeIfAbsent(result.analyte(), a -> AnalyteColumn.builder(new Analyte(a, target)))
-                        .add(r, converted);
+            int r = samples.row(id);
+            if (r < 0) {
+                r = addSample(file, i);
+            }
+            for (int c = 0; c < cols.size(); c++) {
+                if (rows.hasResult(i, c)) {
+                    cols.add(c, r, rows, i, file.file());
+                }
             }
         }
         accounts.add(new FileAccount(file.file(), "lab results", file.rowsRead(), file.rowsRead() - excluded,
                 excluded));
     }
 
-    private int addSample(LabRow row) {
-        QcRole role = row.role() == null ? QcRole.ROUTINE : row.role();
-        String reference = row.reference();
+    /** One file's analyte columns with the unit conversion of each; a column's builder is made at its first result. */
+    private final class FileColumns {
+        private final List<LabColumn> columns;
+        private final AnalyteColumn.Builder[] builders;
+        private final double[] factors;
+
+        FileColumns(List<LabColumn> columns) {
+            this.columns = columns;
+            this.builders = new AnalyteColumn.Builder[columns.size()];
+            this.factors = new double[columns.size()];
+            for (int c = 0; c < columns.size(); c++) {
+                AnalyteHeader a = columns.get(c).analyte();
+                factors[c] = a.unit().convert(1.0, units.get(a.analyte()));
+            }
+        }
+
+        int size() {
+            return columns.size();
+        }
+
+        /** Adds the result of {@code row}, column {@code c}, to sample row {@code r}, in the reporting unit. */
+        void add(int c, int r, LabRows rows, int row, String file) {
+            AnalyteHeader a = columns.get(c).analyte();
+            if (builders[c] == null) {
+                GradeUnit target = units.get(a.analyte());
+                builders[c] = SampleJoin.this.columns.computeIfAbsent(a.analyte(),
+                        k -> AnalyteColumn.builder(new Analyte(k, target), expectedRows()));
+            }
+            Qualifier q = rows.qualifier(row, c);
+            double value = rows.value(row, c);
+            double limit = rows.limit(row, c);
+            double factor = factors[c];
+            if (factor != 1.0 && q != Qualifier.MISSING) {
+                value *= factor;
+                limit *= factor;
+                if (!Double.isFinite(value)) {
+                    throw new IllegalArgumentException("a non-missing assay value must be finite: " + value);
+                }
+            }
+            builders[c].add(r, q, value, limit, rows.missingReason(row, c), a.method(), file, rows.line(row), 0);
+        }
+    }
+
+    private int expectedRows() {
+        // Lab repeats and umpire checks may add a few rows the register does not hold.
+        return register == null ? 0 : register.size() + register.size() / 16;
+    }
+
+    private int addSample(LabFile file, int i) {
+        LabRows rows = file.table();
+        String id = rows.sampleId(i);
+        QcRole given = rows.role(i);
+        QcRole role = given == null ? QcRole.ROUTINE : given;
+        String reference = rows.reference(i);
         if (register != null) {
-            var entry = register.entry(row.sampleId());
-            if (entry.isPresent()) {
-                role = entry.get().role();
-                reference = entry.get().reference();
-            } else if (row.role() != QcRole.LAB_REPEAT) {
-                exceptions.warn(row.source(), row.sampleId(), row.sampleId(),
+            int e = register.indexOf(id);
+            if (e >= 0) {
+                role = register.role(e);
+                reference = register.reference(e);
+            } else if (given != QcRole.LAB_REPEAT) {
+                exceptions.warn(new SourceLocation(file.file(), rows.line(i), 0), id, id,
                         "the sample is not in the register; it is analysed as " + role.label(),
                         "every submitted sample in " + register.file(), "add the sample to the register");
             }
         }
-        return samples.add(row.sampleId(), row.batch(), row.position(), role, reference, row.source());
+        return samples.add(id, file.batches().get(rows.batch(i)), rows.position(i), role, reference, file.file(),
+                rows.line(i));
     }
 
     /** Closes the register's accounting (entries without a lab result are "not received"). */
@@ -95,17 +148,18 @@ final class SampleJoin {
         }
         register.issues().forEach(exceptions::add);
         long excluded = register.rowsExcluded();
-        for (RegisterEntry e : register.entries().values()) {
-            if (samples.contains(e.sampleId())) {
+        for (int i = 0; i < register.size(); i++) {
+            String id = register.sampleId(i);
+            if (samples.contains(id)) {
                 continue;
             }
             excluded++;
-            if (excludedLabIds.contains(e.sampleId())) {
-                exceptions.exclude(e.source(), e.sampleId(), e.sampleId(),
+            if (excludedLabIds.contains(id)) {
+                exceptions.exclude(register.source(i), id, id,
                         "registered, but its lab row was left out (see the lab file's exceptions)",
                         "a usable lab result", "correct the lab row listed for this sample");
             } else {
-                exceptions.exclude(e.source(), e.sampleId(), e.sampleId(),
+                exceptions.exclude(register.source(i), id, id,
                         "registered but no lab result was found (not received)",
                         "a result for the sample in one of the lab files",
                         "check that every lab file is in lab/, or ask the lab for the missing result");

@@ -1,25 +1,156 @@
 package org.cupel.ingest;
 
+import java.util.Arrays;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import org.cupel.assay.IdIndex;
+import org.cupel.assay.QcRole;
+import org.cupel.assay.SourceLocation;
 import org.cupel.project.DataIssue;
 
 /**
- * The sample register as read.
- *
- * @param file file name used in messages
- * @param entries usable entries by sample ID, in file order
- * @param rejectedIds IDs whose register row could not be used (unknown role); their lab rows are left out too
- * @param issues problems found
- * @param rowsRead data rows
- * @param rowsExcluded rows listed as exceptions
+ * The sample register as read: its usable entries column-wise, in file order, found by sample ID.
+ * Built by {@link RegisterReader}.
  */
-public record SampleRegister(String file, Map<String, RegisterEntry> entries, Set<String> rejectedIds,
-                             List<DataIssue> issues, long rowsRead, long rowsExcluded) {
+public final class SampleRegister {
+    private static final QcRole[] ROLES = QcRole.values();
+
+    private final String file;
+    private final IdIndex ids;
+    private final byte[] roles;
+    private final String[] references;
+    private final String[] holes;
+    private final double[] from;
+    private final double[] to;
+    private final long[] lines;
+    private final Set<String> rejectedIds;
+    private final List<DataIssue> issues;
+    private final long rowsRead;
+    private final long rowsExcluded;
+
+    private SampleRegister(Builder b, Set<String> rejectedIds, List<DataIssue> issues, long rowsRead,
+                           long rowsExcluded) {
+        int n = b.ids.size();
+        this.file = b.file;
+        this.ids = b.ids;
+        this.roles = Arrays.copyOf(b.roles, n);
+        this.references = Arrays.copyOf(b.references, n);
+        this.holes = Arrays.copyOf(b.holes, n);
+        this.from = Arrays.copyOf(b.from, n);
+        this.to = Arrays.copyOf(b.to, n);
+        this.lines = Arrays.copyOf(b.lines, n);
+        this.rejectedIds = Set.copyOf(rejectedIds);
+        this.issues = List.copyOf(issues);
+        this.rowsRead = rowsRead;
+        this.rowsExcluded = rowsExcluded;
+    }
+
+    /** The file name used in messages. */
+    public String file() {
+        return file;
+    }
+
+    /** The number of usable entries. */
+    public int size() {
+        return ids.size();
+    }
+
+    /** The index of {@code sampleId}'s entry, or -1. */
+    public int indexOf(String sampleId) {
+        return ids.indexOf(sampleId);
+    }
+
+    public String sampleId(int entry) {
+        return ids.get(entry);
+    }
+
+    public QcRole role(int entry) {
+        return ROLES[roles[entry]];
+    }
+
+    /** CRM code, or the original sample's ID for a duplicate; empty otherwise. */
+    public String reference(int entry) {
+        return references[entry];
+    }
+
+    public SourceLocation source(int entry) {
+        return new SourceLocation(file, lines[entry], 0);
+    }
+
+    public RegisterEntry entry(int entry) {
+        return new RegisterEntry(ids.get(entry), role(entry), references[entry], holes[entry], from[entry], to[entry],
+                source(entry));
+    }
 
     public Optional<RegisterEntry> entry(String sampleId) {
-        return Optional.ofNullable(entries.get(sampleId));
+        int e = ids.indexOf(sampleId);
+        return e < 0 ? Optional.empty() : Optional.of(entry(e));
+    }
+
+    /** IDs whose register row could not be used (unknown role); their lab rows are left out too. */
+    public Set<String> rejectedIds() {
+        return rejectedIds;
+    }
+
+    /** Problems found. */
+    public List<DataIssue> issues() {
+        return issues;
+    }
+
+    /** Data rows. */
+    public long rowsRead() {
+        return rowsRead;
+    }
+
+    /** Rows listed as exceptions. */
+    public long rowsExcluded() {
+        return rowsExcluded;
+    }
+
+    /** Collects entries in file order; each sample ID once. */
+    static final class Builder {
+        private final String file;
+        private final IdIndex ids = new IdIndex(1024);
+        private byte[] roles = new byte[1024];
+        private String[] references = new String[1024];
+        private String[] holes = new String[1024];
+        private double[] from = new double[1024];
+        private double[] to = new double[1024];
+        private long[] lines = new long[1024];
+
+        Builder(String file) {
+            this.file = file;
+        }
+
+        /** The line of {@code sampleId}'s entry, or -1 when it has none yet. */
+        long lineOf(String sampleId) {
+            int e = ids.indexOf(sampleId);
+            return e < 0 ? -1 : lines[e];
+        }
+
+        /** Adds an entry for a sample ID that has none yet ({@link #lineOf} is -1). */
+        void add(String sampleId, QcRole role, String reference, String hole, double fromM, double toM, long line) {
+            int n = ids.add(sampleId);
+            if (n == lines.length) {
+                int cap = n * 2;
+                roles = Arrays.copyOf(roles, cap);
+                references = Arrays.copyOf(references, cap);
+                holes = Arrays.copyOf(holes, cap);
+                from = Arrays.copyOf(from, cap);
+                to = Arrays.copyOf(to, cap);
+                lines = Arrays.copyOf(lines, cap);
+            }
+            roles[n] = (byte) role.ordinal();
+            references[n] = reference;
+            holes[n] = hole;
+            from[n] = fromM;
+            to[n] = toM;
+            lines[n] = line;
+        }
+
+        SampleRegister build(Set<String> rejectedIds, List<DataIssue> issues, long rowsRead, long rowsExcluded) {
+            return new SampleRegister(this, rejectedIds, issues, rowsRead, rowsExcluded);
+        }
     }
 }

@@ -1,10 +1,11 @@
 package org.cupel.ingest;
 
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.Consumer;
+import java.util.function.Function;
 import java.util.function.Predicate;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
@@ -20,22 +21,34 @@ final class TableAssembler {
     private TableAssembler() {
     }
 
-    static RawTable assemble(String file, Iterator<RawRow> records, Predicate<List<String>> isHeaderRow,
-                             List<DataIssue> warnings) {
+    /** A source of records: fills {@code row} with the next one, false at the end. */
+    interface Records {
+        boolean next(CellRow row);
+    }
+
+    /**
+     * Finds the header, then hands every non-empty row below it to the consumer that {@code open} returns
+     * for the table's head (a {@link RawTable} without rows). A problem {@code open} finds with the header
+     * is thrown only after the rest of the file has been read, so that a problem in the text itself (an
+     * unclosed quote, an invalid encoding) is reported first, as when the whole table is read first.
+     */
+    static void assemble(String file, Records records, Predicate<List<String>> isHeaderRow, List<DataIssue> warnings,
+                         Function<RawTable, Consumer<CellRow>> open) {
+        CellRow row = new CellRow();
         List<RawRow> before = new ArrayList<>();
         RawRow header = null;
-        while (records.hasNext() && before.size() <= MAX_ROWS_BEFORE_HEADER) {
-            RawRow r = records.next();
-            if (r.isBlank()) {
+        while (before.size() <= MAX_ROWS_BEFORE_HEADER && records.next(row)) {
+            if (row.isBlank()) {
                 continue;
             }
+            RawRow r = row.toRawRow();
             if (isHeaderRow.test(r.cells())) {
                 header = r;
                 break;
             }
             before.add(r);
         }
-        List<RawRow> rows = new ArrayList<>();
+        List<RawRow> first = List.of();
         if (header == null) {
             int h = firstTableRow(before);
             if (h < 0) {
@@ -43,16 +56,28 @@ final class TableAssembler {
                         + "'sample_id, Au_ppm'); add a header row above the data.");
             }
             header = before.get(h);
-            rows.addAll(before.subList(h + 1, before.size()));
+            first = before.subList(h + 1, before.size());
             before = before.subList(0, h);
         }
-        while (records.hasNext()) {
-            RawRow r = records.next();
-            if (!r.isBlank()) {
-                rows.add(r);
+        RawTable head = new RawTable(file, headerBlock(before), header.cells(), header.line(), List.of(), warnings);
+        Consumer<CellRow> sink;
+        try {
+            sink = open.apply(head);
+        } catch (InputException e) {
+            while (records.next(row)) {
+                // read to the end: a problem in the text outranks one in the header
+            }
+            throw e;
+        }
+        for (RawRow r : first) {
+            row.set(r);
+            sink.accept(row);
+        }
+        while (records.next(row)) {
+            if (!row.isBlank()) {
+                sink.accept(row);
             }
         }
-        return new RawTable(file, headerBlock(before), header.cells(), header.line(), rows, warnings);
     }
 
     /**

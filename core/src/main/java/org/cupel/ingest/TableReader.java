@@ -1,5 +1,6 @@
 package org.cupel.ingest;
 
+import java.io.ByteArrayInputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
@@ -13,8 +14,11 @@ import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
-import java.util.NoSuchElementException;
+import java.util.Set;
+import java.util.function.Consumer;
+import java.util.function.Function;
 import java.util.function.Predicate;
+import java.util.stream.Collectors;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
 
@@ -30,6 +34,8 @@ public final class TableReader {
     /** Column headers that name the sample ID column (matched as {@link RawTable#column}). */
     public static final List<String> SAMPLE_ID_ALIASES = List.of("sample id", "sample_id", "sampleid", "sample",
             "sample no", "sample number", "sample #", "id");
+    private static final Set<String> NORMALISED_ID_ALIASES = SAMPLE_ID_ALIASES.stream()
+            .map(RawTable::normalise).collect(Collectors.toUnmodifiableSet());
     private static final int SNIFF_BYTES = 64 * 1024;
 
     private TableReader() {
@@ -49,6 +55,23 @@ public final class TableReader {
      * @param sheet for XLSX, the sheet to read; null or empty for the first
      */
     public static RawTable read(Path file, String displayName, Predicate<List<String>> isHeaderRow, String sheet) {
+        List<RawRow> rows = new ArrayList<>();
+        RawTable[] head = new RawTable[1];
+        scan(file, displayName, isHeaderRow, sheet, h -> {
+            head[0] = h;
+            return r -> rows.add(r.toRawRow());
+        });
+        RawTable h = head[0];
+        return new RawTable(h.file(), h.headerBlock(), h.columns(), h.headerLine(), rows, h.warnings());
+    }
+
+    /**
+     * Reads {@code file} as {@link #read(Path, String, Predicate, String)} does, but hands each data row to
+     * the consumer that {@code open} returns for the table's head (a {@link RawTable} without rows) instead
+     * of keeping the rows; the row passed is reused for the next one.
+     */
+    static void scan(Path file, String displayName, Predicate<List<String>> isHeaderRow, String sheet,
+                     Function<RawTable, Consumer<CellRow>> open) {
         if (!Files.isRegularFile(file) || !Files.isReadable(file)) {
             throw new InputException(displayName + ": the file does not exist or cannot be read; check the path "
                     + "and its permissions.");
@@ -56,41 +79,46 @@ public final class TableReader {
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
         List<DataIssue> warnings = new ArrayList<>();
         if (name.endsWith(".xlsx") || name.endsWith(".xlsm")) {
-            List<RawRow> rows = XlsxSheetReader.read(file, displayName, sheet, warnings);
-            return TableAssembler.assemble(displayName, rows.iterator(), isHeaderRow, warnings);
+            Iterator<RawRow> rows = XlsxSheetReader.read(file, displayName, sheet, warnings).iterator();
+            TableAssembler.assemble(displayName, row -> {
+                if (!rows.hasNext()) {
+                    return false;
+                }
+                row.set(rows.next());
+                return true;
+            }, isHeaderRow, warnings, open);
+            return;
         }
         if (name.endsWith(".xls")) {
             throw new InputException(displayName + ": the old binary Excel format (.xls) is not read; save the "
                     + "workbook as .xlsx or the sheet as CSV UTF-8.");
         }
-        return readText(file, displayName, isHeaderRow, warnings);
+        scanText(file, displayName, isHeaderRow, warnings, open);
     }
 
     /** Whether a row holds a sample-ID column header. */
     public static boolean hasSampleIdColumn(List<String> cells) {
         for (String c : cells) {
-            String n = RawTable.normalise(c);
-            for (String alias : SAMPLE_ID_ALIASES) {
-                if (n.equals(RawTable.normalise(alias))) {
-                    return true;
-                }
+            if (NORMALISED_ID_ALIASES.contains(RawTable.normalise(c))) {
+                return true;
             }
         }
         return false;
     }
 
-    private static RawTable readText(Path file, String displayName, Predicate<List<String>> isHeaderRow,
-                                     List<DataIssue> warnings) {
+    private static void scanText(Path file, String displayName, Predicate<List<String>> isHeaderRow,
+                                 List<DataIssue> warnings, Function<RawTable, Consumer<CellRow>> open) {
         byte[] head = head(file, displayName);
         Charset charset = charsetOf(head);
         rejectBinary(head, charset, displayName);
         char delimiter = DelimiterSniffer.sniff(decodePrefix(head, charset), isHeaderRow);
-        try (InputStream in = Files.newInputStream(file);
+        // A file shorter than the sniffing sample is already in memory: no second open.
+        try (InputStream in = head.length < SNIFF_BYTES ? new ByteArrayInputStream(head) : Files.newInputStream(file);
              Reader reader = new InputStreamReader(skipBom(in, head), charset.newDecoder()
                      .onMalformedInput(CodingErrorAction.REPORT)
                      .onUnmappableCharacter(CodingErrorAction.REPORT))) {
             DelimitedTokenizer t = new DelimitedTokenizer(reader, delimiter, displayName);
-            return TableAssembler.assemble(displayName, iterate(t), isHeaderRow, warnings);
+            TableAssembler.assemble(displayName, t::next, isHeaderRow, warnings, open);
         } catch (IOException e) {
             throw new InputException(displayName + ": the file could not be read (" + e.getMessage()
                     + "); check that it is not locked or truncated.", e);
@@ -155,26 +183,5 @@ public final class TableReader {
             }
         }
         return new String(head, start, end - start, charset);
-    }
-
-    private static Iterator<RawRow> iterate(DelimitedTokenizer t) {
-        return new Iterator<>() {
-            private RawRow next = t.next();
-
-            @Override
-            public boolean hasNext() {
-                return next != null;
-            }
-
-            @Override
-            public RawRow next() {
-                if (next == null) {
-                    throw new NoSuchElementException();
-                }
-                RawRow r = next;
-                next = t.next();
-                return r;
-            }
-        };
     }
 }

@@ -68,6 +68,16 @@ public final class ValueParser {
         return ok(AssayValue.detected(v, validLimit(statedLimit)));
     }
 
+    /**
+     * The hot path of lab files, without objects: the value of a trimmed cell {@code s[from, to)} that
+     * starts with a digit and is a well-formed number, else NaN. For such a cell {@link #parse} gives
+     * {@code AssayValue.detected(v, limit)} with the stated limit if valid; for every other cell (NaN
+     * here) call {@link #parse}.
+     */
+    double plainNumber(char[] s, int from, int to) {
+        return to > from && s[from] >= '0' && s[from] <= '9' ? numbers.scan(s, from, to) : Double.NaN;
+    }
+
     /** Numbers, {@code <0.005} and {@code -0.005} skip the code lookup (the hot path). */
     private static boolean mayBeCode(String t, char first) {
         if (first >= '0' && first <= '9') {
@@ -156,7 +166,8 @@ public final class ValueParser {
         return true;
     }
 
-    private static double validLimit(double limit) {
+    /** The stated limit when it is a usable detection limit, else NaN. */
+    static double validLimit(double limit) {
         return limit > 0 && Double.isFinite(limit) ? limit : Double.NaN;
     }
 

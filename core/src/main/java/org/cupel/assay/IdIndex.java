@@ -1,0 +1,94 @@
+package org.cupel.assay;
+
+import java.util.Arrays;
+
+/**
+ * Distinct strings (sample IDs) numbered in the order added, with the number of each found by open
+ * addressing with linear probing over the strings' own hash codes (Knuth, 1998, The Art of Computer
+ * Programming vol. 3, section 6.4, algorithm L). A million IDs cost two int arrays and one String array
+ * instead of a million map entries and boxed integers.
+ */
+public final class IdIndex {
+    /** A slot holds {@code hash << 32 | number}, so that a probe reads one array; -1 is empty. */
+    private static final long EMPTY = -1;
+    private String[] keys;
+    private int size;
+    private long[] slots;
+
+    /** @param expected how many strings are expected (a hint) */
+    public IdIndex(int expected) {
+        keys = new String[Math.max(16, expected)];
+        int capacity = Integer.highestOneBit(Math.max(16, expected) * 2 - 1) << 1;
+        slots = new long[capacity];
+        Arrays.fill(slots, EMPTY);
+    }
+
+    public int size() {
+        return size;
+    }
+
+    /** The string numbered {@code i}. */
+    public String get(int i) {
+        return keys[i];
+    }
+
+    /** The number of {@code key}, or -1 when it was not added. */
+    public int indexOf(String key) {
+        int s = slotOf(key, spread(key.hashCode()));
+        return slots[s] == EMPTY ? -1 : (int) slots[s];
+    }
+
+    /** Adds {@code key} and returns its number; when it is already present, returns {@code -1 - its number}. */
+    public int add(String key) {
+        if ((size + 1) * 10L > slots.length * 7L) {
+            rehash(slots.length * 2);
+        }
+        int h = spread(key.hashCode());
+        int s = slotOf(key, h);
+        if (slots[s] != EMPTY) {
+            return -1 - (int) slots[s];
+        }
+        if (size == keys.length) {
+            keys = Arrays.copyOf(keys, size * 2);
+        }
+        keys[size] = key;
+        slots[s] = (long) h << 32 | size;
+        return size++;
+    }
+
+    /** The slot holding {@code key}, else the empty slot where it would go. */
+    private int slotOf(String key, int h) {
+        int mask = slots.length - 1;
+        for (int s = h & mask; ; s = (s + 1) & mask) {
+            long slot = slots[s];
+            if (slot == EMPTY || ((int) (slot >>> 32) == h && keys[(int) slot].equals(key))) {
+                return s;
+            }
+        }
+    }
+
+    /** The strings in the order added. */
+    public String[] toArray() {
+        return Arrays.copyOf(keys, size);
+    }
+
+    private void rehash(int capacity) {
+        slots = new long[capacity];
+        Arrays.fill(slots, EMPTY);
+        int mask = capacity - 1;
+        for (int k = 0; k < size; k++) {
+            int h = spread(keys[k].hashCode());
+            int s = h & mask;
+            while (slots[s] != EMPTY) {
+                s = (s + 1) & mask;
+            }
+            slots[s] = (long) h << 32 | k;
+        }
+    }
+
+    /** Mixes the high bits into the low ones, which choose the slot (String hashes of similar IDs differ little). */
+    private static int spread(int h) {
+        int x = h * 0x9E3779B9;
+        return x ^ (x >>> 16);
+    }
+}

@@ -1,0 +1,141 @@
+package org.cupel.ingest;
+
+import java.util.Arrays;
+import org.cupel.assay.MissingReason;
+import org.cupel.assay.QcRole;
+import org.cupel.assay.Qualifier;
+
+/**
+ * The rows kept from one lab file, column-wise: per row the sample fields, per row and analyte column
+ * the usable result as primitives (a file's cells cost a few arrays, not an object each).
+ */
+public final class LabRows {
+    /** {@link #qualifier} of a cell that adds no result (blank, or left out with an issue). */
+    static final byte NO_RESULT = -1;
+    private static final Qualifier[] QUALIFIERS = Qualifier.values();
+    private static final MissingReason[] REASONS = MissingReason.values();
+    private static final QcRole[] ROLES = QcRole.values();
+    /** A lab batch file holds a few hundred rows. */
+    private static final int INITIAL_ROWS = 512;
+
+    private final int width;
+    private int size;
+    private String[] ids = new String[INITIAL_ROWS];
+    private int[] batches = new int[INITIAL_ROWS];
+    private int[] positions = new int[INITIAL_ROWS];
+    private byte[] roles = new byte[INITIAL_ROWS];
+    private String[] references = new String[INITIAL_ROWS];
+    private long[] lines = new long[INITIAL_ROWS];
+    private byte[] qualifiers;
+    private double[] values;
+    private double[] limits;
+    private byte[] missing;
+
+    /** @param width the number of analyte columns */
+    LabRows(int width) {
+        this.width = width;
+        qualifiers = new byte[INITIAL_ROWS * width];
+        values = new double[INITIAL_ROWS * width];
+        limits = new double[INITIAL_ROWS * width];
+        missing = new byte[INITIAL_ROWS * width];
+    }
+
+    public int size() {
+        return size;
+    }
+
+    public String sampleId(int row) {
+        return ids[row];
+    }
+
+    /** Index into the file's batches. */
+    public int batch(int row) {
+        return batches[row];
+    }
+
+    public int position(int row) {
+        return positions[row];
+    }
+
+    /** The role the file gives, or null when it says nothing. */
+    public QcRole role(int row) {
+        return roles[row] < 0 ? null : ROLES[roles[row]];
+    }
+
+    public String reference(int row) {
+        return references[row];
+    }
+
+    public long line(int row) {
+        return lines[row];
+    }
+
+    /** Whether analyte column {@code column} (index into the file's columns) of {@code row} has a result. */
+    public boolean hasResult(int row, int column) {
+        return qualifiers[row * width + column] != NO_RESULT;
+    }
+
+    public Qualifier qualifier(int row, int column) {
+        return QUALIFIERS[qualifiers[row * width + column]];
+    }
+
+    public double value(int row, int column) {
+        return values[row * width + column];
+    }
+
+    public double limit(int row, int column) {
+        return limits[row * width + column];
+    }
+
+    public MissingReason missingReason(int row, int column) {
+        return REASONS[missing[row * width + column]];
+    }
+
+    /** Clears the cells of the row being read (row {@link #size()}) to no result. */
+    void startRow() {
+        if (size == ids.length) {
+            grow();
+        }
+        Arrays.fill(qualifiers, size * width, (size + 1) * width, NO_RESULT);
+    }
+
+    void setResult(int column, Qualifier q, double value, double limit, MissingReason reason) {
+        int k = size * width + column;
+        qualifiers[k] = (byte) q.ordinal();
+        values[k] = value;
+        limits[k] = limit;
+        missing[k] = (byte) reason.ordinal();
+    }
+
+    /** Keeps the row being read, with the results set since {@link #startRow()}. */
+    void keepRow(String id, int batch, int position, QcRole role, String reference, long line) {
+        ids[size] = id;
+        batches[size] = batch;
+        positions[size] = position;
+        roles[size] = role == null ? -1 : (byte) role.ordinal();
+        references[size] = reference == null ? "" : reference;
+        lines[size] = line;
+        size++;
+    }
+
+    /** Renumbers the batch of every row through {@code map} (old index → new index). */
+    void remapBatches(int[] map) {
+        for (int r = 0; r < size; r++) {
+            batches[r] = map[batches[r]];
+        }
+    }
+
+    private void grow() {
+        int cap = ids.length * 2;
+        ids = Arrays.copyOf(ids, cap);
+        batches = Arrays.copyOf(batches, cap);
+        positions = Arrays.copyOf(positions, cap);
+        roles = Arrays.copyOf(roles, cap);
+        references = Arrays.copyOf(references, cap);
+        lines = Arrays.copyOf(lines, cap);
+        qualifiers = Arrays.copyOf(qualifiers, cap * width);
+        values = Arrays.copyOf(values, cap * width);
+        limits = Arrays.copyOf(limits, cap * width);
+        missing = Arrays.copyOf(missing, cap * width);
+    }
+}

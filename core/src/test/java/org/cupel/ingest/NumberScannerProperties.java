@@ -1,0 +1,127 @@
+package org.cupel.ingest;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import net.jqwik.api.Arbitraries;
+import net.jqwik.api.Arbitrary;
+import net.jqwik.api.Combinators;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.Provide;
+
+/**
+ * The scanner's exact fast path gives the same double as {@link Double#parseDouble} (bit for bit), and the
+ * scanner as a whole reads every text as the straightforward reference below does: validate, clean the
+ * text to Java's syntax, then {@link Double#parseDouble} (the scanner before the fast path).
+ */
+class NumberScannerProperties {
+    private static final NumberScanner POINT = new NumberScanner(false, true);
+    private static final NumberScanner COMMA = new NumberScanner(true, true);
+    private static final NumberScanner PLAIN = new NumberScanner(false, false);
+
+    @Provide
+    Arbitrary<String> decimals() {
+        Arbitrary<String> digits = Arbitraries.strings().numeric().ofMinLength(0).ofMaxLength(24);
+        return Combinators.combine(Arbitraries.of("", "-", "+"), digits, Arbitraries.of("", "."), digits)
+                .as((sign, i, dot, f) -> sign + i + dot + f)
+                .filter(s -> s.chars().anyMatch(Character::isDigit));
+    }
+
+    @Property(tries = 5000)
+    void decimalsReadAsParseDouble(@ForAll("decimals") String s) {
+        assertEquals(Double.doubleToRawLongBits(Double.parseDouble(s)),
+                Double.doubleToRawLongBits(POINT.scan(s, 0, s.length())), s);
+    }
+
+    @Provide
+    Arbitrary<String> texts() {
+        return Arbitraries.strings().withChars("0123456789012345678901234567890.,.,+-eE \u00a0x").ofMaxLength(30);
+    }
+
+    @Property(tries = 5000)
+    void everyTextReadsAsTheReference(@ForAll("texts") String s) {
+        for (boolean comma : new boolean[] {false, true}) {
+            for (boolean grouping : new boolean[] {false, true}) {
+                NumberScanner n = grouping ? (comma ? COMMA : POINT) : (comma ? new NumberScanner(true, false) : PLAIN);
+                assertEquals(Double.doubleToRawLongBits(reference(s, comma, grouping)),
+                        Double.doubleToRawLongBits(n.scan(s, 0, s.length())), s + " comma=" + comma + " grouping=" + grouping);
+            }
+        }
+    }
+
+    /** The scanner as it was: checks the grammar while copying the cleaned characters, then parseDouble. */
+    private static double reference(String s, boolean decimalComma, boolean grouping) {
+        char decimalMark = decimalComma ? ',' : '.';
+        char groupMark = decimalComma ? '.' : ',';
+        StringBuilder out = new StringBuilder();
+        int i = 0;
+        int to = s.length();
+        if (i < to && (s.charAt(i) == '+' || s.charAt(i) == '-')) {
+            if (s.charAt(i) == '-') {
+                out.append('-');
+            }
+            i++;
+        }
+        int intStart = out.length();
+        int groupLen = 0;
+        int firstGroupLen = -1;
+        boolean grouped = false;
+        for (; i < to; i++) {
+            char c = s.charAt(i);
+            boolean isGroup = c == groupMark || (decimalMark == ',' && (c == ' ' || c == '\u00A0' || c == '\u202F'));
+            if (c >= '0' && c <= '9') {
+                out.append(c);
+                groupLen++;
+            } else if (grouping && isGroup) {
+                if (firstGroupLen < 0) {
+                    if (groupLen < 1 || groupLen > 3 || out.charAt(intStart) == '0') {
+                        return Double.NaN;
+                    }
+                    firstGroupLen = groupLen;
+                } else if (groupLen != 3) {
+                    return Double.NaN;
+                }
+                grouped = true;
+                groupLen = 0;
+            } else {
+                break;
+            }
+        }
+        int intDigits = out.length() - intStart;
+        if (grouped && groupLen != 3) {
+            return Double.NaN;
+        }
+        int fracDigits = 0;
+        if (i < to && s.charAt(i) == decimalMark) {
+            out.append('.');
+            i++;
+            for (; i < to && s.charAt(i) >= '0' && s.charAt(i) <= '9'; i++) {
+                out.append(s.charAt(i));
+                fracDigits++;
+            }
+        }
+        if (intDigits + fracDigits == 0) {
+            return Double.NaN;
+        }
+        if (i < to && (s.charAt(i) == 'e' || s.charAt(i) == 'E')) {
+            out.append('e');
+            i++;
+            if (i < to && (s.charAt(i) == '+' || s.charAt(i) == '-')) {
+                out.append(s.charAt(i++));
+            }
+            int expDigits = 0;
+            for (; i < to && s.charAt(i) >= '0' && s.charAt(i) <= '9'; i++) {
+                out.append(s.charAt(i));
+                expDigits++;
+            }
+            if (expDigits == 0) {
+                return Double.NaN;
+            }
+        }
+        if (i != to) {
+            return Double.NaN;
+        }
+        double v = Double.parseDouble(out.toString());
+        return Double.isFinite(v) ? v : Double.NaN;
+    }
+}
