@@ -33,6 +33,8 @@ public final class ProjectLoader {
     public static final String REGISTER = "register.csv";
     public static final String CATALOG = "crm-catalog.csv";
     public static final String LAB_DIR = "lab";
+    /** Parsed lab files that may wait for the join: enough to keep the reading core busy, few in memory. */
+    private static final int READ_AHEAD_FILES = 4;
 
     private ProjectLoader() {
     }
@@ -183,18 +185,17 @@ public final class ProjectLoader {
                 fail(LAB_DIR, "lab results", new InputException(folder.resolve(LAB_DIR) + ": no lab result files "
                         + "(expected .csv, .tsv, .txt or .xlsx files in lab/); put the lab's result files there."));
             }
-            LabFileReader reader = new LabFileReader(settings);
-            for (Path f : files) {
-                String name = displayName(f);
-                LabFile file;
-                try {
-                    file = reader.read(f, name);
-                } catch (InputException e) {
-                    fail(name, "lab results", e);
-                    continue;
+            ReadAhead<Path, LabFile> reads = new ReadAhead<>(() -> {
+                LabFileReader reader = new LabFileReader(settings);
+                return f -> reader.read(f, displayName(f));
+            }, READ_AHEAD_FILES);
+            reads.readInOrder(files, outcome -> {
+                if (outcome.error() != null) {
+                    fail(displayName(outcome.item()), "lab results", outcome.error());
+                } else {
+                    sink.accept(outcome.result());
                 }
-                sink.accept(file);
-            }
+            });
         }
 
         private SampleRegister readRegister() {
