@@ -1,5 +1,7 @@
 package org.cupel.charts;
 
+import java.util.Locale;
+
 /** The small print every chart carries: n, thinning, limits. Kept uniform so readers learn where to look. */
 public final class ChartNotes {
     private ChartNotes() {
@@ -8,8 +10,26 @@ public final class ChartNotes {
     /** "n = 412" or, when thinned, "n = 250 000 (8 000 drawn; points thinned evenly)". */
     public static String count(long n, long drawn) {
         if (drawn >= n) {
-            return "n = " + String.format(java.util.Locale.US, "%,d", n);
+            return "n = " + String.format(Locale.US, "%,d", n);
         }
-        return String.format(java.util.Locale.US, "n = %,d (%,d drawn; points thinned evenly)", n, drawn);
+        return String.format(Locale.US, "n = %,d (%,d drawn; points thinned evenly)", n, drawn);
+    }
+
+    /**
+     * The count of a chart thinned by {@link PointBudget#thinned}: "n = 50,000 (4,000 drawn: all 312
+     * beyond the limit, the rest thinned evenly)".
+     *
+     * @param what what the flagged points are, as in "beyond the HARD limit"
+     */
+    public static String count(long n, long drawn, long flagged, long flaggedDrawn, String what) {
+        if (drawn >= n) {
+            return count(n, drawn);
+        }
+        if (flaggedDrawn < flagged) {
+            return String.format(Locale.US, "n = %,d (%,d drawn: %,d of the %,d %s, evenly spaced; the rest not drawn)",
+                    n, drawn, flaggedDrawn, flagged, what);
+        }
+        return String.format(Locale.US, "n = %,d (%,d drawn: all %,d %s, the rest thinned evenly)", n, drawn,
+                flagged, what);
     }
 }
