@@ -26,10 +26,28 @@ public final class ChartNotes {
             return count(n, drawn);
         }
         if (flaggedDrawn < flagged) {
-            return String.format(Locale.US, "n = %,d (%,d drawn: %,d of the %,d %s, evenly spaced; the rest not drawn)",
-                    n, drawn, flaggedDrawn, flagged, what);
+            return String.format(Locale.US, "n = %,d (%,d drawn: %,d of the %,d %s and %,d of the %,d others, "
+                    + "each thinned evenly)", n, drawn, flaggedDrawn, flagged, what, drawn - flaggedDrawn, n - flagged);
         }
         return String.format(Locale.US, "n = %,d (%,d drawn: all %,d %s, the rest thinned evenly)", n, drawn,
                 flagged, what);
+    }
+
+    /** {@code text} broken into lines of at most about {@code width} characters at its "; " separators. */
+    public static String wrap(String text, int width) {
+        StringBuilder out = new StringBuilder();
+        int col = 0;
+        for (String part : text.split("; ")) {
+            if (col > 0 && col + part.length() + 2 > width) {
+                out.append('\n');
+                col = 0;
+            } else if (col > 0) {
+                out.append("; ");
+                col += 2;
+            }
+            out.append(part);
+            col += part.length();
+        }
+        return out.toString();
     }
 }

@@ -8,8 +8,8 @@ package org.cupel.charts;
  * <p>{@link #thinned} draws every flagged point (failed, outlying, beyond a limit) and spends the rest of
  * the budget on the others, evenly spaced in the order given, first and last included. Given in sorted
  * order (by x, ties by y), the drawn set then holds the extremes of x and depends on the points' values
- * only, not on the order they came in. Only when the flagged points alone exceed the budget are they
- * thinned too, evenly, and the note says so.
+ * only, not on the order they came in. Only when the flagged points would take more than half the budget
+ * are they thinned too, evenly, and the note says so.
  */
 public final class PointBudget {
     /** Points drawn at most on one chart. */
@@ -40,24 +40,33 @@ public final class PointBudget {
 
     /**
      * The indices of {@code 0..flagged.length-1} to draw, ascending, at most {@code budget} of them: all
-     * flagged ones (evenly thinned when more than the budget), the others evenly thinned into what is left.
+     * flagged ones, the others evenly thinned into what is left. When flagged points are so many that the
+     * others would get less than half the budget, both get half (each thinned evenly), so that the chart
+     * still shows the bulk the flagged points stand out from.
      */
     public static int[] thinned(boolean[] flagged, int budget) {
         int[] flags = positions(flagged, true);
         int[] others = positions(flagged, false);
-        if (flags.length >= budget) {
-            return pick(flags, indices(flags.length, budget));
+        int forOthers = Math.min(others.length, Math.max(budget - flags.length, budget / 2));
+        int forFlags = Math.min(flags.length, budget - forOthers);
+        return merge(spread(flags, forFlags), spread(others, forOthers));
+    }
+
+    /** {@code k} of {@code idx}, evenly spaced, first and last included when {@code k >= 2}. */
+    private static int[] spread(int[] idx, int k) {
+        if (k >= idx.length) {
+            return idx;
         }
-        int room = budget - flags.length;
-        int[] keptOthers = room >= 2 ? pick(others, indices(others.length, room))
-                : room == 1 && others.length > 0 ? new int[] {others[0]} : new int[0];
-        int[] out = new int[flags.length + keptOthers.length];
+        return k >= 2 ? pick(idx, indices(idx.length, k)) : k == 1 ? new int[] {idx[0]} : new int[0];
+    }
+
+    private static int[] merge(int[] a, int[] b) {
+        int[] out = new int[a.length + b.length];
         int i = 0;
         int j = 0;
         int k = 0;
-        while (i < flags.length || j < keptOthers.length) {
-            out[k++] = j >= keptOthers.length || i < flags.length && flags[i] < keptOthers[j] ? flags[i++]
-                    : keptOthers[j++];
+        while (i < a.length || j < b.length) {
+            out[k++] = j >= b.length || i < a.length && a[i] < b[j] ? a[i++] : b[j++];
         }
         return out;
     }

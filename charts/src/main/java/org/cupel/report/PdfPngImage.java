@@ -9,8 +9,8 @@ import org.cupel.charts.PngEncoder;
 
 /**
  * A PNG chart as a PDF image without decoding it. A PDF Flate stream with the PNG predictors (Predictor 15:
- * the filter type is given per row, as in PNG) reads a PNG's IDAT data unchanged (Adobe, 2008, "Document
- * management — Portable document format — Part 1: PDF 1.7", ISO 32000-1, section 7.4.4.4, "LZW and Flate
+ * the filter type is given per row, as in PNG) reads a PNG's IDAT data unchanged (ISO 32000-1:2008,
+ * "Document management — Portable document format — Part 1: PDF 1.7", section 7.4.4.4, "LZW and Flate
  * predictor functions"), so an 8-bit RGB, non-interlaced PNG is embedded as its compressed bytes: no
  * decode, no re-compression, and the PDF is no larger than the PNGs. Other PNGs go through OpenPDF's
  * decoder.

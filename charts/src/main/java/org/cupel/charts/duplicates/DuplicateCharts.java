@@ -30,6 +30,8 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 public final class DuplicateCharts {
     private static final int LINE_POINTS = 60;
     private static final String BEYOND_HARD = "beyond the HARD limit";
+    /** Group medians drawn at most: enough to trace the median curve, few enough not to hide the pairs. */
+    private static final int MEDIANS_BUDGET = 300;
 
     private DuplicateCharts() {
     }
@@ -139,8 +141,13 @@ public final class DuplicateCharts {
         String extra = "";
         if (model.available()) {
             PairGroups g = model.groups();
-            double[][] positive = positiveY(g.means(), g.medianAbsDiff());
-            XYSeries med = chart.addSeries("group medians (" + g.groupSize() + " pairs)",
+            double[][] all = positiveY(g.means(), g.medianAbsDiff());
+            // Group medians come in order of pair mean: even thinning keeps the curve they trace and its ends.
+            int[] gi = PointBudget.indices(all[0].length, MEDIANS_BUDGET);
+            double[][] positive = {PointBudget.pick(all[0], gi), PointBudget.pick(all[1], gi)};
+            XYSeries med = chart.addSeries("group medians (" + g.groupSize() + " pairs"
+                    + (gi.length < all[0].length ? String.format(Locale.US, "; %,d of %,d drawn", gi.length,
+                    all[0].length) : "") + ")",
                     positive[0].length == 0 ? new double[] {Double.NaN} : positive[0],
                     positive[1].length == 0 ? new double[] {Double.NaN} : positive[1]);
             med.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
@@ -161,8 +168,8 @@ public final class DuplicateCharts {
             extra = String.format(Locale.ROOT, "; σc = %.3g + %.3g·c; above 90 %% line %d (exp. %.0f), above 99 %% line %d (exp. %.0f)",
                     pm.sigma0(), pm.k(), model.line90().exceedances(), model.line90().expected(),
                     model.line99().exceedances(), model.line99().expected());
-            if (positive[0].length < g.groups()) {
-                extra += "; " + (g.groups() - positive[0].length) + " groups with median |d| = 0 not drawn";
+            if (all[0].length < g.groups()) {
+                extra += "; " + (g.groups() - all[0].length) + " groups with median |d| = 0 not drawn";
             }
             if (g.dropped() > 0) {
                 extra += "; " + g.dropped() + " top pairs outside a full group";
@@ -238,29 +245,12 @@ public final class DuplicateCharts {
     }
 
     private static void note(XYChart chart, String text) {
-        String wrapped = wrap(text, 95);
+        String wrapped = ChartNotes.wrap(text, 95);
         int extraLines = (int) wrapped.chars().filter(c -> c == '\n').count();
         // The panel is anchored at its bottom edge: lower it by a line per extra line to keep its top fixed.
         AnnotationTextPanel panel = new AnnotationTextPanel(wrapped, 110, ChartStyle.HEIGHT - 90 - 15 * extraLines,
                 true);
         chart.addAnnotation(panel);
-    }
-
-    private static String wrap(String text, int width) {
-        StringBuilder out = new StringBuilder();
-        int col = 0;
-        for (String part : text.split("; ")) {
-            if (col > 0 && col + part.length() + 2 > width) {
-                out.append('\n');
-                col = 0;
-            } else if (col > 0) {
-                out.append("; ");
-                col += 2;
-            }
-            out.append(part);
-            col += part.length();
-        }
-        return out.toString();
     }
 
     private static void points(XYChart chart, String name, double[] x, double[] y, Color color) {
