@@ -33,7 +33,10 @@ public final class ChartNotes {
                 flagged, what);
     }
 
-    /** {@code text} broken into lines of at most about {@code width} characters at its "; " separators. */
+    /**
+     * {@code text} broken into lines of at most about {@code width} characters, preferably at its "; "
+     * separators, else (for a part longer than a line) between words.
+     */
     public static String wrap(String text, int width) {
         StringBuilder out = new StringBuilder();
         int col = 0;
@@ -45,8 +48,17 @@ public final class ChartNotes {
                 out.append("; ");
                 col += 2;
             }
-            out.append(part);
-            col += part.length();
+            for (String word : part.split(" ")) {
+                if (col > 0 && col + word.length() + 1 > width && out.charAt(out.length() - 1) != ' ') {
+                    out.append('\n');
+                    col = 0;
+                } else if (col > 0 && out.charAt(out.length() - 1) != ' ') {
+                    out.append(' ');
+                    col++;
+                }
+                out.append(word);
+                col += word.length();
+            }
         }
         return out.toString();
     }
