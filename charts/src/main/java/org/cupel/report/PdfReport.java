@@ -215,7 +215,7 @@ public final class PdfReport {
     }
 
     private void addFigure(Chapter ch, ReportBlock.Figure f) throws IOException {
-        Image img = Image.getInstance(png.apply(f));
+        Image img = PdfPngImage.of(png.apply(f));
         float width = doc.getPageSize().getWidth() - 2 * MARGIN_X;
         float height = (doc.getPageSize().getHeight() - MARGIN_TOP - MARGIN_BOTTOM) * 0.55f;
         img.scaleToFit(width, height);

@@ -10,11 +10,17 @@ import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.List;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
 import org.cupel.charts.PngWriter;
 import org.cupel.project.InputException;
-import org.knowm.xchart.internal.chartpart.Chart;
 
 /**
  * Writes the report's output folder: {@code index.html}, {@code appendix.pdf}, {@code charts/*.png},
@@ -30,6 +36,9 @@ import org.knowm.xchart.internal.chartpart.Chart;
 public final class ReportWriter {
     /** Marks a folder as written by Cupel, so {@code --force} may replace it. */
     public static final String MARKER = ".cupel-report";
+
+    /** Charts drawn at once: the two cores of a typical QC workstation or CI runner. */
+    static final int RENDER_THREADS = 2;
 
     private ReportWriter() {
     }
@@ -82,15 +91,7 @@ public final class ReportWriter {
         Files.createDirectory(dir.resolve("charts"));
         Files.createDirectory(dir.resolve("tables"));
         Path print = separatePrint ? Files.createDirectory(dir.resolve(".print")) : dir;
-        for (ReportBlock.Figure f : files.figures()) {
-            progress.step("chart " + files.chart(f));
-            Chart<?, ?> chart = f.chart().get();
-            PngWriter.write(chart, dir.resolve(files.chart(f)), options.chartDpi());
-            if (separatePrint) {
-                progress.step("print chart " + files.chart(f));
-                PngWriter.write(f.chart().get(), print.resolve(files.chart(f).replace('/', '_')), PngWriter.PRINT_DPI);
-            }
-        }
+        writeCharts(files, dir, separatePrint ? print : null, options.chartDpi(), progress);
         for (ReportTable t : files.tables()) {
             progress.step("table " + files.table(t));
             CsvTables.write(t, dir.resolve(files.table(t)));
@@ -111,6 +112,84 @@ public final class ReportWriter {
         SummaryJson.write(report, dir.resolve("summary.json"));
         Files.writeString(dir.resolve(MARKER), "Written by Cupel (cupel report). "
                 + "'cupel report --force' may replace this folder.\n", StandardCharsets.UTF_8);
+    }
+
+    /**
+     * Renders the charts on up to {@value #RENDER_THREADS} threads. Each chart is built, drawn and written
+     * by one task into its own file, so the bytes do not depend on the order tasks run in; progress is
+     * reported in reading order.
+     *
+     * @param print where print-resolution copies go, or null when {@code dpi} is the print resolution
+     */
+    private static void writeCharts(ReportFiles files, Path dir, Path print, int dpi, ReportProgress progress)
+            throws IOException {
+        List<ReportBlock.Figure> figures = files.figures();
+        int threads = Math.max(1, Math.min(RENDER_THREADS, Runtime.getRuntime().availableProcessors()));
+        ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
+            Thread t = new Thread(r, "cupel-chart");
+            t.setDaemon(true);
+            return t;
+        });
+        try {
+            List<Future<?>> done = new ArrayList<>(figures.size());
+            for (ReportBlock.Figure f : figures) {
+                done.add(pool.submit(() -> {
+                    writeChart(f, files.chart(f), dir, print, dpi);
+                    return null;
+                }));
+            }
+            for (int i = 0; i < figures.size(); i++) {
+                progress.step("chart " + files.chart(figures.get(i)));
+                if (print != null) {
+                    progress.step("print chart " + files.chart(figures.get(i)));
+                }
+                await(done.get(i));
+            }
+        } finally {
+            pool.shutdownNow();
+            awaitTermination(pool);
+        }
+    }
+
+    private static void writeChart(ReportBlock.Figure f, String name, Path dir, Path print, int dpi)
+            throws IOException {
+        if (print == null) {
+            PngWriter.writeForPrint(f.chart().get(), dir.resolve(name));
+            return;
+        }
+        PngWriter.write(f.chart().get(), dir.resolve(name), dpi);
+        PngWriter.writeForPrint(f.chart().get(), print.resolve(name.replace('/', '_')));
+    }
+
+    private static void await(Future<?> task) throws IOException {
+        try {
+            task.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IOException("interrupted while drawing the charts", e);
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof IOException io) {
+                throw io;
+            } else if (cause instanceof RuntimeException re) {
+                throw re;
+            } else if (cause instanceof Error err) {
+                throw err;
+            }
+            throw new IOException(cause);
+        }
+    }
+
+    /** The output folder is deleted on failure only once no task can still write into it. */
+    private static void awaitTermination(ExecutorService pool) throws IOException {
+        try {
+            if (!pool.awaitTermination(10, TimeUnit.MINUTES)) {
+                throw new IOException("chart rendering did not stop");
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IOException("interrupted while stopping chart rendering", e);
+        }
     }
 
     private static void install(Path tmp, Path out, Path old) throws IOException {

@@ -105,6 +105,11 @@ class ReportWriterTest {
             assertArrayEquals(Files.readAllBytes(a.resolve(f)), Files.readAllBytes(b.resolve(f)), f);
         }
         assertEquals(listing(a.resolve("charts")), listing(b.resolve("charts")));
+        // Drawn on two threads in whatever order they finish, the charts are still the same bytes.
+        for (String f : listing(a.resolve("charts"))) {
+            assertArrayEquals(Files.readAllBytes(a.resolve("charts").resolve(f)),
+                    Files.readAllBytes(b.resolve("charts").resolve(f)), f);
+        }
     }
 
     @Test

@@ -23,6 +23,7 @@ public final class BlankChart {
     static final String PRECEDING = "Preceding sample";
     static final String FAILED = "Failed blank";
     static final int MAX_LABELS = 12;
+    static final int MAX_BOUNDARIES = 200;
 
     private BlankChart() {
     }
@@ -43,7 +44,11 @@ public final class BlankChart {
         chart.getStyler().setYAxisDecimalPattern("#,##0.#####");
 
         int n = results.size();
-        int[] keep = PointBudget.indices(n, PointBudget.DEFAULT);
+        boolean[] flagged = new boolean[n];
+        for (int i = 0; i < n; i++) {
+            flagged[i] = results.get(i).verdict().verdict() != Verdict.PASS;
+        }
+        int[] keep = PointBudget.thinned(flagged, PointBudget.DEFAULT);
         Points detected = new Points();
         Points censored = new Points();
         Points preceding = new Points();
@@ -65,12 +70,8 @@ public final class BlankChart {
                 warn.add(x, r.threshold().warn());
                 fail.add(x, r.threshold().fail());
             }
-        }
-        // Failures are always drawn, even when the passing points are thinned.
-        for (int i = 0; i < n; i++) {
-            BlankResult r = results.get(i);
-            if (r.verdict().verdict() == Verdict.FAIL && r.observation().value().value() > 0) {
-                failed.add(i + 1, r.observation().value().value());
+            if (r.verdict().verdict() == Verdict.FAIL && v > 0) {
+                failed.add(x, v);
             }
         }
         preceding.addTo(chart, PRECEDING, ChartStyle.GREY, SeriesMarkers.DIAMOND);
@@ -80,17 +81,30 @@ public final class BlankChart {
         censored.addTo(chart, "Blank < DL (at DL)", ChartStyle.SKY_BLUE, SeriesMarkers.TRIANGLE_DOWN);
         failed.addTo(chart, FAILED, ChartStyle.FAILURE, SeriesMarkers.CIRCLE);
         labelFailures(chart, results);
-
-        for (int i = 1; i < n; i++) {
-            if (!results.get(i).observation().batch().equals(results.get(i - 1).observation().batch())) {
-                chart.addAnnotation(new AnnotationLine(i + 0.5, true, false));
-            }
+        if (keep.length < n) {
+            ChartNote.add(chart, ChartNotes.count(n, keep.length, PointBudget.count(flagged),
+                    PointBudget.flaggedAmong(flagged, keep), "warnings and failures"));
         }
+
+        batchBoundaries(chart, results);
         if (n > 0) {
             chart.getStyler().setXAxisMin(0.5);
             chart.getStyler().setXAxisMax(n + 0.5);
         }
         return chart;
+    }
+
+    /** Dotted lines between batches, left out when there are more than {@value #MAX_BOUNDARIES} (they would merge). */
+    private static void batchBoundaries(XYChart chart, List<BlankResult> results) {
+        List<Double> at = new ArrayList<>();
+        for (int i = 1; i < results.size() && at.size() <= MAX_BOUNDARIES; i++) {
+            if (!results.get(i).observation().batch().equals(results.get(i - 1).observation().batch())) {
+                at.add(i + 0.5);
+            }
+        }
+        if (at.size() <= MAX_BOUNDARIES) {
+            at.forEach(x -> chart.addAnnotation(new AnnotationLine(x, true, false)));
+        }
     }
 
     /** Failed blanks are named on the chart (the first {@value #MAX_LABELS}), so a reader can find them in the tables. */

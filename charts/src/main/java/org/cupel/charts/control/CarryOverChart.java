@@ -5,6 +5,7 @@ import java.util.List;
 import org.cupel.assay.Numbers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
+import org.cupel.charts.PointBudget;
 import org.cupel.control.BlankResult;
 import org.cupel.control.CarryOverRelation;
 import org.cupel.control.Verdict;
@@ -43,17 +44,25 @@ public final class CarryOverChart {
         double ymin = Double.POSITIVE_INFINITY;
         double xmin = Double.POSITIVE_INFINITY;
         double xmax = 0;
-        int drawn = 0;
-        for (BlankResult r : results) {
+        List<BlankResult> plotted = results.stream().filter(CarryOverChart::plottable).toList();
+        int drawn = plotted.size();
+        boolean[] flagged = new boolean[drawn];
+        for (int i = 0; i < drawn; i++) {
+            flagged[i] = plotted.get(i).verdict().verdict() == Verdict.FAIL;
+        }
+        // The axis ranges come from every plotted blank; the points drawn from the budget.
+        for (BlankResult r : plotted) {
             double x = r.observation().precedingGrade().value();
             double y = r.observation().value().value();
-            if (r.observation().precedingGrade().isMissing() || !(x > 0) || !(y > 0)) {
-                continue;
-            }
-            drawn++;
             xmin = Math.min(xmin, x);
             ymin = Math.min(ymin, y);
             xmax = Math.max(xmax, x);
+        }
+        int[] keep = PointBudget.thinned(flagged, PointBudget.DEFAULT);
+        for (int i : keep) {
+            BlankResult r = plotted.get(i);
+            double x = r.observation().precedingGrade().value();
+            double y = r.observation().value().value();
             if (r.verdict().verdict() == Verdict.FAIL) {
                 failed.add(x, y);
             } else if (r.observation().value().isDetected()) {
@@ -71,8 +80,16 @@ public final class CarryOverChart {
         pass.addTo(chart, "Blank", ChartStyle.DATA, SeriesMarkers.CIRCLE);
         censored.addTo(chart, "Blank < DL (at DL)", ChartStyle.SKY_BLUE, SeriesMarkers.TRIANGLE_DOWN);
         failed.addTo(chart, BlankChart.FAILED, ChartStyle.FAILURE, SeriesMarkers.CIRCLE);
-
+        if (keep.length < drawn) {
+            ChartNote.add(chart, ChartNotes.count(drawn, keep.length, PointBudget.count(flagged),
+                    PointBudget.flaggedAmong(flagged, keep), "failed blanks"));
+        }
         return chart;
+    }
+
+    private static boolean plottable(BlankResult r) {
+        return !r.observation().precedingGrade().isMissing() && r.observation().precedingGrade().value() > 0
+                && r.observation().value().value() > 0;
     }
 
     /** "= 0.032" or "< 0.0001". */

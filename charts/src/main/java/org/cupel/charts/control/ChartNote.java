@@ -12,6 +12,9 @@ final class ChartNote {
         c.getStyler().setAnnotationTextPanelBackgroundColor(new java.awt.Color(255, 255, 255, 225))
                 .setAnnotationTextPanelBorderColor(new java.awt.Color(200, 200, 200))
                 .setAnnotationTextPanelFont(new java.awt.Font("DejaVu Sans", java.awt.Font.PLAIN, 12));
-        c.addAnnotation(new AnnotationTextPanel(text, 95, c.getHeight() - 72, true));
+        String wrapped = org.cupel.charts.ChartNotes.wrap(text, 110);
+        int extraLines = (int) wrapped.chars().filter(ch -> ch == '\n').count();
+        // The panel is anchored at its bottom edge: lower it by a line per extra line to keep its top fixed.
+        c.addAnnotation(new AnnotationTextPanel(wrapped, 95, c.getHeight() - 72 - 15 * extraLines, true));
     }
 }

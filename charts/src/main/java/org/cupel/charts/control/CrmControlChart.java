@@ -27,6 +27,7 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  */
 public final class CrmControlChart {
     private static final double SPAN_SD = 5;
+    private static final int MAX_LABELS = BlankChart.MAX_LABELS;
 
     private CrmControlChart() {
     }
@@ -65,20 +66,26 @@ public final class CrmControlChart {
             line(c, "project -2 SD", ends, s.projectLimits().warnLow(), ChartStyle.SECOND, ChartStyle.dotted(1.6f),
                     false);
         }
-        int[] shown = PointBudget.indices(n, PointBudget.DEFAULT);
-        points(c, rs, shown, "Pass", r -> r.verdict() == Verdict.PASS, ChartStyle.DATA, SeriesMarkers.CIRCLE, lo, hi);
-        points(c, rs, allIndices(n), "Warn", r -> r.verdict() == Verdict.WARN && !r.isSwap(), ChartStyle.WARNING,
+        boolean[] flagged = new boolean[n];
+        for (int i = 0; i < n; i++) {
+            flagged[i] = rs.get(i).verdict() != Verdict.PASS || rs.get(i).isSwap();
+        }
+        int[] shown = PointBudget.thinned(flagged, PointBudget.DEFAULT);
+        points(c, rs, shown, "Pass", r -> r.verdict() == Verdict.PASS, ChartStyle.DATA,
+                SeriesMarkers.CIRCLE, lo, hi);
+        points(c, rs, shown, "Warn", r -> r.verdict() == Verdict.WARN && !r.isSwap(), ChartStyle.WARNING,
                 SeriesMarkers.DIAMOND, lo, hi);
-        points(c, rs, allIndices(n), "Fail", r -> r.verdict() == Verdict.FAIL, ChartStyle.FAILURE,
+        points(c, rs, shown, "Fail", r -> r.verdict() == Verdict.FAIL, ChartStyle.FAILURE,
                 SeriesMarkers.SQUARE, lo, hi);
-        points(c, rs, allIndices(n), "Swap", CrmResult::isSwap, ChartStyle.REDDISH_PURPLE,
+        points(c, rs, shown, "Swap", CrmResult::isSwap, ChartStyle.REDDISH_PURPLE,
                 SeriesMarkers.TRIANGLE_UP, lo, hi);
         batchBoundaries(c, rs);
-        offScaleLabels(c, rs, lo, hi);
-        // Only passing results are thinned; every flagged result is drawn.
-        long drawn = rs.stream().filter(r -> r.verdict() != Verdict.PASS).count()
-                + java.util.Arrays.stream(shown).filter(i -> rs.get(i).verdict() == Verdict.PASS).count();
-        String note = ChartNotes.count(n, drawn) + String.format(Locale.ROOT,
+        int offScale = offScaleLabels(c, rs, lo, hi);
+        String note = ChartNotes.count(n, shown.length, PointBudget.count(flagged),
+                PointBudget.flaggedAmong(flagged, shown), "warnings, failures and swaps")
+                + (offScale > MAX_LABELS ? String.format(Locale.ROOT, "; first %d of %d off-scale results labelled",
+                MAX_LABELS, offScale) : "")
+                + String.format(Locale.ROOT,
                 "; certified %s %s, limits ±2 and ±3 × certificate SD %s %s", Numbers.significant(lim.certified(), 4), unit,
                 Numbers.significant(lim.sd(), 3), unit)
                 + (s.projectLimits().available() ? "; own ±2 SD from the project's " + s.projectLimits().n()
@@ -93,10 +100,11 @@ public final class CrmControlChart {
         s.setMarker(SeriesMarkers.NONE).setLineColor(color).setLineStyle(stroke).setShowInLegend(legend);
     }
 
+    /** The running mean as a line through at most {@link PointBudget#DEFAULT} evenly spaced results. */
     private static void runningMean(XYChart c, List<CrmResult> rs) {
         List<Double> x = new ArrayList<>();
         List<Double> y = new ArrayList<>();
-        for (int i = 0; i < rs.size(); i++) {
+        for (int i : PointBudget.indices(rs.size(), PointBudget.DEFAULT)) {
             if (!rs.get(i).isSwap() && Double.isFinite(rs.get(i).runningMean())) {
                 x.add(i + 1.0);
                 y.add(rs.get(i).runningMean());
@@ -145,23 +153,18 @@ public final class CrmControlChart {
         }
     }
 
-    private static void offScaleLabels(XYChart c, List<CrmResult> rs, double lo, double hi) {
+    /** Labels the first {@value #MAX_LABELS} results beyond the value axis; returns how many there are. */
+    private static int offScaleLabels(XYChart c, List<CrmResult> rs, double lo, double hi) {
+        int count = 0;
         for (int i = 0; i < rs.size(); i++) {
             double v = rs.get(i).point().value().value();
-            if (v < lo || v > hi) {
+            if ((v < lo || v > hi) && ++count <= MAX_LABELS) {
                 double y = v > hi ? hi - (hi - lo) * 0.045 : lo + (hi - lo) * 0.045;
                 String label = rs.get(i).point().value().display() + " off scale"
                         + (rs.get(i).isSwap() ? ": " + rs.get(i).swapWith() + "?" : "");
                 c.addAnnotation(new AnnotationText(label, i + 1.0, y, false));
             }
         }
-    }
-
-    private static int[] allIndices(int n) {
-        int[] a = new int[n];
-        for (int i = 0; i < n; i++) {
-            a[i] = i;
-        }
-        return a;
+        return count;
     }
 }

@@ -48,10 +48,18 @@ public final class CrmZScoreChart {
         double maxX = 1;
         long total = 0;
         long drawn = 0;
+        long flagged = 0;
+        long flaggedDrawn = 0;
         int k = 0;
         for (SeriesReview s : series) {
             List<CrmResult> judged = s.results().stream().filter(r -> !r.isSwap()).toList();
-            int[] idx = PointBudget.indices(judged.size(), PointBudget.DEFAULT / Math.max(1, series.size()));
+            boolean[] beyond = new boolean[judged.size()];
+            for (int i = 0; i < beyond.length; i++) {
+                beyond[i] = Math.abs(judged.get(i).z()) > 2;
+            }
+            int[] idx = PointBudget.thinned(beyond, PointBudget.DEFAULT / Math.max(1, series.size()));
+            flagged += PointBudget.count(beyond);
+            flaggedDrawn += PointBudget.flaggedAmong(beyond, idx);
             double[] x = new double[idx.length];
             double[] y = new double[idx.length];
             for (int i = 0; i < idx.length; i++) {
@@ -76,7 +84,7 @@ public final class CrmZScoreChart {
         band(c, "±3 SD", 3, ChartStyle.FAILURE);
         XYSeries zero = c.addSeries("z = 0", ends, new double[] {0, 0});
         zero.setMarker(SeriesMarkers.NONE).setLineColor(ChartStyle.REFERENCE).setLineStyle(ChartStyle.solid(1.2f));
-        ChartNote.add(c, ChartNotes.count(total, drawn) + "; swaps left out; |z| clipped at 6");
+        ChartNote.add(c, ChartNotes.count(total, drawn, flagged, flaggedDrawn, "results with |z| > 2") + "; swaps left out; |z| clipped at 6");
         return c;
     }
 

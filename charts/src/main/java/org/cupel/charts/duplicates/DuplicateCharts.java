@@ -29,6 +29,9 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  */
 public final class DuplicateCharts {
     private static final int LINE_POINTS = 60;
+    private static final String BEYOND_HARD = "beyond the HARD limit";
+    /** Group medians drawn at most: enough to trace the median curve, few enough not to hide the pairs. */
+    private static final int MEDIANS_BUDGET = 300;
 
     private DuplicateCharts() {
     }
@@ -38,13 +41,14 @@ public final class DuplicateCharts {
         double[] a = r.pairs().absoluteA();
         double[] b = r.pairs().absoluteB();
         XYChart chart = base(title(r, "original vs duplicate"), "Original " + label(r), "Duplicate " + label(r));
-        int[] idx = thinnedByX(a, b);
+        double h = r.precision().hardLimit();
+        boolean[] beyond = beyondHard(a, b, h);
+        int[] idx = thinnedByX(a, b, beyond);
         double[] x = PointBudget.pick(a, idx);
         double[] y = PointBudget.pick(b, idx);
         points(chart, "pairs", x, y, ChartStyle.DATA);
         double lo = positiveMin(a, b);
         double hi = max(a, b);
-        double h = r.precision().hardLimit();
         double[] line = span(lo, hi, logAxes);
         line(chart, "1:1", line, scale(line, 1), ChartStyle.REFERENCE, ChartStyle.solid(1.5f));
         String hard = "HARD = " + pct(h, 0);
@@ -61,7 +65,7 @@ public final class DuplicateCharts {
         }
         chart.getStyler().setXAxisLogarithmic(logAxes);
         chart.getStyler().setYAxisLogarithmic(logAxes);
-        note(chart, ChartNotes.count(a.length, x.length) + " pairs with two detected values");
+        note(chart, countNote(beyond, idx, BEYOND_HARD) + " pairs with two detected values");
         return chart;
     }
 
@@ -80,7 +84,13 @@ public final class DuplicateCharts {
             cum[i] = 100.0 * (i + 1) / n;
         }
         XYChart chart = base(title(r, "ranked HARD"), "HARD (%)", "Cumulative % of pairs");
-        int[] idx = PointBudget.indices(n, PointBudget.DEFAULT);
+        double limitFraction = r.precision().hardLimit();
+        boolean[] beyond = new boolean[n];
+        for (int i = 0; i < n; i++) {
+            beyond[i] = hard[i] > 100 * limitFraction;
+        }
+        // Sorted already: the even share keeps the curve's ends, and its whole tail past the limit is drawn.
+        int[] idx = PointBudget.thinned(beyond, PointBudget.DEFAULT);
         XYSeries s = chart.addSeries("pairs", n == 0 ? new double[] {Double.NaN} : PointBudget.pick(hard, idx),
                 n == 0 ? new double[] {Double.NaN} : PointBudget.pick(cum, idx));
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Step);
@@ -98,7 +108,7 @@ public final class DuplicateCharts {
         Estimate within = r.precision().percentWithinLimit();
         String verdict = within.available() ? String.format(Locale.ROOT, "%.1f %% of pairs within the limit: %s",
                 within.value(), r.precision().rule().name().toLowerCase(Locale.ROOT).replace('_', ' ')) : within.note();
-        note(chart, ChartNotes.count(n, idx.length) + "; " + verdict);
+        note(chart, countNote(beyond, idx, BEYOND_HARD) + "; " + verdict);
         return chart;
     }
 
@@ -125,13 +135,19 @@ public final class DuplicateCharts {
         m = Arrays.copyOf(m, k);
         d = Arrays.copyOf(d, k);
         XYChart chart = base(title(r, "Thompson–Howarth"), "Pair mean " + label(r), "|Original − duplicate| " + label(r));
-        int[] idx = thinnedByX(m, d);
+        boolean[] above99 = aboveLine(m, d, model);
+        int[] idx = thinnedByX(m, d, above99);
         points(chart, "pairs", PointBudget.pick(m, idx), PointBudget.pick(d, idx), new Color(0, 114, 178, 140));
         String extra = "";
         if (model.available()) {
             PairGroups g = model.groups();
-            double[][] positive = positiveY(g.means(), g.medianAbsDiff());
-            XYSeries med = chart.addSeries("group medians (" + g.groupSize() + " pairs)",
+            double[][] all = positiveY(g.means(), g.medianAbsDiff());
+            // Group medians come in order of pair mean: even thinning keeps the curve they trace and its ends.
+            int[] gi = PointBudget.indices(all[0].length, MEDIANS_BUDGET);
+            double[][] positive = {PointBudget.pick(all[0], gi), PointBudget.pick(all[1], gi)};
+            XYSeries med = chart.addSeries("group medians (" + g.groupSize() + " pairs"
+                    + (gi.length < all[0].length ? String.format(Locale.US, "; %,d of %,d drawn", gi.length,
+                    all[0].length) : "") + ")",
                     positive[0].length == 0 ? new double[] {Double.NaN} : positive[0],
                     positive[1].length == 0 ? new double[] {Double.NaN} : positive[1]);
             med.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
@@ -152,8 +168,8 @@ public final class DuplicateCharts {
             extra = String.format(Locale.ROOT, "; σc = %.3g + %.3g·c; above 90 %% line %d (exp. %.0f), above 99 %% line %d (exp. %.0f)",
                     pm.sigma0(), pm.k(), model.line90().exceedances(), model.line90().expected(),
                     model.line99().exceedances(), model.line99().expected());
-            if (positive[0].length < g.groups()) {
-                extra += "; " + (g.groups() - positive[0].length) + " groups with median |d| = 0 not drawn";
+            if (all[0].length < g.groups()) {
+                extra += "; " + (g.groups() - all[0].length) + " groups with median |d| = 0 not drawn";
             }
             if (g.dropped() > 0) {
                 extra += "; " + g.dropped() + " top pairs outside a full group";
@@ -164,7 +180,7 @@ public final class DuplicateCharts {
         chart.getStyler().setXAxisLogarithmic(true);
         chart.getStyler().setYAxisLogarithmic(true);
         String zeros = n > k ? "; " + (n - k) + " pairs with |d| = 0 not drawn on log axes" : "";
-        note(chart, ChartNotes.count(k, idx.length) + zeros + extra);
+        note(chart, countNote(above99, idx, "above the 99 % line") + zeros + extra);
         return chart;
     }
 
@@ -181,7 +197,8 @@ public final class DuplicateCharts {
         }
         XYChart chart = base(title(r, "relative difference"), "Pair mean " + label(r),
                 "(Duplicate − original) / mean (%)");
-        int[] idx = thinnedByX(m, rel);
+        boolean[] beyond = beyondHard(a, b, r.precision().hardLimit());
+        int[] idx = thinnedByX(m, rel, beyond);
         points(chart, "pairs", PointBudget.pick(m, idx), PointBudget.pick(rel, idx), ChartStyle.DATA);
         double[] x = {positiveMin(m, m), max(m, m)};
         line(chart, "zero", x, new double[] {0, 0}, ChartStyle.REFERENCE, ChartStyle.solid(1f));
@@ -197,7 +214,7 @@ public final class DuplicateCharts {
         }
         // Log axes label decades only: over less than a decade and a half they would show one tick label.
         chart.getStyler().setXAxisLogarithmic(x[1] / x[0] > 30);
-        note(chart, ChartNotes.count(n, idx.length) + "; " + bias.verdict());
+        note(chart, countNote(beyond, idx, BEYOND_HARD) + "; " + bias.verdict());
         return chart;
     }
 
@@ -228,29 +245,12 @@ public final class DuplicateCharts {
     }
 
     private static void note(XYChart chart, String text) {
-        String wrapped = wrap(text, 95);
+        String wrapped = ChartNotes.wrap(text, 95);
         int extraLines = (int) wrapped.chars().filter(c -> c == '\n').count();
         // The panel is anchored at its bottom edge: lower it by a line per extra line to keep its top fixed.
         AnnotationTextPanel panel = new AnnotationTextPanel(wrapped, 110, ChartStyle.HEIGHT - 90 - 15 * extraLines,
                 true);
         chart.addAnnotation(panel);
-    }
-
-    private static String wrap(String text, int width) {
-        StringBuilder out = new StringBuilder();
-        int col = 0;
-        for (String part : text.split("; ")) {
-            if (col > 0 && col + part.length() + 2 > width) {
-                out.append('\n');
-                col = 0;
-            } else if (col > 0) {
-                out.append("; ");
-                col += 2;
-            }
-            out.append(part);
-            col += part.length();
-        }
-        return out.toString();
     }
 
     private static void points(XYChart chart, String name, double[] x, double[] y, Color color) {
@@ -269,17 +269,43 @@ public final class DuplicateCharts {
         s.setLineStyle(stroke);
     }
 
-    /** Sort by x, then thin evenly: the extremes of x are always drawn. */
-    private static int[] thinnedByX(double[] x, double[] y) {
-        Integer[] order = new Integer[x.length];
+    /**
+     * Sort by x (ties by y), then draw every flagged pair and thin the rest evenly: the extremes of x are
+     * always drawn, and the same pairs in any order give the same chart.
+     */
+    private static int[] thinnedByX(double[] x, double[] y, boolean[] flagged) {
+        int[] order = PointBudget.orderByXThenY(x, y);
+        boolean[] sortedFlags = new boolean[order.length];
         for (int i = 0; i < order.length; i++) {
-            order[i] = i;
+            sortedFlags[i] = flagged[order[i]];
         }
-        Arrays.sort(order, (p, q) -> Double.compare(x[p], x[q]));
-        int[] keep = PointBudget.indices(order.length, PointBudget.DEFAULT);
-        int[] out = new int[keep.length];
-        for (int i = 0; i < keep.length; i++) {
-            out[i] = order[keep[i]];
+        return PointBudget.pick(order, PointBudget.thinned(sortedFlags, PointBudget.DEFAULT));
+    }
+
+    private static String countNote(boolean[] flagged, int[] drawn, String what) {
+        return ChartNotes.count(flagged.length, drawn.length, PointBudget.count(flagged),
+                PointBudget.flaggedAmong(flagged, drawn), what);
+    }
+
+    /** Pairs whose HARD exceeds the type's limit. */
+    private static boolean[] beyondHard(double[] a, double[] b, double limit) {
+        boolean[] out = new boolean[a.length];
+        for (int i = 0; i < a.length; i++) {
+            out[i] = PairMeasures.hard(a[i], b[i]) > limit;
+        }
+        return out;
+    }
+
+    /** Pairs above the fitted 99 % line of the Thompson–Howarth model; none when there is no model. */
+    private static boolean[] aboveLine(double[] m, double[] d, PrecisionModelResult model) {
+        boolean[] out = new boolean[m.length];
+        if (!model.available()) {
+            return out;
+        }
+        PrecisionModel pm = model.thompsonHowarth().model();
+        double factor = model.line99().factor();
+        for (int i = 0; i < m.length; i++) {
+            out[i] = d[i] > factor * Math.max(0.0, pm.sigmaAt(m[i]));
         }
         return out;
     }
