@@ -3,7 +3,6 @@ package org.cupel.report;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -16,6 +15,7 @@ import org.cupel.duplicates.DuplicateReport;
 import org.cupel.duplicates.DuplicateSettings;
 import org.cupel.duplicates.PairExtraction;
 import org.cupel.project.Project;
+import org.cupel.project.Workers;
 
 /**
  * The core analyses behind the appendix, computed side by side. The three chains share nothing but the
@@ -38,7 +38,7 @@ public record AppendixAnalyses(CrmReview crms, BatchReview batches, List<Analyte
                 DuplicateSettings.DEFAULTS);
         CensoredSettings censoredSettings = CensoredSettings.from(project.config());
         int threads = Math.max(1, Math.min(3, Runtime.getRuntime().availableProcessors()));
-        ExecutorService pool = Executors.newFixedThreadPool(threads, daemon());
+        ExecutorService pool = Executors.newFixedThreadPool(threads, Workers.daemonThreads("cupel-analysis"));
         try {
             // Submitted in this order on purpose: the pool's queue is first in, first out, so the CRM review
             // is always taken before the batch review that waits for it, even on a single thread.
@@ -46,15 +46,15 @@ public record AppendixAnalyses(CrmReview crms, BatchReview batches, List<Analyte
                     () -> Timed.of(() -> PairExtraction.analyse(project, duplicateSettings)));
             Future<Timed<CrmReview>> crms = pool.submit(() -> Timed.of(() -> CrmReview.of(project)));
             Future<Timed<BatchReview>> batches = pool.submit(() -> {
-                CrmReview reviewed = await(crms).value();
+                CrmReview reviewed = Workers.result(crms, "the analyses").value();
                 return Timed.of(() -> BatchReview.of(project, reviewed.outcomes()));
             });
             Future<Timed<List<AnalyteCensoring>>> censoring = pool.submit(
                     () -> Timed.of(() -> AnalyteCensoring.of(project, censoredSettings)));
-            Timed<CrmReview> crmReview = await(crms);
-            Timed<BatchReview> batchReview = await(batches);
-            Timed<List<AnalyteCensoring>> censored = await(censoring);
-            Timed<List<DuplicateReport>> pairs = await(duplicates);
+            Timed<CrmReview> crmReview = Workers.result(crms, "the analyses");
+            Timed<BatchReview> batchReview = Workers.result(batches, "the analyses");
+            Timed<List<AnalyteCensoring>> censored = Workers.result(censoring, "the analyses");
+            Timed<List<DuplicateReport>> pairs = Workers.result(duplicates, "the analyses");
             Map<String, Long> millis = new LinkedHashMap<>();
             millis.put("crm", crmReview.millis());
             millis.put("batches", batchReview.millis());
@@ -65,36 +65,6 @@ public record AppendixAnalyses(CrmReview crms, BatchReview batches, List<Analyte
         } finally {
             pool.shutdownNow();
         }
-    }
-
-    /**
-     * The result of a chain, or what it threw, unwrapped: an input error or an out-of-memory on a worker
-     * thread must reach the command line exactly as it would from the calling thread.
-     */
-    private static <T> T await(Future<T> future) {
-        try {
-            return future.get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted while waiting for the analyses", e);
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException runtime) {
-                throw runtime;
-            }
-            if (cause instanceof Error error) {
-                throw error;
-            }
-            throw new IllegalStateException(cause);
-        }
-    }
-
-    private static java.util.concurrent.ThreadFactory daemon() {
-        return task -> {
-            Thread t = new Thread(task, "cupel-analysis");
-            t.setDaemon(true);
-            return t;
-        };
     }
 
     private record Timed<T>(T value, long millis) {

@@ -21,6 +21,7 @@ import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
 import org.cupel.charts.PngWriter;
 import org.cupel.project.InputException;
+import org.cupel.project.Workers;
 
 /**
  * Writes the report's output folder: {@code index.html}, {@code appendix.pdf}, {@code charts/*.png},
@@ -125,11 +126,7 @@ public final class ReportWriter {
             throws IOException {
         List<ReportBlock.Figure> figures = files.figures();
         int threads = Math.max(1, Math.min(RENDER_THREADS, Runtime.getRuntime().availableProcessors()));
-        ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
-            Thread t = new Thread(r, "cupel-chart");
-            t.setDaemon(true);
-            return t;
-        });
+        ExecutorService pool = Executors.newFixedThreadPool(threads, Workers.daemonThreads("cupel-chart"));
         try {
             List<Future<?>> done = new ArrayList<>(figures.size());
             for (ReportBlock.Figure f : figures) {

@@ -3,7 +3,6 @@ package org.cupel.ingest;
 import java.util.ArrayDeque;
 import java.util.Deque;
 import java.util.List;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -11,6 +10,7 @@ import java.util.function.Consumer;
 import java.util.function.Function;
 import java.util.function.Supplier;
 import org.cupel.project.InputException;
+import org.cupel.project.Workers;
 
 /**
  * Reads items on a worker thread a few ahead of the caller, who receives them strictly in list order.
@@ -47,11 +47,7 @@ final class ReadAhead<I, R> {
             return;
         }
         ThreadLocal<Function<I, R>> perThread = ThreadLocal.withInitial(readers);
-        ExecutorService worker = Executors.newSingleThreadExecutor(task -> {
-            Thread t = new Thread(task, "cupel-read-ahead");
-            t.setDaemon(true);
-            return t;
-        });
+        ExecutorService worker = Executors.newSingleThreadExecutor(Workers.daemonThreads("cupel-read-ahead"));
         try {
             Deque<Future<Outcome<I, R>>> pending = new ArrayDeque<>();
             int next = 0;
@@ -60,7 +56,7 @@ final class ReadAhead<I, R> {
                     I item = items.get(next++);
                     pending.add(worker.submit(() -> read(perThread.get(), item)));
                 }
-                sink.accept(await(pending.removeFirst()));
+                sink.accept(Workers.result(pending.removeFirst(), "lab files"));
             }
         } finally {
             worker.shutdownNow();
@@ -72,24 +68,6 @@ final class ReadAhead<I, R> {
             return new Outcome<>(item, reader.apply(item), null);
         } catch (InputException e) {
             return new Outcome<>(item, null, e);
-        }
-    }
-
-    /** The worker's outcome; anything else it threw (a bug, an out-of-memory) is rethrown here unwrapped. */
-    private static <T> T await(Future<T> future) {
-        try {
-            return future.get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted while reading lab files", e);
-        } catch (ExecutionException e) {
-            if (e.getCause() instanceof RuntimeException runtime) {
-                throw runtime;
-            }
-            if (e.getCause() instanceof Error error) {
-                throw error;
-            }
-            throw new IllegalStateException(e.getCause());
         }
     }
 }
