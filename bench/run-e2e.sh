@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # End-to-end benchmark of Cupel (docs/performance.md): for each size, generate the demo project once
-# (kept under $BENCH_DIR), then run `cupel analyse` (ingest + every analysis of the QC appendix, no
+# (kept under $BENCH_DIR), then run `cupel analyse` through the ./cupel launcher (its JVM options) (ingest + every analysis of the QC appendix, no
 # charts) under /usr/bin/time and print wall time, peak RSS, the ingest/analysis split, rows/s and the
 # ingest rate in MB/s; with REPORT=1 also time the full `cupel report` (charts, HTML, PDF, CSV).
 #
@@ -40,7 +40,7 @@ for n in "${sizes[@]}"; do
   fi
   mb=$(du -cm "$project"/register.csv "$project"/lab | tail -1 | cut -f1)
   log="$dir/analyse-$n.log"
-  /usr/bin/time -v java "$heap" -Djava.awt.headless=true -jar "$jar" analyse "$project" --json-summary \
+  CUPEL_JAVA_OPTS="$heap" /usr/bin/time -v "$here/cupel" analyse "$project" --json-summary \
     >"$dir/analyse-$n.json" 2>"$log"
   wall=$(wall_seconds "$log")
   ingest=$(json_number "$dir/analyse-$n.json" ingestMillis)
@@ -53,7 +53,7 @@ for n in "${sizes[@]}"; do
   tr -d '\n ' <"$dir/analyse-$n.json" | grep -o '"stageMillis":{[^}]*}' | sed 's/^/          stages /'
   if [ "${REPORT:-0}" = 1 ]; then
     rlog="$dir/report-$n.log"
-    /usr/bin/time -v java "$heap" -Djava.awt.headless=true -jar "$jar" report "$project" --out "$dir/report-$n" \
+    CUPEL_JAVA_OPTS="$heap" /usr/bin/time -v "$here/cupel" report "$project" --out "$dir/report-$n" \
       --force --quiet >/dev/null 2>"$rlog"
     printf '          report with charts: wall %s s, peak RSS %s MB, %s charts, PDF %s MB\n' "$(wall_seconds "$rlog")" \
       "$(peak_rss_mb "$rlog")" "$(ls "$dir/report-$n/charts" | wc -l)" \

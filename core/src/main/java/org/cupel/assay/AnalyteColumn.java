@@ -19,6 +19,8 @@ public final class AnalyteColumn {
     private static final MissingReason[] REASONS = MissingReason.values();
 
     private final Analyte analyte;
+    private final int size;
+    /** The arrays may be longer than {@link #size}: they are the builder's own, handed over without a copy. */
     private final byte[] qualifiers;
     private final double[] values;
     private final double[] limits;
@@ -28,13 +30,15 @@ public final class AnalyteColumn {
     private final Map<Integer, List<MethodValue>> candidatesByRow;
     private final Map<Integer, String> selectionReasons;
 
-    private AnalyteColumn(Analyte analyte, int size, List<String> methods) {
+    private AnalyteColumn(Analyte analyte, int size, List<String> methods, byte[] qualifiers, double[] values,
+                          double[] limits, byte[] missing, short[] methodIndex) {
         this.analyte = analyte;
-        this.qualifiers = new byte[size];
-        this.values = new double[size];
-        this.limits = new double[size];
-        this.missing = new byte[size];
-        this.methodIndex = new short[size];
+        this.size = size;
+        this.qualifiers = qualifiers;
+        this.values = values;
+        this.limits = limits;
+        this.missing = missing;
+        this.methodIndex = methodIndex;
         this.methods = methods;
         this.candidatesByRow = new HashMap<>();
         this.selectionReasons = new HashMap<>();
@@ -45,7 +49,7 @@ public final class AnalyteColumn {
     }
 
     public int size() {
-        return values.length;
+        return size;
     }
 
     public AssayValue value(int row) {
@@ -92,7 +96,7 @@ public final class AnalyteColumn {
     /** How many reported values came from each method (missing values not counted), in first-seen order. */
     public Map<String, Integer> reportedMethodCounts() {
         int[] counts = new int[methods.size()];
-        for (int i = 0; i < values.length; i++) {
+        for (int i = 0; i < size; i++) {
             if (qualifiers[i] != Qualifier.MISSING.ordinal()) {
                 counts[methodIndex[i]]++;
             }
@@ -118,10 +122,12 @@ public final class AnalyteColumn {
     /**
      * Collects results row by row; a row may receive several. The first result of each row is kept in
      * primitive arrays (a million-row project has ten million cells: one object per cell would not fit a
-     * 2 GiB heap); only rows that receive a second result keep their candidates as objects.
+     * 2 GiB heap), which become the column's own; only rows that receive a second result keep their
+     * candidates as objects. The builder is spent by {@link #build}.
      */
     public static final class Builder {
         private static final byte ABSENT = -1;
+        private static final int NO_SOURCE = -1;
         private final Analyte analyte;
         private final List<String> methods = new ArrayList<>();
         private final Map<String, Short> methodIdx = new HashMap<>();
@@ -131,9 +137,14 @@ public final class AnalyteColumn {
         private double[] limits = new double[0];
         private byte[] missing = new byte[0];
         private short[] methodOf = new short[0];
-        private String[] sourceFile = new String[0];
-        private long[] sourceLine = new long[0];
-        private int[] sourceColumn = new int[0];
+        /** Source of each first result as a file number and line; a column other than 0 is rare and kept apart. */
+        private int[] sourceFile = new int[0];
+        private int[] sourceLine = new int[0];
+        private final Map<Integer, Integer> sourceColumn = new HashMap<>();
+        private final List<String> files = new ArrayList<>();
+        private String lastFile;
+        private int lastFileIndex;
+        private boolean built;
 
         private String lastMethod = "";
         private short lastMethodIndex;
@@ -165,6 +176,9 @@ public final class AnalyteColumn {
          */
         public void add(int row, Qualifier qualifier, double value, double limit, MissingReason reason, String method,
                         String file, long line, int column) {
+            if (built) {
+                throw new IllegalStateException("the column of " + analyte.name() + " has already been built");
+            }
             ensureCapacity(row + 1);
             if (qualifiers[row] == ABSENT) {
                 qualifiers[row] = (byte) qualifier.ordinal();
@@ -172,9 +186,16 @@ public final class AnalyteColumn {
                 limits[row] = limit;
                 missing[row] = (byte) reason.ordinal();
                 methodOf[row] = methodIndex(method == null ? "" : method);
-                sourceFile[row] = file;
-                sourceLine[row] = file == null ? 0 : line;
-                sourceColumn[row] = file == null ? 0 : column;
+                if (file == null) {
+                    sourceFile[row] = NO_SOURCE;
+                } else {
+                    sourceFile[row] = fileIndex(file);
+                    // A row index is an int, so a table's line numbers fit one too.
+                    sourceLine[row] = Math.toIntExact(line);
+                    if (column != 0) {
+                        sourceColumn.put(row, column);
+                    }
+                }
                 return;
             }
             List<MethodValue> all = several.get(row);
@@ -199,9 +220,23 @@ public final class AnalyteColumn {
             return lastMethodIndex;
         }
 
+        /** Files are numbered as results bring them; consecutive results mostly share one. */
+        private int fileIndex(String file) {
+            if (!file.equals(lastFile)) {
+                int found = files.lastIndexOf(file);
+                if (found < 0) {
+                    files.add(file);
+                    found = files.size() - 1;
+                }
+                lastFile = file;
+                lastFileIndex = found;
+            }
+            return lastFileIndex;
+        }
+
         private MethodValue first(int row) {
-            SourceLocation where = sourceFile[row] == null ? null
-                    : new SourceLocation(sourceFile[row], sourceLine[row], sourceColumn[row]);
+            SourceLocation where = sourceFile[row] == NO_SOURCE ? null : new SourceLocation(files.get(sourceFile[row]),
+                    sourceLine[row], sourceColumn.getOrDefault(row, 0));
             return new MethodValue(methods.get(methodOf[row]), new AssayValue(QUALIFIERS[qualifiers[row]],
                     values[row], limits[row], REASONS[missing[row]]), where);
         }
@@ -220,31 +255,40 @@ public final class AnalyteColumn {
             methodOf = Arrays.copyOf(methodOf, capacity);
             sourceFile = Arrays.copyOf(sourceFile, capacity);
             sourceLine = Arrays.copyOf(sourceLine, capacity);
-            sourceColumn = Arrays.copyOf(sourceColumn, capacity);
         }
 
+        /**
+         * The column of {@code rowCount} rows: rows without a result become missing values
+         * ({@link MissingReason#NOT_ANALYSED}) in place and the arrays are handed over, so that the builder's
+         * memory is not needed twice; rows with several results get the candidate {@code selector} chooses.
+         */
         public AnalyteColumn build(int rowCount, MethodSelector selector) {
-            AnalyteColumn col = new AnalyteColumn(analyte, rowCount, methods);
-            Arrays.fill(col.qualifiers, (byte) Qualifier.MISSING.ordinal());
-            Arrays.fill(col.values, Double.NaN);
-            Arrays.fill(col.limits, Double.NaN);
-            Arrays.fill(col.missing, (byte) MissingReason.NOT_ANALYSED.ordinal());
-            int filled = Math.min(rowCount, qualifiers.length);
-            for (int row = 0; row < filled; row++) {
+            if (built) {
+                throw new IllegalStateException("the column of " + analyte.name() + " has already been built");
+            }
+            built = true;
+            ensureCapacity(rowCount);
+            byte missingQualifier = (byte) Qualifier.MISSING.ordinal();
+            byte notAnalysed = (byte) MissingReason.NOT_ANALYSED.ordinal();
+            for (int row = 0; row < rowCount; row++) {
                 if (qualifiers[row] == ABSENT) {
-                    continue;
-                }
-                List<MethodValue> all = several.get(row);
-                if (all == null) {
-                    col.qualifiers[row] = qualifiers[row];
-                    col.values[row] = values[row];
-                    col.limits[row] = limits[row];
-                    col.missing[row] = missing[row];
-                    col.methodIndex[row] = methodOf[row];
-                } else {
-                    choose(col, row, all, selector);
+                    qualifiers[row] = missingQualifier;
+                    values[row] = Double.NaN;
+                    limits[row] = Double.NaN;
+                    missing[row] = notAnalysed;
+                    methodOf[row] = 0;
                 }
             }
+            AnalyteColumn col = new AnalyteColumn(analyte, rowCount, methods, qualifiers, values, limits, missing,
+                    methodOf);
+            int[] rows = several.keySet().stream().mapToInt(Integer::intValue).filter(r -> r < rowCount).sorted()
+                    .toArray();
+            for (int row : rows) {
+                choose(col, row, several.get(row), selector);
+            }
+            sourceFile = null;
+            sourceLine = null;
+            several.clear();
             return col;
         }
 

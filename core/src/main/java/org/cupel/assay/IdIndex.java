@@ -38,6 +38,18 @@ public final class IdIndex {
         return slots[s] == EMPTY ? -1 : (int) slots[s];
     }
 
+    /**
+     * The number of {@code key}, or -1, trying {@code guess} first: lab rows mostly come in register order,
+     * so the entry after the last one found usually matches, and comparing it reads memory in order where a
+     * hash probe into a table of a million IDs is a cache miss.
+     */
+    public int indexOf(String key, int guess) {
+        if (guess >= 0 && guess < size && keys[guess].equals(key)) {
+            return guess;
+        }
+        return indexOf(key);
+    }
+
     /** Adds {@code key} and returns its number; when it is already present, returns {@code -1 - its number}. */
     public int add(String key) {
         if ((size + 1) * 10L > slots.length * 7L) {

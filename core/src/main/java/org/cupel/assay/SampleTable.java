@@ -13,6 +13,7 @@ import java.util.OptionalInt;
  * built.
  */
 public final class SampleTable {
+    private static final QcRole[] ROLES = QcRole.values();
     private final String[] ids;
     private final int[] batchIndex;
     private final int[] positions;
@@ -64,7 +65,7 @@ public final class SampleTable {
     }
 
     public QcRole role(int row) {
-        return QcRole.values()[roles[row]];
+        return ROLES[roles[row]];
     }
 
     /** CRM code, original sample ID, or the empty string. */
@@ -105,27 +106,42 @@ public final class SampleTable {
     }
 
     public static Builder builder() {
-        return new Builder();
+        return new Builder(1024);
+    }
+
+    /** @param expectedRows rows expected (a hint that spares regrowing the arrays and the ID index) */
+    public static Builder builder(int expectedRows) {
+        return new Builder(Math.max(16, expectedRows));
     }
 
     /** Collects rows one at a time; sample IDs must be unique. The builder is spent by {@link #build()}. */
     public static final class Builder {
-        private int[] batchIndex = new int[1024];
-        private int[] positions = new int[1024];
-        private byte[] roles = new byte[1024];
-        private String[] references = new String[1024];
-        private int[] fileIndex = new int[1024];
-        private long[] lines = new long[1024];
+        private int[] batchIndex;
+        private int[] positions;
+        private byte[] roles;
+        private String[] references;
+        private int[] fileIndex;
+        private long[] lines;
         private int size;
         private final List<Batch> batches = new ArrayList<>();
         private final Map<Batch, Integer> batchIndexOf = new HashMap<>();
         private final List<String> files = new ArrayList<>();
         private final Map<String, Integer> fileIndexOf = new HashMap<>();
-        private final IdIndex rowById = new IdIndex(1024);
+        private final IdIndex rowById;
         private Batch lastBatch;
         private int lastBatchIndex;
         private String lastFile;
         private int lastFileIndex;
+
+        private Builder(int capacity) {
+            batchIndex = new int[capacity];
+            positions = new int[capacity];
+            roles = new byte[capacity];
+            references = new String[capacity];
+            fileIndex = new int[capacity];
+            lines = new long[capacity];
+            rowById = new IdIndex(capacity);
+        }
 
         /** Adds a sample and returns its row; throws if the ID is already present. */
         public int add(String id, Batch batch, int position, QcRole role, String reference, SourceLocation source) {

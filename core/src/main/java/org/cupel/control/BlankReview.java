@@ -75,6 +75,9 @@ public final class BlankReview {
         List<BlankResult> results = new ArrayList<>(observations.size());
         List<BlankResult> current = null;
         String currentAnalyte = null;
+        java.util.Optional<BlankThreshold> threshold = null;
+        String thresholdAnalyte = null;
+        double thresholdLimit = Double.NaN;
         for (BlankObservation o : observations) {
             if (!o.analyte().equals(currentAnalyte)) {
                 // Observations come analyte by analyte: look the analyte up once per run of it.
@@ -86,7 +89,14 @@ public final class BlankReview {
                 missing.merge(o.analyte(), 1, Integer::sum);
                 continue;
             }
-            BlankResult r = judge(o, settings);
+            if (threshold == null || !o.analyte().equals(thresholdAnalyte)
+                    || Double.compare(o.detectionLimit(), thresholdLimit) != 0) {
+                // The threshold depends only on the analyte and its limit, which change rarely from row to row.
+                thresholdAnalyte = o.analyte();
+                thresholdLimit = o.detectionLimit();
+                threshold = settings.thresholdFor(thresholdAnalyte, thresholdLimit);
+            }
+            BlankResult r = judge(o, settings, threshold.orElse(null));
             results.add(r);
             current.add(r);
         }
@@ -99,7 +109,11 @@ public final class BlankReview {
     }
 
     static BlankResult judge(BlankObservation o, BlankSettings settings) {
-        BlankThreshold t = settings.thresholdFor(o.analyte(), o.detectionLimit()).orElse(null);
+        return judge(o, settings, settings.thresholdFor(o.analyte(), o.detectionLimit()).orElse(null));
+    }
+
+    /** @param t the thresholds for the observation's analyte and limit, null when none can be set */
+    private static BlankResult judge(BlankObservation o, BlankSettings settings, BlankThreshold t) {
         BlankVerdict v = BlankVerdict.judge(o.value(), t, o.unit());
         AssayValue prev = o.precedingGrade();
         double ratio = Double.NaN;

@@ -49,8 +49,9 @@ public final class DetectionLimits {
         if (v.isMissing() || !Double.isNaN(v.limit())) {
             return v;
         }
-        double limit = byMethod.getOrDefault(method, Double.NaN);
-        return Double.isNaN(limit) ? v : new AssayValue(v.qualifier(), v.value(), limit, v.missingReason());
+        Double limit = byMethod.get(method);
+        return limit == null || Double.isNaN(limit) ? v
+                : new AssayValue(v.qualifier(), v.value(), limit, v.missingReason());
     }
 
     /** One sentence on where the limits come from, for reports. */

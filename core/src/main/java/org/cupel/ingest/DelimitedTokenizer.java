@@ -21,15 +21,22 @@ final class DelimitedTokenizer {
     private final Reader in;
     private final char delimiter;
     private final String file;
-    private final char[] buf = new char[1 << 16];
+    private static final int BUFFER_CHARS = 1 << 16;
+    private final char[] buf;
     private int pos;
     private int end;
     private long line = 1;
 
     DelimitedTokenizer(Reader in, char delimiter, String file) {
+        this(in, delimiter, file, BUFFER_CHARS);
+    }
+
+    /** @param length the input's length when known (text already in memory): a smaller buffer then suffices */
+    DelimitedTokenizer(Reader in, char delimiter, String file, int length) {
         this.in = in;
         this.delimiter = delimiter;
         this.file = file;
+        this.buf = new char[Math.max(16, Math.min(BUFFER_CHARS, length))];
     }
 
     /**

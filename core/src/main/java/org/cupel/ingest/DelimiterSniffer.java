@@ -39,15 +39,16 @@ final class DelimiterSniffer {
 
     /** {header row width (0 when none), widest row width} when split on {@code d}. */
     private static int[] widths(String prefix, char d, Predicate<List<String>> isHeaderRow) {
-        DelimitedTokenizer t = new DelimitedTokenizer(new StringReader(prefix), d, "");
+        DelimitedTokenizer t = new DelimitedTokenizer(new StringReader(prefix), d, "", prefix.length() + 1);
         CellRow r = new CellRow();
         int header = 0;
         int widest = 0;
         try {
             for (int i = 0; i < SAMPLE_ROWS && t.next(r); i++) {
                 widest = Math.max(widest, r.size());
-                if (header == 0 && r.size() > 1 && isHeaderRow.test(r.cells())) {
-                    header = r.size();
+                if (r.size() > 1 && isHeaderRow.test(r.cells())) {
+                    // A header decides the delimiter whatever the widest row is (see sniff): stop here.
+                    return new int[] {r.size(), widest};
                 }
             }
         } catch (InputException cutOff) {

@@ -30,16 +30,29 @@ final class SampleJoin {
     private final SampleRegister register;
     private final Map<String, GradeUnit> units;
     private final ExceptionRegister exceptions;
-    private final SampleTable.Builder samples = SampleTable.builder();
+    private final SampleTable.Builder samples;
     private final Map<String, AnalyteColumn.Builder> columns = new LinkedHashMap<>();
     private final List<FileAccount> accounts = new ArrayList<>();
     private final Set<String> excludedLabIds = new HashSet<>();
+    /** Register IDs that could not be used, or null when there are none (most projects: no look-up per row). */
+    private final Set<String> rejectedIds;
+    /**
+     * The sample-table row of each register entry, -1 until its first lab row: a register ID is found once,
+     * in the register, instead of again in the sample table.
+     */
+    private final int[] rowOfEntry;
+    /** The register entry of the previous lab row, whose successor is tried first. */
+    private int lastEntry = -1;
 
     /** @param register null when the project has none */
     SampleJoin(SampleRegister register, Map<String, GradeUnit> units, ExceptionRegister exceptions) {
         this.register = register;
         this.units = units;
         this.exceptions = exceptions;
+        this.rejectedIds = register == null || register.rejectedIds().isEmpty() ? null : register.rejectedIds();
+        this.rowOfEntry = new int[register == null ? 0 : register.size()];
+        java.util.Arrays.fill(rowOfEntry, -1);
+        this.samples = SampleTable.builder(expectedRows());
     }
 
     void add(LabFile file) {
@@ -50,7 +63,7 @@ final class SampleJoin {
         FileColumns cols = new FileColumns(file.columns());
         for (int i = 0; i < rows.size(); i++) {
             String id = rows.sampleId(i);
-            if (register != null && register.rejectedIds().contains(id)) {
+            if (rejectedIds != null && rejectedIds.contains(id)) {
                 exceptions.exclude(new SourceLocation(file.file(), rows.line(i), 0), id, id,
                         "the sample's register row could not be used (see the register), so its result is left out",
                         "a usable register row", "correct the sample's row in the register");
@@ -58,9 +71,20 @@ final class SampleJoin {
                 excluded++;
                 continue;
             }
-            int r = samples.row(id);
-            if (r < 0) {
-                r = addSample(file, i);
+            int entry = register == null ? -1 : register.indexOf(id, lastEntry + 1);
+            int r;
+            if (entry >= 0) {
+                lastEntry = entry;
+                r = rowOfEntry[entry];
+                if (r < 0) {
+                    r = addSample(file, i, entry);
+                    rowOfEntry[entry] = r;
+                }
+            } else {
+                r = samples.row(id);
+                if (r < 0) {
+                    r = addSample(file, i, -1);
+                }
             }
             for (int c = 0; c < cols.size(); c++) {
                 if (rows.hasResult(i, c)) {
@@ -120,14 +144,14 @@ final class SampleJoin {
         return register == null ? 0 : register.size() + register.size() / 16;
     }
 
-    private int addSample(LabFile file, int i) {
+    /** @param e the sample's register entry, or -1 when the register does not hold it */
+    private int addSample(LabFile file, int i, int e) {
         LabRows rows = file.table();
         String id = rows.sampleId(i);
         QcRole given = rows.role(i);
         QcRole role = given == null ? QcRole.ROUTINE : given;
         String reference = rows.reference(i);
         if (register != null) {
-            int e = register.indexOf(id);
             if (e >= 0) {
                 role = register.role(e);
                 reference = register.reference(e);
@@ -149,10 +173,10 @@ final class SampleJoin {
         register.issues().forEach(exceptions::add);
         long excluded = register.rowsExcluded();
         for (int i = 0; i < register.size(); i++) {
-            String id = register.sampleId(i);
-            if (samples.contains(id)) {
+            if (rowOfEntry[i] >= 0) {
                 continue;
             }
+            String id = register.sampleId(i);
             excluded++;
             if (excludedLabIds.contains(id)) {
                 exceptions.exclude(register.source(i), id, id,

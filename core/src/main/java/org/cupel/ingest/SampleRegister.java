@@ -61,6 +61,11 @@ public final class SampleRegister {
         return ids.indexOf(sampleId);
     }
 
+    /** {@link #indexOf(String)}, trying entry {@code guess} first (see {@link IdIndex#indexOf(String, int)}). */
+    public int indexOf(String sampleId, int guess) {
+        return ids.indexOf(sampleId, guess);
+    }
+
     public String sampleId(int entry) {
         return ids.get(entry);
     }
