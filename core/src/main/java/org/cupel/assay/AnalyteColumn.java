@@ -56,6 +56,11 @@ public final class AnalyteColumn {
         return new AssayValue(QUALIFIERS[qualifiers[row]], values[row], limits[row], REASONS[missing[row]]);
     }
 
+    /** {@link #value(int)} with {@code limit} as its limit, made without the intermediate value. */
+    public AssayValue valueWithLimit(int row, double limit) {
+        return new AssayValue(QUALIFIERS[qualifiers[row]], values[row], limit, REASONS[missing[row]]);
+    }
+
     public Qualifier qualifier(int row) {
         return QUALIFIERS[qualifiers[row]];
     }

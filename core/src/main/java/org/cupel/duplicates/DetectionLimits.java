@@ -44,14 +44,17 @@ public final class DetectionLimits {
         return new DetectionLimits(mode);
     }
 
-    /** The value with its limit filled in when it had none and one is known for its method. */
-    AssayValue complete(AssayValue v, String method) {
-        if (v.isMissing() || !Double.isNaN(v.limit())) {
-            return v;
+    /** The value in {@code row} of {@code column}, its limit filled in when it had none and one is known for its method. */
+    AssayValue valueOf(AnalyteColumn column, int row) {
+        double stated = column.limit(row);
+        if (column.qualifier(row) == Qualifier.MISSING || !Double.isNaN(stated)) {
+            return column.value(row);
         }
-        Double limit = byMethod.get(method);
-        return limit == null || Double.isNaN(limit) ? v
-                : new AssayValue(v.qualifier(), v.value(), limit, v.missingReason());
+        Double limit = byMethod.get(column.method(row));
+        if (limit == null || Double.isNaN(limit)) {
+            return column.value(row);
+        }
+        return column.valueWithLimit(row, limit);
     }
 
     /** One sentence on where the limits come from, for reports. */

@@ -79,8 +79,8 @@ public final class PairExtraction {
                     orphans.add(new OrphanDuplicate(id, ref, batch, role, orphanReasons[i]));
                     continue;
                 }
-                pairs.add(new DuplicatePair(id, ref, batch, role, limits.complete(column.value(o), column.method(o)),
-                        limits.complete(column.value(row), column.method(row))));
+                pairs.add(new DuplicatePair(id, ref, batch, role, limits.valueOf(column, o),
+                        limits.valueOf(column, row)));
             }
             return new Extracted(pairs, orphans);
         }

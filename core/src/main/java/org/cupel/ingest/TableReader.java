@@ -117,7 +117,9 @@ public final class TableReader {
              Reader reader = new InputStreamReader(skipBom(in, head), charset.newDecoder()
                      .onMalformedInput(CodingErrorAction.REPORT)
                      .onUnmappableCharacter(CodingErrorAction.REPORT))) {
-            DelimitedTokenizer t = new DelimitedTokenizer(reader, delimiter, displayName);
+            DelimitedTokenizer t = head.length < SNIFF_BYTES
+                    ? new DelimitedTokenizer(reader, delimiter, displayName, head.length + 1)
+                    : new DelimitedTokenizer(reader, delimiter, displayName);
             TableAssembler.assemble(displayName, t::next, isHeaderRow, warnings, open);
         } catch (IOException e) {
             throw new InputException(displayName + ": the file could not be read (" + e.getMessage()
@@ -126,8 +128,14 @@ public final class TableReader {
     }
 
     private static byte[] head(Path file, String displayName) {
-        try (InputStream in = Files.newInputStream(file)) {
-            return in.readNBytes(SNIFF_BYTES);
+        try {
+            // A file smaller than the sample, as most lab files are, is read whole into one array of its size.
+            if (Files.size(file) < SNIFF_BYTES) {
+                return Files.readAllBytes(file);
+            }
+            try (InputStream in = Files.newInputStream(file)) {
+                return in.readNBytes(SNIFF_BYTES);
+            }
         } catch (IOException e) {
             throw new InputException(displayName + ": the file could not be read (" + e.getMessage()
                     + "); check the path and its permissions.", e);

@@ -2,6 +2,7 @@ package org.cupel.control.crm;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.cupel.assay.DoubleList;
 
 /**
  * Exponentially weighted moving average chart (NIST/SEMATECH e-Handbook of Statistical Methods,
@@ -21,9 +22,9 @@ import java.util.List;
 public record Ewma(List<Double> values, List<Double> lowerLimits, List<Double> upperLimits, double lambda,
                    double width, int firstSignal, List<Integer> signals) {
     public Ewma {
-        values = List.copyOf(values);
-        lowerLimits = List.copyOf(lowerLimits);
-        upperLimits = List.copyOf(upperLimits);
+        values = DoubleList.copyOf(values);
+        lowerLimits = DoubleList.copyOf(lowerLimits);
+        upperLimits = DoubleList.copyOf(upperLimits);
         signals = List.copyOf(signals);
     }
 
@@ -31,24 +32,24 @@ public record Ewma(List<Double> values, List<Double> lowerLimits, List<Double> u
         if (!(lambda > 0 && lambda <= 1) || !(sigma > 0) || !(width > 0)) {
             throw new IllegalArgumentException("EWMA needs 0 < lambda <= 1, sigma > 0 and L > 0");
         }
-        List<Double> e = new ArrayList<>(x.length);
-        List<Double> lo = new ArrayList<>(x.length);
-        List<Double> hi = new ArrayList<>(x.length);
+        double[] e = new double[x.length];
+        double[] lo = new double[x.length];
+        double[] hi = new double[x.length];
         List<Integer> signals = new ArrayList<>();
         double prev = mu0;
         for (int i = 0; i < x.length; i++) {
             double cur = lambda * x[i] + (1 - lambda) * prev;
             double half = width * sigma
                     * Math.sqrt(lambda / (2 - lambda) * (1 - Math.pow(1 - lambda, 2.0 * (i + 1))));
-            e.add(cur);
-            lo.add(mu0 - half);
-            hi.add(mu0 + half);
+            e[i] = cur;
+            lo[i] = mu0 - half;
+            hi[i] = mu0 + half;
             if (cur > mu0 + half || cur < mu0 - half) {
                 signals.add(i);
             }
             prev = cur;
         }
-        return new Ewma(e, lo, hi, lambda, width, signals.isEmpty() ? -1 : signals.get(0), signals);
+        return new Ewma(DoubleList.of(e), DoubleList.of(lo), DoubleList.of(hi), lambda, width, signals.isEmpty() ? -1 : signals.get(0), signals);
     }
 
     public int n() {

@@ -1,6 +1,7 @@
 package org.cupel.control.crm;
 
 import java.util.List;
+import org.cupel.assay.DoubleList;
 
 /**
  * Tabular (algorithmic) CUSUM, after Montgomery, <i>Introduction to Statistical Quality Control</i>
@@ -19,8 +20,8 @@ import java.util.List;
 public record TabularCusum(List<Double> upper, List<Double> lower, double k, double h, int firstSignal,
                            List<Integer> signals) {
     public TabularCusum {
-        upper = List.copyOf(upper);
-        lower = List.copyOf(lower);
+        upper = DoubleList.copyOf(upper);
+        lower = DoubleList.copyOf(lower);
         signals = List.copyOf(signals);
     }
 
@@ -28,8 +29,8 @@ public record TabularCusum(List<Double> upper, List<Double> lower, double k, dou
         if (!(sigma > 0) || !(k >= 0) || !(h > 0)) {
             throw new IllegalArgumentException("CUSUM needs sigma > 0, k >= 0 and h > 0");
         }
-        Double[] up = new Double[x.length];
-        Double[] lo = new Double[x.length];
+        double[] up = new double[x.length];
+        double[] lo = new double[x.length];
         java.util.ArrayList<Integer> signals = new java.util.ArrayList<>();
         double cPlus = 0;
         double cMinus = 0;
@@ -45,7 +46,7 @@ public record TabularCusum(List<Double> upper, List<Double> lower, double k, dou
             }
         }
         int first = signals.isEmpty() ? -1 : signals.get(0);
-        return new TabularCusum(List.of(up), List.of(lo), k, h, first, signals);
+        return new TabularCusum(DoubleList.of(up), DoubleList.of(lo), k, h, first, signals);
     }
 
     public int n() {
