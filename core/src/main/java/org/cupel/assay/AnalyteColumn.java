@@ -147,6 +147,7 @@ public final class AnalyteColumn {
         private int[] sourceLine = new int[0];
         private final Map<Integer, Integer> sourceColumn = new HashMap<>();
         private final List<String> files = new ArrayList<>();
+        private final Map<String, Integer> fileIdx = new HashMap<>();
         private String lastFile;
         private int lastFileIndex;
         private boolean built;
@@ -228,13 +229,11 @@ public final class AnalyteColumn {
         /** Files are numbered as results bring them; consecutive results mostly share one. */
         private int fileIndex(String file) {
             if (!file.equals(lastFile)) {
-                int found = files.lastIndexOf(file);
-                if (found < 0) {
-                    files.add(file);
-                    found = files.size() - 1;
-                }
+                lastFileIndex = fileIdx.computeIfAbsent(file, k -> {
+                    files.add(k);
+                    return files.size() - 1;
+                });
                 lastFile = file;
-                lastFileIndex = found;
             }
             return lastFileIndex;
         }

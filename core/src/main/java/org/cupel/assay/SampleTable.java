@@ -23,11 +23,11 @@ public final class SampleTable {
     private final long[] lines;
     private final List<Batch> batches;
     private final List<String> files;
-    private final IdIndex rowById;
+    private final RowIndex rowById;
 
     private SampleTable(Builder b) {
         int n = b.size;
-        this.ids = b.rowById.toArray();
+        this.ids = Arrays.copyOf(b.ids, n);
         this.batchIndex = Arrays.copyOf(b.batchIndex, n);
         this.positions = Arrays.copyOf(b.positions, n);
         this.roles = Arrays.copyOf(b.roles, n);
@@ -78,8 +78,19 @@ public final class SampleTable {
     }
 
     public OptionalInt rowOf(String sampleId) {
-        int row = rowById.indexOf(sampleId);
+        int row = rowById.row(sampleId);
         return row < 0 ? OptionalInt.empty() : OptionalInt.of(row);
+    }
+
+    /**
+     * The row of {@code sampleId}, or -1, trying row {@code guess} first: a duplicate's original mostly
+     * sits just before it, and comparing one ID spares a hash probe into a table of a million IDs.
+     */
+    public int row(String sampleId, int guess) {
+        if (guess >= 0 && guess < ids.length && ids[guess].equals(sampleId)) {
+            return guess;
+        }
+        return rowById.row(sampleId);
     }
 
     public Sample sample(int row) {
@@ -106,16 +117,21 @@ public final class SampleTable {
     }
 
     public static Builder builder() {
-        return new Builder(1024);
+        return new Builder(1024, null);
     }
 
-    /** @param expectedRows rows expected (a hint that spares regrowing the arrays and the ID index) */
-    public static Builder builder(int expectedRows) {
-        return new Builder(Math.max(16, expectedRows));
+    /**
+     * @param expectedRows rows expected (a hint that spares regrowing the arrays)
+     * @param knownIds IDs already numbered (the register's), added by number with {@link Builder#addKnown};
+     *                 the table shares the index and the ID strings instead of building its own; null for none
+     */
+    public static Builder builder(int expectedRows, IdIndex knownIds) {
+        return new Builder(Math.max(16, expectedRows), knownIds);
     }
 
     /** Collects rows one at a time; sample IDs must be unique. The builder is spent by {@link #build()}. */
     public static final class Builder {
+        private String[] ids;
         private int[] batchIndex;
         private int[] positions;
         private byte[] roles;
@@ -127,20 +143,21 @@ public final class SampleTable {
         private final Map<Batch, Integer> batchIndexOf = new HashMap<>();
         private final List<String> files = new ArrayList<>();
         private final Map<String, Integer> fileIndexOf = new HashMap<>();
-        private final IdIndex rowById;
+        private final RowIndex rowById;
         private Batch lastBatch;
         private int lastBatchIndex;
         private String lastFile;
         private int lastFileIndex;
 
-        private Builder(int capacity) {
+        private Builder(int capacity, IdIndex knownIds) {
+            ids = new String[capacity];
             batchIndex = new int[capacity];
             positions = new int[capacity];
             roles = new byte[capacity];
             references = new String[capacity];
             fileIndex = new int[capacity];
             lines = new long[capacity];
-            rowById = new IdIndex(capacity);
+            rowById = new RowIndex(knownIds);
         }
 
         /** Adds a sample and returns its row; throws if the ID is already present. */
@@ -150,10 +167,33 @@ public final class SampleTable {
 
         /** As {@link #add(String, Batch, int, QcRole, String, SourceLocation)} with the source's file and line. */
         public int add(String id, Batch batch, int position, QcRole role, String reference, String file, long line) {
-            if (rowById.add(id) < 0) {
+            if (!rowById.put(id, size)) {
                 throw new IllegalArgumentException("sample ID already present: " + id);
             }
+            return append(id, batch, position, role, reference, file, line);
+        }
+
+        /**
+         * Adds the sample whose ID is numbered {@code known} in the index given to {@link #builder(int, IdIndex)}
+         * and returns its row; throws if that ID already has a row.
+         */
+        public int addKnown(int known, Batch batch, int position, QcRole role, String reference, String file,
+                            long line) {
+            if (!rowById.putKnown(known, size)) {
+                throw new IllegalArgumentException("sample ID already present: " + rowById.knownId(known));
+            }
+            return append(rowById.knownId(known), batch, position, role, reference, file, line);
+        }
+
+        /** The row of the ID numbered {@code known} in the shared index, or -1 when it has none yet. */
+        public int rowOfKnown(int known) {
+            return rowById.rowOfKnown(known);
+        }
+
+        private int append(String id, Batch batch, int position, QcRole role, String reference, String file,
+                           long line) {
             ensureCapacity(size + 1);
+            ids[size] = id;
             batchIndex[size] = batchIndex(batch);
             positions[size] = position;
             roles[size] = (byte) role.ordinal();
@@ -187,17 +227,17 @@ public final class SampleTable {
         }
 
         public boolean contains(String id) {
-            return rowById.indexOf(id) >= 0;
+            return rowById.row(id) >= 0;
         }
 
         public OptionalInt rowOf(String id) {
-            int row = rowById.indexOf(id);
+            int row = rowById.row(id);
             return row < 0 ? OptionalInt.empty() : OptionalInt.of(row);
         }
 
         /** The row of {@code id}, or -1. */
         public int row(String id) {
-            return rowById.indexOf(id);
+            return rowById.row(id);
         }
 
         /** Sets role and reference after the register has been joined to the lab rows. */
@@ -219,6 +259,7 @@ public final class SampleTable {
                 return;
             }
             int cap = Math.max(needed, positions.length * 2);
+            ids = Arrays.copyOf(ids, cap);
             batchIndex = Arrays.copyOf(batchIndex, cap);
             positions = Arrays.copyOf(positions, cap);
             roles = Arrays.copyOf(roles, cap);

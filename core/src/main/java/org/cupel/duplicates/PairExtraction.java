@@ -3,7 +3,6 @@ package org.cupel.duplicates;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.OptionalInt;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
@@ -55,10 +54,11 @@ public final class PairExtraction {
                     continue;
                 }
                 String ref = samples.reference(row);
-                OptionalInt original = ref.isBlank() ? OptionalInt.empty() : samples.rowOf(ref);
+                // A duplicate mostly follows its original: that row is compared before hashing.
+                int original = ref.isBlank() ? -1 : samples.row(ref, row - 1);
                 dup[k] = row;
-                orig[k] = original.orElse(-1);
-                why[k] = original.isPresent() ? null : ref.isBlank() ? "no original sample ID is given"
+                orig[k] = original;
+                why[k] = original >= 0 ? null : ref.isBlank() ? "no original sample ID is given"
                         : "original sample " + ref + " is not in the project";
                 k++;
             }

@@ -31,6 +31,19 @@ final class DelimitedTokenizer {
         this(in, delimiter, file, BUFFER_CHARS);
     }
 
+    /**
+     * Reads {@code text[0, length)} in place, without copying: the text is the buffer. The tokenizer never
+     * writes to its buffer, so the text may be read by several tokenizers in turn.
+     */
+    DelimitedTokenizer(char[] text, int length, char delimiter, String file) {
+        this.in = Reader.nullReader();
+        this.delimiter = delimiter;
+        this.file = file;
+        this.buf = text;
+        // An empty text is at its end at once (a read into an empty buffer would return 0 forever).
+        this.end = length == 0 ? EOF : length;
+    }
+
     /** @param length the input's length when known (text already in memory): a smaller buffer then suffices */
     DelimitedTokenizer(Reader in, char delimiter, String file, int length) {
         this.in = in;

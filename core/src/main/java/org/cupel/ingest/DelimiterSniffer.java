@@ -1,6 +1,5 @@
 package org.cupel.ingest;
 
-import java.io.StringReader;
 import java.util.List;
 import java.util.function.Predicate;
 import org.cupel.project.InputException;
@@ -18,13 +17,14 @@ final class DelimiterSniffer {
     private DelimiterSniffer() {
     }
 
-    static char sniff(String prefix, Predicate<List<String>> isHeaderRow) {
+    /** @param text the first lines of the file, {@code text[0, length)} */
+    static char sniff(char[] text, int length, Predicate<List<String>> isHeaderRow) {
         char best = ',';
         int bestHeaderWidth = 0;
         int bestWidth = 0;
         char widest = ',';
         for (char d : CANDIDATES) {
-            int[] widths = widths(prefix, d, isHeaderRow);
+            int[] widths = widths(text, length, d, isHeaderRow);
             if (widths[0] > bestHeaderWidth) {
                 bestHeaderWidth = widths[0];
                 best = d;
@@ -38,8 +38,8 @@ final class DelimiterSniffer {
     }
 
     /** {header row width (0 when none), widest row width} when split on {@code d}. */
-    private static int[] widths(String prefix, char d, Predicate<List<String>> isHeaderRow) {
-        DelimitedTokenizer t = new DelimitedTokenizer(new StringReader(prefix), d, "", prefix.length() + 1);
+    private static int[] widths(char[] text, int length, char d, Predicate<List<String>> isHeaderRow) {
+        DelimitedTokenizer t = new DelimitedTokenizer(text, length, d, "");
         CellRow r = new CellRow();
         int header = 0;
         int widest = 0;

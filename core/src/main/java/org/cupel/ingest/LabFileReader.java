@@ -12,6 +12,7 @@ import java.util.Optional;
 import java.util.Set;
 import org.cupel.assay.AssayValue;
 import org.cupel.assay.Batch;
+import org.cupel.assay.IdIndex;
 import org.cupel.assay.MissingReason;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.Qualifier;
@@ -29,19 +30,22 @@ import org.cupel.project.InputException;
  */
 public final class LabFileReader {
     private final IngestSettings settings;
+    private final ValueConventions conventions;
     private final HeaderParser headers;
     private final ValueParser values;
 
     public LabFileReader(IngestSettings settings) {
         this.settings = settings;
+        this.conventions = settings.valueConventions();
         this.headers = new HeaderParser(settings.columns());
-        this.values = new ValueParser(settings.valueConventions());
+        this.values = new ValueParser(conventions);
     }
 
     public LabFile read(Path path, String displayName) {
         FileRead[] read = new FileRead[1];
+        long bytes = TableReader.sizeOf(path);
         TableReader.scan(path, displayName, TableReader::hasSampleIdColumn, settings.sheet(), head -> {
-            read[0] = new FileRead(head);
+            read[0] = new FileRead(head, bytes);
             return read[0]::readRow;
         });
         return read[0].finish();
@@ -60,8 +64,11 @@ public final class LabFileReader {
         private final List<String> ignored = new ArrayList<>();
         private final List<DataIssue> issues = new ArrayList<>();
         private final Map<String, LocalDate> latestDate = new HashMap<>();
-        private final Map<String, Integer> nextPosition = new HashMap<>();
-        private final Map<String, Long> lineOfId = new HashMap<>();
+        /** Rows read so far per batch key: the position of a row that does not state one. */
+        private int[] rowsOfBatch = new int[4];
+        /** The IDs read so far, each with the line of its first row. */
+        private final IdIndex idsRead = new IdIndex(512);
+        private long[] lineOfId = new long[512];
         /** Batch texts in the order first read, each once, so rows share them. */
         private final Map<String, Integer> batchKeys = new LinkedHashMap<>();
         private final List<String> batchTexts = new ArrayList<>();
@@ -73,8 +80,12 @@ public final class LabFileReader {
         private long rowsRead;
         private long rowsExcluded;
 
-        /** Checks the header; a problem with it throws (after the rest of the file is read). */
-        FileRead(RawTable t) {
+        /**
+         * Checks the header; a problem with it throws (after the rest of the file is read).
+         *
+         * @param bytes the file's size, from which the number of rows is estimated
+         */
+        FileRead(RawTable t, long bytes) {
             this.t = t;
             this.idCol = t.column(LabColumns.sampleId());
             this.batchCol = t.column(LabColumns.BATCH);
@@ -89,7 +100,9 @@ public final class LabFileReader {
                         + "column holding the sample IDs.");
             }
             findAnalyteColumns();
-            kept = new LabRows(columns.size());
+            // Three bytes per cell overestimates a lab file's rows by about a third: less than growing every array once.
+            // A workbook's size says little about its rows, hence the cap.
+            kept = new LabRows(columns.size(), Math.min(1 << 16, TableReader.estimatedRows(bytes, t.columns().size(), 3)));
         }
 
         LabFile finish() {
@@ -126,7 +139,7 @@ public final class LabFileReader {
                             + "' (expected one column per analyte and method); rename one with its method, e.g. "
                             + a.get().analyte() + "_" + a.get().unit().symbol() + "_FA-GRAV, or map it in ingest.columns.");
                 }
-                double limit = settings.valueConventions().detectionLimit(a.get().analyte());
+                double limit = conventions.detectionLimit(a.get().analyte());
                 columns.add(new LabColumn(c, h, a.get(), limit));
             }
             if (columns.isEmpty()) {
@@ -174,36 +187,39 @@ public final class LabFileReader {
         private void readSample(CellRow row) {
             rowsRead++;
             String id = row.cell(idCol);
-            SourceLocation where = new SourceLocation(t.file(), row.line(), 0);
             if (id.isEmpty()) {
-                exclude(where, "", String.join(",", row.cells()), "the row has no sample ID",
+                exclude(rowAt(row), "", String.join(",", row.cells()), "the row has no sample ID",
                         "a sample ID in column '" + t.columns().get(idCol) + "'", "fill in the sample ID or delete the row");
                 return;
             }
-            Long first = lineOfId.putIfAbsent(id, row.line());
-            if (first != null) {
-                exclude(where, id, id, "sample ID already on line " + first + " of this file",
+            int n = idsRead.add(id);
+            if (n < 0) {
+                exclude(rowAt(row), id, id, "sample ID already on line " + lineOfId[-1 - n] + " of this file",
                         "each sample once per file (re-assays by another method go in their own column or a later file)",
                         "remove the repeated row, or mark a lab repeat with a suffix such as '" + id + " R'");
                 return;
             }
+            if (n == lineOfId.length) {
+                lineOfId = java.util.Arrays.copyOf(lineOfId, n * 2);
+            }
+            lineOfId[n] = row.line();
             int batchKey = batchKey(row);
             String batch = batchTexts.get(batchKey);
             noteDate(row, batch, id);
-            int position = position(row, batch, id);
+            int position = position(row, batchKey, id);
             QcRole role = role(row, id);
             String reference = refCol >= 0 ? row.cell(refCol) : "";
             if (role == null) {
-                Optional<String> original = settings.valueConventions().repeatOf(id);
+                Optional<String> original = conventions.repeatOf(id);
                 if (original.isPresent()) {
                     role = QcRole.LAB_REPEAT;
                     reference = original.get();
                 }
             }
             int issuesBefore = issues.size();
-            boolean any = results(row, id, where);
+            boolean any = results(row, id);
             if (!any && issues.size() > issuesBefore) {
-                exclude(where, id, "", "no analyte value in the row can be used (see the cells listed)",
+                exclude(rowAt(row), id, "", "no analyte value in the row can be used (see the cells listed)",
                         "at least one readable value", "correct the cells listed for this sample");
                 return;
             }
@@ -229,11 +245,13 @@ public final class LabFileReader {
         }
 
         /** Sets the row's usable results in {@link #kept}; whether there is any. */
-        private boolean results(CellRow row, String id, SourceLocation rowAt) {
+        private boolean results(CellRow row, String id) {
             kept.startRow();
             boolean any = false;
             char[] text = row.text();
-            // One location per row, shared by its values; a cell's own column is set only on an issue.
+            // Made at the row's first cell that is not a plain number, shared by its values; a cell's own
+            // column is set only on an issue.
+            SourceLocation rowAt = null;
             for (int c = 0; c < columns.size(); c++) {
                 LabColumn col = columns.get(c);
                 int k = col.index();
@@ -248,6 +266,9 @@ public final class LabFileReader {
                     any = true;
                     continue;
                 }
+                if (rowAt == null) {
+                    rowAt = rowAt(row);
+                }
                 ParsedValue p = values.parse(row.cell(k), col.detectionLimit(), rowAt);
                 if (p.issue() != null) {
                     DataIssue i = p.issue();
@@ -261,6 +282,10 @@ public final class LabFileReader {
                 }
             }
             return any;
+        }
+
+        private SourceLocation rowAt(CellRow row) {
+            return new SourceLocation(t.file(), row.line(), 0);
         }
 
         private void noteDate(CellRow row, String batch, String id) {
@@ -278,8 +303,11 @@ public final class LabFileReader {
             latestDate.merge(batch, d.get(), (a, b) -> a.isAfter(b) ? a : b);
         }
 
-        private int position(CellRow row, String batch, String id) {
-            int inOrder = nextPosition.merge(batch, 1, Integer::sum);
+        private int position(CellRow row, int batchKey, String id) {
+            if (batchKey >= rowsOfBatch.length) {
+                rowsOfBatch = java.util.Arrays.copyOf(rowsOfBatch, Math.max(batchKey + 1, rowsOfBatch.length * 2));
+            }
+            int inOrder = ++rowsOfBatch[batchKey];
             if (positionCol < 0 || row.cell(positionCol).isEmpty()) {
                 return inOrder;
             }

@@ -20,12 +20,12 @@ public final class LabRows {
 
     private final int width;
     private int size;
-    private String[] ids = new String[INITIAL_ROWS];
-    private int[] batches = new int[INITIAL_ROWS];
-    private int[] positions = new int[INITIAL_ROWS];
-    private byte[] roles = new byte[INITIAL_ROWS];
-    private String[] references = new String[INITIAL_ROWS];
-    private long[] lines = new long[INITIAL_ROWS];
+    private String[] ids;
+    private int[] batches;
+    private int[] positions;
+    private byte[] roles;
+    private String[] references;
+    private long[] lines;
     private byte[] qualifiers;
     private double[] values;
     private double[] limits;
@@ -33,11 +33,26 @@ public final class LabRows {
 
     /** @param width the number of analyte columns */
     LabRows(int width) {
+        this(width, INITIAL_ROWS);
+    }
+
+    /**
+     * @param width the number of analyte columns
+     * @param expectedRows rows expected (a hint: a lab file is read once, so growing it would copy every array)
+     */
+    LabRows(int width, int expectedRows) {
         this.width = width;
-        qualifiers = new byte[INITIAL_ROWS * width];
-        values = new double[INITIAL_ROWS * width];
-        limits = new double[INITIAL_ROWS * width];
-        missing = new byte[INITIAL_ROWS * width];
+        int rows = Math.max(16, expectedRows);
+        ids = new String[rows];
+        batches = new int[rows];
+        positions = new int[rows];
+        roles = new byte[rows];
+        references = new String[rows];
+        lines = new long[rows];
+        qualifiers = new byte[rows * width];
+        values = new double[rows * width];
+        limits = new double[rows * width];
+        missing = new byte[rows * width];
     }
 
     public int size() {

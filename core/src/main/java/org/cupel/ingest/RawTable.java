@@ -37,10 +37,16 @@ public record RawTable(String file, Map<String, String> headerBlock, List<String
      * Matching ignores case, surrounding space, and treats {@code _}, {@code -} and space alike.
      */
     public int column(String... aliases) {
+        // Each header is normalised once per call, not once per alias: a lab file is asked for a few
+        // columns by several aliases each, and a million-sample project has thousands of files.
+        String[] headers = new String[columns.size()];
         for (String alias : aliases) {
             String a = normalise(alias);
-            for (int i = 0; i < columns.size(); i++) {
-                if (normalise(columns.get(i)).equals(a)) {
+            for (int i = 0; i < headers.length; i++) {
+                if (headers[i] == null) {
+                    headers[i] = normalise(columns.get(i));
+                }
+                if (headers[i].equals(a)) {
                     return i;
                 }
             }

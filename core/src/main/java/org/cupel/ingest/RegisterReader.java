@@ -26,8 +26,9 @@ public final class RegisterReader {
 
     public static SampleRegister read(Path path, String displayName) {
         Read[] read = new Read[1];
+        long bytes = TableReader.sizeOf(path);
         TableReader.scan(path, displayName, TableReader::hasSampleIdColumn, null, head -> {
-            read[0] = new Read(displayName, head);
+            read[0] = new Read(displayName, head, bytes);
             return read[0]::row;
         });
         return read[0].finish();
@@ -53,7 +54,7 @@ public final class RegisterReader {
         private String lastHole = "";
 
         /** Checks the header; a problem with it throws (after the rest of the file is read). */
-        Read(String displayName, RawTable t) {
+        Read(String displayName, RawTable t, long bytes) {
             this.t = t;
             this.id = t.column(LabColumns.sampleId());
             if (id < 0) {
@@ -65,23 +66,24 @@ public final class RegisterReader {
             this.hole = t.column(HOLE);
             this.from = t.column(FROM);
             this.to = t.column(TO);
-            this.entries = new SampleRegister.Builder(displayName);
+            // About five bytes per cell (IDs, codes, depths): the ID index of a million entries is sized once
+            // and kept by the sample table, so it is not overestimated much.
+            this.entries = new SampleRegister.Builder(displayName, TableReader.estimatedRows(bytes, t.columns().size(), 5));
             this.issues = new ArrayList<>(t.warnings());
         }
 
         void row(CellRow row) {
             rowsRead++;
             String sampleId = row.cell(id);
-            SourceLocation where = new SourceLocation(t.file(), row.line(), 0);
             if (sampleId.isEmpty()) {
-                issues.add(excluded(where, "", String.join(",", row.cells()), "the register row has no sample ID",
+                issues.add(excluded(rowAt(row), "", String.join(",", row.cells()), "the register row has no sample ID",
                         "a sample ID", "fill in the sample ID or delete the row"));
                 excluded++;
                 return;
             }
             long firstLine = entries.lineOf(sampleId);
             if (firstLine >= 0) {
-                issues.add(excluded(where, sampleId, sampleId, "sample ID already registered on line "
+                issues.add(excluded(rowAt(row), sampleId, sampleId, "sample ID already registered on line "
                                 + firstLine + "; this row is left out",
                         "each sample ID once", "give the sample a unique ID or delete the repeated row"));
                 excluded++;
@@ -89,7 +91,7 @@ public final class RegisterReader {
             }
             Optional<QcRole> qc = role(row);
             if (qc.isEmpty()) {
-                issues.add(excluded(where, sampleId, row.cell(role), "unknown QC role '" + row.cell(role) + "'; the sample is "
+                issues.add(excluded(rowAt(row), sampleId, row.cell(role), "unknown QC role '" + row.cell(role) + "'; the sample is "
                                 + "left out of the analyses",
                         "routine, CRM/STD, blank/BLK, field dup/FD, coarse dup/CD, pulp dup/PD, lab repeat/LR, umpire/UMP",
                         "correct the role code"));
@@ -99,7 +101,7 @@ public final class RegisterReader {
             }
             String reference = row.cell(ref);
             if (reference.isEmpty() && (qc.get() == QcRole.CRM || qc.get().isDuplicate())) {
-                issues.add(new DataIssue(DataIssue.Severity.WARNING, where, sampleId, "",
+                issues.add(new DataIssue(DataIssue.Severity.WARNING, rowAt(row), sampleId, "",
                         "a " + qc.get().label() + " without a reference cannot be paired or checked",
                         qc.get() == QcRole.CRM ? "the CRM code in 'reference'" : "the original sample ID in 'reference'",
                         "fill in the reference column"));
@@ -108,6 +110,11 @@ public final class RegisterReader {
                 lastHole = row.cell(hole);
             }
             entries.add(sampleId, qc.get(), reference, lastHole, metres(row, from), metres(row, to), row.line());
+        }
+
+        /** Made only for a row with a problem: most rows have none. */
+        private SourceLocation rowAt(CellRow row) {
+            return new SourceLocation(t.file(), row.line(), 0);
         }
 
         /** Consecutive rows mostly repeat a role code: it is parsed when it changes. */

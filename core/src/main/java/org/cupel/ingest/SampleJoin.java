@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.cupel.assay.Analyte;
+import org.cupel.assay.Batch;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.MethodSelector;
 import org.cupel.assay.MissingReason;
@@ -36,11 +37,6 @@ final class SampleJoin {
     private final Set<String> excludedLabIds = new HashSet<>();
     /** Register IDs that could not be used, or null when there are none (most projects: no look-up per row). */
     private final Set<String> rejectedIds;
-    /**
-     * The sample-table row of each register entry, -1 until its first lab row: a register ID is found once,
-     * in the register, instead of again in the sample table.
-     */
-    private final int[] rowOfEntry;
     /** The register entry of the previous lab row, whose successor is tried first. */
     private int lastEntry = -1;
 
@@ -50,9 +46,8 @@ final class SampleJoin {
         this.units = units;
         this.exceptions = exceptions;
         this.rejectedIds = register == null || register.rejectedIds().isEmpty() ? null : register.rejectedIds();
-        this.rowOfEntry = new int[register == null ? 0 : register.size()];
-        java.util.Arrays.fill(rowOfEntry, -1);
-        this.samples = SampleTable.builder(expectedRows());
+        // The table numbers register samples by their entry: a register ID is found once, in the register.
+        this.samples = SampleTable.builder(expectedRows(), register == null ? null : register.ids());
     }
 
     void add(LabFile file) {
@@ -75,10 +70,9 @@ final class SampleJoin {
             int r;
             if (entry >= 0) {
                 lastEntry = entry;
-                r = rowOfEntry[entry];
+                r = samples.rowOfKnown(entry);
                 if (r < 0) {
                     r = addSample(file, i, entry);
-                    rowOfEntry[entry] = r;
                 }
             } else {
                 r = samples.row(id);
@@ -161,8 +155,9 @@ final class SampleJoin {
                         "every submitted sample in " + register.file(), "add the sample to the register");
             }
         }
-        return samples.add(id, file.batches().get(rows.batch(i)), rows.position(i), role, reference, file.file(),
-                rows.line(i));
+        Batch batch = file.batches().get(rows.batch(i));
+        return e >= 0 ? samples.addKnown(e, batch, rows.position(i), role, reference, file.file(), rows.line(i))
+                : samples.add(id, batch, rows.position(i), role, reference, file.file(), rows.line(i));
     }
 
     /** Closes the register's accounting (entries without a lab result are "not received"). */
@@ -173,7 +168,7 @@ final class SampleJoin {
         register.issues().forEach(exceptions::add);
         long excluded = register.rowsExcluded();
         for (int i = 0; i < register.size(); i++) {
-            if (rowOfEntry[i] >= 0) {
+            if (samples.rowOfKnown(i) >= 0) {
                 continue;
             }
             String id = register.sampleId(i);
@@ -199,7 +194,7 @@ final class SampleJoin {
         for (int r = 0; r < table.size(); r++) {
             QcRole role = table.role(r);
             String ref = table.reference(r);
-            if (role.isDuplicate() && !ref.isEmpty() && table.rowOf(ref).isEmpty()) {
+            if (role.isDuplicate() && !ref.isEmpty() && table.row(ref, r - 1) < 0) {
                 exceptions.warn(table.source(r), table.id(r), ref, "the original sample " + ref + " of this "
                                 + role.label() + " has no lab result, so the pair cannot be compared",
                         "a result for " + ref, "check the reference, or add the original's result");

@@ -66,6 +66,11 @@ public final class SampleRegister {
         return ids.indexOf(sampleId, guess);
     }
 
+    /** The entries' sample IDs, numbered as the entries are (shared with the sample table, never changed). */
+    IdIndex ids() {
+        return ids;
+    }
+
     public String sampleId(int entry) {
         return ids.get(entry);
     }
@@ -116,16 +121,25 @@ public final class SampleRegister {
     /** Collects entries in file order; each sample ID once. */
     static final class Builder {
         private final String file;
-        private final IdIndex ids = new IdIndex(1024);
-        private byte[] roles = new byte[1024];
-        private String[] references = new String[1024];
-        private String[] holes = new String[1024];
-        private double[] from = new double[1024];
-        private double[] to = new double[1024];
-        private long[] lines = new long[1024];
+        private final IdIndex ids;
+        private byte[] roles;
+        private String[] references;
+        private String[] holes;
+        private double[] from;
+        private double[] to;
+        private long[] lines;
 
-        Builder(String file) {
+        /** @param expectedEntries entries expected (a hint that spares regrowing the arrays and the ID index) */
+        Builder(String file, int expectedEntries) {
             this.file = file;
+            int n = Math.max(16, expectedEntries);
+            ids = new IdIndex(n);
+            roles = new byte[n];
+            references = new String[n];
+            holes = new String[n];
+            from = new double[n];
+            to = new double[n];
+            lines = new long[n];
         }
 
         /** The line of {@code sampleId}'s entry, or -1 when it has none yet. */

@@ -5,6 +5,9 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
 import java.io.Reader;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.charset.CharacterCodingException;
 import java.nio.charset.Charset;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
@@ -96,6 +99,24 @@ public final class TableReader {
         scanText(file, displayName, isHeaderRow, warnings, open);
     }
 
+    /** The file's size in bytes, or 0 when it cannot be read (reading it then reports why). */
+    static long sizeOf(Path file) {
+        try {
+            return Files.size(file);
+        } catch (IOException e) {
+            return 0;
+        }
+    }
+
+    /**
+     * An estimate of the rows of a text table of {@code bytes} bytes with {@code cells} cells per row of about
+     * {@code bytesPerCell} bytes each (delimiter included), to size arrays before reading: a lower figure per
+     * cell overestimates, a higher one risks growing the arrays once.
+     */
+    static int estimatedRows(long bytes, int cells, int bytesPerCell) {
+        return (int) Math.min(Integer.MAX_VALUE / 2, bytes / ((long) bytesPerCell * Math.max(1, cells) + 2));
+    }
+
     /** Whether a row holds a sample-ID column header. */
     public static boolean hasSampleIdColumn(List<String> cells) {
         for (String c : cells) {
@@ -111,8 +132,18 @@ public final class TableReader {
         byte[] head = head(file, displayName);
         Charset charset = charsetOf(head);
         rejectBinary(head, charset, displayName);
-        char delimiter = DelimiterSniffer.sniff(decodePrefix(head, charset), isHeaderRow);
-        // A file shorter than the sniffing sample is already in memory: no second open.
+        // A file shorter than the sniffing sample, as most lab files are, is already in memory: decoded
+        // once, sniffed and tokenized from the same characters. Text that does not decode takes the
+        // streaming path, whose message names the line.
+        CharBuffer whole = head.length < SNIFF_BYTES ? decodeStrictly(head, charset) : null;
+        if (whole != null) {
+            char delimiter = DelimiterSniffer.sniff(whole.array(), whole.limit(), isHeaderRow);
+            DelimitedTokenizer t = new DelimitedTokenizer(whole.array(), whole.limit(), delimiter, displayName);
+            TableAssembler.assemble(displayName, t::next, isHeaderRow, warnings, open);
+            return;
+        }
+        char[] prefix = decodePrefix(head, charset).toCharArray();
+        char delimiter = DelimiterSniffer.sniff(prefix, prefix.length, isHeaderRow);
         try (InputStream in = head.length < SNIFF_BYTES ? new ByteArrayInputStream(head) : Files.newInputStream(file);
              Reader reader = new InputStreamReader(skipBom(in, head), charset.newDecoder()
                      .onMalformedInput(CodingErrorAction.REPORT)
@@ -178,6 +209,20 @@ public final class TableReader {
                 throw new InputException(displayName + ": the file contains binary data (NUL bytes), expected a "
                         + "text table; export the results as CSV or XLSX.");
             }
+        }
+    }
+
+    /** The whole text of a file held in {@code bytes} without its byte-order mark, or null when it does not decode. */
+    private static CharBuffer decodeStrictly(byte[] bytes, Charset charset) {
+        int start = bomLength(bytes, charset);
+        try {
+            CharBuffer chars = charset.newDecoder()
+                    .onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT)
+                    .decode(ByteBuffer.wrap(bytes, start, bytes.length - start));
+            return chars.hasArray() && chars.arrayOffset() == 0 && chars.position() == 0 ? chars : null;
+        } catch (CharacterCodingException e) {
+            return null;
         }
     }
 

@@ -41,6 +41,18 @@ class TableReaderTest {
     }
 
     @Test
+    void emptyFileAndBomOnlyFileSayThereIsNoHeader() throws IOException {
+        // Small files are decoded whole and tokenized in place; an empty text must end the read at once.
+        Path empty = write("empty.csv", "");
+        InputException e = assertThrows(InputException.class, () -> TableReader.read(empty));
+        assertTrue(e.getMessage().contains("no header row found"), e.getMessage());
+        Path bomOnly = dir.resolve("bom.csv");
+        Files.write(bomOnly, new byte[] {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF});
+        InputException b = assertThrows(InputException.class, () -> TableReader.read(bomOnly));
+        assertTrue(b.getMessage().contains("no header row found"), b.getMessage());
+    }
+
+    @Test
     void byteOrderMarkIsSkipped() throws IOException {
         byte[] body = "sample_id,Au_ppm\nS1,1\n".getBytes(StandardCharsets.UTF_8);
         byte[] bytes = new byte[body.length + 3];
