@@ -36,4 +36,30 @@ class SampleTableTest {
         assertThrows(IllegalArgumentException.class,
                 () -> t.add("S1", b, 2, QcRole.ROUTINE, "", new SourceLocation("f", 3, 0)));
     }
+
+    @Test
+    void idsNumberedByTheRegisterAndOwnIdsAreFoundAlike() {
+        IdIndex register = new IdIndex(16);
+        for (String id : new String[] {"R1", "R2", "R3"}) {
+            register.add(id);
+        }
+        Batch b = new Batch("J", "", null, "f");
+        SampleTable.Builder t = SampleTable.builder(8, register);
+        assertEquals(0, t.addKnown(2, b, 1, QcRole.ROUTINE, "", "f", 2));
+        assertEquals(1, t.add("X9", b, 2, QcRole.LAB_REPEAT, "R3", "f", 3));
+        assertEquals(2, t.add("R1", b, 3, QcRole.ROUTINE, "", "f", 4));
+        assertEquals(-1, t.rowOfKnown(1), "R2 has no lab row");
+        assertEquals(2, t.rowOfKnown(0), "an ID added by text finds its register number");
+        assertThrows(IllegalArgumentException.class, () -> t.add("R3", b, 4, QcRole.ROUTINE, "", "f", 5));
+        assertThrows(IllegalArgumentException.class, () -> t.addKnown(0, b, 4, QcRole.ROUTINE, "", "f", 5));
+        assertThrows(IllegalArgumentException.class, () -> t.add("X9", b, 4, QcRole.ROUTINE, "", "f", 5));
+        SampleTable table = t.build();
+        assertEquals(3, table.size());
+        assertEquals("R3", table.id(0));
+        assertEquals(1, table.rowOf("X9").getAsInt());
+        assertEquals(0, table.row("R3", 1), "a wrong guess falls back to the index");
+        assertEquals(1, table.row("X9", 1), "a right guess is taken");
+        assertEquals(-1, table.row("R2", 0));
+        assertEquals(-1, table.row("nope", 5), "a guess out of range is ignored");
+    }
 }
