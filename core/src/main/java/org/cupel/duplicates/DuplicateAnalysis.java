@@ -48,7 +48,8 @@ public final class DuplicateAnalysis {
 
     static DuplicateSetResult analyseSet(String analyte, String unit, QcRole type, List<DuplicatePair> pairs,
                                          double[] grades, DuplicateSettings settings) {
-        ScreenedPairs screened = PairScreen.screen(pairs, settings);
+        PairScreen.Decisions decisions = PairScreen.decide(pairs, settings);
+        ScreenedPairs screened = decisions.all();
         ScreenedPairs.Members abs = screened.absolute();
         ScreenedPairs.Members rel = screened.relative();
         PrecisionSummary precision = PrecisionMeasures.summarise(type, screened, settings);
@@ -57,23 +58,50 @@ public final class DuplicateAnalysis {
         List<OutlierPair> outliers = outliers(screened, model, settings.hardLimit(type));
         return new DuplicateSetResult(analyte, unit, type, precision, model, bias, outliers,
                 new DuplicateSetResult.PairValues(abs.a(), abs.b(), rel.a(), rel.b()),
-                batches(type, pairs, precision.rmsCv(), settings));
+                batches(type, pairs, decisions, precision.rmsCv(), settings));
     }
 
-    private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, Estimate setRmsCv,
-                                                DuplicateSettings settings) {
-        Map<String, List<DuplicatePair>> byBatch = new LinkedHashMap<>();
-        for (DuplicatePair p : pairs) {
-            byBatch.computeIfAbsent(p.batch(), k -> new ArrayList<>()).add(p);
+    /** Per-batch precision, in the order batches first appear; each batch's pairs keep the set's screening. */
+    private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, PairScreen.Decisions decisions,
+                                                Estimate setRmsCv, DuplicateSettings settings) {
+        Map<String, BatchPairs> byBatch = new LinkedHashMap<>();
+        BatchPairs last = null;
+        for (int i = 0; i < pairs.size(); i++) {
+            DuplicatePair p = pairs.get(i);
+            // A batch's pairs mostly come together: the last batch is compared before hashing.
+            if (last == null || !last.batch.equals(p.batch())) {
+                last = byBatch.computeIfAbsent(p.batch(), BatchPairs::new);
+            }
+            last.add(p, i);
         }
         List<BatchPrecision> out = new ArrayList<>();
-        for (Map.Entry<String, List<DuplicatePair>> e : byBatch.entrySet()) {
-            PrecisionSummary p = PrecisionMeasures.summariseBatch(type, PairScreen.screen(e.getValue(), settings),
-                    settings);
+        for (Map.Entry<String, BatchPairs> e : byBatch.entrySet()) {
+            BatchPairs b = e.getValue();
+            PrecisionSummary p = PrecisionMeasures.summariseBatch(type,
+                    decisions.of(b.pairs, java.util.Arrays.copyOf(b.indices, b.pairs.size())), settings);
             out.add(new BatchPrecision(e.getKey(), p, BatchDispersion.test(p.rmsCv(), setRmsCv),
                     settings.batchTestAlpha()));
         }
         return out;
+    }
+
+    /** The pairs of one batch and their indices in the set. */
+    private static final class BatchPairs {
+        private final String batch;
+        private final List<DuplicatePair> pairs = new ArrayList<>();
+        private int[] indices = new int[8];
+
+        BatchPairs(String batch) {
+            this.batch = batch;
+        }
+
+        void add(DuplicatePair p, int index) {
+            if (pairs.size() == indices.length) {
+                indices = java.util.Arrays.copyOf(indices, indices.length * 2);
+            }
+            indices[pairs.size()] = index;
+            pairs.add(p);
+        }
     }
 
     private static List<OutlierPair> outliers(ScreenedPairs set, PrecisionModelResult model, double hardLimit) {

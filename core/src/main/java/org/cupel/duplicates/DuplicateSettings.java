@@ -90,6 +90,13 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
                 batchTestAlpha);
     }
 
+    public DuplicateSettings withCensoredAtHalfLimit(boolean halfLimit) {
+        return new DuplicateSettings(limitMultipleOfDetection, halfLimit, acceptancePercent, fieldHardLimitPercent,
+                coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent, umpireHardLimitPercent,
+                thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, bootstrapMaxPairs, precisionGrades,
+                batchTestAlpha);
+    }
+
     public DuplicateSettings withBootstrapMaxPairs(int maxPairs) {
         return new DuplicateSettings(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent,
                 fieldHardLimitPercent, coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent,

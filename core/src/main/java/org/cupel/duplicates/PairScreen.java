@@ -21,64 +21,143 @@ public final class PairScreen {
     }
 
     public static ScreenedPairs screen(List<DuplicatePair> pairs, DuplicateSettings settings) {
+        return decide(pairs, settings).all();
+    }
+
+    /**
+     * Judges every pair of a set once; the set's screened pairs and those of any subset (a batch) are then
+     * assembled from the decisions without reading the pairs' values again.
+     */
+    public static Decisions decide(List<DuplicatePair> pairs, DuplicateSettings settings) {
         int n = pairs.size();
-        int[] absRows = new int[n];
-        int[] relRows = new int[n];
-        double[] absA = new double[n];
-        double[] absB = new double[n];
-        double[] relA = new double[n];
-        double[] relB = new double[n];
-        int na = 0;
-        int nr = 0;
-        int limitUnknown = 0;
-        int substituted = 0;
-        int[] exAbs = new int[REASONS.length];
-        int[] exRel = new int[REASONS.length];
+        Decisions d = new Decisions(pairs, n);
         for (int i = 0; i < n; i++) {
             DuplicatePair p = pairs.get(i);
             ExclusionReason hard = unusable(p.original(), p.duplicate());
             if (hard != null) {
-                exAbs[hard.ordinal()]++;
-                exRel[hard.ordinal()]++;
+                d.absReason[i] = (byte) hard.ordinal();
+                d.relReason[i] = (byte) hard.ordinal();
                 continue;
             }
             boolean censored = p.original().qualifier() == Qualifier.BELOW_DETECTION
                     || p.duplicate().qualifier() == Qualifier.BELOW_DETECTION;
             if (censored) {
-                exAbs[ExclusionReason.BELOW_DETECTION.ordinal()]++;
+                d.absReason[i] = (byte) ExclusionReason.BELOW_DETECTION.ordinal();
                 if (!settings.censoredAtHalfLimit()) {
-                    exRel[ExclusionReason.BELOW_DETECTION.ordinal()]++;
+                    d.relReason[i] = (byte) ExclusionReason.BELOW_DETECTION.ordinal();
                     continue;
                 }
             } else {
-                absRows[na] = i;
-                absA[na] = p.original().value();
-                absB[na] = p.duplicate().value();
-                na++;
+                d.absA[i] = p.original().value();
+                d.absB[i] = p.duplicate().value();
             }
             double a = ratioValue(p.original());
             double b = ratioValue(p.duplicate());
             double limit = pairLimit(p.original(), p.duplicate());
             if (Double.isNaN(limit)) {
-                limitUnknown++;
+                d.flags[i] |= Decisions.LIMIT_UNKNOWN;
             } else if (PairMeasures.mean(a, b) < settings.limitMultipleOfDetection() * limit) {
-                exRel[ExclusionReason.BELOW_LIMIT_MULTIPLE.ordinal()]++;
+                d.relReason[i] = (byte) ExclusionReason.BELOW_LIMIT_MULTIPLE.ordinal();
                 continue;
             }
             if (censored) {
-                substituted++;
+                d.flags[i] |= Decisions.SUBSTITUTED;
             }
-            relRows[nr] = i;
-            relA[nr] = a;
-            relB[nr] = b;
-            nr++;
+            d.relA[i] = a;
+            d.relB[i] = b;
         }
-        return new ScreenedPairs(pairs,
-                new ScreenedPairs.Members(java.util.Arrays.copyOf(absRows, na), java.util.Arrays.copyOf(absA, na),
-                        java.util.Arrays.copyOf(absB, na)),
-                new ScreenedPairs.Members(java.util.Arrays.copyOf(relRows, nr), java.util.Arrays.copyOf(relA, nr),
-                        java.util.Arrays.copyOf(relB, nr)),
-                counts(exAbs), counts(exRel), limitUnknown, substituted);
+        return d;
+    }
+
+    /**
+     * Each pair's screening, index-aligned with the pair list: the reason it is left out of absolute and of
+     * relative measures ({@link #USED} when used) and the values it enters them with.
+     */
+    public static final class Decisions {
+        private static final byte USED = -1;
+        private static final byte LIMIT_UNKNOWN = 1;
+        private static final byte SUBSTITUTED = 2;
+        private final List<DuplicatePair> pairs;
+        private final byte[] absReason;
+        private final byte[] relReason;
+        private final byte[] flags;
+        private final double[] absA;
+        private final double[] absB;
+        private final double[] relA;
+        private final double[] relB;
+
+        private Decisions(List<DuplicatePair> pairs, int n) {
+            this.pairs = pairs;
+            absReason = new byte[n];
+            relReason = new byte[n];
+            java.util.Arrays.fill(absReason, USED);
+            java.util.Arrays.fill(relReason, USED);
+            flags = new byte[n];
+            absA = new double[n];
+            absB = new double[n];
+            relA = new double[n];
+            relB = new double[n];
+        }
+
+        /** The screened pairs of the whole set. */
+        public ScreenedPairs all() {
+            int[] every = new int[pairs.size()];
+            for (int i = 0; i < every.length; i++) {
+                every[i] = i;
+            }
+            return of(pairs, every);
+        }
+
+        /**
+         * The screened pairs of the subset {@code indices} (ascending indices into the set's pairs), whose
+         * pairs are {@code subset}; rows of the result index {@code subset}.
+         */
+        public ScreenedPairs of(List<DuplicatePair> subset, int[] indices) {
+            int n = indices.length;
+            int[] absRows = new int[n];
+            int[] relRows = new int[n];
+            double[] a1 = new double[n];
+            double[] b1 = new double[n];
+            double[] a2 = new double[n];
+            double[] b2 = new double[n];
+            int na = 0;
+            int nr = 0;
+            int limitUnknown = 0;
+            int substituted = 0;
+            int[] exAbs = new int[REASONS.length];
+            int[] exRel = new int[REASONS.length];
+            for (int k = 0; k < n; k++) {
+                int i = indices[k];
+                if (absReason[i] == USED) {
+                    absRows[na] = k;
+                    a1[na] = absA[i];
+                    b1[na] = absB[i];
+                    na++;
+                } else {
+                    exAbs[absReason[i]]++;
+                }
+                if (relReason[i] != USED) {
+                    exRel[relReason[i]]++;
+                    continue;
+                }
+                if ((flags[i] & LIMIT_UNKNOWN) != 0) {
+                    limitUnknown++;
+                }
+                if ((flags[i] & SUBSTITUTED) != 0) {
+                    substituted++;
+                }
+                relRows[nr] = k;
+                a2[nr] = relA[i];
+                b2[nr] = relB[i];
+                nr++;
+            }
+            return new ScreenedPairs(subset,
+                    new ScreenedPairs.Members(java.util.Arrays.copyOf(absRows, na), java.util.Arrays.copyOf(a1, na),
+                            java.util.Arrays.copyOf(b1, na)),
+                    new ScreenedPairs.Members(java.util.Arrays.copyOf(relRows, nr), java.util.Arrays.copyOf(a2, nr),
+                            java.util.Arrays.copyOf(b2, nr)),
+                    counts(exAbs), counts(exRel), limitUnknown, substituted);
+        }
     }
 
     /** The reasons with a non-zero count (counted in an array: a map update per pair dominated screening). */
