@@ -27,7 +27,9 @@ import org.cupel.project.Project;
  * Stages: {@code ingest crm batches censored duplicates} (default all). The ingest always runs once (the
  * other stages need its project); with repeats &gt; 1 every named stage runs that many times and each run is
  * printed, so the first (cold, JIT warming) and later (warm) figures can be told apart. Wall and CPU time of
- * this thread are printed in milliseconds.
+ * this thread are printed in milliseconds, and the ingest's rate in MB of CSV per second of wall time. With
+ * {@code -XX:ActiveProcessorCount=1} the ingest runs on one thread (no read-ahead), which is how the
+ * one-core ingest rate is measured (docs/performance.md).
  */
 public final class StageTimer {
     private static final ThreadMXBean THREADS = ManagementFactory.getThreadMXBean();
@@ -40,9 +42,10 @@ public final class StageTimer {
         int repeats = args.length > 1 ? Integer.parseInt(args[1]) : 1;
         List<String> stages = args.length > 2 ? List.of(args).subList(2, args.length)
                 : List.of("ingest", "crm", "batches", "censored", "duplicates");
-        Project project = time("ingest", () -> ProjectLoader.load(folder));
+        double megabytes = inputBytes(folder) / 1e6;
+        Project project = timeIngest(folder, megabytes);
         for (int r = 1; r < repeats && stages.contains("ingest"); r++) {
-            time("ingest", () -> ProjectLoader.load(folder));
+            timeIngest(folder, megabytes);
         }
         CrmReview crms = null;
         for (int r = 0; r < repeats; r++) {
@@ -61,6 +64,33 @@ public final class StageTimer {
                         DuplicateSettings.DEFAULTS);
                 time("duplicates", () -> PairExtraction.analyse(project, settings));
             }
+        }
+    }
+
+    /** The ingest, with its rate in MB of input per second of wall time. */
+    private static Project timeIngest(Path folder, double megabytes) {
+        long wall = System.nanoTime();
+        Project project = time("ingest", () -> ProjectLoader.load(folder));
+        System.out.printf(Locale.ROOT, "            %.1f MB in, %.1f MB/s wall%n", megabytes,
+                megabytes / ((System.nanoTime() - wall) / 1e9));
+        return project;
+    }
+
+    /** Bytes of the register and the lab files: what the ingest parses. */
+    private static long inputBytes(Path folder) {
+        try (java.util.stream.Stream<Path> labs = java.nio.file.Files.list(folder.resolve(ProjectLoader.LAB_DIR))) {
+            long lab = labs.mapToLong(StageTimer::size).sum();
+            return lab + size(folder.resolve(ProjectLoader.REGISTER));
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    private static long size(Path file) {
+        try {
+            return java.nio.file.Files.isRegularFile(file) ? java.nio.file.Files.size(file) : 0;
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
         }
     }
 
