@@ -3,6 +3,8 @@ package org.cupel.duplicates;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
+import java.util.function.Supplier;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
@@ -105,24 +107,46 @@ public final class PairExtraction {
                     + String.join(", ", project.analyteNames()) + ".");
         }
         List<DuplicateReport> out = new ArrayList<>();
-        Pairing pairing = Pairing.of(project.samples());
-        for (AnalyteColumn column : project.analytes().values()) {
-            String name = column.analyte().name();
-            if (analyte != null && !analyte.equals(name)) {
-                continue;
-            }
-            DetectionLimits limits = DetectionLimits.of(column);
-            Extracted all = pairing.extract(column, limits);
-            Extracted e = type == null ? all : new Extracted(
-                    all.pairs().stream().filter(p -> p.type() == type).toList(),
-                    all.orphans().stream().filter(o -> o.type() == type).toList());
-            if (e.pairs().isEmpty() && e.orphans().isEmpty()) {
-                continue;
-            }
-            out.add(DuplicateAnalysis.run(name, column.analyte().unit().symbol(), e.pairs(), e.orphans(),
-                    grades(project, name, settings), settings, limits.describe()));
+        for (Supplier<Optional<DuplicateReport>> task : perAnalyte(project, settings, analyte, type)) {
+            task.get().ifPresent(out::add);
         }
         return out;
+    }
+
+    /**
+     * The work of {@link #analyse(Project, DuplicateSettings)} as one task per analyte, in the project's analyte
+     * order; a task gives nothing for an analyte without duplicates. The tasks share only the immutable project
+     * and pairing, so they may run on several threads; each gives the same report however they are run.
+     */
+    public static List<Supplier<Optional<DuplicateReport>>> perAnalyte(Project project, DuplicateSettings settings) {
+        return perAnalyte(project, settings, null, null);
+    }
+
+    private static List<Supplier<Optional<DuplicateReport>>> perAnalyte(Project project, DuplicateSettings settings,
+                                                                         String analyte, QcRole type) {
+        Pairing pairing = Pairing.of(project.samples());
+        List<Supplier<Optional<DuplicateReport>>> tasks = new ArrayList<>();
+        for (AnalyteColumn column : project.analytes().values()) {
+            if (analyte == null || analyte.equals(column.analyte().name())) {
+                tasks.add(() -> analyseColumn(project, pairing, column, settings, type));
+            }
+        }
+        return tasks;
+    }
+
+    private static Optional<DuplicateReport> analyseColumn(Project project, Pairing pairing, AnalyteColumn column,
+                                                           DuplicateSettings settings, QcRole type) {
+        String name = column.analyte().name();
+        DetectionLimits limits = DetectionLimits.of(column);
+        Extracted all = pairing.extract(column, limits);
+        Extracted e = type == null ? all : new Extracted(
+                all.pairs().stream().filter(p -> p.type() == type).toList(),
+                all.orphans().stream().filter(o -> o.type() == type).toList());
+        if (e.pairs().isEmpty() && e.orphans().isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of(DuplicateAnalysis.run(name, column.analyte().unit().symbol(), e.pairs(), e.orphans(),
+                grades(project, name, settings), settings, limits.describe()));
     }
 
     static double[] grades(Project project, String analyte, DuplicateSettings settings) {

@@ -100,9 +100,10 @@ public final class LabFileReader {
                         + "column holding the sample IDs.");
             }
             findAnalyteColumns();
-            // Three bytes per cell overestimates a lab file's rows by about a third: less than growing every array once.
-            // A workbook's size says little about its rows, hence the cap.
-            kept = new LabRows(columns.size(), Math.min(1 << 16, TableReader.estimatedRows(bytes, t.columns().size(), 3)));
+            // Three bytes per cell overestimates a lab file's rows by about a third: less than growing every
+            // array once. A workbook's size says little about its rows, hence the cap.
+            int expected = Math.min(1 << 16, TableReader.estimatedRows(bytes, t.columns().size(), 3));
+            kept = new LabRows(columns.size(), expected);
         }
 
         LabFile finish() {

@@ -68,7 +68,8 @@ public final class RegisterReader {
             this.to = t.column(TO);
             // About five bytes per cell (IDs, codes, depths): the ID index of a million entries is sized once
             // and kept by the sample table, so it is not overestimated much.
-            this.entries = new SampleRegister.Builder(displayName, TableReader.estimatedRows(bytes, t.columns().size(), 5));
+            int expected = TableReader.estimatedRows(bytes, t.columns().size(), 5);
+            this.entries = new SampleRegister.Builder(displayName, expected);
             this.issues = new ArrayList<>(t.warnings());
         }
 
