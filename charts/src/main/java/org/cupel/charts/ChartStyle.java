@@ -84,6 +84,7 @@ public final class ChartStyle {
         s.setLegendBorderColor(Color.WHITE);
         s.setAnnotationTextFont(new Font(FONT, Font.PLAIN, 12));
         s.setSeriesColors(SERIES);
+        s.setSeriesMarkers(ChartMarkers.defaults());
         s.setAntiAlias(true);
         s.setDecimalPattern("#,##0.###");
         s.setLocale(java.util.Locale.US);

@@ -154,7 +154,7 @@ public final class PdfReport {
     }
 
     private void addTable(Chapter ch, ReportTable t) {
-        PdfPTable table = new PdfPTable(t.columns().size());
+        PdfPTable table = new PdfMeasuredTable(t.columns().size());
         float available = doc.getPageSize().getWidth() - 2 * MARGIN_X;
         float size = t.columns().size() >= WIDE_TABLE_COLUMNS ? WIDE_TABLE_FONT : TABLE_FONT;
         float[] widths = PdfTableWidths.of(t, fonts.bold(), fonts.regular(), size, available);

@@ -1,5 +1,6 @@
 package org.cupel.report;
 
+import java.io.BufferedOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.UncheckedIOException;
@@ -10,18 +11,10 @@ import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
-import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.List;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
-import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
 import org.cupel.charts.PngWriter;
 import org.cupel.project.InputException;
-import org.cupel.project.Workers;
 
 /**
  * Writes the report's output folder: {@code index.html}, {@code appendix.pdf}, {@code charts/*.png},
@@ -37,9 +30,6 @@ import org.cupel.project.Workers;
 public final class ReportWriter {
     /** Marks a folder as written by Cupel, so {@code --force} may replace it. */
     public static final String MARKER = ".cupel-report";
-
-    /** Charts drawn at once: the two cores of a typical QC workstation or CI runner. */
-    static final int RENDER_THREADS = 2;
 
     private ReportWriter() {
     }
@@ -84,6 +74,11 @@ public final class ReportWriter {
         }
     }
 
+    /**
+     * The charts are drawn on worker threads from the start; meanwhile this thread writes the tables and
+     * the page, then the PDF, which takes each chart as soon as it is written. Drawing the charts and
+     * laying out the PDF are the two largest costs of a big report, and they no longer wait for each other.
+     */
     private static void build(QcReport report, Path dir, ReportOptions options, ReportProgress progress)
             throws IOException {
         ReportFiles files = new ReportFiles(report);
@@ -92,19 +87,25 @@ public final class ReportWriter {
         Files.createDirectory(dir.resolve("charts"));
         Files.createDirectory(dir.resolve("tables"));
         Path print = separatePrint ? Files.createDirectory(dir.resolve(".print")) : dir;
-        writeCharts(files, dir, separatePrint ? print : null, options.chartDpi(), progress);
-        for (ReportTable t : files.tables()) {
-            progress.step("table " + files.table(t));
-            CsvTables.write(t, dir.resolve(files.table(t)));
-        }
-        progress.step("index.html");
-        Files.writeString(dir.resolve("index.html"), HtmlReport.render(report, files), StandardCharsets.UTF_8);
-        progress.step("appendix.pdf");
-        Path printDir = print;
-        try (OutputStream os = Files.newOutputStream(dir.resolve("appendix.pdf"))) {
-            PdfReport.write(report, files, f -> read(separatePrint
-                    ? printDir.resolve(files.chart(f).replace('/', '_')) : dir.resolve(files.chart(f))),
-                    options.paper(), os);
+        try (ChartJobs charts = new ChartJobs(files, dir, separatePrint ? print : null, options.chartDpi(),
+                progress)) {
+            for (ReportTable t : files.tables()) {
+                progress.step("table " + files.table(t));
+                CsvTables.write(t, dir.resolve(files.table(t)));
+            }
+            progress.step("index.html");
+            Files.writeString(dir.resolve("index.html"), HtmlReport.render(report, files), StandardCharsets.UTF_8);
+            progress.step("appendix.pdf");
+            // OpenPDF writes many small pieces (one per PDF object and content operator run): buffer them.
+            try (OutputStream os = new BufferedOutputStream(Files.newOutputStream(dir.resolve("appendix.pdf")),
+                    1 << 16)) {
+                PdfReport.write(report, files, f -> printPng(charts, f, separatePrint
+                        ? print.resolve(ChartJobs.printName(files.chart(f))) : dir.resolve(files.chart(f))),
+                        options.paper(), os);
+            } catch (UncheckedIOException e) {
+                throw e.getCause();
+            }
+            charts.awaitAll();
         }
         if (separatePrint) {
             deleteTree(print);
@@ -115,77 +116,13 @@ public final class ReportWriter {
                 + "'cupel report --force' may replace this folder.\n", StandardCharsets.UTF_8);
     }
 
-    /**
-     * Renders the charts on up to {@value #RENDER_THREADS} threads. Each chart is built, drawn and written
-     * by one task into its own file, so the bytes do not depend on the order tasks run in; progress is
-     * reported in reading order.
-     *
-     * @param print where print-resolution copies go, or null when {@code dpi} is the print resolution
-     */
-    private static void writeCharts(ReportFiles files, Path dir, Path print, int dpi, ReportProgress progress)
-            throws IOException {
-        List<ReportBlock.Figure> figures = files.figures();
-        int threads = Math.max(1, Math.min(RENDER_THREADS, Runtime.getRuntime().availableProcessors()));
-        ExecutorService pool = Executors.newFixedThreadPool(threads, Workers.daemonThreads("cupel-chart"));
+    /** The print PNG of {@code f}, once its chart job has written it to {@code file}. */
+    private static byte[] printPng(ChartJobs charts, ReportBlock.Figure f, Path file) {
         try {
-            List<Future<?>> done = new ArrayList<>(figures.size());
-            for (ReportBlock.Figure f : figures) {
-                done.add(pool.submit(() -> {
-                    writeChart(f, files.chart(f), dir, print, dpi);
-                    return null;
-                }));
-            }
-            for (int i = 0; i < figures.size(); i++) {
-                progress.step("chart " + files.chart(figures.get(i)));
-                if (print != null) {
-                    progress.step("print chart " + files.chart(figures.get(i)));
-                }
-                await(done.get(i));
-            }
-        } finally {
-            pool.shutdownNow();
-            awaitTermination(pool);
-        }
-    }
-
-    private static void writeChart(ReportBlock.Figure f, String name, Path dir, Path print, int dpi)
-            throws IOException {
-        if (print == null) {
-            PngWriter.writeForPrint(f.chart().get(), dir.resolve(name));
-            return;
-        }
-        PngWriter.write(f.chart().get(), dir.resolve(name), dpi);
-        PngWriter.writeForPrint(f.chart().get(), print.resolve(name.replace('/', '_')));
-    }
-
-    private static void await(Future<?> task) throws IOException {
-        try {
-            task.get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IOException("interrupted while drawing the charts", e);
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof IOException io) {
-                throw io;
-            } else if (cause instanceof RuntimeException re) {
-                throw re;
-            } else if (cause instanceof Error err) {
-                throw err;
-            }
-            throw new IOException(cause);
-        }
-    }
-
-    /** The output folder is deleted on failure only once no task can still write into it. */
-    private static void awaitTermination(ExecutorService pool) throws IOException {
-        try {
-            if (!pool.awaitTermination(10, TimeUnit.MINUTES)) {
-                throw new IOException("chart rendering did not stop");
-            }
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IOException("interrupted while stopping chart rendering", e);
+            charts.await(f);
+            return Files.readAllBytes(file);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
         }
     }
 
@@ -214,14 +151,6 @@ public final class ReportWriter {
         } catch (AtomicMoveNotSupportedException | FileAlreadyExistsException e) {
             throw new IOException("could not move " + from + " to " + to + " in one step (" + e.getMessage()
                     + "); the report was not installed", e);
-        }
-    }
-
-    private static byte[] read(Path p) {
-        try {
-            return Files.readAllBytes(p);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
         }
     }
 

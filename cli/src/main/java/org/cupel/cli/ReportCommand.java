@@ -82,6 +82,23 @@ public final class ReportCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         BatchSelection selection = new BatchSelection(date("--since", since), date("--until", until),
                 new LinkedHashSet<>(batches));
+        QcReport report = appendix(selection);
+        ReportOptions options = new ReportOptions(paper, screen ? PngWriter.SCREEN_DPI : PngWriter.PRINT_DPI, force);
+        try (Progress progress = Progress.open(!quiet && System.console() != null)) {
+            ReportWriter.write(report, out, options, progress);
+        }
+        spec.commandLine().getOut().printf("QC appendix of %s (%s) written to %s%n", report.project(),
+                selection.describe(), out.toAbsolutePath().normalize());
+        spec.commandLine().getOut().flush();
+        return CupelCommand.OK;
+    }
+
+    /**
+     * The report of the selected batches. The project itself is not kept once its report is built: at a
+     * million samples its columns are about half of the heap in use, and the writing (charts, PDF) needs
+     * only the report, whose sections hold the results they format.
+     */
+    private QcReport appendix(BatchSelection selection) throws IOException {
         ReportInputs inputs = demo ? DemoProject.load(projectFolder) : ReportInputs.load(folder());
         Project project = inputs.project();
         Project reviewed = selection.selectsAll() ? project : ProjectFilter.batches(project, selection);
@@ -89,16 +106,8 @@ public final class ReportCommand implements Callable<Integer> {
             throw new InputException("no samples in " + selection.describe() + " of project " + project.name()
                     + "; check the dates and batch IDs against the Batches table of a full report");
         }
-        QcReport report = QcAppendix.build(reviewed, inputs.testwork(), selection.describe(),
+        return QcAppendix.build(reviewed, inputs.testwork(), selection.describe(),
                 GenerationTime.from(System.getenv(), Clock.systemUTC()));
-        ReportOptions options = new ReportOptions(paper, screen ? PngWriter.SCREEN_DPI : PngWriter.PRINT_DPI, force);
-        try (Progress progress = Progress.open(!quiet && System.console() != null)) {
-            ReportWriter.write(report, out, options, progress);
-        }
-        spec.commandLine().getOut().printf("QC appendix of %s (%s) written to %s%n", project.name(),
-                selection.describe(), out.toAbsolutePath().normalize());
-        spec.commandLine().getOut().flush();
-        return CupelCommand.OK;
     }
 
     private Path folder() {

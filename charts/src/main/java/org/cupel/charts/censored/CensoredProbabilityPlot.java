@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import org.cupel.assay.Numbers;
 import org.cupel.censored.Ros;
+import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
 import org.cupel.charts.PointBudget;
@@ -53,9 +54,9 @@ public final class CensoredProbabilityPlot {
             return chart;
         }
         points.sort(Comparator.comparingDouble(Ros.Point::normalQuantile));
-        int drawnDetects = addPoints(chart, points, true, "Detected", ChartStyle.DATA, SeriesMarkers.CIRCLE);
+        int drawnDetects = addPoints(chart, points, true, "Detected", ChartStyle.DATA, ChartMarkers.CIRCLE);
         int drawnImputed = addPoints(chart, points, false, "Below detection (imputed by ROS)", ChartStyle.FAILURE,
-                SeriesMarkers.DIAMOND);
+                ChartMarkers.DIAMOND);
         double zMin = points.get(0).normalQuantile();
         double zMax = points.get(points.size() - 1).normalQuantile();
         double pad = 0.15 * Math.max(zMax - zMin, 1);

@@ -2,6 +2,7 @@ package org.cupel.charts.control;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
 import org.cupel.charts.PointBudget;
@@ -74,12 +75,12 @@ public final class BlankChart {
                 failed.add(x, v);
             }
         }
-        preceding.addTo(chart, PRECEDING, ChartStyle.GREY, SeriesMarkers.DIAMOND);
+        preceding.addTo(chart, PRECEDING, ChartStyle.GREY, ChartMarkers.DIAMOND);
         line(fail.addTo(chart, "Fail above " + rule(results, true), ChartStyle.FAILURE, SeriesMarkers.NONE), ChartStyle.solid(1.6f));
         line(warn.addTo(chart, "Warn above " + rule(results, false), ChartStyle.WARNING, SeriesMarkers.NONE), ChartStyle.dashed(1.6f));
-        detected.addTo(chart, "Blank", ChartStyle.DATA, SeriesMarkers.CIRCLE);
-        censored.addTo(chart, "Blank < DL (at DL)", ChartStyle.SKY_BLUE, SeriesMarkers.TRIANGLE_DOWN);
-        failed.addTo(chart, FAILED, ChartStyle.FAILURE, SeriesMarkers.CIRCLE);
+        detected.addTo(chart, "Blank", ChartStyle.DATA, ChartMarkers.CIRCLE);
+        censored.addTo(chart, "Blank < DL (at DL)", ChartStyle.SKY_BLUE, ChartMarkers.TRIANGLE_DOWN);
+        failed.addTo(chart, FAILED, ChartStyle.FAILURE, ChartMarkers.CIRCLE);
         labelFailures(chart, results);
         if (keep.length < n) {
             ChartNote.add(chart, ChartNotes.count(n, keep.length, PointBudget.count(flagged),

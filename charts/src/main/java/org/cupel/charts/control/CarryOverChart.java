@@ -3,6 +3,7 @@ package org.cupel.charts.control;
 import java.util.ArrayList;
 import java.util.List;
 import org.cupel.assay.Numbers;
+import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
 import org.cupel.charts.PointBudget;
@@ -77,9 +78,9 @@ public final class CarryOverChart {
             failLine(chart, results, xmin, xmax);
             rank(chart, relation, xmin, xmax);
         }
-        pass.addTo(chart, "Blank", ChartStyle.DATA, SeriesMarkers.CIRCLE);
-        censored.addTo(chart, "Blank < DL (at DL)", ChartStyle.SKY_BLUE, SeriesMarkers.TRIANGLE_DOWN);
-        failed.addTo(chart, BlankChart.FAILED, ChartStyle.FAILURE, SeriesMarkers.CIRCLE);
+        pass.addTo(chart, "Blank", ChartStyle.DATA, ChartMarkers.CIRCLE);
+        censored.addTo(chart, "Blank < DL (at DL)", ChartStyle.SKY_BLUE, ChartMarkers.TRIANGLE_DOWN);
+        failed.addTo(chart, BlankChart.FAILED, ChartStyle.FAILURE, ChartMarkers.CIRCLE);
         if (keep.length < drawn) {
             ChartNote.add(chart, ChartNotes.count(drawn, keep.length, PointBudget.count(flagged),
                     PointBudget.flaggedAmong(flagged, keep), "failed blanks"));

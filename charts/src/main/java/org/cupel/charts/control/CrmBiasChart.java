@@ -3,6 +3,7 @@ package org.cupel.charts.control;
 import java.util.List;
 import java.util.Locale;
 import org.cupel.assay.Numbers;
+import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartStyle;
 import org.cupel.control.crm.BiasVsGrade;
 import org.cupel.control.crm.SeriesReview;
@@ -45,7 +46,7 @@ public final class CrmBiasChart {
                     new double[] {s.bias().meanBiasPct()}, new double[] {half});
             p.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
             java.awt.Color col = CrmZScoreChart.CRM_COLOURS[k % CrmZScoreChart.CRM_COLOURS.length];
-            p.setMarker(SeriesMarkers.CIRCLE).setMarkerColor(col).setLineColor(col);
+            p.setMarker(ChartMarkers.CIRCLE).setMarkerColor(col).setLineColor(col);
         }
         if (usable.isEmpty()) {
             minX = 0;

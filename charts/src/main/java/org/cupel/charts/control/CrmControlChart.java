@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.cupel.assay.Numbers;
+import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
 import org.cupel.charts.PointBudget;
@@ -72,13 +73,13 @@ public final class CrmControlChart {
         }
         int[] shown = PointBudget.thinned(flagged, PointBudget.DEFAULT);
         points(c, rs, shown, "Pass", r -> r.verdict() == Verdict.PASS, ChartStyle.DATA,
-                SeriesMarkers.CIRCLE, lo, hi);
+                ChartMarkers.CIRCLE, lo, hi);
         points(c, rs, shown, "Warn", r -> r.verdict() == Verdict.WARN && !r.isSwap(), ChartStyle.WARNING,
-                SeriesMarkers.DIAMOND, lo, hi);
+                ChartMarkers.DIAMOND, lo, hi);
         points(c, rs, shown, "Fail", r -> r.verdict() == Verdict.FAIL, ChartStyle.FAILURE,
-                SeriesMarkers.SQUARE, lo, hi);
+                ChartMarkers.SQUARE, lo, hi);
         points(c, rs, shown, "Swap", CrmResult::isSwap, ChartStyle.REDDISH_PURPLE,
-                SeriesMarkers.TRIANGLE_UP, lo, hi);
+                ChartMarkers.TRIANGLE_UP, lo, hi);
         batchBoundaries(c, rs);
         int offScale = offScaleLabels(c, rs, lo, hi);
         String note = ChartNotes.count(n, shown.length, PointBudget.count(flagged),

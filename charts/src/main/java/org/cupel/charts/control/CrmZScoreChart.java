@@ -4,6 +4,7 @@ import java.time.LocalDate;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
+import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
 import org.cupel.charts.PointBudget;
@@ -92,8 +93,8 @@ public final class CrmZScoreChart {
     static final java.awt.Color[] CRM_COLOURS = {ChartStyle.BLUE, ChartStyle.REDDISH_PURPLE, ChartStyle.BLUISH_GREEN,
         ChartStyle.SKY_BLUE, ChartStyle.BLACK, ChartStyle.GREY};
 
-    private static final org.knowm.xchart.style.markers.Marker[] MARKERS = {SeriesMarkers.CIRCLE,
-        SeriesMarkers.SQUARE, SeriesMarkers.DIAMOND, SeriesMarkers.TRIANGLE_UP, SeriesMarkers.TRIANGLE_DOWN};
+    private static final org.knowm.xchart.style.markers.Marker[] MARKERS = {ChartMarkers.CIRCLE,
+        ChartMarkers.SQUARE, ChartMarkers.DIAMOND, ChartMarkers.TRIANGLE_UP, ChartMarkers.TRIANGLE_DOWN};
 
     private static void band(XYChart c, String name, double z, java.awt.Color color) {
         java.awt.BasicStroke stroke = z >= 3 ? ChartStyle.solid(1.6f) : ChartStyle.dashed(1.3f);

@@ -4,6 +4,7 @@ import java.awt.BasicStroke;
 import java.awt.Color;
 import java.util.Arrays;
 import java.util.Locale;
+import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
 import org.cupel.charts.PointBudget;
@@ -151,7 +152,7 @@ public final class DuplicateCharts {
                     positive[0].length == 0 ? new double[] {Double.NaN} : positive[0],
                     positive[1].length == 0 ? new double[] {Double.NaN} : positive[1]);
             med.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-            med.setMarker(SeriesMarkers.DIAMOND);
+            med.setMarker(ChartMarkers.DIAMOND);
             med.setMarkerColor(ChartStyle.BLACK);
             ModelFit th = model.thompsonHowarth();
             PrecisionModel pm = th.model();
@@ -257,7 +258,7 @@ public final class DuplicateCharts {
         XYSeries s = chart.addSeries(name, x.length == 0 ? new double[] {Double.NaN} : x,
                 y.length == 0 ? new double[] {Double.NaN} : y);
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-        s.setMarker(SeriesMarkers.CIRCLE);
+        s.setMarker(ChartMarkers.CIRCLE);
         s.setMarkerColor(color);
     }
 

@@ -1,6 +1,7 @@
 package org.cupel.charts.recovery;
 
 import java.util.List;
+import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartStyle;
 import org.cupel.recovery.PairComparison;
 import org.cupel.recovery.RecoveryResult;
@@ -45,7 +46,7 @@ public final class DifferenceChart {
                 }
             }
             XYSeries d = chart.addSeries("d-" + i, new double[] {p.welch().difference()}, new double[] {y});
-            d.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter).setMarker(SeriesMarkers.DIAMOND)
+            d.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter).setMarker(ChartMarkers.DIAMOND)
                     .setMarkerColor(ChartStyle.REFERENCE).setShowInLegend(false);
         }
         vertical(chart, "No difference", 0, pairs.size(), ChartStyle.REFERENCE, ChartStyle.solid(1.2f));

@@ -1,6 +1,7 @@
 package org.cupel.charts.recovery;
 
 import java.util.List;
+import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
 import org.cupel.recovery.ConditionRecovery;
@@ -62,10 +63,10 @@ public final class RecoveryByConditionChart {
         }
         XYSeries means = chart.addSeries("Mean", java.util.stream.IntStream.rangeClosed(1, conditions.size())
                 .asDoubleStream().toArray(), conditions.stream().mapToDouble(ConditionRecovery::mean).toArray());
-        means.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter).setMarker(SeriesMarkers.DIAMOND)
+        means.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter).setMarker(ChartMarkers.DIAMOND)
                 .setMarkerColor(ChartStyle.REFERENCE);
         XYSeries points = chart.addSeries("Smelts", px, py);
-        points.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter).setMarker(SeriesMarkers.CIRCLE)
+        points.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter).setMarker(ChartMarkers.CIRCLE)
                 .setMarkerColor(ChartStyle.DATA);
         return chart;
     }
