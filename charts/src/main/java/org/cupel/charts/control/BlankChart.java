@@ -8,7 +8,6 @@ import org.cupel.charts.ChartStyle;
 import org.cupel.charts.PointBudget;
 import org.cupel.control.BlankResult;
 import org.cupel.control.Verdict;
-import org.knowm.xchart.AnnotationLine;
 import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
@@ -24,7 +23,6 @@ public final class BlankChart {
     static final String PRECEDING = "Preceding sample";
     static final String FAILED = "Failed blank";
     static final int MAX_LABELS = 12;
-    static final int MAX_BOUNDARIES = 200;
 
     private BlankChart() {
     }
@@ -35,7 +33,6 @@ public final class BlankChart {
         String unit = results.isEmpty() ? "" : results.get(0).observation().unit();
         XYChart chart = new XYChartBuilder().width(ChartStyle.WIDTH).height(ChartStyle.HEIGHT)
                 .title(analyte + " blanks in run order (" + ChartNotes.count(results.size(), results.size()) + ")")
-                .xAxisTitle("Blank number in run order (dotted lines separate batches)")
                 .yAxisTitle(analyte + " (" + unit + "), log scale").build();
         ChartStyle.apply(chart);
         chart.getStyler().setYAxisLogarithmic(true);
@@ -87,25 +84,12 @@ public final class BlankChart {
                     PointBudget.flaggedAmong(flagged, keep), "warnings and failures"));
         }
 
-        batchBoundaries(chart, results);
+        BatchBoundaries.draw(chart, n, i -> results.get(i).observation().batch(), "Blank number in run order", "");
         if (n > 0) {
             chart.getStyler().setXAxisMin(0.5);
             chart.getStyler().setXAxisMax(n + 0.5);
         }
         return chart;
-    }
-
-    /** Dotted lines between batches, left out when there are more than {@value #MAX_BOUNDARIES} (they would merge). */
-    private static void batchBoundaries(XYChart chart, List<BlankResult> results) {
-        List<Double> at = new ArrayList<>();
-        for (int i = 1; i < results.size() && at.size() <= MAX_BOUNDARIES; i++) {
-            if (!results.get(i).observation().batch().equals(results.get(i - 1).observation().batch())) {
-                at.add(i + 0.5);
-            }
-        }
-        if (at.size() <= MAX_BOUNDARIES) {
-            at.forEach(x -> chart.addAnnotation(new AnnotationLine(x, true, false)));
-        }
     }
 
     /** Failed blanks are named on the chart (the first {@value #MAX_LABELS}), so a reader can find them in the tables. */

@@ -13,7 +13,6 @@ import org.cupel.control.Verdict;
 import org.cupel.control.crm.CertifiedLimits;
 import org.cupel.control.crm.CrmResult;
 import org.cupel.control.crm.SeriesReview;
-import org.knowm.xchart.AnnotationLine;
 import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
@@ -40,7 +39,6 @@ public final class CrmControlChart {
         String unit = s.analyte().unit().symbol();
         XYChart c = new XYChartBuilder().width(ChartStyle.WIDTH).height(ChartStyle.HEIGHT)
                 .title("CRM " + s.crm() + ": " + s.analyte().name() + " in time order")
-                .xAxisTitle("Result number (batch date, then position; dotted lines separate batches)")
                 .yAxisTitle(s.analyte().label()).build();
         ChartStyle.apply(c);
         double lo = lim.certified() - SPAN_SD * lim.sd();
@@ -80,7 +78,8 @@ public final class CrmControlChart {
                 ChartMarkers.SQUARE, lo, hi);
         points(c, rs, shown, "Swap", CrmResult::isSwap, ChartStyle.REDDISH_PURPLE,
                 ChartMarkers.TRIANGLE_UP, lo, hi);
-        batchBoundaries(c, rs);
+        c.getStyler().setAnnotationLineColor(new Color(185, 185, 185)).setAnnotationLineStroke(ChartStyle.dotted(0.8f));
+        BatchBoundaries.draw(c, n, i -> rs.get(i).point().batchId(), "Result number", "batch date, then position");
         int offScale = offScaleLabels(c, rs, lo, hi);
         String note = ChartNotes.count(n, shown.length, PointBudget.count(flagged),
                 PointBudget.flaggedAmong(flagged, shown), "warnings, failures and swaps")
@@ -133,24 +132,6 @@ public final class CrmControlChart {
             XYSeries s = c.addSeries(name + " " + x.size(), x, y);
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
             s.setMarker(marker).setMarkerColor(color);
-        }
-    }
-
-    private static void batchBoundaries(XYChart c, List<CrmResult> rs) {
-        c.getStyler().setAnnotationLineColor(new Color(185, 185, 185)).setAnnotationLineStroke(ChartStyle.dotted(0.8f));
-        int boundaries = 0;
-        for (int i = 1; i < rs.size(); i++) {
-            if (!rs.get(i).point().batchId().equals(rs.get(i - 1).point().batchId())) {
-                boundaries++;
-            }
-        }
-        if (boundaries > 200) {
-            return;
-        }
-        for (int i = 1; i < rs.size(); i++) {
-            if (!rs.get(i).point().batchId().equals(rs.get(i - 1).point().batchId())) {
-                c.addAnnotation(new AnnotationLine(i + 0.5, true, false));
-            }
         }
     }
 

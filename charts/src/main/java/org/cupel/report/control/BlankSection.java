@@ -61,7 +61,7 @@ public final class BlankSection {
             }
             blocks.add(new ReportBlock.Figure("blanks-" + sum.analyte(), sum.analyte() + " blanks in run order with the "
                     + "warning and failure thresholds and the grade of the sample run before each blank; failed blanks "
-                    + "are named; dotted lines separate batches.", () -> BlankChart.sequence(rs)));
+                    + "are named; dotted lines separate batches (up to 200 batches).", () -> BlankChart.sequence(rs)));
             blocks.add(new ReportBlock.Figure("blank-carry-over-" + sum.analyte(), sum.analyte() + " blank against the "
                     + "grade of the preceding sample (log axes), with lines for 1 % and 0.1 % carried over.",
                     () -> CarryOverChart.scatter(rs, sum.relation())));

@@ -57,7 +57,7 @@ public final class CrmSection {
         for (SeriesReview s : r.series()) {
             b.add(new ReportBlock.Figure("crm-" + s.crm() + "-" + s.analyte().name(), "Control chart of CRM " + s.crm()
                     + ", " + s.analyte().label() + ": certified value, ± 2 SD and ± 3 SD from the certificate, "
-                    + "the project's running mean; batch boundaries dotted.", () -> CrmControlChart.of(s)));
+                    + "the project's running mean; batch boundaries dotted (up to 200 batches).", () -> CrmControlChart.of(s)));
         }
         for (AnalyteReview a : r.analytes()) {
             List<SeriesReview> of = r.series().stream().filter(s -> s.analyte().name().equals(a.analyte())).toList();
