@@ -34,7 +34,6 @@ public final class DoubleList extends AbstractList<Double> implements RandomAcce
         return new DoubleList(out);
     }
 
-
     @Override
     public Double get(int index) {
         return values[index];

@@ -79,11 +79,6 @@ public final class IdIndex {
         }
     }
 
-    /** The strings in the order added. */
-    public String[] toArray() {
-        return Arrays.copyOf(keys, size);
-    }
-
     private void rehash(int capacity) {
         slots = new long[capacity];
         Arrays.fill(slots, EMPTY);

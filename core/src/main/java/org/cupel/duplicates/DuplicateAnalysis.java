@@ -1,6 +1,7 @@
 package org.cupel.duplicates;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.EnumMap;
 import java.util.LinkedHashMap;
@@ -67,40 +68,42 @@ public final class DuplicateAnalysis {
         Map<String, BatchPairs> byBatch = new LinkedHashMap<>();
         BatchPairs last = null;
         for (int i = 0; i < pairs.size(); i++) {
-            DuplicatePair p = pairs.get(i);
+            String batch = pairs.get(i).batch();
             // A batch's pairs mostly come together: the last batch is compared before hashing.
-            if (last == null || !last.batch.equals(p.batch())) {
-                last = byBatch.computeIfAbsent(p.batch(), BatchPairs::new);
+            if (last == null || !last.batch.equals(batch)) {
+                last = byBatch.computeIfAbsent(batch, BatchPairs::new);
             }
-            last.add(p, i);
+            last.add(i);
         }
         List<BatchPrecision> out = new ArrayList<>();
         for (Map.Entry<String, BatchPairs> e : byBatch.entrySet()) {
-            BatchPairs b = e.getValue();
-            PrecisionSummary p = PrecisionMeasures.summariseBatch(type,
-                    decisions.of(b.pairs, java.util.Arrays.copyOf(b.indices, b.pairs.size())), settings);
+            PrecisionSummary p = PrecisionMeasures.summariseBatch(type, decisions.of(e.getValue().indices()),
+                    settings);
             out.add(new BatchPrecision(e.getKey(), p, BatchDispersion.test(p.rmsCv(), setRmsCv),
                     settings.batchTestAlpha()));
         }
         return out;
     }
 
-    /** The pairs of one batch and their indices in the set. */
+    /** The indices in the set of one batch's pairs, ascending. */
     private static final class BatchPairs {
         private final String batch;
-        private final List<DuplicatePair> pairs = new ArrayList<>();
         private int[] indices = new int[8];
+        private int size;
 
         BatchPairs(String batch) {
             this.batch = batch;
         }
 
-        void add(DuplicatePair p, int index) {
-            if (pairs.size() == indices.length) {
-                indices = java.util.Arrays.copyOf(indices, indices.length * 2);
+        void add(int index) {
+            if (size == indices.length) {
+                indices = Arrays.copyOf(indices, size * 2);
             }
-            indices[pairs.size()] = index;
-            pairs.add(p);
+            indices[size++] = index;
+        }
+
+        int[] indices() {
+            return Arrays.copyOf(indices, size);
         }
     }
 

@@ -1,5 +1,7 @@
 package org.cupel.duplicates;
 
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
@@ -90,8 +92,8 @@ public final class PairScreen {
             this.pairs = pairs;
             absReason = new byte[n];
             relReason = new byte[n];
-            java.util.Arrays.fill(absReason, USED);
-            java.util.Arrays.fill(relReason, USED);
+            Arrays.fill(absReason, USED);
+            Arrays.fill(relReason, USED);
             flags = new byte[n];
             absA = new double[n];
             absB = new double[n];
@@ -109,10 +111,18 @@ public final class PairScreen {
         }
 
         /**
-         * The screened pairs of the subset {@code indices} (ascending indices into the set's pairs), whose
-         * pairs are {@code subset}; rows of the result index {@code subset}.
+         * The screened pairs of the subset {@code indices} (ascending indices into the set's pairs); rows of
+         * the result index the subset's pairs in that order.
          */
-        public ScreenedPairs of(List<DuplicatePair> subset, int[] indices) {
+        public ScreenedPairs of(int[] indices) {
+            List<DuplicatePair> subset = new ArrayList<>(indices.length);
+            for (int i : indices) {
+                subset.add(pairs.get(i));
+            }
+            return of(subset, indices);
+        }
+
+        private ScreenedPairs of(List<DuplicatePair> subset, int[] indices) {
             int n = indices.length;
             int[] absRows = new int[n];
             int[] relRows = new int[n];
@@ -152,10 +162,10 @@ public final class PairScreen {
                 nr++;
             }
             return new ScreenedPairs(subset,
-                    new ScreenedPairs.Members(java.util.Arrays.copyOf(absRows, na), java.util.Arrays.copyOf(a1, na),
-                            java.util.Arrays.copyOf(b1, na)),
-                    new ScreenedPairs.Members(java.util.Arrays.copyOf(relRows, nr), java.util.Arrays.copyOf(a2, nr),
-                            java.util.Arrays.copyOf(b2, nr)),
+                    new ScreenedPairs.Members(Arrays.copyOf(absRows, na), Arrays.copyOf(a1, na),
+                            Arrays.copyOf(b1, na)),
+                    new ScreenedPairs.Members(Arrays.copyOf(relRows, nr), Arrays.copyOf(a2, nr),
+                            Arrays.copyOf(b2, nr)),
                     counts(exAbs), counts(exRel), limitUnknown, substituted);
         }
     }

@@ -3,6 +3,7 @@ package org.cupel.ingest;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
@@ -201,7 +202,7 @@ public final class LabFileReader {
                 return;
             }
             if (n == lineOfId.length) {
-                lineOfId = java.util.Arrays.copyOf(lineOfId, n * 2);
+                lineOfId = Arrays.copyOf(lineOfId, n * 2);
             }
             lineOfId[n] = row.line();
             int batchKey = batchKey(row);
@@ -306,7 +307,7 @@ public final class LabFileReader {
 
         private int position(CellRow row, int batchKey, String id) {
             if (batchKey >= rowsOfBatch.length) {
-                rowsOfBatch = java.util.Arrays.copyOf(rowsOfBatch, Math.max(batchKey + 1, rowsOfBatch.length * 2));
+                rowsOfBatch = Arrays.copyOf(rowsOfBatch, Math.max(batchKey + 1, rowsOfBatch.length * 2));
             }
             int inOrder = ++rowsOfBatch[batchKey];
             if (positionCol < 0 || row.cell(positionCol).isEmpty()) {
@@ -380,7 +381,7 @@ public final class LabFileReader {
             LocalDate blockDate = DateCells.parse(first(LabColumns.HB_DATE), settings.dateFormat()).orElse(null);
             String lab = first(LabColumns.HB_LAB);
             int[] map = new int[batchTexts.size()];
-            java.util.Arrays.fill(map, -1);
+            Arrays.fill(map, -1);
             List<Batch> out = new ArrayList<>();
             for (int r = 0; r < kept.size(); r++) {
                 int key = kept.batch(r);

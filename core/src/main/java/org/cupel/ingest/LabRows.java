@@ -15,8 +15,6 @@ public final class LabRows {
     private static final Qualifier[] QUALIFIERS = Qualifier.values();
     private static final MissingReason[] REASONS = MissingReason.values();
     private static final QcRole[] ROLES = QcRole.values();
-    /** A lab batch file holds a few hundred rows. */
-    private static final int INITIAL_ROWS = 512;
 
     private final int width;
     private int size;
@@ -30,11 +28,6 @@ public final class LabRows {
     private double[] values;
     private double[] limits;
     private byte[] missing;
-
-    /** @param width the number of analyte columns */
-    LabRows(int width) {
-        this(width, INITIAL_ROWS);
-    }
 
     /**
      * @param width the number of analyte columns

@@ -37,7 +37,7 @@ class PairScreenProperties {
             }
         }
         assertEquals(PairScreen.screen(subset, settings),
-                decisions.of(subset, java.util.Arrays.copyOf(indices, subset.size())));
+                decisions.of(java.util.Arrays.copyOf(indices, subset.size())));
     }
 
     @Provide

@@ -88,8 +88,8 @@ public final class CrmControlChart {
                 + String.format(Locale.ROOT,
                 "; certified %s %s, limits ±2 and ±3 × certificate SD %s %s", Numbers.significant(lim.certified(), 4), unit,
                 Numbers.significant(lim.sd(), 3), unit)
-                + (s.projectLimits().available() ? String.format(Locale.US, "; own ±2 SD from the project's %,d results",
-                s.projectLimits().n()) : "");
+                + (s.projectLimits().available()
+                ? String.format(Locale.US, "; own ±2 SD from the project's %,d results", s.projectLimits().n()) : "");
         ChartNote.add(c, note);
         return c;
     }

@@ -49,7 +49,8 @@ public record Ewma(List<Double> values, List<Double> lowerLimits, List<Double> u
             }
             prev = cur;
         }
-        return new Ewma(DoubleList.of(e), DoubleList.of(lo), DoubleList.of(hi), lambda, width, signals.isEmpty() ? -1 : signals.get(0), signals);
+        return new Ewma(DoubleList.of(e), DoubleList.of(lo), DoubleList.of(hi), lambda, width,
+                signals.isEmpty() ? -1 : signals.get(0), signals);
     }
 
     public int n() {
