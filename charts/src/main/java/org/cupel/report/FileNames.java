@@ -7,6 +7,7 @@ import java.util.HashSet;
 import java.util.HexFormat;
 import java.util.Locale;
 import java.util.Set;
+import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
@@ -17,7 +18,9 @@ import java.util.regex.Pattern;
  * character (path separators, control characters, spaces, non-ASCII) becomes {@code _}; runs of dots and
  * underscores shrink to one {@code _}, so no {@code ..} survives; leading and trailing {@code . _ -} are
  * removed, so no hidden file and no trailing dot (which Windows drops); a name whose stem is a reserved
- * Windows device name (CON, PRN, AUX, NUL, COM1–9, LPT1–9, any case) gets a trailing {@code _}; names
+ * Windows device name (CON, PRN, AUX, NUL, COM1–9, LPT1–9, any case) gets a {@code _} right after the device
+ * name, since Windows takes the device name followed by any extension as the device ({@code nul.txt} becomes
+ * {@code nul_.txt}; {@code nul.txt_} would still be NUL); names
  * longer than {@value #MAX_LENGTH} characters are cut and end with 8 hex digits of the SHA-256 of the
  * original ID so that different long IDs stay different; an ID with nothing left becomes {@code item}.
  */
@@ -43,8 +46,9 @@ public final class FileNames {
         if (s.length() > MAX_LENGTH) {
             s = EDGES.matcher(s.substring(0, MAX_LENGTH - 9)).replaceAll("") + "-" + hash8(id);
         }
-        if (RESERVED.matcher(s).matches()) {
-            s = s + "_";
+        Matcher reserved = RESERVED.matcher(s);
+        if (reserved.matches()) {
+            s = reserved.group(1) + "_" + (reserved.group(2) == null ? "" : reserved.group(2));
         }
         return s;
     }

@@ -30,7 +30,10 @@ class FileNamesTest {
     @Test
     void reservedWindowsDeviceNamesAreChanged() {
         assertEquals("CON_", FileNames.safe("CON"));
-        assertEquals("nul.txt_", FileNames.safe("nul.txt"));
+        // A device name followed by an extension is still the device: "NUL.txt and NUL.tar.gz are both
+        // equivalent to NUL" (same Microsoft page; wording recalled from memory).
+        assertEquals("nul_.txt", FileNames.safe("nul.txt"));
+        assertEquals("LPT9_.tar.gz", FileNames.safe("LPT9.tar.gz"));
         assertEquals("com1_", FileNames.safe("com1"));
         assertEquals("CONSOLE", FileNames.safe("CONSOLE"));
     }
