@@ -9,17 +9,38 @@ import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
 import java.util.Random;
-import net.jqwik.api.ForAll;
-import net.jqwik.api.Property;
-import net.jqwik.api.constraints.IntRange;
+import org.cupel.testing.Gen;
+import org.cupel.testing.SeededTries;
+import org.junit.jupiter.api.Test;
 
 /** What a thinned chart may and may not leave out. */
 class PointBudgetProperties {
 
-    @Property
-    void neverMoreThanTheBudgetAndEveryFlaggedPointWhileTheyFit(@ForAll @IntRange(min = 0, max = 30_000) int n,
-            @ForAll @IntRange(min = 2, max = 5000) int budget, @ForAll @IntRange(min = 0, max = 1000) int perMille,
-            @ForAll long seed) {
+    /** n points, a point budget, the share of flagged points in thousandths and a seed that flags them. */
+    record Flags(int n, int budget, int perMille, long seed) {
+    }
+
+    @Test
+    void neverMoreThanTheBudgetAndEveryFlaggedPointWhileTheyFit() {
+        Gen<Integer> n = Gen.ints(0, 30_000);
+        Gen<Integer> budget = Gen.ints(2, 5000);
+        Gen<Integer> perMille = Gen.ints(0, 1000);
+        // No points, one, and the most; the smallest and largest budgets; no flags and all flagged.
+        List<Gen<Flags>> edges = new ArrayList<>();
+        for (int size : new int[] {0, 1, 30_000}) {
+            for (int b : new int[] {2, 5000}) {
+                for (int f : new int[] {0, 1000}) {
+                    edges.add(r -> new Flags(size, b, f, r.nextLong()));
+                }
+            }
+        }
+        SeededTries.forAll(1000, edges, r -> new Flags(n.next(r), budget.next(r), perMille.next(r), r.nextLong()),
+                in -> neverMoreThanTheBudgetAndEveryFlaggedPointWhileTheyFit(in.n(), in.budget(), in.perMille(),
+                        in.seed()));
+    }
+
+    private static void neverMoreThanTheBudgetAndEveryFlaggedPointWhileTheyFit(int n, int budget, int perMille,
+                                                                               long seed) {
         boolean[] flagged = flags(n, perMille, seed);
         int[] drawn = PointBudget.thinned(flagged, budget);
         assertTrue(drawn.length <= budget, drawn.length + " > " + budget);
@@ -45,55 +66,82 @@ class PointBudgetProperties {
         }
     }
 
-    @Property
-    void theSameInputGivesTheSameSelection(@ForAll @IntRange(min = 0, max = 20_000) int n,
-            @ForAll @IntRange(min = 0, max = 200) int perMille, @ForAll long seed) {
-        boolean[] flagged = flags(n, perMille, seed);
-        assertArrayEquals(PointBudget.thinned(flagged, PointBudget.DEFAULT),
-                PointBudget.thinned(flagged.clone(), PointBudget.DEFAULT));
+    @Test
+    void theSameInputGivesTheSameSelection() {
+        Gen<Integer> n = Gen.ints(0, 20_000);
+        Gen<Integer> perMille = Gen.ints(0, 200);
+        List<Gen<Flags>> edges = List.of(r -> new Flags(0, PointBudget.DEFAULT, 0, r.nextLong()),
+                r -> new Flags(20_000, PointBudget.DEFAULT, 0, r.nextLong()),
+                r -> new Flags(20_000, PointBudget.DEFAULT, 200, r.nextLong()));
+        SeededTries.forAll(1000, edges, r -> new Flags(n.next(r), PointBudget.DEFAULT, perMille.next(r), r.nextLong()),
+                in -> {
+                    boolean[] flagged = flags(in.n(), in.perMille(), in.seed());
+                    assertArrayEquals(PointBudget.thinned(flagged, PointBudget.DEFAULT),
+                            PointBudget.thinned(flagged.clone(), PointBudget.DEFAULT));
+                });
+    }
+
+    /** How many points and a seed for their values. */
+    record Points(int n, long seed) {
+    }
+
+    private static Gen<Points> points(int max) {
+        Gen<Integer> n = Gen.ints(0, max);
+        return r -> new Points(n.next(r), r.nextLong());
+    }
+
+    /** No point, one point, and the most points. */
+    private static List<Gen<Points>> pointEdges(int max) {
+        return List.of(r -> new Points(0, r.nextLong()), r -> new Points(1, r.nextLong()),
+                r -> new Points(max, r.nextLong()));
     }
 
     /** Sorted by (x, y) before thinning, the drawn points do not depend on the order the points came in. */
-    @Property
-    void aPermutationOfThePointsDrawsTheSamePoints(@ForAll @IntRange(min = 0, max = 12_000) int n,
-            @ForAll long seed) {
-        Random r = new Random(seed);
-        double[] x = new double[n];
-        double[] y = new double[n];
-        for (int i = 0; i < n; i++) {
-            // Coarse values, so that ties in x (and in x and y) occur.
-            x[i] = r.nextInt(500) / 10.0;
-            y[i] = r.nextInt(50);
-        }
-        List<Integer> perm = new ArrayList<>();
-        for (int i = 0; i < n; i++) {
-            perm.add(i);
-        }
-        Collections.shuffle(perm, r);
-        double[] px = new double[n];
-        double[] py = new double[n];
-        for (int i = 0; i < n; i++) {
-            px[i] = x[perm.get(i)];
-            py[i] = y[perm.get(i)];
-        }
-        assertEquals(drawnPoints(x, y), drawnPoints(px, py));
+    @Test
+    void aPermutationOfThePointsDrawsTheSamePoints() {
+        SeededTries.forAll(1000, pointEdges(12_000), points(12_000), in -> {
+            int n = in.n();
+            Random r = new Random(in.seed());
+            double[] x = new double[n];
+            double[] y = new double[n];
+            for (int i = 0; i < n; i++) {
+                // Coarse values, so that ties in x (and in x and y) occur.
+                x[i] = r.nextInt(500) / 10.0;
+                y[i] = r.nextInt(50);
+            }
+            List<Integer> perm = new ArrayList<>();
+            for (int i = 0; i < n; i++) {
+                perm.add(i);
+            }
+            Collections.shuffle(perm, r);
+            double[] px = new double[n];
+            double[] py = new double[n];
+            for (int i = 0; i < n; i++) {
+                px[i] = x[perm.get(i)];
+                py[i] = y[perm.get(i)];
+            }
+            assertEquals(drawnPoints(x, y), drawnPoints(px, py));
+        });
     }
 
-    @Property
-    void orderSortsByXThenY(@ForAll @IntRange(min = 0, max = 3000) int n, @ForAll long seed) {
-        Random r = new Random(seed);
-        double[] x = new double[n];
-        double[] y = new double[n];
-        for (int i = 0; i < n; i++) {
-            x[i] = r.nextInt(40);
-            y[i] = r.nextGaussian();
-        }
-        int[] order = PointBudget.orderByXThenY(x, y);
-        assertEquals(n, Arrays.stream(order).distinct().count(), "a permutation");
-        for (int i = 1; i < n; i++) {
-            int c = Double.compare(x[order[i - 1]], x[order[i]]);
-            assertTrue(c < 0 || c == 0 && y[order[i - 1]] <= y[order[i]]);
-        }
+    @Test
+    void orderSortsByXThenY() {
+        SeededTries.forAll(1000, pointEdges(3000), points(3000), in -> {
+            int n = in.n();
+            Random r = new Random(in.seed());
+            double[] x = new double[n];
+            double[] y = new double[n];
+            for (int i = 0; i < n; i++) {
+                x[i] = r.nextInt(40);
+                y[i] = r.nextGaussian();
+            }
+            int[] order = PointBudget.orderByXThenY(x, y);
+            assertEquals(n, Arrays.stream(order).distinct().count(), "a permutation");
+            for (int i = 1; i < n; i++) {
+                int c = Double.compare(x[order[i - 1]], x[order[i]]);
+                assertTrue(c < 0 || c == 0 && y[order[i - 1]] <= y[order[i]]);
+            }
+        });
     }
 
     /** The drawn (x, y, flagged) values in sorted order; flagged = y above 45, a function of the point. */

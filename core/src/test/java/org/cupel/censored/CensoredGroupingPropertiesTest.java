@@ -7,18 +7,13 @@ import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
 import java.util.Random;
-import net.jqwik.api.Arbitraries;
-import net.jqwik.api.Arbitrary;
-import net.jqwik.api.Assume;
-import net.jqwik.api.Combinators;
-import net.jqwik.api.ForAll;
-import net.jqwik.api.Property;
-import net.jqwik.api.Provide;
-import net.jqwik.api.Tuple;
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.math3.stat.StatUtils;
 import org.apache.commons.math3.stat.descriptive.rank.Percentile;
 import org.apache.commons.math3.stat.regression.SimpleRegression;
+import org.cupel.testing.Gen;
+import org.cupel.testing.SeededTries;
+import org.junit.jupiter.api.Test;
 
 /**
  * Every estimator works on the sample's distinct values with counts; these properties check that this
@@ -30,123 +25,146 @@ import org.apache.commons.math3.stat.regression.SimpleRegression;
  */
 class CensoredGroupingPropertiesTest {
     private static final NormalDistribution STANDARD_NORMAL = new NormalDistribution(null, 0, 1);
+    private static final Obs DETECT = new Obs(Censoring.DETECTED, 2.5, 2.5);
+    private static final Obs BELOW = new Obs(Censoring.BELOW, 0, 1.0);
+    private static final Obs ABOVE = new Obs(Censoring.ABOVE, 30, Double.POSITIVE_INFINITY);
+    private static final Obs INTERVAL = new Obs(Censoring.INTERVAL, 1, 2);
 
     /** Rounded lab-like values (many ties) with detects, values below one of three limits, above 30, in (1, 2]. */
-    @Provide
-    Arbitrary<List<Obs>> observations() {
-        Arbitrary<Obs> detect = Arbitraries.doubles().between(0.1, 40).ofScale(1).map(v -> new Obs(Censoring.DETECTED, v, v));
-        Arbitrary<Obs> below = Arbitraries.of(0.5, 1.0, 2.0).map(l -> new Obs(Censoring.BELOW, 0, l));
-        Arbitrary<Obs> above = Arbitraries.just(new Obs(Censoring.ABOVE, 30, Double.POSITIVE_INFINITY));
-        Arbitrary<Obs> interval = Arbitraries.just(new Obs(Censoring.INTERVAL, 1, 2));
-        return Arbitraries.frequencyOf(Tuple.of(8, detect), Tuple.of(3, below), Tuple.of(1, above), Tuple.of(1, interval))
-                .list().ofMinSize(1).ofMaxSize(150);
+    private static final Gen<Obs> OBSERVATION = Gen.frequency(
+            Gen.weight(8, Gen.doubles(0.1, 40, 1).map(v -> new Obs(Censoring.DETECTED, v, v))),
+            Gen.weight(3, Gen.of(0.5, 1.0, 2.0).map(l -> new Obs(Censoring.BELOW, 0, l))),
+            Gen.weight(1, Gen.constant(ABOVE)),
+            Gen.weight(1, Gen.constant(INTERVAL)));
+    private static final Gen<List<Obs>> OBSERVATIONS = OBSERVATION.list(1, 150);
+
+    /** Detects and values below a limit only, with at least two distinct detects and enough for ROS. */
+    private static final Gen<List<Obs>> LEFT_CENSORED = OBSERVATIONS
+            .map(l -> l.stream().filter(o -> o.kind() == Censoring.DETECTED || o.kind() == Censoring.BELOW).toList())
+            .filter(l -> l.stream().filter(o -> o.kind() == Censoring.DETECTED).map(Obs::low).distinct().count() >= 2
+                    && l.stream().filter(o -> o.kind() == Censoring.DETECTED).count() >= Ros.MIN_DETECTS);
+
+    /** A sample, a parameter point (μ, divided by 10 on the log scale; τ = ln σ) and the scale. */
+    record LikelihoodInput(List<Obs> obs, double mu, double tau, boolean log) {
     }
 
-    @Provide
-    Arbitrary<List<Obs>> leftCensored() {
-        return observations().map(l -> l.stream().filter(o -> o.kind() == Censoring.DETECTED || o.kind() == Censoring.BELOW)
-                .toList()).filter(l -> l.stream().filter(o -> o.kind() == Censoring.DETECTED).map(Obs::low).distinct()
-                .count() >= 2 && l.stream().filter(o -> o.kind() == Censoring.DETECTED).count() >= Ros.MIN_DETECTS);
+    private static Gen<LikelihoodInput> likelihoodInput(Gen<List<Obs>> obs, Gen<Boolean> log) {
+        Gen<Double> mu = Gen.doubles(-3, 20);
+        Gen<Double> tau = Gen.doubles(-2, 3);
+        return r -> new LikelihoodInput(obs.next(r), mu.next(r), tau.next(r), log.next(r));
     }
 
-    @Provide
-    Arbitrary<double[]> thetas() {
-        return Combinators.combine(Arbitraries.doubles().between(-3, 20), Arbitraries.doubles().between(-2, 3))
-                .as((mu, tau) -> new double[] {mu, tau});
-    }
-
-    @Property
-    void groupedLikelihoodEqualsTheSumOverObservations(@ForAll("observations") List<Obs> obs,
-                                                       @ForAll("thetas") double[] theta, @ForAll boolean log) {
-        double mu = log ? theta[0] / 10 : theta[0];
-        CensoredLikelihood.Evaluation grouped = CensoredLikelihood.of(sample(obs), log).evaluate(mu, theta[1]);
-        double[] sum = new double[6];
-        double[] magnitude = new double[6];
-        for (Obs o : obs) {
-            CensoredLikelihood.Evaluation one = CensoredLikelihood.of(sample(List.of(o)), log).evaluate(mu, theta[1]);
-            double[] e = parts(one);
+    @Test
+    void groupedLikelihoodEqualsTheSumOverObservations() {
+        // One observation of each kind on both scales: the grouped form must reduce to the single term.
+        List<Gen<LikelihoodInput>> edges = new ArrayList<>();
+        for (Obs o : List.of(DETECT, BELOW, ABOVE, INTERVAL)) {
+            edges.add(likelihoodInput(Gen.constant(List.of(o)), Gen.constant(false)));
+            edges.add(likelihoodInput(Gen.constant(List.of(o)), Gen.constant(true)));
+        }
+        SeededTries.forAll(1000, edges, likelihoodInput(OBSERVATIONS, Gen.booleans()), in -> {
+            List<Obs> obs = in.obs();
+            boolean log = in.log();
+            double tau = in.tau();
+            double mu = log ? in.mu() / 10 : in.mu();
+            CensoredLikelihood.Evaluation grouped = CensoredLikelihood.of(sample(obs), log).evaluate(mu, tau);
+            double[] sum = new double[6];
+            double[] magnitude = new double[6];
+            for (Obs o : obs) {
+                CensoredLikelihood.Evaluation one = CensoredLikelihood.of(sample(List.of(o)), log).evaluate(mu, tau);
+                double[] e = parts(one);
+                for (int k = 0; k < 6; k++) {
+                    sum[k] += e[k];
+                    magnitude[k] += Math.abs(e[k]);
+                }
+                if (o.kind() == Censoring.DETECTED) {
+                    // The one-detect term is ln φ(z) − τ − J (Jacobian J = y on the log scale).
+                    double y = log ? Math.log(o.low()) : o.low();
+                    double sigma = Math.exp(tau);
+                    double expected = STANDARD_NORMAL.logDensity((y - mu) / sigma) - tau - (log ? y : 0);
+                    assertEquals(expected, one.value(), 1e-12 * Math.max(1, Math.abs(expected)));
+                }
+            }
+            double[] g = parts(grouped);
+            if (sum[0] == Double.NEGATIVE_INFINITY) {
+                assertEquals(Double.NEGATIVE_INFINITY, g[0]);
+                return;
+            }
+            // Far in a tail, (∂P)²/P² under- or overflows observation by observation: nothing to compare.
+            SeededTries.assume(Arrays.stream(magnitude).allMatch(Double::isFinite));
             for (int k = 0; k < 6; k++) {
-                sum[k] += e[k];
-                magnitude[k] += Math.abs(e[k]);
+                // Floating-point sums of the same terms in another grouping: error below n·ε·Σ|term|.
+                assertEquals(sum[k], g[k], 1e-12 * (1 + magnitude[k]), "component " + k);
             }
-            if (o.kind() == Censoring.DETECTED) {
-                // The one-detect term is ln φ(z) − τ − J (Jacobian J = y on the log scale).
-                double y = log ? Math.log(o.low()) : o.low();
-                double sigma = Math.exp(theta[1]);
-                double expected = STANDARD_NORMAL.logDensity((y - mu) / sigma) - theta[1] - (log ? y : 0);
-                assertEquals(expected, one.value(), 1e-12 * Math.max(1, Math.abs(expected)));
-            }
-        }
-        double[] g = parts(grouped);
-        if (sum[0] == Double.NEGATIVE_INFINITY) {
-            assertEquals(Double.NEGATIVE_INFINITY, g[0]);
-            return;
-        }
-        // Far in a tail, (∂P)²/P² under- or overflows observation by observation: nothing to compare.
-        Assume.that(Arrays.stream(magnitude).allMatch(Double::isFinite));
-        for (int k = 0; k < 6; k++) {
-            // Floating-point sums of the same terms in another grouping: error below n·ε·Σ|term|.
-            assertEquals(sum[k], g[k], 1e-12 * (1 + magnitude[k]), "component " + k);
-        }
+        });
     }
 
-    @Property(tries = 200)
-    void resultsDoNotDependOnTheOrderOfTheInput(@ForAll("observations") List<Obs> obs, @ForAll long seed) {
-        List<Obs> shuffled = new ArrayList<>(obs);
-        Collections.shuffle(shuffled, new Random(seed));
-        CensoredSettings settings = new CensoredSettings(KaplanMeier.LowestMass.AT_LOWEST_LIMIT,
-                KaplanMeier.SdDivisor.DISTRIBUTION, 0, 1, 0);
-        CensoredAnalysis a = CensoredAnalysis.of(sample(obs), settings);
-        CensoredAnalysis b = CensoredAnalysis.of(sample(shuffled), settings);
-        // Exactly equal: every method works on the sorted distinct values, never on the input order.
-        assertEquals(a.summaries(), b.summaries());
-        assertEquals(a.recommendation(), b.recommendation());
-        assertEquals(a.mleNormal(), b.mleNormal());
-        assertEquals(a.mleLognormal(), b.mleLognormal());
-        assertEquals(a.kaplanMeier().steps(), b.kaplanMeier().steps());
-        assertEquals(a.ros().points(), b.ros().points());
+    record Shuffled(List<Obs> obs, long seed) {
     }
 
-    @Property(tries = 300)
-    void rosEqualsTheDirectPerObservationComputation(@ForAll("leftCensored") List<Obs> obs) {
-        Ros.Result fast = Ros.fit(sample(obs));
-        Direct direct = directRos(obs, fast.limits(), fast.exceedance());
-        if (!fast.summary().isApplicable()) {
-            return;
-        }
-        // Plotting positions are the same expressions (exact); quantiles differ by at most 2e-12 (Commons
-        // Math's erfInv route loses that much for small p, see NormalQuantileTest); 1e-9 relative on what
-        // is computed from them.
-        assertEquals(direct.points.size(), fast.points().size());
-        for (int i = 0; i < direct.points.size(); i++) {
-            Ros.Point d = direct.points.get(i);
-            Ros.Point f = fast.points().get(i);
-            assertEquals(d.plottingPosition(), f.plottingPosition(), 0);
-            assertEquals(d.detected(), f.detected());
-            assertEquals(d.limit(), f.limit(), 0);
-            assertEquals(d.normalQuantile(), f.normalQuantile(), 2e-12);
-            assertEquals(d.value(), f.value(), 1e-9 * Math.abs(d.value()));
-        }
-        assertEquals(direct.intercept, fast.intercept(), 1e-9 * Math.max(1, Math.abs(direct.intercept)));
-        assertEquals(direct.slope, fast.slope(), 1e-9 * Math.max(1, Math.abs(direct.slope)));
-        assertSummary(direct.summary, fast.summary(), 1e-9);
+    @Test
+    void resultsDoNotDependOnTheOrderOfTheInput() {
+        SeededTries.forAll(200, r -> new Shuffled(OBSERVATIONS.next(r), r.nextLong()), in -> {
+            List<Obs> shuffled = new ArrayList<>(in.obs());
+            Collections.shuffle(shuffled, new Random(in.seed()));
+            CensoredSettings settings = new CensoredSettings(KaplanMeier.LowestMass.AT_LOWEST_LIMIT,
+                    KaplanMeier.SdDivisor.DISTRIBUTION, 0, 1, 0);
+            CensoredAnalysis a = CensoredAnalysis.of(sample(in.obs()), settings);
+            CensoredAnalysis b = CensoredAnalysis.of(sample(shuffled), settings);
+            // Exactly equal: every method works on the sorted distinct values, never on the input order.
+            assertEquals(a.summaries(), b.summaries());
+            assertEquals(a.recommendation(), b.recommendation());
+            assertEquals(a.mleNormal(), b.mleNormal());
+            assertEquals(a.mleLognormal(), b.mleLognormal());
+            assertEquals(a.kaplanMeier().steps(), b.kaplanMeier().steps());
+            assertEquals(a.ros().points(), b.ros().points());
+        });
     }
 
-    @Property(tries = 300)
-    void substitutionEqualsTheDirectPerObservationComputation(@ForAll("observations") List<Obs> obs) {
-        for (Substitution.Rule rule : Substitution.Rule.values()) {
-            double[] v = new double[obs.size()];
-            for (int i = 0; i < v.length; i++) {
-                Obs o = obs.get(i);
-                v[i] = switch (o.kind()) {
-                    case DETECTED, ABOVE -> o.low();
-                    case BELOW -> rule.fraction() * o.high();
-                    case INTERVAL -> (o.low() + o.high()) / 2;
-                };
+    @Test
+    void rosEqualsTheDirectPerObservationComputation() {
+        SeededTries.forAll(300, LEFT_CENSORED, obs -> {
+            Ros.Result fast = Ros.fit(sample(obs));
+            Direct direct = directRos(obs, fast.limits(), fast.exceedance());
+            if (!fast.summary().isApplicable()) {
+                return;
             }
-            // Percentiles are order statistics: exact. Mean and SD: summation order only, 1e-12.
-            assertSummary(commons(v), Substitution.summarise(sample(obs), rule), 1e-12);
-        }
+            // Plotting positions are the same expressions (exact); quantiles differ by at most 2e-12 (Commons
+            // Math's erfInv route loses that much for small p, see NormalQuantileTest); 1e-9 relative on what
+            // is computed from them.
+            assertEquals(direct.points.size(), fast.points().size());
+            for (int i = 0; i < direct.points.size(); i++) {
+                Ros.Point d = direct.points.get(i);
+                Ros.Point f = fast.points().get(i);
+                assertEquals(d.plottingPosition(), f.plottingPosition(), 0);
+                assertEquals(d.detected(), f.detected());
+                assertEquals(d.limit(), f.limit(), 0);
+                assertEquals(d.normalQuantile(), f.normalQuantile(), 2e-12);
+                assertEquals(d.value(), f.value(), 1e-9 * Math.abs(d.value()));
+            }
+            assertEquals(direct.intercept, fast.intercept(), 1e-9 * Math.max(1, Math.abs(direct.intercept)));
+            assertEquals(direct.slope, fast.slope(), 1e-9 * Math.max(1, Math.abs(direct.slope)));
+            assertSummary(direct.summary, fast.summary(), 1e-9);
+        });
+    }
+
+    @Test
+    void substitutionEqualsTheDirectPerObservationComputation() {
+        SeededTries.forAll(300, OBSERVATIONS, obs -> {
+            for (Substitution.Rule rule : Substitution.Rule.values()) {
+                double[] v = new double[obs.size()];
+                for (int i = 0; i < v.length; i++) {
+                    Obs o = obs.get(i);
+                    v[i] = switch (o.kind()) {
+                        case DETECTED, ABOVE -> o.low();
+                        case BELOW -> rule.fraction() * o.high();
+                        case INTERVAL -> (o.low() + o.high()) / 2;
+                    };
+                }
+                // Percentiles are order statistics: exact. Mean and SD: summation order only, 1e-12.
+                assertSummary(commons(v), Substitution.summarise(sample(obs), rule), 1e-12);
+            }
+        });
     }
 
     private static double[] parts(CensoredLikelihood.Evaluation e) {

@@ -9,26 +9,18 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
-import net.jqwik.api.Arbitraries;
-import net.jqwik.api.Arbitrary;
-import net.jqwik.api.ForAll;
-import net.jqwik.api.Property;
-import net.jqwik.api.Provide;
-import net.jqwik.api.constraints.DoubleRange;
-import net.jqwik.api.constraints.IntRange;
-import net.jqwik.api.constraints.Scale;
 import org.cupel.assay.AssayValue;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
+import org.cupel.testing.Gen;
+import org.cupel.testing.SeededTries;
+import org.junit.jupiter.api.Test;
 
 /** Invariants of batch verdicts, re-assay lists and blank thresholds. */
 class ControlProperties {
 
-    @Provide
-    Arbitrary<List<String>> batches() {
-        return Arbitraries.strings().withChars('R', 'R', 'R', 'C', 'B', 'F').ofMinLength(1).ofMaxLength(25)
-                .list().ofMinSize(1).ofMaxSize(5);
-    }
+    /** 1 to 5 batches of 1 to 25 samples, each a routine sample (R, half of them), CRM, blank or field duplicate. */
+    private static final Gen<List<String>> BATCHES = Gen.strings("RRRCBF", 1, 25).list(1, 5);
 
     private static SampleTable table(List<String> codes, List<Integer> order) {
         Sequences s = new Sequences();
@@ -52,51 +44,80 @@ class ControlProperties {
         return out;
     }
 
-    @Property(tries = 300)
-    void verdictsAndReassayDoNotDependOnBatchOrOutcomeOrder(@ForAll("batches") List<String> codes,
-                                                           @ForAll long seed) {
-        List<Integer> order = new ArrayList<>();
-        for (int i = 0; i < codes.size(); i++) {
-            order.add(i);
-        }
-        SampleTable a = table(codes, order);
-        List<Integer> shuffled = new ArrayList<>(order);
-        Collections.shuffle(shuffled, new Random(seed));
-        SampleTable b = table(codes, shuffled);
-        List<ControlOutcome> outB = new ArrayList<>(outcomes(b, seed));
-        Collections.shuffle(outB, new Random(seed + 1));
-        assertEquals(byBatch(BatchVerdicts.judge(a, outcomes(a, seed))), byBatch(BatchVerdicts.judge(b, outB)));
-        assertEquals(
-                new java.util.TreeSet<>(ids(ReassayList.build(a, outcomes(a, seed), ReassaySettings.DEFAULTS))),
-                new java.util.TreeSet<>(ids(ReassayList.build(b, outB, ReassaySettings.DEFAULTS))));
+    record Batches(List<String> codes, long seed, boolean wholeBatch) {
     }
 
-    @Property(tries = 300)
-    void reassayListNeverHoldsControlSamples(@ForAll("batches") List<String> codes, @ForAll long seed,
-                                            @ForAll boolean wholeBatch) {
-        List<Integer> order = new ArrayList<>();
-        for (int i = 0; i < codes.size(); i++) {
-            order.add(i);
-        }
-        SampleTable t = table(codes, order);
-        ReassaySettings s = new ReassaySettings(wholeBatch ? ReassaySettings.Scope.WHOLE_BATCH
-                : ReassaySettings.Scope.BRACKET);
-        for (ReassayEntry e : ReassayList.build(t, outcomes(t, seed), s).entries()) {
-            assertFalse(ReassayList.isControl(t.role(t.rowOf(e.sampleId()).getAsInt())), e.sampleId());
-        }
+    private static final Gen<Batches> BATCHES_AND_SEED = r -> new Batches(BATCHES.next(r), r.nextLong(), r.nextBoolean());
+
+    @Test
+    void verdictsAndReassayDoNotDependOnBatchOrOutcomeOrder() {
+        SeededTries.forAll(300, BATCHES_AND_SEED, in -> {
+            List<String> codes = in.codes();
+            long seed = in.seed();
+            List<Integer> order = new ArrayList<>();
+            for (int i = 0; i < codes.size(); i++) {
+                order.add(i);
+            }
+            SampleTable a = table(codes, order);
+            List<Integer> shuffled = new ArrayList<>(order);
+            Collections.shuffle(shuffled, new Random(seed));
+            SampleTable b = table(codes, shuffled);
+            List<ControlOutcome> outB = new ArrayList<>(outcomes(b, seed));
+            Collections.shuffle(outB, new Random(seed + 1));
+            assertEquals(byBatch(BatchVerdicts.judge(a, outcomes(a, seed))), byBatch(BatchVerdicts.judge(b, outB)));
+            assertEquals(
+                    new java.util.TreeSet<>(ids(ReassayList.build(a, outcomes(a, seed), ReassaySettings.DEFAULTS))),
+                    new java.util.TreeSet<>(ids(ReassayList.build(b, outB, ReassaySettings.DEFAULTS))));
+        });
     }
 
-    @Property
-    void scalingValueAndLimitTogetherLeavesTheVerdict(@ForAll @DoubleRange(min = 0.001, max = 10) @Scale(6) double dl,
-                                                     @ForAll @DoubleRange(min = 0, max = 20) double multiple,
-                                                     @ForAll @IntRange(min = -3, max = 4) int decade,
-                                                     @ForAll boolean censored) {
-        // Unit changes multiply by powers of ten (ppb ↔ ppm ↔ %), the scaling that matters here.
-        double f = Math.pow(10, decade);
-        AssayValue v = censored ? AssayValue.belowDetection(dl) : AssayValue.detected(Math.max(dl, multiple * dl), dl);
-        BlankThreshold t = BlankSettings.DEFAULTS.thresholdFor("Au", dl).orElseThrow();
-        BlankThreshold ts = BlankSettings.DEFAULTS.thresholdFor("Au", dl * f).orElseThrow();
-        assertEquals(BlankVerdict.judge(v, t, "g/t").verdict(), BlankVerdict.judge(v.scaled(f), ts, "g/t").verdict());
+    @Test
+    void reassayListNeverHoldsControlSamples() {
+        SeededTries.forAll(300, BATCHES_AND_SEED, in -> {
+            List<Integer> order = new ArrayList<>();
+            for (int i = 0; i < in.codes().size(); i++) {
+                order.add(i);
+            }
+            SampleTable t = table(in.codes(), order);
+            ReassaySettings s = new ReassaySettings(in.wholeBatch() ? ReassaySettings.Scope.WHOLE_BATCH
+                    : ReassaySettings.Scope.BRACKET);
+            for (ReassayEntry e : ReassayList.build(t, outcomes(t, in.seed()), s).entries()) {
+                assertFalse(ReassayList.isControl(t.role(t.rowOf(e.sampleId()).getAsInt())), e.sampleId());
+            }
+        });
+    }
+
+    /** A blank's detection limit, its value as a multiple of that limit, a power of ten and whether it is censored. */
+    record Blank(double dl, double multiple, int decade, boolean censored) {
+    }
+
+    @Test
+    void scalingValueAndLimitTogetherLeavesTheVerdict() {
+        Gen<Double> dl = Gen.doubles(0.001, 10, 6);
+        Gen<Double> multiple = Gen.doubles(0, 20);
+        Gen<Integer> decade = Gen.ints(-3, 4);
+        // The value exactly at its limit (multiple 0 gives max(dl, 0) = dl) and exactly at the default warning
+        // and failure multiples (3 and 5), the ends of the limits and of the decades.
+        List<Gen<Blank>> edges = List.of(
+                r -> new Blank(dl.next(r), 0, decade.next(r), false),
+                r -> new Blank(0.001, multiple.next(r), -3, r.nextBoolean()),
+                r -> new Blank(10, multiple.next(r), 4, r.nextBoolean()),
+                r -> new Blank(10, 20, -3, false),
+                r -> new Blank(0.001, 20, 4, false),
+                r -> new Blank(dl.next(r), 3, decade.next(r), false),
+                r -> new Blank(dl.next(r), 5, decade.next(r), false));
+        SeededTries.forAll(1000, edges,
+                r -> new Blank(dl.next(r), multiple.next(r), decade.next(r), r.nextBoolean()), in -> {
+                    // Unit changes multiply by powers of ten (ppb ↔ ppm ↔ %), the scaling that matters here.
+                    double f = Math.pow(10, in.decade());
+                    double d = in.dl();
+                    AssayValue v = in.censored() ? AssayValue.belowDetection(d)
+                            : AssayValue.detected(Math.max(d, in.multiple() * d), d);
+                    BlankThreshold t = BlankSettings.DEFAULTS.thresholdFor("Au", d).orElseThrow();
+                    BlankThreshold ts = BlankSettings.DEFAULTS.thresholdFor("Au", d * f).orElseThrow();
+                    assertEquals(BlankVerdict.judge(v, t, "g/t").verdict(),
+                            BlankVerdict.judge(v.scaled(f), ts, "g/t").verdict());
+                });
     }
 
     private static Map<String, List<Verdict>> byBatch(List<BatchVerdict> vs) {

@@ -6,15 +6,15 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Random;
-import net.jqwik.api.ForAll;
-import net.jqwik.api.Property;
-import net.jqwik.api.constraints.DoubleRange;
-import net.jqwik.api.constraints.IntRange;
 import org.apache.commons.math3.distribution.ChiSquaredDistribution;
 import org.apache.commons.math3.stat.ranking.NaNStrategy;
 import org.apache.commons.math3.stat.ranking.NaturalRanking;
 import org.apache.commons.math3.stat.ranking.TiesStrategy;
+import org.cupel.testing.Gen;
+import org.cupel.testing.SeededTries;
+import org.junit.jupiter.api.Test;
 
 /**
  * The faster kernels of the duplicate analysis give exactly (bit for bit) what the implementations they replaced
@@ -31,8 +31,26 @@ class KernelEquivalenceProperties {
         return v;
     }
 
-    @Property(tries = 200)
-    void sortIsTheBoxedIndexSort(@ForAll long seed, @ForAll @IntRange(min = 0, max = 3000) int n) {
+    /** A seed for the values and how many there are. */
+    record Sized(long seed, int n) {
+    }
+
+    private static Gen<Sized> sized(int min, int max) {
+        Gen<Integer> n = Gen.ints(min, max);
+        return r -> new Sized(r.nextLong(), n.next(r));
+    }
+
+    /** The smallest and the largest sizes, values drawn from the try's seed. */
+    private static List<Gen<Sized>> sizeEdges(int... sizes) {
+        return Arrays.stream(sizes).mapToObj(n -> (Gen<Sized>) r -> new Sized(r.nextLong(), n)).toList();
+    }
+
+    @Test
+    void sortIsTheBoxedIndexSort() {
+        SeededTries.forAll(200, sizeEdges(0, 1, 3000), sized(0, 3000), in -> sortIsTheBoxedIndexSort(in.seed(), in.n()));
+    }
+
+    private static void sortIsTheBoxedIndexSort(long seed, int n) {
         Random random = new Random(seed);
         double[] m = gridValues(random, n, 1 + random.nextInt(500));
         double[] d = gridValues(random, n, 1 + random.nextInt(20));
@@ -51,9 +69,13 @@ class KernelEquivalenceProperties {
         assertArrayEquals(Arrays.stream(idx).mapToDouble(i -> d[i]).toArray(), sd, 0.0);
     }
 
-    @Property(tries = 500)
-    void medianBySelectionIsTheMedianOfTheSortedValues(@ForAll long seed,
-                                                        @ForAll @IntRange(min = 1, max = 2000) int n) {
+    @Test
+    void medianBySelectionIsTheMedianOfTheSortedValues() {
+        SeededTries.forAll(500, sizeEdges(1, 2, 3, 2000), sized(1, 2000),
+                in -> medianBySelectionIsTheMedianOfTheSortedValues(in.seed(), in.n()));
+    }
+
+    private static void medianBySelectionIsTheMedianOfTheSortedValues(long seed, int n) {
         Random random = new Random(seed);
         double[] v = random.nextBoolean() ? gridValues(random, n, 1 + random.nextInt(50)) : random.doubles(n).toArray();
         double[] s = v.clone();
@@ -62,11 +84,25 @@ class KernelEquivalenceProperties {
         assertEquals(expected, PrecisionMeasures.medianInPlace(v.clone(), n), 0.0);
     }
 
-    @Property(tries = 5000)
-    void twelveDigitRoundingIsBigDecimals(@ForAll @IntRange(min = 0, max = 99999) int a,
-                                          @ForAll @IntRange(min = 0, max = 99999) int b,
-                                          @ForAll @IntRange(min = 0, max = 6) int decimals,
-                                          @ForAll @DoubleRange(min = -1e6, max = 1e6) double any) {
+    /** Two decimal assay values a·10^−decimals and b·10^−decimals, and any double. */
+    record Rounding(int a, int b, int decimals, double any) {
+    }
+
+    @Test
+    void twelveDigitRoundingIsBigDecimals() {
+        Gen<Integer> digits = Gen.ints(0, 99999);
+        Gen<Integer> decimals = Gen.ints(0, 6);
+        Gen<Double> any = Gen.doubles(-1e6, 1e6);
+        // Equal values (difference 0; ulp(0) is the smallest subnormal), the largest difference at both ends
+        // of the decimals, and any at 0 and at the ends of its range.
+        List<Gen<Rounding>> edges = List.of(Gen.constant(new Rounding(0, 0, 0, 0.0)),
+                Gen.constant(new Rounding(99999, 99999, 6, -0.0)), Gen.constant(new Rounding(99999, 0, 0, 1e6)),
+                Gen.constant(new Rounding(0, 99999, 6, -1e6)));
+        SeededTries.forAll(5000, edges, r -> new Rounding(digits.next(r), digits.next(r), decimals.next(r), any.next(r)),
+                in -> twelveDigitRoundingIsBigDecimals(in.a(), in.b(), in.decimals(), in.any()));
+    }
+
+    private static void twelveDigitRoundingIsBigDecimals(int a, int b, int decimals, double any) {
         double scale = Math.pow(10, -decimals);
         // Differences of decimal assay values (the case the rounding exists for) and arbitrary doubles.
         for (double x : new double[] {a * scale - b * scale, any, any * 1e-9, Math.ulp(any), a * 0.5e-11}) {
@@ -76,8 +112,13 @@ class KernelEquivalenceProperties {
     }
 
     /** n from 60 with 30 % noise: far above the exact-distribution limit of 30 non-zero differences. */
-    @Property(tries = 300)
-    void wilcoxonMatchesTheNaturalRankingVersion(@ForAll long seed, @ForAll @IntRange(min = 60, max = 600) int n) {
+    @Test
+    void wilcoxonMatchesTheNaturalRankingVersion() {
+        SeededTries.forAll(300, sizeEdges(60, 600), sized(60, 600),
+                in -> wilcoxonMatchesTheNaturalRankingVersion(in.seed(), in.n()));
+    }
+
+    private static void wilcoxonMatchesTheNaturalRankingVersion(long seed, int n) {
         Random random = new Random(seed);
         double[] a = gridValues(random, n, 2000);
         double[] b = new double[n];
@@ -111,10 +152,19 @@ class KernelEquivalenceProperties {
         return out;
     }
 
-    @Property(tries = 2000)
-    void chiSquareTailIsCommonsMaths(@ForAll @IntRange(min = 1, max = 400) int df,
-                                     @ForAll @DoubleRange(min = 0, max = 1000) double t) {
-        assertEquals(1.0 - new ChiSquaredDistribution(null, df).cumulativeProbability(t),
-                BatchDispersion.upperTail(df, t), 0.0);
+    /** Degrees of freedom and a statistic. */
+    record Chi(int df, double t) {
+    }
+
+    @Test
+    void chiSquareTailIsCommonsMaths() {
+        Gen<Integer> df = Gen.ints(1, 400);
+        Gen<Double> t = Gen.doubles(0, 1000);
+        // t = 0 (tail 1) and t = 1000 at the smallest and largest df; t equal to df.
+        List<Gen<Chi>> edges = List.of(Gen.constant(new Chi(1, 0)), Gen.constant(new Chi(400, 0)),
+                Gen.constant(new Chi(1, 1000)), Gen.constant(new Chi(400, 1000)), Gen.constant(new Chi(400, 400)));
+        SeededTries.forAll(2000, edges, r -> new Chi(df.next(r), t.next(r)),
+                in -> assertEquals(1.0 - new ChiSquaredDistribution(null, in.df()).cumulativeProbability(in.t()),
+                        BatchDispersion.upperTail(in.df(), in.t()), 0.0));
     }
 }

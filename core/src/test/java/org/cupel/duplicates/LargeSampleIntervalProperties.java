@@ -2,10 +2,11 @@ package org.cupel.duplicates;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import java.util.List;
 import java.util.Random;
-import net.jqwik.api.ForAll;
-import net.jqwik.api.Property;
-import net.jqwik.api.constraints.IntRange;
+import org.cupel.testing.Gen;
+import org.cupel.testing.SeededTries;
+import org.junit.jupiter.api.Test;
 
 /**
  * Invariants of the large-sample intervals (sets above a bootstrap budget of 1,000 pairs). A change of unit
@@ -20,15 +21,28 @@ class LargeSampleIntervalProperties {
         return LargeSampleAgreementTest.simulate(new Random(seed), n, 0.8);
     }
 
+    /** A seed for the pairs, how many (1,001 to 1,500) and the power of two λ = 2^power (−12 to 12). */
+    record Pairs(long seed, int n, int power) {
+    }
+
+    private static final Gen<Integer> N = Gen.ints(1001, 1500);
+    private static final Gen<Integer> POWER = Gen.ints(-12, 12);
+
     /**
      * λ is a power of two, so that every floating-point step scales exactly and the results must too (1e-12
      * relative allows for nothing but that): with another λ, pair means tied in one unit can round apart in the
      * other, which regroups pairs; that is a property of the grouping, not of the intervals.
      */
-    @Property(tries = 60)
-    void scalingAllValuesScalesSigma0AndLeavesTheRest(@ForAll long seed,
-                                                      @ForAll @IntRange(min = 1001, max = 1500) int n,
-                                                      @ForAll @IntRange(min = -12, max = 12) int power) {
+    @Test
+    void scalingAllValuesScalesSigma0AndLeavesTheRest() {
+        // The smallest and largest λ, and λ = 1, at the smallest and largest set.
+        List<Gen<Pairs>> edges = List.of(r -> new Pairs(r.nextLong(), 1001, -12), r -> new Pairs(r.nextLong(), 1500, 12),
+                r -> new Pairs(r.nextLong(), 1001, 0));
+        SeededTries.forAll(60, edges, r -> new Pairs(r.nextLong(), N.next(r), POWER.next(r)),
+                in -> scalingAllValuesScalesSigma0AndLeavesTheRest(in.seed(), in.n(), in.power()));
+    }
+
+    private static void scalingAllValuesScalesSigma0AndLeavesTheRest(long seed, int n, int power) {
         double lambda = Math.scalb(1.0, power);
         double[][] p = pairs(seed, n);
         double[] sa = new double[n];
@@ -51,8 +65,12 @@ class LargeSampleIntervalProperties {
     }
 
     /** Thompson–Howarth sorts the pairs, so its intervals are exactly equal; the RMS CV sums in another order. */
-    @Property(tries = 60)
-    void pairOrderDoesNotMatter(@ForAll long seed, @ForAll @IntRange(min = 1001, max = 1500) int n) {
+    @Test
+    void pairOrderDoesNotMatter() {
+        SeededTries.forAll(60, r -> new Pairs(r.nextLong(), N.next(r), 0), in -> pairOrderDoesNotMatter(in.seed(), in.n()));
+    }
+
+    private static void pairOrderDoesNotMatter(long seed, int n) {
         double[][] p = pairs(seed, n);
         Random random = new Random(seed ^ 0x5DEECE66DL);
         double[] pa = p[0].clone();

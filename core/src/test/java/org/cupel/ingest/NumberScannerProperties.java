@@ -2,12 +2,10 @@ package org.cupel.ingest;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import net.jqwik.api.Arbitraries;
-import net.jqwik.api.Arbitrary;
-import net.jqwik.api.Combinators;
-import net.jqwik.api.ForAll;
-import net.jqwik.api.Property;
-import net.jqwik.api.Provide;
+import java.util.List;
+import org.cupel.testing.Gen;
+import org.cupel.testing.SeededTries;
+import org.junit.jupiter.api.Test;
 
 /**
  * The scanner's exact fast path gives the same double as {@link Double#parseDouble} (bit for bit), and the
@@ -19,34 +17,44 @@ class NumberScannerProperties {
     private static final NumberScanner COMMA = new NumberScanner(true, true);
     private static final NumberScanner PLAIN = new NumberScanner(false, false);
 
-    @Provide
-    Arbitrary<String> decimals() {
-        Arbitrary<String> digits = Arbitraries.strings().numeric().ofMinLength(0).ofMaxLength(24);
-        return Combinators.combine(Arbitraries.of("", "-", "+"), digits, Arbitraries.of("", "."), digits)
-                .as((sign, i, dot, f) -> sign + i + dot + f)
-                .filter(s -> s.chars().anyMatch(Character::isDigit));
+    private static final Gen<String> SIGN = Gen.of("", "-", "+");
+    private static final Gen<String> DIGITS = Gen.strings("0123456789", 0, 24);
+    private static final Gen<String> MARK = Gen.of("", ".");
+    private static final Gen<String> SIGNED_DIGITS_MARK_DIGITS = r -> SIGN.next(r) + DIGITS.next(r) + MARK.next(r)
+            + DIGITS.next(r);
+
+    /** An optional sign, digits, an optional point and digits: at least one digit. */
+    private static final Gen<String> DECIMALS = SIGNED_DIGITS_MARK_DIGITS
+            .filter(s -> s.chars().anyMatch(Character::isDigit));
+
+    @Test
+    void decimalsReadAsParseDouble() {
+        // Signed zeros, a bare fraction, a trailing point, and the longest digit strings (past the fast path).
+        List<Gen<String>> edges = List.of(Gen.constant("0"), Gen.constant("-0"), Gen.constant("+.5"),
+                Gen.constant("7."), Gen.constant("9".repeat(24) + "." + "9".repeat(24)),
+                Gen.constant("-" + "0".repeat(24) + "." + "0".repeat(23) + "1"));
+        SeededTries.forAll(5000, edges, DECIMALS, s -> assertEquals(Double.doubleToRawLongBits(Double.parseDouble(s)),
+                Double.doubleToRawLongBits(POINT.scan(s, 0, s.length())), s));
     }
 
-    @Property(tries = 5000)
-    void decimalsReadAsParseDouble(@ForAll("decimals") String s) {
-        assertEquals(Double.doubleToRawLongBits(Double.parseDouble(s)),
-                Double.doubleToRawLongBits(POINT.scan(s, 0, s.length())), s);
-    }
+    /** Digits (weighted), both marks, signs, exponents, spaces (ordinary and no-break) and a stray letter. */
+    private static final Gen<String> TEXTS = Gen.strings("0123456789012345678901234567890.,.,+-eE \u00a0x", 0, 30);
 
-    @Provide
-    Arbitrary<String> texts() {
-        return Arbitraries.strings().withChars("0123456789012345678901234567890.,.,+-eE \u00a0x").ofMaxLength(30);
-    }
-
-    @Property(tries = 5000)
-    void everyTextReadsAsTheReference(@ForAll("texts") String s) {
-        for (boolean comma : new boolean[] {false, true}) {
-            for (boolean grouping : new boolean[] {false, true}) {
-                NumberScanner n = grouping ? (comma ? COMMA : POINT) : (comma ? new NumberScanner(true, false) : PLAIN);
-                assertEquals(Double.doubleToRawLongBits(reference(s, comma, grouping)),
-                        Double.doubleToRawLongBits(n.scan(s, 0, s.length())), s + " comma=" + comma + " grouping=" + grouping);
+    @Test
+    void everyTextReadsAsTheReference() {
+        List<Gen<String>> edges = List.of(Gen.constant(""), Gen.constant("1,234.5"), Gen.constant("1.234,5"),
+                Gen.constant("1\u00a0234,5"), Gen.constant("1e"), Gen.constant("-.e5"));
+        SeededTries.forAll(5000, edges, TEXTS, s -> {
+            for (boolean comma : new boolean[] {false, true}) {
+                for (boolean grouping : new boolean[] {false, true}) {
+                    NumberScanner n = grouping ? (comma ? COMMA : POINT)
+                            : (comma ? new NumberScanner(true, false) : PLAIN);
+                    assertEquals(Double.doubleToRawLongBits(reference(s, comma, grouping)),
+                            Double.doubleToRawLongBits(n.scan(s, 0, s.length())),
+                            s + " comma=" + comma + " grouping=" + grouping);
+                }
             }
-        }
+        });
     }
 
     /** The scanner as it was: checks the grammar while copying the cleaned characters, then parseDouble. */

@@ -5,15 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
-import net.jqwik.api.Arbitraries;
-import net.jqwik.api.Arbitrary;
-import net.jqwik.api.ForAll;
-import net.jqwik.api.Property;
-import net.jqwik.api.Provide;
-import net.jqwik.api.constraints.DoubleRange;
 import org.cupel.ingest.ValueConventions;
+import org.cupel.testing.Gen;
+import org.cupel.testing.SeededTries;
 import org.cupel.units.GradeUnit;
+import org.junit.jupiter.api.Test;
 
 /** Through the reader: the same testwork written in g/t, ppm, oz/st or ppb gives the same recovery. */
 class ReaderUnitPropertiesTest {
@@ -39,17 +37,21 @@ class ReaderUnitPropertiesTest {
         }
     }
 
-    @Property(tries = 40)
-    void recoveryDoesNotDependOnTheUnitsWritten(@ForAll("units") GradeUnit unit,
-                                                @ForAll @DoubleRange(min = 0.05, max = 5) double slagGpt)
-            throws IOException {
-        double inGpt = recovery(GradeUnit.G_PER_T, "g/t", slagGpt, "g", 1);
-        double other = recovery(unit, unit.symbol(), slagGpt, "kg", 1e-3);
-        assertEquals(inGpt, other, 1e-9);
+    /** The unit the grades are written in and the slag grade in g/t. */
+    record Written(GradeUnit unit, double slagGpt) {
     }
 
-    @Provide
-    Arbitrary<GradeUnit> units() {
-        return Arbitraries.of(GradeUnit.PPM, GradeUnit.OZ_PER_SHORT_TON, GradeUnit.PPB, GradeUnit.MG_PER_KG);
+    private static final Gen<GradeUnit> UNITS = Gen.of(GradeUnit.PPM, GradeUnit.OZ_PER_SHORT_TON, GradeUnit.PPB,
+            GradeUnit.MG_PER_KG);
+
+    @Test
+    void recoveryDoesNotDependOnTheUnitsWritten() {
+        Gen<Double> slag = Gen.doubles(0.05, 5);
+        List<Gen<Written>> ends = List.of(r -> new Written(UNITS.next(r), 0.05), r -> new Written(UNITS.next(r), 5));
+        SeededTries.forAll(40, ends, r -> new Written(UNITS.next(r), slag.next(r)), in -> {
+            double inGpt = recovery(GradeUnit.G_PER_T, "g/t", in.slagGpt(), "g", 1);
+            double other = recovery(in.unit(), in.unit().symbol(), in.slagGpt(), "kg", 1e-3);
+            assertEquals(inGpt, other, 1e-9);
+        });
     }
 }

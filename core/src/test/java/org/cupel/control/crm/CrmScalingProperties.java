@@ -4,11 +4,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.time.LocalDate;
 import java.util.List;
-import net.jqwik.api.ForAll;
-import net.jqwik.api.Property;
-import net.jqwik.api.constraints.DoubleRange;
-import net.jqwik.api.constraints.Scale;
-import net.jqwik.api.constraints.Size;
+import org.cupel.testing.Gen;
+import org.cupel.testing.SeededTries;
+import org.junit.jupiter.api.Test;
 
 /**
  * z-scores and rule outcomes do not depend on the unit: multiplying every value, certified value and SD
@@ -29,26 +27,45 @@ class CrmScalingProperties {
         return CrmReview.of(f.project());
     }
 
-    @Property(tries = 200)
-    void zAndVerdictsAreInvariantToUnitScaling(@ForAll @Size(min = 1, max = 25) List<@DoubleRange(min = -6, max = 6) Double> z,
-                                               @ForAll @DoubleRange(min = 1e-3, max = 1e3) @Scale(4) double factor) {
-        SeriesReview a = review(z, 1).series().get(0);
-        SeriesReview b = review(z, factor).series().get(0);
-        for (int i = 0; i < z.size(); i++) {
-            // 1e-6 absolute on z: two roundings of values near 1e3·9 in double precision, far below rule limits.
-            assertEquals(a.results().get(i).z(), b.results().get(i).z(), 1e-6);
-            if (Math.abs(Math.abs(z.get(i)) - 2) > 1e-6 && Math.abs(Math.abs(z.get(i)) - 3) > 1e-6) {
-                assertEquals(a.results().get(i).verdict(), b.results().get(i).verdict());
-                assertEquals(a.results().get(i).swapWith(), b.results().get(i).swapWith());
-            }
-        }
+    /** 1 to 25 z-scores in [−6, 6] and a unit factor in [0.001, 1000] with four decimals. */
+    record Series(List<Double> z, double factor) {
     }
 
-    @Property(tries = 300)
-    void zBandsFollowIso13528(@ForAll @DoubleRange(min = -10, max = 10) double z) {
-        ZBand expected = Math.abs(z) <= 2 ? ZBand.SATISFACTORY : Math.abs(z) < 3 ? ZBand.QUESTIONABLE
-                : ZBand.UNSATISFACTORY;
-        assertEquals(expected, ZBand.of(z));
-        assertEquals(ZBand.of(z), ZBand.of(-z));
+    @Test
+    void zAndVerdictsAreInvariantToUnitScaling() {
+        Gen<List<Double>> zs = Gen.doubles(-6, 6).list(1, 25);
+        Gen<Double> factor = Gen.doubles(1e-3, 1e3, 4);
+        List<Gen<Series>> extremes = List.of(r -> new Series(zs.next(r), 1e-3), r -> new Series(zs.next(r), 1e3),
+                r -> new Series(List.of(-6.0, 6.0, 0.0), factor.next(r)));
+        SeededTries.forAll(200, extremes, r -> new Series(zs.next(r), factor.next(r)), in -> {
+            List<Double> z = in.z();
+            SeriesReview a = review(z, 1).series().get(0);
+            SeriesReview b = review(z, in.factor()).series().get(0);
+            for (int i = 0; i < z.size(); i++) {
+                // 1e-6 absolute on z: two roundings of values near 1e3·9 in double precision, far below rule limits.
+                assertEquals(a.results().get(i).z(), b.results().get(i).z(), 1e-6);
+                if (Math.abs(Math.abs(z.get(i)) - 2) > 1e-6 && Math.abs(Math.abs(z.get(i)) - 3) > 1e-6) {
+                    assertEquals(a.results().get(i).verdict(), b.results().get(i).verdict());
+                    assertEquals(a.results().get(i).swapWith(), b.results().get(i).swapWith());
+                }
+            }
+        });
+    }
+
+    @Test
+    void zBandsFollowIso13528() {
+        // The band limits themselves (|z| = 2 is satisfactory, |z| = 3 unsatisfactory), the doubles beside
+        // them, zero and the ends of the range: random doubles never land on a limit.
+        List<Gen<Double>> limits = new java.util.ArrayList<>();
+        for (double z : new double[] {2, 3, Math.nextUp(2.0), Math.nextDown(3.0), 0, 10}) {
+            limits.add(Gen.constant(z));
+            limits.add(Gen.constant(-z));
+        }
+        SeededTries.forAll(300, limits, Gen.doubles(-10, 10), z -> {
+            ZBand expected = Math.abs(z) <= 2 ? ZBand.SATISFACTORY : Math.abs(z) < 3 ? ZBand.QUESTIONABLE
+                    : ZBand.UNSATISFACTORY;
+            assertEquals(expected, ZBand.of(z));
+            assertEquals(ZBand.of(z), ZBand.of(-z));
+        });
     }
 }
