@@ -38,7 +38,7 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code cupel duplicates}: duplicate precision and bias on a project folder or a plain pairs CSV. */
-@Command(name = "duplicates",
+@Command(name = "duplicates", mixinStandardHelpOptions = true,
         description = {"Precision of duplicate assays (HARD, RMS CV, Thompson–Howarth and RMS SD regression) and",
                 "bias between duplicates and originals or between labs (RMA, paired t, Wilcoxon)."},
         footer = {"", "A pairs CSV has columns original, duplicate (values such as 1.23 or <0.005) and optional",
