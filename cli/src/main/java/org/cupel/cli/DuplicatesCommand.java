@@ -25,7 +25,6 @@ import org.cupel.duplicates.ModelFit;
 import org.cupel.duplicates.OutlierPair;
 import org.cupel.duplicates.PairExtraction;
 import org.cupel.duplicates.PairsFile;
-import org.cupel.ingest.ProjectLoader;
 import org.cupel.project.Project;
 import org.cupel.duplicates.PrecisionSummary;
 import org.cupel.duplicates.RuleOutcome;
@@ -94,7 +93,7 @@ public final class DuplicatesCommand implements Callable<Integer> {
         List<DuplicateReport> reports = new ArrayList<>();
         List<DataIssue> issues = new ArrayList<>();
         if (Files.isDirectory(input)) {
-            Project project = ProjectLoader.load(input);
+            Project project = ProjectFolder.load(input);
             DuplicateSettings fromConfig = project.config().section("duplicates", DuplicateSettings.class,
                     DuplicateSettings.DEFAULTS);
             if (dlMultiple != null) {
