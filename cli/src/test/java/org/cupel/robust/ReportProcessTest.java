@@ -1,5 +1,6 @@
 package org.cupel.robust;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -69,6 +70,13 @@ class ReportProcessTest {
         Map<String, String> ha = dataFiles(runs.resolve("a"));
         assertTrue(ha.containsKey("summary.json") && ha.keySet().stream().anyMatch(k -> k.endsWith(".csv")));
         assertEquals(ha, dataFiles(runs.resolve("b")));
+    }
+
+    /** Issue 15: the PDF is byte-identical too (font-subset tags, file identifier and dates fixed). */
+    @Test
+    void twoRunsWithTheSameSourceDateEpochGiveAnIdenticalPdf() throws Exception {
+        assertArrayEquals(Files.readAllBytes(runs.resolve("a").resolve("appendix.pdf")),
+                Files.readAllBytes(runs.resolve("b").resolve("appendix.pdf")));
     }
 
     private static void copyTree(Path from, Path to) throws IOException {
