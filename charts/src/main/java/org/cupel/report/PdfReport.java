@@ -5,6 +5,7 @@ import com.lowagie.text.Chunk;
 import com.lowagie.text.Document;
 import com.lowagie.text.DocumentException;
 import com.lowagie.text.Element;
+import com.lowagie.text.ExceptionConverter;
 import com.lowagie.text.Font;
 import com.lowagie.text.Image;
 import com.lowagie.text.PageSize;
@@ -96,7 +97,14 @@ public final class PdfReport {
             }
             doc.close();
         } catch (DocumentException e) {
-            throw new IOException("could not write the PDF: " + e.getMessage(), e);
+            // The layout refused an element Cupel built: a bug, not a problem of the output location.
+            throw new IllegalStateException("could not lay out the PDF: " + e.getMessage(), e);
+        } catch (ExceptionConverter e) {
+            // OpenPDF wraps the output stream's I/O errors (a full disk) in this unchecked exception.
+            if (e.getException() instanceof IOException io) {
+                throw io;
+            }
+            throw e;
         }
     }
 

@@ -39,7 +39,9 @@ class ReportWriterTest {
             }
         }
         assertFalse(Files.exists(out.resolve("charts/.print")), "print-resolution copies are not left behind");
-        assertEquals(List.of("qc"), listing(dir), "no temporary folder is left beside the report");
+        assertEquals(List.of(".qc.cupel-lock", "qc"), listing(dir),
+                "no temporary folder is left beside the report, only the empty lock file");
+        assertEquals(0, Files.size(dir.resolve(".qc.cupel-lock")));
         String pdf = new String(Files.readAllBytes(out.resolve("appendix.pdf")), java.nio.charset.StandardCharsets.ISO_8859_1);
         assertTrue(pdf.startsWith("%PDF-"));
     }
@@ -60,7 +62,8 @@ class ReportWriterTest {
         Path out = dir.resolve("qc");
         QcReport broken = withFailingChart(ReportFixture.report());
         assertThrows(IllegalStateException.class, () -> ReportWriter.write(broken, out, PRINT, ReportProgress.NONE));
-        assertEquals(List.of(), listing(dir), "neither the report nor its temporary folder exists");
+        assertEquals(List.of(".qc.cupel-lock"), listing(dir),
+                "neither the report nor its temporary folder exists (the lock file stays: see OutputLock)");
     }
 
     @Test
@@ -75,11 +78,11 @@ class ReportWriterTest {
         assertThrows(IllegalStateException.class,
                 () -> ReportWriter.write(withFailingChart(ReportFixture.report()), out, force, ReportProgress.NONE));
         assertArrayEquals(before, Files.readAllBytes(out.resolve("index.html")), "the previous report is intact");
-        assertEquals(List.of("qc"), listing(dir));
+        assertEquals(List.of(".qc.cupel-lock", "qc"), listing(dir));
         Files.writeString(out.resolve("stale.txt"), "from an older run");
         ReportWriter.write(ReportFixture.report(), out, force, ReportProgress.NONE);
         assertFalse(Files.exists(out.resolve("stale.txt")), "replaced whole, not merged");
-        assertEquals(List.of("qc"), listing(dir));
+        assertEquals(List.of(".qc.cupel-lock", "qc"), listing(dir));
     }
 
     @Test
