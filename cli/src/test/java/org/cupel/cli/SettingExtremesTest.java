@@ -153,8 +153,8 @@ class SettingExtremesTest {
                 StringWriter err = new StringWriter();
                 int code = CupelCommand.run(new String[] {"analyse", project.toString()}, new PrintWriter(out, true),
                         new PrintWriter(err, true));
-                boolean clearInputError = code == CupelCommand.INPUT_ERROR && err.toString().startsWith("cupel: cupel.yaml:")
-                        && err.toString().strip().lines().count() == 1;
+                boolean clearInputError = code == CupelCommand.INPUT_ERROR
+                        && err.toString().startsWith("cupel: cupel.yaml:") && err.toString().strip().lines().count() == 1;
                 if (!(code == CupelCommand.OK || clearInputError)) {
                     failures.add(leaf.name() + " = " + value + " -> exit " + code + ": "
                             + err.toString().strip());

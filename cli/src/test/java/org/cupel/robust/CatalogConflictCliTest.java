@@ -6,14 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import org.cupel.cli.CupelCommand;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -32,13 +29,10 @@ class CatalogConflictCliTest {
             Files.createDirectories(dir.resolve(e.getKey()).getParent());
             Files.writeString(dir.resolve(e.getKey()), e.getValue());
         }
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(new String[] {"check", dir.toString(), "--json"}, new PrintWriter(out, true),
-                new PrintWriter(err, true));
-        assertEquals(0, code, err.toString());
+        Cli check = Cli.run("check", dir.toString(), "--json");
+        assertEquals(0, check.code(), check.err());
         List<String> catalogIssues = new ArrayList<>();
-        for (JsonNode i : new ObjectMapper().readTree(out.toString()).get("exceptions")) {
+        for (JsonNode i : new ObjectMapper().readTree(check.out()).get("exceptions")) {
             if (i.get("where").get("file").asText().equals("crm-catalog.csv")) {
                 catalogIssues.add(i.get("severity").asText() + " " + i.get("where").get("line").asInt() + ": "
                         + i.get("problem").asText());
@@ -52,6 +46,6 @@ class CatalogConflictCliTest {
                 "WARNING 2: the certificate used for KC-1 Au is in doubt: " + both
                         + "; the KC-1 results are judged against line 2 until the catalog is corrected"),
                 catalogIssues);
-        assertTrue(out.toString().contains("delete the wrong row of the catalog"), out.toString());
+        assertTrue(check.out().contains("delete the wrong row of the catalog"), check.out());
     }
 }

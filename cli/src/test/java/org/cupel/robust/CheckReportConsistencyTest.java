@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -31,16 +29,6 @@ class CheckReportConsistencyTest {
     private static final List<String> FILES = List.of("lab/OAL-1.csv", "register.csv", "crm-catalog.csv",
             "cupel.yaml", "testwork/heads.csv", "testwork/smelts.csv");
 
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args, new PrintWriter(out, true), new PrintWriter(err, true));
-        return new Run(code, out.toString(), err.toString());
-    }
-
     /** A small project with every kind of input (the fuzz targets' well-formed files). */
     private static Map<String, String> project() {
         Map<String, String> f = new LinkedHashMap<>();
@@ -64,8 +52,8 @@ class CheckReportConsistencyTest {
     @Test
     void theWellFormedProjectPassesBoth(@TempDir Path dir) throws IOException {
         write(dir, project());
-        assertEquals(0, run("check", dir.toString()).code());
-        Run a = run("analyse", dir.toString());
+        assertEquals(0, Cli.run("check", dir.toString()).code());
+        Cli a = Cli.run("analyse", dir.toString());
         assertEquals(0, a.code(), a.err());
     }
 
@@ -73,11 +61,13 @@ class CheckReportConsistencyTest {
     @Test
     void aDamagedSmeltsFileFailsCheckAsItFailsTheReport(@TempDir Path dir) throws IOException {
         Map<String, String> files = project();
-        files.put("testwork/smelts.csv", "test_id,condition,replicate,feed,charge_g,Au_g/t\nSM-01,A,1,F1,49.97,472.5\n");
+        // Wide format (no product column) without a single product mass column.
+        files.put("testwork/smelts.csv", "test_id,condition,replicate,feed,charge_g,Au_g/t\n"
+                + "SM-01,A,1,F1,49.97,472.5\n");
         write(dir, files);
-        Run report = run("report", dir.toString(), "--out", dir.resolve("qc").toString(), "--quiet");
+        Cli report = Cli.run("report", dir.toString(), "--out", dir.resolve("qc").toString(), "--quiet");
         assertEquals(CupelCommand.INPUT_ERROR, report.code(), report.err());
-        Run check = run("check", dir.toString());
+        Cli check = Cli.run("check", dir.toString());
         assertEquals(CupelCommand.INPUT_ERROR, check.code(), check.out());
         assertTrue(check.out().contains("fatal") && check.out().contains("smelts.csv"), check.out());
     }
@@ -88,9 +78,9 @@ class CheckReportConsistencyTest {
         Map<String, String> files = project();
         files.put("cupel.yaml", "project: P\nduplicates:\n  bootstrapResamples: 5\n");
         write(dir, files);
-        Run report = run("report", dir.toString(), "--out", dir.resolve("qc").toString(), "--quiet");
+        Cli report = Cli.run("report", dir.toString(), "--out", dir.resolve("qc").toString(), "--quiet");
         assertEquals(CupelCommand.INPUT_ERROR, report.code(), report.err());
-        Run check = run("check", dir.toString(), "--json");
+        Cli check = Cli.run("check", dir.toString(), "--json");
         assertEquals(CupelCommand.INPUT_ERROR, check.code(), check.out());
         assertTrue(check.out().contains("duplicates.bootstrapResamples: 5 is outside 100 to 100000 resamples"),
                 check.out());
@@ -111,8 +101,8 @@ class CheckReportConsistencyTest {
             files.put(target, damaged);
             Path dir = root.resolve("try-" + i);
             write(dir, files);
-            Run check = run("check", dir.toString());
-            Run report = run("analyse", dir.toString());
+            Cli check = Cli.run("check", dir.toString());
+            Cli report = Cli.run("analyse", dir.toString());
             boolean agree = (check.code() == CupelCommand.INPUT_ERROR) == (report.code() == CupelCommand.INPUT_ERROR);
             if (!agree || check.code() == CupelCommand.INTERNAL_ERROR || report.code() == CupelCommand.INTERNAL_ERROR) {
                 failures.add("seed " + SEED + " try " + i + ", " + target + ": check exit " + check.code()

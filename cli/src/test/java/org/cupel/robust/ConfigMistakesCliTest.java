@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -26,17 +24,10 @@ class ConfigMistakesCliTest {
             "check", List.of(), "analyse", List.of(), "crm", List.of(), "batches", List.of(),
             "duplicates", List.of(), "recovery", List.of(), "report", List.of("--out", "QC", "--quiet"));
 
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String command, Path project) {
+    private static Cli run(String command, Path project) {
         List<String> args = new java.util.ArrayList<>(List.of(command, project.toString()));
         COMMANDS.get(command).forEach(a -> args.add(a.equals("QC") ? project.resolve("qc").toString() : a));
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args.toArray(String[]::new), new PrintWriter(out, true),
-                new PrintWriter(err, true));
-        return new Run(code, out.toString(), err.toString());
+        return Cli.run(args.toArray(String[]::new));
     }
 
     private static Path project(Path dir, String yaml) throws IOException {
@@ -53,7 +44,7 @@ class ConfigMistakesCliTest {
     /** Each command exits 2 and gives {@code expected}: on stderr, or (check) as a fatal entry of its register. */
     private static void everyCommandRefuses(Path project, String expected) {
         for (String command : COMMANDS.keySet()) {
-            Run r = run(command, project);
+            Cli r = run(command, project);
             assertEquals(CupelCommand.INPUT_ERROR, r.code(), command + ": " + r.out() + r.err());
             if (command.equals("check")) {
                 // The register shows the location and the problem in columns of their own.

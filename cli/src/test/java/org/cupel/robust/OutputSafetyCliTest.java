@@ -9,8 +9,6 @@ import java.io.BufferedReader;
 import java.io.File;
 import java.io.IOException;
 import java.io.InputStreamReader;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -32,16 +30,6 @@ import org.junit.jupiter.api.io.TempDir;
 class OutputSafetyCliTest {
     private static final Path MESSY = Path.of(System.getProperty("cupel.testdata"), "fixtures", "ingest",
             "messy-project");
-
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args, new PrintWriter(out, true), new PrintWriter(err, true));
-        return new Run(code, out.toString(), err.toString());
-    }
 
     private static String java() {
         return Path.of(System.getProperty("java.home"), "bin", "java").toString();
@@ -102,14 +90,14 @@ class OutputSafetyCliTest {
     @Test
     void aSecondRunOnTheSameOutStopsAtOnce(@TempDir Path dir) throws Exception {
         Path out = dir.resolve("qc");
-        assertEquals(0, run("report", MESSY.toString(), "--out", out.toString(), "--screen", "--quiet").code());
+        assertEquals(0, Cli.run("report", MESSY.toString(), "--out", out.toString(), "--screen", "--quiet").code());
         Path lockFile = dir.resolve(".qc.cupel-lock");
         Process holder = new ProcessBuilder(java(), "-cp", System.getProperty("java.class.path"),
                 LockHolder.class.getName(), lockFile.toString()).redirectErrorStream(true).start();
         try (BufferedReader r = new BufferedReader(new InputStreamReader(holder.getInputStream(),
                 StandardCharsets.UTF_8))) {
             assertEquals("locked", r.readLine());
-            Run second = run("report", MESSY.toString(), "--out", out.toString(), "--force", "--screen", "--quiet");
+            Cli second = Cli.run("report", MESSY.toString(), "--out", out.toString(), "--force", "--screen", "--quiet");
             assertEquals(CupelCommand.INPUT_ERROR, second.code(), second.err());
             assertEquals("cupel: another cupel report run is writing " + out + " right now (it holds " + lockFile
                     + "); wait for it to finish, or choose another --out folder", second.err().strip());
@@ -117,7 +105,7 @@ class OutputSafetyCliTest {
         } finally {
             holder.destroyForcibly().waitFor();
         }
-        assertEquals(0, run("report", MESSY.toString(), "--out", out.toString(), "--force", "--screen", "--quiet")
+        assertEquals(0, Cli.run("report", MESSY.toString(), "--out", out.toString(), "--force", "--screen", "--quiet")
                 .code(), "the lock is free once the holder has ended");
     }
 
@@ -129,7 +117,7 @@ class OutputSafetyCliTest {
         p.destroyForcibly().waitFor();
         assumeTrue(writing, "the run ended before it could be killed while writing");
         assertEquals(1, hidden(dir).size(), "the killed run left its temporary folder: " + hidden(dir));
-        Run next = run("report", MESSY.toString(), "--out", dir.resolve("next").toString(), "--screen", "--quiet");
+        Cli next = Cli.run("report", MESSY.toString(), "--out", dir.resolve("next").toString(), "--screen", "--quiet");
         assertEquals(0, next.code(), next.err());
         assertEquals(List.of(), hidden(dir));
         assertFalse(Files.exists(dir.resolve("killed")));
@@ -139,18 +127,18 @@ class OutputSafetyCliTest {
     @Test
     void anOutputLocationThatCannotBeUsedIsAnInputError(@TempDir Path dir) throws IOException {
         Path readme = Files.writeString(dir.resolve("README.md"), "text\n");
-        Run throughAFile = run("report", MESSY.toString(), "--out", readme.resolve("sub").toString(), "--quiet");
+        Cli throughAFile = Cli.run("report", MESSY.toString(), "--out", readme.resolve("sub").toString(), "--quiet");
         assertEquals(CupelCommand.INPUT_ERROR, throughAFile.code(), throughAFile.err());
         assertEquals("cupel: cannot write the report to " + readme.resolve("sub") + ": " + readme + " is a file, not "
                 + "a folder; choose an --out path inside a folder", throughAFile.err().strip());
 
-        Run demo = run("demo", readme.resolve("sub").toString());
+        Cli demo = Cli.run("demo", readme.resolve("sub").toString());
         assertEquals(CupelCommand.INPUT_ERROR, demo.code(), demo.err());
         assertEquals(1, demo.err().strip().lines().count(), demo.err());
         assertTrue(demo.err().startsWith("cupel: " + readme + ": "), demo.err());
 
         assumeTrue(Files.isDirectory(Path.of("/proc/self")), "a Linux /proc");
-        Run proc = run("report", MESSY.toString(), "--out", "/proc/x", "--quiet");
+        Cli proc = Cli.run("report", MESSY.toString(), "--out", "/proc/x", "--quiet");
         assertEquals(CupelCommand.INPUT_ERROR, proc.code(), proc.err());
         assertEquals(1, proc.err().strip().lines().count(), proc.err());
         assertTrue(proc.err().startsWith("cupel: cannot write the report to /proc/x ("), proc.err());
@@ -160,12 +148,12 @@ class OutputSafetyCliTest {
     @Test
     void anAbsurdBootstrapCountIsAnInputError(@TempDir Path dir) throws IOException {
         Path project = dir.resolve("p");
-        copy(MESSY, project);
+        ReportProcessTest.copyTree(MESSY, project);
         List<String> errors = new ArrayList<>();
         for (String value : List.of("1000000000000", "2000000000", "-5")) {
             Files.writeString(project.resolve("cupel.yaml"), "censored:\n  bootstrapReplicates: " + value + "\n",
                     StandardOpenOption.APPEND);
-            Run r = run("report", project.toString(), "--out", dir.resolve("qc").toString(), "--quiet");
+            Cli r = Cli.run("report", project.toString(), "--out", dir.resolve("qc").toString(), "--quiet");
             assertEquals(CupelCommand.INPUT_ERROR, r.code(), r.err());
             assertEquals(1, r.err().strip().lines().count(), r.err());
             errors.add(r.err().strip());
@@ -185,19 +173,6 @@ class OutputSafetyCliTest {
     private static List<String> list(Path dir) throws IOException {
         try (Stream<Path> s = Files.list(dir)) {
             return s.map(p -> p.getFileName().toString()).sorted().toList();
-        }
-    }
-
-    static void copy(Path from, Path to) throws IOException {
-        try (Stream<Path> s = Files.walk(from)) {
-            for (Path p : s.toList()) {
-                Path t = to.resolve(from.relativize(p).toString());
-                if (Files.isDirectory(p)) {
-                    Files.createDirectories(t);
-                } else {
-                    Files.copy(p, t);
-                }
-            }
         }
     }
 }

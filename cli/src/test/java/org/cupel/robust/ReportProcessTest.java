@@ -79,7 +79,7 @@ class ReportProcessTest {
                 Files.readAllBytes(runs.resolve("b").resolve("appendix.pdf")));
     }
 
-    private static void copyTree(Path from, Path to) throws IOException {
+    static void copyTree(Path from, Path to) throws IOException {
         try (Stream<Path> s = Files.walk(from)) {
             for (Path p : s.toList()) {
                 Path t = to.resolve(from.relativize(p).toString());

@@ -65,8 +65,8 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
         for (int i = 0; i < precisionGrades.size(); i++) {
             double g = precisionGrades.get(i);
             if (!(g > 0) || Double.isInfinite(g)) {
-                throw new SettingException(Numbers.compact(g) + " is not a grade: precision is stated at positive grades, in the "
-                        + "analyte's unit; correct the list", "precisionGrades", Integer.toString(i));
+                throw new SettingException(Numbers.compact(g) + " is not a grade: precision is stated at positive "
+                        + "grades, in the analyte's unit; correct the list", "precisionGrades", Integer.toString(i));
             }
         }
         if (!(limitMultipleOfDetection >= 0) || !(acceptancePercent > 0 && acceptancePercent <= 100)
@@ -82,8 +82,8 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
     /** HARD is at most 100 % for values of one sign, so a limit outside 0 < limit <= 100 judges nothing. */
     private static void requireHardLimit(double percent, String key) {
         if (!(percent > 0 && percent <= 100)) {
-            throw new SettingException(Numbers.compact(percent) + " % is not a HARD limit: write a percentage above 0 and at most "
-                    + "100 (common practice: 30 field, 20 coarse, 10 pulp)", key);
+            throw new SettingException(Numbers.compact(percent) + " % is not a HARD limit: write a percentage above 0 "
+                    + "and at most 100 (common practice: 30 field, 20 coarse, 10 pulp)", key);
         }
     }
 

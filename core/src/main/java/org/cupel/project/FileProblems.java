@@ -22,7 +22,8 @@ public final class FileProblems {
         if (!(e instanceof FileSystemException f)) {
             return e.getMessage() == null ? "input/output error" : e.getMessage();
         }
-        String file = f.getFile() == null ? "" : f.getFile() + (f.getOtherFile() == null ? "" : " → " + f.getOtherFile());
+        String other = f.getOtherFile() == null ? "" : " → " + f.getOtherFile();
+        String file = f.getFile() == null ? "" : f.getFile() + other;
         String why;
         if (f instanceof AccessDeniedException) {
             why = "permission denied";
