@@ -46,6 +46,7 @@ public final class ReportWriter {
     private ReportWriter() {
     }
 
+    @SuppressWarnings("try") // the lock is held for the body's duration, not used in it
     public static void write(QcReport report, Path target, ReportOptions options, ReportProgress progress)
             throws IOException {
         Path out = target.toAbsolutePath().normalize();

@@ -87,6 +87,7 @@ class OutputSafetyTest {
     }
 
     @Test
+    @SuppressWarnings("try") // the lock is held for the body's duration
     void aSecondRunOnTheSameFolderStopsAtOnceWithOneSentence(@TempDir Path dir) throws IOException {
         Path out = dir.resolve("qc");
         try (OutputLock held = OutputLock.tryAcquire(dir, "qc").orElseThrow()) {
@@ -102,6 +103,7 @@ class OutputSafetyTest {
     }
 
     @Test
+    @SuppressWarnings("try") // the lock is held for the body's duration
     void theLeftoversOfKilledRunsAreDeletedButNothingElse(@TempDir Path dir) throws IOException {
         write(dir.resolve(".qc.cupel-tmp-4242/" + ReportWriter.PARTIAL_MARKER), "");
         write(dir.resolve(".qc.cupel-tmp-4242/charts/a.png"), "png");

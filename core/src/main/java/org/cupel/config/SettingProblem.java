@@ -7,7 +7,6 @@ import com.fasterxml.jackson.databind.exc.UnrecognizedPropertyException;
 import com.fasterxml.jackson.databind.exc.ValueInstantiationException;
 import java.lang.reflect.Type;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 
@@ -33,14 +32,12 @@ final class SettingProblem {
             return;
         }
         List<String> known = SettingWords.keysOf(type);
-        Iterator<Map.Entry<String, JsonNode>> fields = user.fields();
         int index = 0;
         for (JsonNode item : user.isArray() ? user : List.<JsonNode>of()) {
             requireKnownKeys(config, with(path, Integer.toString(index++)), SettingWords.typeAt(type,
                     List.of("0")), item);
         }
-        while (fields.hasNext()) {
-            Map.Entry<String, JsonNode> e = fields.next();
+        for (Map.Entry<String, JsonNode> e : user.properties()) {
             List<String> at = with(path, e.getKey());
             if (raw.isRecord() && !known.contains(e.getKey()) && !ignoresUnknown(raw)) {
                 throw unknownKey(config, at, known, null);

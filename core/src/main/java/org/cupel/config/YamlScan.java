@@ -45,7 +45,7 @@ final class YamlScan {
     static Map<List<String>, Place> scan(String yaml, String source) throws JsonProcessingException {
         Map<List<String>, Place> places = new HashMap<>();
         Deque<Frame> stack = new ArrayDeque<>();
-        try (YAMLParser p = (YAMLParser) FACTORY.createParser(yaml)) {
+        try (YAMLParser p = FACTORY.createParser(yaml)) {
             for (JsonToken t = p.nextToken(); t != null; t = p.nextToken()) {
                 JsonLocation at = p.currentTokenLocation();
                 Frame top = stack.peek();
