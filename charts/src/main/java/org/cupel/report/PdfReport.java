@@ -5,20 +5,30 @@ import com.lowagie.text.Chunk;
 import com.lowagie.text.Document;
 import com.lowagie.text.DocumentException;
 import com.lowagie.text.Element;
+import com.lowagie.text.ExceptionConverter;
 import com.lowagie.text.Font;
 import com.lowagie.text.Image;
 import com.lowagie.text.PageSize;
 import com.lowagie.text.Paragraph;
 import com.lowagie.text.Phrase;
 import com.lowagie.text.Rectangle;
+import com.lowagie.text.pdf.PdfDate;
+import com.lowagie.text.pdf.PdfEncryption;
+import com.lowagie.text.pdf.PdfName;
 import com.lowagie.text.pdf.PdfPCell;
 import com.lowagie.text.pdf.PdfPTable;
 import com.lowagie.text.pdf.PdfWriter;
 import java.awt.Color;
 import java.io.IOException;
 import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.Arrays;
+import java.util.Calendar;
 import java.util.List;
 import java.util.Locale;
+import java.util.TimeZone;
 import java.util.function.Function;
 
 /**
@@ -79,6 +89,7 @@ public final class PdfReport {
             doc.addTitle(report.project() + " — " + QcReport.TITLE);
             doc.addCreator("Cupel");
             doc.open();
+            fixIdentity(writer);
             titlePage();
             List<ReportSection> sections = report.sections();
             for (int i = 0; i < sections.size(); i++) {
@@ -86,7 +97,39 @@ public final class PdfReport {
             }
             doc.close();
         } catch (DocumentException e) {
-            throw new IOException("could not write the PDF: " + e.getMessage(), e);
+            // The layout refused an element Cupel built: a bug, not a problem of the output location.
+            throw new IllegalStateException("could not lay out the PDF: " + e.getMessage(), e);
+        } catch (ExceptionConverter e) {
+            // OpenPDF wraps the output stream's I/O errors (a full disk) in this unchecked exception.
+            if (e.getException() instanceof IOException io) {
+                throw io;
+            }
+            throw e;
+        }
+    }
+
+    /**
+     * The creation date and the file identifier, which OpenPDF takes from the clock and from a hash of the
+     * clock and free memory, are made to depend on the report alone: the date is the report's generation
+     * time (fixed by {@code SOURCE_DATE_EPOCH}), the identifier a digest of the report's headline figures,
+     * title, selection, generation time and paper size. Two runs on the same inputs then give the same bytes.
+     * Called after {@code open()}, which stamps the clock's date into the information dictionary. OpenPDF
+     * takes the trailer's identifier from a {@code FileId} entry of that dictionary, where it also stays.
+     */
+    private void fixIdentity(PdfWriter writer) throws IOException {
+        Calendar when = Calendar.getInstance(TimeZone.getTimeZone("UTC"), Locale.ROOT);
+        when.setTimeInMillis(report.generated().toEpochMilli());
+        writer.getInfo().put(PdfName.CREATIONDATE, new PdfDate(when));
+        byte[] id = digest(SummaryJson.toJson(report) + "\n" + report.generated() + "\n" + doc.getPageSize());
+        writer.getInfo().put(PdfName.FILEID, PdfEncryption.createInfoId(id, id));
+    }
+
+    private static byte[] digest(String text) {
+        try {
+            byte[] sha = MessageDigest.getInstance("SHA-256").digest(text.getBytes(StandardCharsets.UTF_8));
+            return Arrays.copyOf(sha, 16);
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java platform has SHA-256", e);
         }
     }
 

@@ -6,14 +6,15 @@ import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.DirectoryStream;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.Comparator;
 import java.util.stream.Stream;
 import org.cupel.charts.PngWriter;
+import org.cupel.project.FileProblems;
 import org.cupel.project.InputException;
 
 /**
@@ -23,17 +24,29 @@ import org.cupel.project.InputException;
  * <p>Atomic: everything is written into a hidden temporary folder beside the target, and only a complete
  * folder is moved into place (a rename within one file system). An existing folder is replaced only with
  * {@code force}: it is renamed aside, the new folder renamed in, then the old one deleted. A run that fails
- * or is killed leaves either the previous report or none under the target name, never a mix; the
- * temporary folder of a killed run ({@code .<name>.cupel-tmp-<pid>}) may remain and can be deleted. To
- * protect other data, {@code force} replaces only an empty folder or one that holds the marker file.
+ * or is killed leaves either the previous report or none under the target name, never a mix.
+ *
+ * <p>Nothing but a Cupel report is ever replaced. {@code force} replaces only an empty folder or one that
+ * holds the marker file, and the target is checked again just before the move: a folder that appeared, or
+ * lost its marker, while the report was being written is left alone and the run ends with an input error.
+ * One run at a time per target: the run holds {@link OutputLock} from start to end, and a second run on the
+ * same target stops at once with an input error. Under that lock, the leftovers of killed runs are deleted
+ * ({@link StaleOutputs}).
+ *
+ * <p>Any failure of the file system at the output location (no such folder, permission denied, a file in
+ * the way, a full disk) ends as an {@link InputException} naming the location: it is the user's to fix, not
+ * a bug.
  */
 public final class ReportWriter {
     /** Marks a folder as written by Cupel, so {@code --force} may replace it. */
     public static final String MARKER = ".cupel-report";
+    /** Marks a temporary folder that a run is still writing (removed before the folder is moved into place). */
+    static final String PARTIAL_MARKER = ".cupel-report-partial";
 
     private ReportWriter() {
     }
 
+    @SuppressWarnings("try") // the lock is held for the body's duration, not used in it
     public static void write(QcReport report, Path target, ReportOptions options, ReportProgress progress)
             throws IOException {
         Path out = target.toAbsolutePath().normalize();
@@ -41,36 +54,88 @@ public final class ReportWriter {
         if (parent == null) {
             throw new InputException("cannot write the report to the root folder " + out + "; give a folder name");
         }
-        checkReplaceable(out, options.force());
-        Files.createDirectories(parent);
+        requireFolderPath(out);
+        boolean existed = checkReplaceable(out, options.force());
         String name = out.getFileName().toString();
-        long pid = ProcessHandle.current().pid();
-        Path tmp = parent.resolve("." + name + ".cupel-tmp-" + pid);
-        deleteTree(tmp);
+        try {
+            Files.createDirectories(parent);
+            try (OutputLock lock = OutputLock.tryAcquire(parent, name).orElseThrow(() -> busy(out, parent, name))) {
+                StaleOutputs.clean(parent, name);
+                long pid = ProcessHandle.current().pid();
+                writeAndInstall(report, options, progress, out, parent.resolve("." + name + ".cupel-tmp-" + pid),
+                        parent.resolve("." + name + ".cupel-old-" + pid), existed);
+            }
+        } catch (IOException e) {
+            throw new InputException("cannot write the report to " + out + " (" + FileProblems.describe(e)
+                    + "); choose an --out folder in a place where you can create files, with space to spare", e);
+        }
+    }
+
+    private static void writeAndInstall(QcReport report, ReportOptions options, ReportProgress progress, Path out,
+                                        Path tmp, Path old, boolean existed) throws IOException {
         Files.createDirectory(tmp);
         try {
+            Files.writeString(tmp.resolve(PARTIAL_MARKER), "A cupel report run is writing this folder.\n",
+                    StandardCharsets.UTF_8);
             build(report, tmp, options, progress);
-            install(tmp, out, parent.resolve("." + name + ".cupel-old-" + pid));
+            Files.delete(tmp.resolve(PARTIAL_MARKER));
+            recheckBeforeInstall(out, options.force(), existed);
+            install(tmp, out, old);
         } catch (IOException | RuntimeException | Error e) {
             deleteTree(tmp);
             throw e;
         }
     }
 
-    private static void checkReplaceable(Path out, boolean force) throws IOException {
-        if (!Files.exists(out)) {
-            return;
+    /** The first part of the path that exists must be a folder (a file there makes the path unusable). */
+    private static void requireFolderPath(Path out) {
+        for (Path p = out.getParent(); p != null; p = p.getParent()) {
+            if (Files.exists(p)) {
+                if (!Files.isDirectory(p)) {
+                    throw new InputException("cannot write the report to " + out + ": " + p + " is a file, not a "
+                            + "folder; choose an --out path inside a folder");
+                }
+                return;
+            }
         }
-        if (!Files.isDirectory(out)) {
+    }
+
+    private static InputException busy(Path out, Path parent, String name) {
+        return new InputException("another cupel report run is writing " + out + " right now (it holds "
+                + OutputLock.file(parent, name) + "); wait for it to finish, or choose another --out folder");
+    }
+
+    /** @return whether the target exists (and may be replaced) */
+    private static boolean checkReplaceable(Path out, boolean force) throws IOException {
+        if (!Files.exists(out, LinkOption.NOFOLLOW_LINKS)) {
+            return false;
+        }
+        if (!Files.isDirectory(out, LinkOption.NOFOLLOW_LINKS)) {
             throw new InputException(out + " exists and is not a folder; choose another --out folder");
         }
         if (!force) {
             throw new InputException("output folder " + out + " already exists; add --force to replace it, "
                     + "or choose another --out folder");
         }
-        if (!Files.exists(out.resolve(MARKER)) && !isEmpty(out)) {
+        if (!Files.exists(out.resolve(MARKER)) && !StaleOutputs.isEmpty(out)) {
             throw new InputException("output folder " + out + " holds files that Cupel did not write (no " + MARKER
                     + " marker); --force replaces only Cupel report folders, so choose another --out folder");
+        }
+        return true;
+    }
+
+    /**
+     * The target as it is now, just before the move: someone may have created it, or put files of their own
+     * there, while the report was being written. Only what was checked at the start may be replaced.
+     */
+    private static void recheckBeforeInstall(Path out, boolean force, boolean existed) throws IOException {
+        if (!existed && Files.exists(out, LinkOption.NOFOLLOW_LINKS)) {
+            throw new InputException("output folder " + out + " appeared while the report was being written; it "
+                    + "was left untouched and the report was not installed: move it away and run again, or choose "
+                    + "another --out folder");
+        }
+        if (existed) {
+            checkReplaceable(out, force);
         }
     }
 
@@ -127,10 +192,16 @@ public final class ReportWriter {
     }
 
     private static void install(Path tmp, Path out, Path old) throws IOException {
-        boolean replacing = Files.exists(out);
+        boolean replacing = Files.exists(out, LinkOption.NOFOLLOW_LINKS);
         if (replacing) {
             deleteTree(old);
             move(out, old);
+            if (!Files.exists(old.resolve(MARKER)) && !StaleOutputs.isEmpty(old)) {
+                // Swapped for another folder between the check and the move: put it back, untouched.
+                move(old, out);
+                throw new InputException("output folder " + out + " was replaced by a folder Cupel did not write "
+                        + "while the report was being written; it was left untouched: choose another --out folder");
+            }
         }
         try {
             move(tmp, out);
@@ -154,14 +225,8 @@ public final class ReportWriter {
         }
     }
 
-    private static boolean isEmpty(Path dir) throws IOException {
-        try (DirectoryStream<Path> s = Files.newDirectoryStream(dir)) {
-            return !s.iterator().hasNext();
-        }
-    }
-
     static void deleteTree(Path p) throws IOException {
-        if (!Files.exists(p, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
+        if (!Files.exists(p, LinkOption.NOFOLLOW_LINKS)) {
             return;
         }
         try (Stream<Path> walk = Files.walk(p)) {

@@ -39,7 +39,9 @@ class ReportWriterTest {
             }
         }
         assertFalse(Files.exists(out.resolve("charts/.print")), "print-resolution copies are not left behind");
-        assertEquals(List.of("qc"), listing(dir), "no temporary folder is left beside the report");
+        assertEquals(List.of(".qc.cupel-lock", "qc"), listing(dir),
+                "no temporary folder is left beside the report, only the empty lock file");
+        assertEquals(0, Files.size(dir.resolve(".qc.cupel-lock")));
         String pdf = new String(Files.readAllBytes(out.resolve("appendix.pdf")), java.nio.charset.StandardCharsets.ISO_8859_1);
         assertTrue(pdf.startsWith("%PDF-"));
     }
@@ -60,7 +62,8 @@ class ReportWriterTest {
         Path out = dir.resolve("qc");
         QcReport broken = withFailingChart(ReportFixture.report());
         assertThrows(IllegalStateException.class, () -> ReportWriter.write(broken, out, PRINT, ReportProgress.NONE));
-        assertEquals(List.of(), listing(dir), "neither the report nor its temporary folder exists");
+        assertEquals(List.of(".qc.cupel-lock"), listing(dir),
+                "neither the report nor its temporary folder exists (the lock file stays: see OutputLock)");
     }
 
     @Test
@@ -75,11 +78,11 @@ class ReportWriterTest {
         assertThrows(IllegalStateException.class,
                 () -> ReportWriter.write(withFailingChart(ReportFixture.report()), out, force, ReportProgress.NONE));
         assertArrayEquals(before, Files.readAllBytes(out.resolve("index.html")), "the previous report is intact");
-        assertEquals(List.of("qc"), listing(dir));
+        assertEquals(List.of(".qc.cupel-lock", "qc"), listing(dir));
         Files.writeString(out.resolve("stale.txt"), "from an older run");
         ReportWriter.write(ReportFixture.report(), out, force, ReportProgress.NONE);
         assertFalse(Files.exists(out.resolve("stale.txt")), "replaced whole, not merged");
-        assertEquals(List.of("qc"), listing(dir));
+        assertEquals(List.of(".qc.cupel-lock", "qc"), listing(dir));
     }
 
     @Test
@@ -110,6 +113,24 @@ class ReportWriterTest {
             assertArrayEquals(Files.readAllBytes(a.resolve("charts").resolve(f)),
                     Files.readAllBytes(b.resolve("charts").resolve(f)), f);
         }
+    }
+
+    /**
+     * The PDF too is the same bytes run after run: OpenPDF's random font-subset tags, its clock-based file
+     * identifier and creation date are fixed by the report (issue 15). Two runs in one JVM also prove that the
+     * fonts' tag sources do not carry over from one document to the next.
+     */
+    @Test
+    void twoRunsGiveAnIdenticalPdfDatedByTheReport(@TempDir Path dir) throws IOException {
+        Path a = dir.resolve("a");
+        Path b = dir.resolve("b");
+        ReportWriter.write(ReportFixture.report(), a, PRINT, ReportProgress.NONE);
+        ReportWriter.write(ReportFixture.report(), b, PRINT, ReportProgress.NONE);
+        byte[] pdf = Files.readAllBytes(a.resolve("appendix.pdf"));
+        assertArrayEquals(pdf, Files.readAllBytes(b.resolve("appendix.pdf")));
+        String text = new String(pdf, java.nio.charset.StandardCharsets.ISO_8859_1);
+        // ReportFixture.GENERATED is 1767225600 s = 2026-01-01 00:00:00 UTC.
+        assertTrue(text.contains("/CreationDate(D:20260101000000Z)"), "creation date from the report");
     }
 
     @Test

@@ -18,7 +18,6 @@ import org.cupel.control.ReassayEntry;
 import org.cupel.control.Verdict;
 import org.cupel.control.VerdictReason;
 import org.cupel.control.crm.CrmReview;
-import org.cupel.ingest.ProjectLoader;
 import org.cupel.project.Project;
 import org.cupel.report.CsvTables;
 import org.cupel.report.control.InsertionRateSection;
@@ -54,7 +53,7 @@ final class BatchesCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
-        Project project = ProjectLoader.load(folder);
+        Project project = ProjectFolder.load(folder);
         BatchReview review = BatchReview.of(project, CrmReview.of(project).outcomes());
         if (reassayCsv != null) {
             try {

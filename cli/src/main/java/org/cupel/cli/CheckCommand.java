@@ -7,11 +7,14 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
 import org.cupel.assay.Numbers;
+import org.cupel.config.ConfigException;
 import org.cupel.ingest.ProjectLoader;
 import org.cupel.ingest.ProjectSummary;
 import org.cupel.project.DataIssue;
 import org.cupel.project.FileAccount;
+import org.cupel.project.InputException;
 import org.cupel.project.Project;
+import org.cupel.settings.ProjectSettings;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -20,9 +23,10 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code cupel check}: validates a project's inputs and prints the row accounting and the exceptions register. */
 @Command(name = "check",
-        description = {"Validate a project's inputs: read every lab file, the register and the CRM catalog,",
-                "and print the row accounting of each file, the samples per QC role, the analytes with",
-                "their units, methods and detection limits, and every input problem found."},
+        description = {"Validate a project's inputs as the report reads them: every lab file, the register, the",
+                "CRM catalog, the testwork and every setting of cupel.yaml; print the row accounting of each",
+                "file, the samples per QC role, the analytes with their units, methods and detection limits,",
+                "and every input problem found."},
         footer = {"", "Exit codes: 0 inputs usable (warnings and exclusions may be listed), 2 a file could not be used.",
                 "", "Example:", "  cupel check demo-project", "  cupel check demo-project --json > check.json"},
         mixinStandardHelpOptions = true)
@@ -44,7 +48,8 @@ public final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Project p = ProjectLoader.inspect(folder);
+        Project p = ProjectLoader.inspect(folder, ProjectSettings::check);
+        checkTestwork(p);
         ProjectSummary s = ProjectSummary.of(p);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
@@ -53,6 +58,37 @@ public final class CheckCommand implements Callable<Integer> {
             printTables(out, s, p.exceptions().all());
         }
         return p.exceptions().hasFatal() ? CupelCommand.INPUT_ERROR : CupelCommand.OK;
+    }
+
+    /**
+     * Reads the testwork as the report would ({@link ReportInputs#testwork}): its problems join the register,
+     * and a testwork file the report could not use is a fatal entry, so that check and report refuse the
+     * same inputs.
+     */
+    private void checkTestwork(Project p) {
+        if (!ReportInputs.hasTestwork(folder)) {
+            return;
+        }
+        try {
+            ReportInputs.testwork(folder, p.config()).ifPresent(r -> r.issues().forEach(p.exceptions()::add));
+        } catch (InputException | ConfigException e) {
+            p.exceptions().add(DataIssue.fatal(testworkFile(e.getMessage()), e.getMessage()));
+        }
+    }
+
+    /** The testwork file a message begins with (its own name for it), else the testwork folder. */
+    private String testworkFile(String message) {
+        for (String stem : List.of("heads", "smelts")) {
+            for (Path dir : List.of(folder.resolve("testwork"), folder)) {
+                for (String ext : List.of(".csv", ".tsv", ".txt", ".xlsx")) {
+                    String name = dir.resolve(stem + ext).toString();
+                    if (message.startsWith(name + ":")) {
+                        return name;
+                    }
+                }
+            }
+        }
+        return folder.resolve("testwork").toString();
     }
 
     private static void printTables(PrintWriter out, ProjectSummary s, List<DataIssue> issues) {

@@ -20,7 +20,6 @@ import org.cupel.control.crm.CrmResultsFile;
 import org.cupel.control.crm.CrmReview;
 import org.cupel.control.crm.SeriesReview;
 import org.cupel.ingest.CatalogReader;
-import org.cupel.ingest.ProjectLoader;
 import org.cupel.project.InputException;
 import org.cupel.project.Project;
 import picocli.CommandLine.Command;
@@ -94,7 +93,7 @@ public final class CrmCommand implements Callable<Integer> {
             throw new InputException("no input: give a project folder, or --results FILE --catalog FILE "
                     + "(try 'cupel crm --help').");
         }
-        return ProjectLoader.load(folder);
+        return ProjectFolder.load(folder);
     }
 
     private void writeCharts(CrmReview r) throws IOException {

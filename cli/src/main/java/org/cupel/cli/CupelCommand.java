@@ -1,8 +1,11 @@
 package org.cupel.cli;
 
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.FileSystemException;
 import java.util.concurrent.Callable;
 import org.cupel.config.ConfigException;
+import org.cupel.project.FileProblems;
 import org.cupel.project.InputException;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -66,10 +69,13 @@ public final class CupelCommand implements Callable<Integer> {
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
-            boolean isInput = ex instanceof InputException || ex instanceof ConfigException;
+            FileSystemException refused = fileSystemRefusal(ex);
+            boolean isInput = ex instanceof InputException || ex instanceof ConfigException || refused != null;
+            String text = refused != null ? FileProblems.describe(refused) + "; check the path, that its folders "
+                    + "exist and that you may write there" : ex.getMessage();
             // One line per error: a message may quote a cell or parser text that holds line breaks.
-            String message = ex.getMessage() == null ? ex.getClass().getSimpleName()
-                    : ex.getMessage().strip().replaceAll("\\s*\\R\\s*", " ");
+            String message = text == null ? ex.getClass().getSimpleName()
+                    : text.strip().replaceAll("\\s*\\R\\s*", " ");
             err.println((isInput ? "cupel: " : "cupel: internal error: ") + message);
             if (top.verbose) {
                 ex.printStackTrace(err);
@@ -91,6 +97,19 @@ public final class CupelCommand implements Callable<Integer> {
         } catch (OutOfMemoryError e) {
             return outOfMemory(e, err);
         }
+    }
+
+    /**
+     * The file system's refusal behind {@code ex} (a missing folder, a file in the way, no permission), or
+     * null. A command's files are the user's to name and place, so such a refusal is an input error (exit 2)
+     * whichever command meets it; the report and the readers word their own messages, this covers the rest
+     * (the demo's folder, --charts folders).
+     */
+    static FileSystemException fileSystemRefusal(Throwable ex) {
+        if (ex instanceof FileSystemException f) {
+            return f;
+        }
+        return ex instanceof UncheckedIOException u && u.getCause() instanceof FileSystemException f ? f : null;
     }
 
     /**

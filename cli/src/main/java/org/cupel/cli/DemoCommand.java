@@ -34,7 +34,7 @@ import picocli.CommandLine.Model.CommandSpec;
  * {@code cupel demo <dir>}: writes the invented demo project. The files go to a temporary folder beside
  * the target, which is then moved into place, so a failed run leaves nothing half-written.
  */
-@Command(name = "demo",
+@Command(name = "demo", mixinStandardHelpOptions = true,
         description = {"Write the invented Vellmar Hills gold-silver demo project: lab files, sample register,",
                 "CRM catalog and smelt testwork, with planted QC problems for the analyses to find."},
         footer = {"", "Examples:", "  cupel demo demo-project",

@@ -25,7 +25,6 @@ import org.cupel.duplicates.ModelFit;
 import org.cupel.duplicates.OutlierPair;
 import org.cupel.duplicates.PairExtraction;
 import org.cupel.duplicates.PairsFile;
-import org.cupel.ingest.ProjectLoader;
 import org.cupel.project.Project;
 import org.cupel.duplicates.PrecisionSummary;
 import org.cupel.duplicates.RuleOutcome;
@@ -38,7 +37,7 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code cupel duplicates}: duplicate precision and bias on a project folder or a plain pairs CSV. */
-@Command(name = "duplicates",
+@Command(name = "duplicates", mixinStandardHelpOptions = true,
         description = {"Precision of duplicate assays (HARD, RMS CV, Thompson–Howarth and RMS SD regression) and",
                 "bias between duplicates and originals or between labs (RMA, paired t, Wilcoxon)."},
         footer = {"", "A pairs CSV has columns original, duplicate (values such as 1.23 or <0.005) and optional",
@@ -94,7 +93,7 @@ public final class DuplicatesCommand implements Callable<Integer> {
         List<DuplicateReport> reports = new ArrayList<>();
         List<DataIssue> issues = new ArrayList<>();
         if (Files.isDirectory(input)) {
-            Project project = ProjectLoader.load(input);
+            Project project = ProjectFolder.load(input);
             DuplicateSettings fromConfig = project.config().section("duplicates", DuplicateSettings.class,
                     DuplicateSettings.DEFAULTS);
             if (dlMultiple != null) {

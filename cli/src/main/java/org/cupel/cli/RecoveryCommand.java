@@ -21,6 +21,7 @@ import org.cupel.recovery.RecoverySettings;
 import org.cupel.recovery.TestworkReader;
 import org.cupel.report.ReportTable;
 import org.cupel.report.recovery.TestworkSection;
+import org.cupel.settings.ProjectSettings;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -96,7 +97,7 @@ public final class RecoveryCommand implements Callable<Integer> {
         for (Path p : List.of(folder.resolve("cupel.yaml"), folder.toAbsolutePath().getParent() == null
                 ? folder.resolve("cupel.yaml") : folder.toAbsolutePath().getParent().resolve("cupel.yaml"))) {
             if (Files.isRegularFile(p)) {
-                return CupelConfig.fromYaml(Files.readString(p), p.toString());
+                return ProjectSettings.check(CupelConfig.fromYaml(Files.readString(p), p.toString()));
             }
         }
         return CupelConfig.defaults();

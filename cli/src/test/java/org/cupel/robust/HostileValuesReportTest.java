@@ -147,8 +147,9 @@ class HostileValuesReportTest {
             }
         }
         try (Stream<Path> s = Files.list(dir)) {
-            assertEquals(List.of("hostile", "qc"), s.map(p -> p.getFileName().toString()).sorted().toList(),
-                    "nothing written beside the output folder");
+            assertEquals(List.of(".qc.cupel-lock", "hostile", "qc"),
+                    s.map(p -> p.getFileName().toString()).sorted().toList(),
+                    "nothing written beside the output folder but its empty lock file (issue 15)");
         }
     }
 

@@ -1,5 +1,6 @@
 package org.cupel.robust;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -71,7 +72,14 @@ class ReportProcessTest {
         assertEquals(ha, dataFiles(runs.resolve("b")));
     }
 
-    private static void copyTree(Path from, Path to) throws IOException {
+    /** Issue 15: the PDF is byte-identical too (font-subset tags, file identifier and dates fixed). */
+    @Test
+    void twoRunsWithTheSameSourceDateEpochGiveAnIdenticalPdf() throws Exception {
+        assertArrayEquals(Files.readAllBytes(runs.resolve("a").resolve("appendix.pdf")),
+                Files.readAllBytes(runs.resolve("b").resolve("appendix.pdf")));
+    }
+
+    static void copyTree(Path from, Path to) throws IOException {
         try (Stream<Path> s = Files.walk(from)) {
             for (Path p : s.toList()) {
                 Path t = to.resolve(from.relativize(p).toString());

@@ -1,6 +1,7 @@
 package org.cupel.censored;
 
 import org.cupel.config.CupelConfig;
+import org.cupel.config.SettingException;
 
 /**
  * The {@code censored} section of {@code cupel.yaml}.
@@ -18,10 +19,25 @@ public record CensoredSettings(KaplanMeier.LowestMass kmLowestMass, KaplanMeier.
     public static final CensoredSettings DEFAULTS = new CensoredSettings(KaplanMeier.LowestMass.AT_LOWEST_LIMIT,
             KaplanMeier.SdDivisor.DISTRIBUTION, 1000, 20_260_101L, 5000);
 
+    /**
+     * Most resamples allowed: 100 times the default. Percentile intervals need about a thousand resamples
+     * (common practice); a larger count only costs time and memory (one value kept per resample), and a
+     * mistyped extra digit or two must not end in an out-of-memory failure.
+     */
+    public static final int MAX_BOOTSTRAP_REPLICATES = 100_000;
+
     public CensoredSettings {
-        if (kmLowestMass == null || kmSdDivisor == null || bootstrapReplicates < 0) {
-            throw new IllegalArgumentException("censored settings: KM conventions are required and the number of "
-                    + "bootstrap replicates must be 0 or more");
+        if (kmLowestMass == null || kmSdDivisor == null) {
+            throw new IllegalArgumentException("censored settings: kmLowestMass and kmSdDivisor are required");
+        }
+        if (bootstrapReplicates < 0 || bootstrapReplicates > MAX_BOOTSTRAP_REPLICATES) {
+            throw new SettingException(bootstrapReplicates + " is outside 0 to " + MAX_BOOTSTRAP_REPLICATES
+                    + " resamples; write a whole number in that range (the default is 1000; 0 for no bootstrap)",
+                    "bootstrapReplicates");
+        }
+        if (bootstrapMaxN < 0) {
+            throw new SettingException(bootstrapMaxN + " is negative; write the largest number of values to "
+                    + "bootstrap (the default is 5000; 0 skips the bootstrap)", "bootstrapMaxN");
         }
     }
 

@@ -4,11 +4,17 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.cfg.CoercionAction;
+import com.fasterxml.jackson.databind.cfg.CoercionInputShape;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.fasterxml.jackson.databind.type.LogicalType;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import com.fasterxml.jackson.dataformat.yaml.YAMLMapper;
+import java.util.ArrayList;
+import java.util.Collection;
 import java.util.Iterator;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -27,40 +33,61 @@ import java.util.Map;
  * </pre>
  */
 public final class CupelConfig {
-    private static final ObjectMapper YAML = YAMLMapper.builder(new YAMLFactory())
-            .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
-            .build();
+    /** The one top-level key that is not a section: the project's name. */
+    public static final String PROJECT = "project";
+
+    private static final ObjectMapper YAML = yamlMapper();
 
     private final ObjectNode root;
     private final String source;
+    private final Map<List<String>, YamlScan.Place> places;
 
-    private CupelConfig(ObjectNode root, String source) {
+    private CupelConfig(ObjectNode root, String source, Map<List<String>, YamlScan.Place> places) {
         this.root = root;
         this.source = source;
+        this.places = places;
+    }
+
+    /**
+     * Strict binding: unknown keys, a missing value for a number or switch, a fraction where a whole number
+     * is expected, a number where a choice of words is expected, and 0/1 for true/false are all errors rather
+     * than silently turned into something else.
+     */
+    private static ObjectMapper yamlMapper() {
+        ObjectMapper m = YAMLMapper.builder(new YAMLFactory())
+                .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
+                .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
+                .enable(DeserializationFeature.FAIL_ON_NUMBERS_FOR_ENUMS)
+                .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
+                .build();
+        m.coercionConfigFor(LogicalType.Boolean).setCoercion(CoercionInputShape.Integer, CoercionAction.Fail);
+        return m;
     }
 
     /** No file: every setting at its default. */
     public static CupelConfig defaults() {
-        return new CupelConfig(JsonNodeFactory.instance.objectNode(), "(defaults)");
+        return new CupelConfig(JsonNodeFactory.instance.objectNode(), "(defaults)", Map.of());
     }
 
     /**
      * Parses YAML text.
      *
      * @param sourceName file name used in messages
-     * @throws ConfigException naming the file, line and column of a syntax error
+     * @throws ConfigException naming the file, line and column of a syntax error, a key given twice or an
+     *     alias
      */
     public static CupelConfig fromYaml(String yaml, String sourceName) {
         try {
+            Map<List<String>, YamlScan.Place> places = YamlScan.scan(yaml, sourceName);
             JsonNode node = YAML.readTree(yaml);
             if (node == null || node.isMissingNode() || node.isNull()) {
-                return new CupelConfig(JsonNodeFactory.instance.objectNode(), sourceName);
+                return new CupelConfig(JsonNodeFactory.instance.objectNode(), sourceName, places);
             }
             if (!node.isObject()) {
                 throw new ConfigException(sourceName + ": the config must be a mapping of settings (key: value), "
-                        + "found a " + node.getNodeType().toString().toLowerCase(java.util.Locale.ROOT));
+                        + "found " + SettingWords.found(node) + "; start from the example in docs/config.md.");
             }
-            return new CupelConfig((ObjectNode) node, sourceName);
+            return new CupelConfig((ObjectNode) node, sourceName, places);
         } catch (JsonProcessingException e) {
             var loc = e.getLocation();
             String where = loc == null ? sourceName : sourceName + ":" + loc.getLineNr() + ":" + loc.getColumnNr();
@@ -99,30 +126,78 @@ public final class CupelConfig {
      * Binds section {@code name} onto {@code defaults}: keys the user gave override, the rest keep their
      * default. Works with records.
      *
-     * @throws ConfigException naming the section and the bad key or value
+     * @throws ConfigException one sentence naming the file, line and column of the bad key or value, what was
+     *     expected there (in the user's words, with "did you mean" for a mistyped key) and how to fix it
      */
     public <T> T section(String name, Class<T> type, T defaults) {
         JsonNode user = root.get(name);
         if (user == null || user.isNull()) {
             return defaults;
         }
+        if (!user.isObject()) {
+            throw new ConfigException(at(List.of(name), true) + name + " must be " + SettingWords.expected(type)
+                    + ", found " + SettingWords.found(user) + "; indent its settings under '" + name + ":' as in "
+                    + "docs/config.md.");
+        }
+        SettingProblem.requireKnownKeys(this, List.of(name), type, user);
         JsonNode merged = merge(YAML.valueToTree(defaults), user);
         try {
             return YAML.treeToValue(merged, type);
-        } catch (com.fasterxml.jackson.databind.exc.ValueInstantiationException e) {
-            // The settings record rejected a value: its own IllegalArgumentException says why in the user's
-            // terms; anything else (a null from an empty value) must not surface as a Java class name.
-            Throwable cause = e.getCause();
-            String why = cause instanceof IllegalArgumentException && cause.getMessage() != null ? cause.getMessage()
-                    : "a value is empty or of the wrong kind, for example a key with nothing after its colon";
-            throw new ConfigException(source + ": section '" + name + "' has a setting Cupel cannot use ("
-                    + why + "). Check the key names and value types against docs/config.md.", e);
         } catch (JsonProcessingException | IllegalArgumentException e) {
-            String msg = e instanceof JsonProcessingException
-                    ? ((JsonProcessingException) e).getOriginalMessage() : e.getMessage();
-            throw new ConfigException(source + ": section '" + name + "' has a setting Cupel cannot use ("
-                    + msg + "). Check the key names and value types against docs/config.md.", e);
+            throw SettingProblem.describe(this, name, type, e);
         }
+    }
+
+    /**
+     * Refuses a top-level key that is neither {@value #PROJECT} nor one of {@code sections} (a misspelt
+     * section would otherwise be ignored with all its settings), and a project name that is not text.
+     *
+     * @throws ConfigException naming the key's line and column, with "did you mean" when it is near a section
+     */
+    public void requireKnownSections(Collection<String> sections) {
+        List<String> known = new ArrayList<>();
+        known.add(PROJECT);
+        known.addAll(sections);
+        Iterator<String> keys = root.fieldNames();
+        while (keys.hasNext()) {
+            String key = keys.next();
+            if (!known.contains(key)) {
+                throw new ConfigException(at(List.of(key), false) + "'" + key + "' is not a section of the config"
+                        + Suggestion.closest(key, known).map(k -> "; did you mean '" + k + "'?").orElse(".")
+                        + " The top-level keys are " + String.join(", ", known) + " (docs/config.md); correct or "
+                        + "remove it.");
+            }
+        }
+        JsonNode project = root.get(PROJECT);
+        if (project != null && !project.isNull() && !project.isValueNode()) {
+            throw new ConfigException(at(List.of(PROJECT), true) + "project must be text (the project's name), "
+                    + "found " + SettingWords.found(project) + "; write it on one line: project: My project.");
+        }
+    }
+
+    /**
+     * {@code file:line:column: } of a key (or of its value), or of its nearest enclosing key the file has,
+     * or just {@code file: } for settings not from a file.
+     */
+    String at(List<String> path, boolean value) {
+        for (int n = path.size(); n > 0; n--) {
+            YamlScan.Place p = places.get(path.subList(0, n));
+            if (p != null) {
+                return value && n == path.size() ? source + ":" + p.valueLine() + ":" + p.valueColumn() + ": "
+                        : source + ":" + p.keyLine() + ":" + p.keyColumn() + ": ";
+            }
+        }
+        return source + ": ";
+    }
+
+    /** What the user wrote at {@code path}, or {@code null} when the file does not set it. */
+    JsonNode userValue(List<String> path) {
+        JsonNode n = root;
+        for (String key : path) {
+            n = n == null ? null : n.isArray() && key.chars().allMatch(Character::isDigit)
+                    ? n.get(Integer.parseInt(key)) : n.get(key);
+        }
+        return n;
     }
 
     /** Whether the user set {@code dotted.path} (so reports can label a threshold "user setting"). */

@@ -1,7 +1,9 @@
 package org.cupel.duplicates;
 
 import java.util.List;
+import org.cupel.assay.Numbers;
 import org.cupel.assay.QcRole;
+import org.cupel.config.SettingException;
 
 /**
  * Settings of the duplicate analysis, bound from the {@code duplicates} section of {@code cupel.yaml}.
@@ -42,15 +44,46 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
     public static final DuplicateSettings DEFAULTS = new DuplicateSettings(10, false, 90, 30, 20, 10, 10, 10, 11,
             50, 1000, 20240601L, 5000, List.of(), 0.01);
 
+    /**
+     * Most resamples allowed: 100 times the default. A thousand resamples serve percentile intervals (common
+     * practice); more only cost time and memory, and a mistyped extra digit must not end in an out-of-memory
+     * failure.
+     */
+    public static final int MAX_BOOTSTRAP_RESAMPLES = 100_000;
+
     public DuplicateSettings {
+        if (bootstrapResamples < 100 || bootstrapResamples > MAX_BOOTSTRAP_RESAMPLES) {
+            throw new SettingException(bootstrapResamples + " is outside 100 to " + MAX_BOOTSTRAP_RESAMPLES
+                    + " resamples; write a whole number in that range (the default is 1000)", "bootstrapResamples");
+        }
+        requireHardLimit(fieldHardLimitPercent, "fieldHardLimitPercent");
+        requireHardLimit(coarseHardLimitPercent, "coarseHardLimitPercent");
+        requireHardLimit(pulpHardLimitPercent, "pulpHardLimitPercent");
+        requireHardLimit(labRepeatHardLimitPercent, "labRepeatHardLimitPercent");
+        requireHardLimit(umpireHardLimitPercent, "umpireHardLimitPercent");
         precisionGrades = precisionGrades == null ? List.of() : List.copyOf(precisionGrades);
+        for (int i = 0; i < precisionGrades.size(); i++) {
+            double g = precisionGrades.get(i);
+            if (!(g > 0) || Double.isInfinite(g)) {
+                throw new SettingException(Numbers.compact(g) + " is not a grade: precision is stated at positive "
+                        + "grades, in the analyte's unit; correct the list", "precisionGrades", Integer.toString(i));
+            }
+        }
         if (!(limitMultipleOfDetection >= 0) || !(acceptancePercent > 0 && acceptancePercent <= 100)
-                || thGroupSize < 3 || thMinimumPairs < thGroupSize * 2 || bootstrapResamples < 100
+                || thGroupSize < 3 || thMinimumPairs < thGroupSize * 2L || bootstrapResamples < 100
                 || bootstrapMaxPairs < LARGE_SAMPLE_MINIMUM || !(batchTestAlpha > 0 && batchTestAlpha < 1)) {
             throw new IllegalArgumentException("duplicates settings out of range: limitMultipleOfDetection >= 0, "
                     + "0 < acceptancePercent <= 100, thGroupSize >= 3, thMinimumPairs >= 2 groups, "
                     + "bootstrapResamples >= 100, bootstrapMaxPairs >= " + LARGE_SAMPLE_MINIMUM
                     + ", 0 < batchTestAlpha < 1");
+        }
+    }
+
+    /** HARD is at most 100 % for values of one sign, so a limit outside 0 < limit <= 100 judges nothing. */
+    private static void requireHardLimit(double percent, String key) {
+        if (!(percent > 0 && percent <= 100)) {
+            throw new SettingException(Numbers.compact(percent) + " % is not a HARD limit: write a percentage above 0 "
+                    + "and at most 100 (common practice: 30 field, 20 coarse, 10 pulp)", key);
         }
     }
 

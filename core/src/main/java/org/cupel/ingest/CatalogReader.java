@@ -51,7 +51,7 @@ public final class CatalogReader {
         int hi = t.column(CI_HIGH);
         int method = t.column(METHOD);
         List<CrmCertificate> certs = new ArrayList<>();
-        Map<String, Long> seen = new HashMap<>();
+        Map<String, CatalogConflicts.Row> seen = new HashMap<>();
         List<DataIssue> issues = new ArrayList<>(t.warnings());
         long excluded = 0;
         for (RawRow row : t.rows()) {
@@ -74,9 +74,6 @@ public final class CatalogReader {
             } else if (!(sd > 0)) {
                 problem = "the SD '" + row.cell(cols[4]) + "' is not a positive number";
                 at = cols[4];
-            } else if (seen.putIfAbsent(code + "\u0000" + analyte, row.line()) != null) {
-                problem = code + " " + analyte + " is already certified on line " + seen.get(code + "\u0000" + analyte);
-                at = cols[0];
             }
             if (problem != null) {
                 // Row-level location: the whole row is left out; the problem names the column.
@@ -90,6 +87,13 @@ public final class CatalogReader {
             CrmCertificate c = new CrmCertificate(code, analyte, unit.get(), value, sd,
                     lo >= 0 ? number(row.cell(lo)) : Double.NaN, hi >= 0 ? number(row.cell(hi)) : Double.NaN,
                     method >= 0 ? row.cell(method) : "");
+            CatalogConflicts.Row here = new CatalogConflicts.Row(t.at(row), c);
+            CatalogConflicts.Row first = seen.putIfAbsent(code + "\u0000" + analyte, here);
+            if (first != null) {
+                issues.addAll(CatalogConflicts.issues(first, here));
+                excluded++;
+                continue;
+            }
             GradeUnit target = units.get(analyte);
             certs.add(target == null ? c : c.in(target));
         }

@@ -3,7 +3,10 @@ package org.cupel.ingest;
 import java.util.List;
 import java.util.Map;
 import org.cupel.assay.MissingReason;
+import org.cupel.assay.Numbers;
 import org.cupel.config.CupelConfig;
+import org.cupel.config.SettingException;
+import org.cupel.units.GradeUnit;
 
 /**
  * Every setting of the {@code ingest} section of {@code cupel.yaml} (docs/config.md). The value
@@ -30,6 +33,31 @@ public record IngestSettings(boolean decimalComma, boolean negativeMeansBelowDet
         methodPriority = methodPriority == null ? Map.of() : Map.copyOf(methodPriority);
         sheet = sheet == null ? "" : sheet;
         dateFormat = dateFormat == null || dateFormat.isBlank() ? "ISO" : dateFormat;
+        requirePositiveLimits(detectionLimits);
+        units.forEach((analyte, symbol) -> {
+            if (symbol == null || GradeUnit.parse(symbol).isEmpty()) {
+                throw new SettingException("'" + symbol + "' is not a unit Cupel knows; write one of ppb, ppm, g/t, "
+                        + "mg/kg, %, oz/st or oz/lt", "units", analyte);
+            }
+        });
+    }
+
+    /**
+     * A configured detection limit stands for the value of a below-detection code: zero or a negative
+     * number cannot be one, and was formerly accepted and then ignored (the code stayed without a limit).
+     */
+    private static void requirePositiveLimits(Map<String, Double> limits) {
+        if (limits == null) {
+            return;
+        }
+        limits.forEach((analyte, limit) -> {
+            if (limit == null || !(limit > 0) || limit.isInfinite()) {
+                throw new SettingException((limit == null ? "an empty value" : Numbers.compact(limit)) + " is not a "
+                        + "detection limit: it must be a positive number in the unit of the lab file's column; "
+                        + "write it as, for example, " + analyte + ": 0.005, or remove the key",
+                        "detectionLimits", analyte);
+            }
+        });
     }
 
     public static IngestSettings from(CupelConfig config) {

@@ -9,6 +9,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.function.UnaryOperator;
 import java.util.stream.Stream;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.QcRole;
@@ -54,9 +55,18 @@ public final class ProjectLoader {
      * the exceptions register (and its account shows no rows) instead of stopping the load.
      */
     public static Project inspect(Path folder) {
+        return inspect(folder, UnaryOperator.identity());
+    }
+
+    /**
+     * As {@link #inspect(Path)}, with the config also passed through {@code check} (which throws a
+     * {@link ConfigException} for a setting it refuses): a refused config becomes a FATAL entry for
+     * {@value #CONFIG}, and the files are then read with the defaults.
+     */
+    public static Project inspect(Path folder, UnaryOperator<CupelConfig> check) {
         CupelConfig config;
         try {
-            config = readConfig(folder);
+            config = check.apply(readConfig(folder));
         } catch (ConfigException | InputException e) {
             Project p = new Load(folder, CupelConfig.defaults(), false).run();
             p.exceptions().add(SampleJoin.fatal(CONFIG, e.getMessage()));

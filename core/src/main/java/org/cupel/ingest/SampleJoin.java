@@ -221,26 +221,8 @@ final class SampleJoin {
         return accounts;
     }
 
-    /** A file that could not be used; the message's own {@code file:line:col:} prefix becomes the location. */
+    /** A file that could not be used (see {@link DataIssue#fatal}). */
     static DataIssue fatal(String file, String message) {
-        SourceLocation where = SourceLocation.ofFile(file);
-        String text = message;
-        if (message.startsWith(file + ":")) {
-            String[] parts = message.substring(file.length() + 1).split(":", 3);
-            long line = parts.length > 1 ? digits(parts[0]) : 0;
-            int col = parts.length > 2 && line > 0 ? (int) digits(parts[1]) : 0;
-            where = new SourceLocation(file, Math.max(line, 0), Math.max(col, 0));
-            int cut = file.length() + 1 + (line > 0 ? parts[0].length() + 1 : 0) + (col > 0 ? parts[1].length() + 1 : 0);
-            text = message.substring(cut).strip();
-        }
-        return new DataIssue(DataIssue.Severity.FATAL, where, "", "", text, "", "");
-    }
-
-    private static long digits(String s) {
-        try {
-            return Long.parseLong(s.strip());
-        } catch (NumberFormatException e) {
-            return -1;
-        }
+        return DataIssue.fatal(file, message);
     }
 }

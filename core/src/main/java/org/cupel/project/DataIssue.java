@@ -34,6 +34,32 @@ public record DataIssue(Severity severity, SourceLocation where, String sampleId
         fix = fix == null ? "" : fix;
     }
 
+    /**
+     * A file that could not be used at all, from the one-sentence message of the error that stopped it; the
+     * message's own {@code file:line:col:} prefix becomes the location.
+     */
+    public static DataIssue fatal(String file, String message) {
+        SourceLocation where = SourceLocation.ofFile(file);
+        String text = message;
+        if (message.startsWith(file + ":")) {
+            String[] parts = message.substring(file.length() + 1).split(":", 3);
+            long line = parts.length > 1 ? digits(parts[0]) : 0;
+            int col = parts.length > 2 && line > 0 ? (int) digits(parts[1]) : 0;
+            where = new SourceLocation(file, Math.max(line, 0), Math.max(col, 0));
+            int cut = file.length() + 1 + (line > 0 ? parts[0].length() + 1 : 0) + (col > 0 ? parts[1].length() + 1 : 0);
+            text = message.substring(cut).strip();
+        }
+        return new DataIssue(Severity.FATAL, where, "", "", text, "", "");
+    }
+
+    private static long digits(String s) {
+        try {
+            return Long.parseLong(s.strip());
+        } catch (NumberFormatException e) {
+            return -1;
+        }
+    }
+
     /** One line: {@code file:line:col: problem (found 'x'; expected y). Fix: z}. */
     public String message() {
         StringBuilder sb = new StringBuilder().append(where).append(": ").append(problem);

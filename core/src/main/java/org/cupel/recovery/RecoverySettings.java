@@ -1,6 +1,8 @@
 package org.cupel.recovery;
 
 import java.util.Map;
+import org.cupel.assay.Numbers;
+import org.cupel.config.SettingException;
 
 /**
  * Settings of the recovery analysis, bound from the {@code recovery} section of {@code cupel.yaml}.
@@ -35,7 +37,7 @@ public record RecoverySettings(String definition, double confidence, double alph
             95.0, 0.01, Map.of("head", 0.02, "collected", 0.01, "loss", 0.05), null, null, Map.of());
 
     public RecoverySettings {
-        assayRelativeSd = assayRelativeSd == null ? Map.of() : Map.copyOf(assayRelativeSd);
+        assayRelativeSd = relativeSds(assayRelativeSd);
         productRoles = productRoles == null ? Map.of() : Map.copyOf(productRoles);
         if (!(confidence > 0 && confidence < 1) || !(alpha > 0 && alpha < 1)) {
             throw new IllegalArgumentException("confidence and alpha must lie between 0 and 1");
@@ -44,6 +46,41 @@ public record RecoverySettings(String definition, double confidence, double alph
             throw new IllegalArgumentException("the equivalence margin and the power difference must be positive");
         }
         RecoveryDefinition.parse(definition);
+        require(power > 0 && power < 1, "power", power, "the target power lies between 0 and 1 (default 0.80)");
+        require(balanceTolerance >= 0 && Double.isFinite(balanceTolerance), "balanceTolerance", balanceTolerance,
+                "the balance tolerance is 0 or a positive fraction (default 0.05, ± 5 %)");
+        require(nearComplete > 0 && nearComplete <= 100, "nearComplete", nearComplete,
+                "the near-complete recovery is a percentage above 0 and at most 100 (default 95)");
+        require(balanceResolutionGrams >= 0 && Double.isFinite(balanceResolutionGrams), "balanceResolutionGrams",
+                balanceResolutionGrams, "the balance readability is 0 or more grams (default 0.01)");
+        requireNonNegative(precisionSigma0, "precisionSigma0");
+        requireNonNegative(precisionK, "precisionK");
+    }
+
+    private static Map<String, Double> relativeSds(Map<String, Double> rsds) {
+        if (rsds == null) {
+            return Map.of();
+        }
+        rsds.forEach((product, rsd) -> {
+            if (rsd == null || !(rsd >= 0) || rsd.isInfinite()) {
+                throw new SettingException((rsd == null ? "an empty value" : Numbers.compact(rsd)) + " is not a "
+                        + "relative SD: write 0 or a positive fraction (0.02 for 2 %)", "assayRelativeSd", product);
+            }
+        });
+        return Map.copyOf(rsds);
+    }
+
+    private static void require(boolean ok, String key, double value, String rule) {
+        if (!ok) {
+            throw new SettingException(Numbers.compact(value) + " is out of range: " + rule + "; correct the value",
+                    key);
+        }
+    }
+
+    private static void requireNonNegative(Double value, String key) {
+        if (value != null) {
+            require(value >= 0 && !value.isInfinite(), key, value, "the precision model's terms are 0 or more");
+        }
     }
 
     public RecoveryDefinition recoveryDefinition() {

@@ -99,7 +99,8 @@ class BlankReviewTest {
     void badSettingIsAConfigErrorNamingTheSection() {
         var e = org.junit.jupiter.api.Assertions.assertThrows(org.cupel.config.ConfigException.class,
                 () -> BlankReview.review(project(planted(), "blanks:\n  failMultipel: 10\n")));
-        assertTrue(e.getMessage().contains("section 'blanks'"), e.getMessage());
+        assertTrue(e.getMessage().contains("'failMultipel' is not a setting of blanks; did you mean 'failMultiple'?"),
+                e.getMessage());
     }
 
     @Test

@@ -3,6 +3,7 @@ package org.cupel.control.crm;
 import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.cupel.config.SettingException;
 
 /**
  * Settings of the CRM review, config section {@code crm} (docs/config.md, docs/control-rules.md).
@@ -31,15 +32,35 @@ public record CrmSettings(Map<String, RuleAction> rules, double ewmaLambda, doub
     public CrmSettings {
         Map<String, RuleAction> copy = new LinkedHashMap<>();
         for (Map.Entry<String, RuleAction> e : rules.entrySet()) {
-            copy.put(CrmRule.byId(e.getKey()).id(), e.getValue());
+            try {
+                copy.put(CrmRule.byId(e.getKey()).id(), e.getValue());
+            } catch (IllegalArgumentException unknown) {
+                throw new SettingException(unknown.getMessage() + "; correct the rule id", "rules", e.getKey());
+            }
         }
         rules = java.util.Collections.unmodifiableMap(copy);
         if (!(confidence > 0 && confidence < 1) || !(driftAlpha > 0 && driftAlpha < 1)) {
             throw new IllegalArgumentException("confidence and driftAlpha must lie between 0 and 1");
         }
+        requireRange(ewmaLambda > 0 && ewmaLambda <= 1, "ewmaLambda", ewmaLambda,
+                "the EWMA weight lies in 0 < λ ≤ 1 (default 0.2)");
+        requireRange(ewmaWidth > 0 && Double.isFinite(ewmaWidth), "ewmaWidth", ewmaWidth,
+                "the EWMA limit width is a positive number of SDs (default 3)");
+        requireRange(cusumK >= 0 && Double.isFinite(cusumK), "cusumK", cusumK,
+                "the CUSUM reference value is 0 or more SDs (default 0.5)");
+        requireRange(cusumH > 0 && Double.isFinite(cusumH), "cusumH", cusumH,
+                "the CUSUM decision interval is a positive number of SDs (default 5)");
         if (!(swapWithinSd > 0) || !(blankLevelMultiple >= 0) || projectLimitsMinN < 3) {
             throw new IllegalArgumentException("swapWithinSd must be > 0, blankLevelMultiple >= 0, "
                     + "projectLimitsMinN >= 3");
+        }
+    }
+
+    /** The EWMA and CUSUM parameters are checked here, in the user's terms, before a chart refuses them. */
+    private static void requireRange(boolean ok, String key, double value, String rule) {
+        if (!ok) {
+            throw new SettingException(org.cupel.assay.Numbers.compact(value) + " is out of range: " + rule
+                    + "; correct the value", key);
         }
     }
 
