@@ -3,6 +3,7 @@ package org.cupel.cli;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Optional;
+import org.cupel.ingest.ProjectFiles;
 import org.cupel.ingest.ProjectLoader;
 import org.cupel.ingest.ValueConventions;
 import org.cupel.project.Project;
@@ -24,8 +25,8 @@ record ReportInputs(Project project, Optional<RecoveryResult> testwork) {
         }
         RecoverySettings settings = project.config().section("recovery", RecoverySettings.class,
                 RecoverySettings.DEFAULTS);
-        RecoveryResult result = RecoveryAnalysis.run(TestworkReader.read(folder, settings,
-                ValueConventions.from(project.config())), settings);
+        RecoveryResult result = RecoveryAnalysis.run(TestworkReader.read(ProjectFiles.of(folder, project.config()),
+                settings, ValueConventions.from(project.config())), settings);
         return new ReportInputs(project, Optional.of(result));
     }
 }
