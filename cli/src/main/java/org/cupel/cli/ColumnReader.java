@@ -10,7 +10,6 @@ import org.cupel.ingest.ParsedValue;
 import org.cupel.ingest.RawRow;
 import org.cupel.ingest.RawTable;
 import org.cupel.ingest.TableReader;
-import org.cupel.ingest.ValueConventions;
 import org.cupel.ingest.ValueParser;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
@@ -38,7 +37,7 @@ final class ColumnReader {
                     + table.headerLine() + "); the columns are " + MessageText.list(table.columns())
                     + ". Pass one of them to --column.");
         }
-        ValueParser parser = new ValueParser(ValueConventions.DEFAULTS);
+        ValueParser parser = ValueParser.forPlainTable();
         // A header in the analyte grammar (Au_ppm) gives the unit, and with it the ceiling of 100 %.
         GradeUnit unit = new HeaderParser().parse(table.columns().get(idx)).map(AnalyteHeader::unit).orElse(null);
         List<AssayValue> values = new ArrayList<>();

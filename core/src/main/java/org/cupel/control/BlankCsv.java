@@ -17,7 +17,6 @@ import org.cupel.ingest.ParsedValue;
 import org.cupel.ingest.RawRow;
 import org.cupel.ingest.RawTable;
 import org.cupel.ingest.TableReader;
-import org.cupel.ingest.ValueConventions;
 import org.cupel.ingest.ValueParser;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
@@ -59,7 +58,7 @@ public final class BlankCsv {
         int position = require(raw, "position", "seq", "sequence");
         int precedingId = raw.column("preceding_id", "preceding sample");
         List<AnalyteColumns> analytes = analyteColumns(raw);
-        ValueParser parser = new ValueParser(ValueConventions.DEFAULTS);
+        ValueParser parser = ValueParser.forPlainTable();
         SampleTable.Builder table = SampleTable.builder();
         Map<String, Batch> batches = new HashMap<>();
         List<DataIssue> issues = new ArrayList<>(raw.issues());

@@ -10,7 +10,6 @@ import org.cupel.ingest.ParsedValue;
 import org.cupel.ingest.RawRow;
 import org.cupel.ingest.RawTable;
 import org.cupel.ingest.TableReader;
-import org.cupel.ingest.ValueConventions;
 import org.cupel.ingest.ValueParser;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
@@ -54,7 +53,7 @@ public final class PairsFile {
         int batch = table.column("batch", "job", "certificate", "batch id");
         int id = table.column("id", "sample id", "duplicate id", "sample");
         int dl = table.column("dl", "detection limit", "lod", "ldl");
-        ValueParser parser = new ValueParser(ValueConventions.DEFAULTS);
+        ValueParser parser = ValueParser.forPlainTable();
         List<DuplicatePair> pairs = new ArrayList<>();
         List<DataIssue> issues = new ArrayList<>(table.issues());
         for (RawRow row : table.rows()) {

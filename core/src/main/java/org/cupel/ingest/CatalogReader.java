@@ -55,7 +55,7 @@ public final class CatalogReader {
         Map<String, Long> seen = new HashMap<>();
         List<DataIssue> issues = new ArrayList<>(t.issues());
         long excluded = 0;
-        ValueParser parser = new ValueParser(ValueConventions.DEFAULTS);
+        ValueParser parser = ValueParser.forPlainTable();
         for (RawRow row : t.rows()) {
             String code = row.cell(cols[0]);
             String analyte = row.cell(cols[1]);

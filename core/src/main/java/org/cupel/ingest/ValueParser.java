@@ -41,6 +41,8 @@ public final class ValueParser {
     public static final double UNIT_FREE_CEILING = 1e9;
 
     private final ValueConventions conventions;
+    /** Whether the conventions come from cupel.yaml (the fix can name a setting) or are fixed (plain tables). */
+    private final boolean configurable;
     private final NumberScanner numbers;
     private final Set<String> belowCodes = new HashSet<>();
     private final Map<String, MissingReason> missingCodes = new HashMap<>();
@@ -49,11 +51,25 @@ public final class ValueParser {
     private SourceLocation otherMarkAt;
     private String otherMarkText;
 
+    /** A parser of a project's lab files under their configured conventions ({@code ingest} in cupel.yaml). */
     public ValueParser(ValueConventions conventions) {
+        this(conventions, true);
+    }
+
+    private ValueParser(ValueConventions conventions, boolean configurable) {
         this.conventions = conventions;
+        this.configurable = configurable;
         this.numbers = new NumberScanner(conventions.decimalComma(), conventions.thousandsSeparator());
         conventions.belowDetectionCodes().forEach(c -> belowCodes.add(codeKey(c)));
         conventions.missingCodes().forEach((c, r) -> missingCodes.put(codeKey(c), r));
+    }
+
+    /**
+     * A parser of a table read under the default conventions whatever cupel.yaml says (the plain tables of
+     * the analysis commands, the CRM catalog): its fixes ask for decimal points, not for a setting.
+     */
+    public static ValueParser forPlainTable() {
+        return new ValueParser(ValueConventions.DEFAULTS, false);
     }
 
     public ValueConventions conventions() {
@@ -135,9 +151,10 @@ public final class ValueParser {
                 + MessageText.clip(groupedText) + "' (line " + groupedAt.line() + ", column " + groupedAt.column()
                 + ") reads with '" + mark + "' as thousands separator, while '" + MessageText.clip(otherMarkText)
                 + "' (line " + otherMarkAt.line() + ", column " + otherMarkAt.column() + ") looks written with '"
-                + mark + "' as decimal mark; set ingest.decimalComma: " + !comma + " in cupel.yaml if this lab writes "
-                + (comma ? "decimal points" : "decimal commas") + ", or correct the cells so the file uses one "
-                + "decimal mark.");
+                + mark + "' as decimal mark; " + (configurable ? "set ingest.decimalComma: " + !comma + " in cupel.yaml "
+                + "if this lab writes " + (comma ? "decimal points" : "decimal commas") + ", or correct the cells so "
+                + "the file uses one decimal mark." : "this table is read with decimal points (the ingest settings "
+                + "do not apply to it), so write every number with a decimal point and no thousands separator."));
     }
 
     /**
@@ -246,6 +263,10 @@ public final class ValueParser {
             return excluded(where, t, "the value seems to use a decimal point",
                     "a decimal comma (0,005), as ingest.decimalComma is true",
                     "set ingest.decimalComma: false in cupel.yaml if this lab writes decimal points");
+        }
+        if (!configurable) {
+            return excluded(where, t, "the value seems to use a decimal comma", "a decimal point (0.005)",
+                    "write the value with a decimal point: this table is read with decimal points");
         }
         return excluded(where, t, "the value seems to use a decimal comma",
                 "a decimal point (0.005), as ingest.decimalComma is false",
