@@ -16,9 +16,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.poi.ss.usermodel.Row;
-import org.apache.poi.ss.usermodel.Sheet;
-import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.cupel.cli.CupelCommand;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -185,21 +182,7 @@ class InputReadingCliTest {
 
     @Test
     void aFormulaWithoutACalculatedValueIsListedWithItsCell() throws IOException {
-        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
-        try (XSSFWorkbook wb = new XSSFWorkbook()) {
-            Sheet s = wb.createSheet("Sheet1");
-            Row h = s.createRow(0);
-            h.createCell(0).setCellValue("Sample ID");
-            h.createCell(1).setCellValue("Au_ppm");
-            for (int r = 1; r <= 3; r++) {
-                Row row = s.createRow(r);
-                row.createCell(0).setCellValue("R" + r);
-                row.createCell(1).setCellValue(0.5);
-            }
-            s.getRow(3).getCell(1).setCellFormula("B2*2");
-            wb.write(bytes);
-        }
-        write("lab/a.xlsx", WorkbookOutputProcessTest.withoutCachedValues(bytes.toByteArray()));
+        write("lab/a.xlsx", WorkbookOutputProcessTest.withoutCachedValues(WorkbookOutputProcessTest.labWorkbook(true)));
         write("register.csv", REGISTER);
         JsonNode check = checkJson();
         List<JsonNode> c = exceptionsAt(check, "lab/a.xlsx", 4);
@@ -259,6 +242,19 @@ class InputReadingCliTest {
         Run duplicates = run("duplicates", dir.toString());
         assertTrue(duplicates.oneLineInputError(), duplicates.err);
         assertFalse(duplicates.err.contains("/bin/bash"), duplicates.err);
+    }
+
+    /**
+     * Found by the long fuzz run (a huge field pasted into a catalog row): a certificate for an analyte that
+     * no result column holds made {@code cupel crm --results} exit 3 with a NullPointerException.
+     */
+    @Test
+    void aCertificateOfAnAnalyteWithoutResultsIsNoCrash() throws IOException {
+        Path catalog = write("cat.csv", "crm,analyte,unit,certified_value,sd\nLOW,Au,g/t,0.50,0.03\n"
+                + "MID,Pd,g/t,2.50,0.10\n");
+        Path results = write("crm.csv", "crm,batch,position,Au_ppm\nLOW,J1,5,0.51\nMID,J1,15,2.52\n");
+        Run r = run("crm", "--results", results.toString(), "--catalog", catalog.toString());
+        assertEquals(CupelCommand.OK, r.code, r.err);
     }
 
     // Item 10: messages.

@@ -50,8 +50,8 @@ class WorkbookOutputProcessTest {
         return new Outcome(code, Files.readString(out), Files.readString(err));
     }
 
-    /** A small lab workbook: Sample ID, Au_ppm; three rows. */
-    static byte[] labWorkbook() throws IOException {
+    /** A small lab workbook: Sample ID, Au_ppm; rows R1..R3, R3's value a formula when {@code formula}. */
+    static byte[] labWorkbook(boolean formula) throws IOException {
         ByteArrayOutputStream bytes = new ByteArrayOutputStream();
         try (XSSFWorkbook wb = new XSSFWorkbook()) {
             Sheet s = wb.createSheet("Sheet1");
@@ -62,6 +62,9 @@ class WorkbookOutputProcessTest {
                 Row row = s.createRow(r);
                 row.createCell(0).setCellValue("R" + r);
                 row.createCell(1).setCellValue(0.25 * r);
+            }
+            if (formula) {
+                s.getRow(3).getCell(1).setCellFormula("B2*3");
             }
             wb.write(bytes);
         }
@@ -95,7 +98,7 @@ class WorkbookOutputProcessTest {
     void aJsonCommandOnAWorkbookProjectPrintsOnlyTheJson() throws Exception {
         Path project = dir.resolve("p");
         Files.createDirectories(project.resolve("lab"));
-        Files.write(project.resolve("lab/a.xlsx"), labWorkbook());
+        Files.write(project.resolve("lab/a.xlsx"), labWorkbook(false));
         Files.writeString(project.resolve("register.csv"), InputReadingCliTest.REGISTER);
         Outcome o = cupel(dir, "check", project.toString(), "--json");
         assertEquals(CupelCommand.OK, o.code, o.err);
@@ -109,7 +112,7 @@ class WorkbookOutputProcessTest {
     void aRefusedWorkbookGivesOneLineAndNoStackTrace() throws Exception {
         Path project = dir.resolve("p");
         Files.createDirectories(project.resolve("lab"));
-        Files.write(project.resolve("lab/a.xlsx"), rewrite(labWorkbook(), "[Content_Types].xml",
+        Files.write(project.resolve("lab/a.xlsx"), rewrite(labWorkbook(false), "[Content_Types].xml",
                 xml -> xml.replaceFirst("\\?>", "?><!DOCTYPE x>")));
         Outcome o = cupel(dir, "duplicates", project.toString(), "--json");
         assertEquals(CupelCommand.INPUT_ERROR, o.code, o.err);

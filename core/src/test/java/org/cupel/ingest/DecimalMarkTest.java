@@ -8,24 +8,14 @@ import java.nio.file.Path;
 import org.cupel.config.CupelConfig;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Issue 15, item 3: a file whose cells read one character both as a thousands separator and as a decimal
  * mark is refused with the setting that decides, never read cell by cell (where {@code 1,234} became 1234
  * beside {@code 0,512} flagged as a decimal comma: a value 1000 times too large).
  */
-class DecimalMarkTest {
-    @TempDir
-    Path tmp;
-    private ProjectFolder folder;
-
-    @BeforeEach
-    void folder() {
-        folder = new ProjectFolder(tmp);
-    }
+class DecimalMarkTest extends InFolderTest {
 
     private LabFile read(String text, boolean decimalComma) {
         Path f = folder.write("lab/a.csv", text);

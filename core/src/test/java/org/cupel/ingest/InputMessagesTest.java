@@ -9,22 +9,12 @@ import java.nio.file.Path;
 import java.util.List;
 import org.cupel.project.InputException;
 import org.cupel.project.MessageText;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Issue 15, item 10: messages point at the exact line, show invisible characters and stay short.
  */
-class InputMessagesTest {
-    @TempDir
-    Path tmp;
-    private ProjectFolder folder;
-
-    @BeforeEach
-    void folder() {
-        folder = new ProjectFolder(tmp);
-    }
+class InputMessagesTest extends InFolderTest {
 
     /** Lines 1..n of a lab table; the bytes of {@code extra} appended to line {@code at}. */
     private static byte[] table(int lines, int at, byte[] extra) {

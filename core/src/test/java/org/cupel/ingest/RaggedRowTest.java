@@ -26,25 +26,14 @@ import org.cupel.project.Project;
 import org.cupel.recovery.RecoverySettings;
 import org.cupel.recovery.Testwork;
 import org.cupel.recovery.TestworkReader;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Issue 15, item 2: a row whose cell count differs from the header's is never read shifted or padded. It
  * is left out and listed with its line, both counts and the fix, by every delimited reader: lab files,
  * register, catalog, the plain tables of the analysis commands and testwork.
  */
-class RaggedRowTest {
-    @TempDir
-    Path tmp;
-    private ProjectFolder folder;
-
-    @BeforeEach
-    void folder() {
-        folder = new ProjectFolder(tmp);
-    }
-
+class RaggedRowTest extends InFolderTest {
     /**
      * The issue's case: {@code R2,1,234.5,2.0} under {@code Sample ID,Au_ppm,Ag_ppm} read Ag = 234.5 with no
      * problem found. Now R2 is listed (4 cells, 3 columns) and none of its values is read.

@@ -13,24 +13,18 @@ import org.cupel.project.InputException;
 import org.cupel.project.Project;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Issue 15, item 4: a register that is missing or misnamed silently turned every CRM, blank and duplicate
  * into a routine sample. A near miss is now fatal (the file names it and the fix), and a project with no
  * register at all is warned about.
  */
-class RegisterPresenceTest {
+class RegisterPresenceTest extends InFolderTest {
     private static final String LAB = "Sample ID,Au_ppm\nS1,0.5\nC1,0.41\nB1,<0.005\n";
     private static final String REGISTER = "sample_id,qc_role,reference\nS1,routine,\nC1,crm,KC-1\nB1,blank,\n";
 
-    @TempDir
-    Path tmp;
-    private ProjectFolder folder;
-
     @BeforeEach
-    void folder() {
-        folder = new ProjectFolder(tmp);
+    void lab() {
         folder.write("lab/a.csv", LAB);
     }
 
