@@ -25,10 +25,12 @@ import org.cupel.project.MessageText;
 /**
  * Reads one lab result file (docs/input-formats.md): the sample ID column, optional batch, date,
  * position, QC role and reference columns, and every analyte column the header grammar recognises.
- * Batch, lab and date default to the lab's header block, then the file name. Rows: a row without an ID,
- * a second row for an ID already in the file, or a row whose cells are all unreadable or blank (with at
- * least one unreadable) is excluded; a row with some unreadable cells is kept and each such cell is listed
- * (severity EXCLUDED: that value is left out). Blank cells add no result.
+ * Batch, lab and date default to the lab's header block, then the file name. Rows: a ragged row (a cell
+ * count other than the header's), a row without an ID, a second row for an ID already in the file, or a
+ * row whose cells are all unreadable or blank (with at least one unreadable) is excluded; a row with some
+ * unreadable cells is kept and each such cell is listed (severity EXCLUDED: that value is left out). Blank
+ * cells add no result. A file that reads one character both as thousands separator and as decimal mark
+ * is refused ({@link ValueParser#checkDecimalMarks}).
  */
 public final class LabFileReader {
     private final IngestSettings settings;
