@@ -134,6 +134,7 @@ public final class HtmlReport {
             case WARN: return "Warning.";
             case FAIL: return "Fail.";
             case CAUTION: return "Caution.";
+            case CANNOT_JUDGE: return "Cannot judge.";
             default: return "Note.";
         }
     }

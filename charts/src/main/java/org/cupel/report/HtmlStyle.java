@@ -48,6 +48,7 @@ final class HtmlStyle {
             ".callout.fail{border-color:#d55e00}",
             ".callout.caution{border-color:#cc79a7}",
             ".callout.info{border-color:#56b4e9}",
+            ".callout.cannot_judge{border-color:#000000;border-left-style:dashed}",
             "footer{padding-top:1rem;padding-bottom:2rem;color:var(--muted);font-size:.8rem;"
                     + "border-top:1px solid var(--rule)}",
             "@media print{",

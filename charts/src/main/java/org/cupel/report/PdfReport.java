@@ -294,6 +294,7 @@ public final class PdfReport {
             case WARN: return new Color(230, 159, 0);
             case FAIL: return new Color(213, 94, 0);
             case CAUTION: return new Color(204, 121, 167);
+            case CANNOT_JUDGE: return Color.BLACK;
             default: return new Color(86, 180, 233);
         }
     }

@@ -30,6 +30,9 @@ public sealed interface ReportBlock permits ReportBlock.Paragraph, ReportBlock.T
     record Callout(Level level, String text) implements ReportBlock {
     }
 
-    /** How a callout is shown. */
-    enum Level { INFO, PASS, WARN, FAIL, CAUTION }
+    /**
+     * How a callout is shown. CANNOT_JUDGE is a check with nothing to judge (no control sample), which is
+     * never shown as a pass.
+     */
+    enum Level { INFO, PASS, WARN, FAIL, CAUTION, CANNOT_JUDGE }
 }

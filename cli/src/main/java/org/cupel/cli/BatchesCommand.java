@@ -99,7 +99,11 @@ final class BatchesCommand implements Callable<Integer> {
             }
         }
         if (!any) {
-            out.println("  every control result passed");
+            // A batch without control results has no reason listed when no analyte has a control at all.
+            boolean judged = !review.verdicts().isEmpty()
+                    && review.verdicts().stream().allMatch(v -> v.verdict() == Verdict.PASS);
+            out.println(judged ? "  every control result passed"
+                    : "  no control results (no CRM or blank result in any batch): no batch can be judged");
         }
         out.println();
         if (review.reassay().entries().isEmpty()) {

@@ -45,7 +45,9 @@ final class BlankTables {
                     r.carryOver() ? "yes" : "");
         }
         out.println();
-        if (find.size() == 0) {
+        if (report.results().isEmpty()) {
+            out.println("No blank results: blanks cannot be judged.");
+        } else if (find.size() == 0) {
             out.println("Every blank passed.");
         } else {
             out.println("Blanks that did not pass");

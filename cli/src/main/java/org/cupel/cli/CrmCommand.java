@@ -117,9 +117,10 @@ public final class CrmCommand implements Callable<Integer> {
 
     private static void print(PrintWriter out, Project p, CrmReview r) {
         out.printf("CRM control: %s%n", p.name());
-        out.printf("%d results in %d series: %d failures, %d warnings, %d probable swaps, %d exceptions.%n%n",
-                r.series().stream().mapToLong(SeriesReview::n).sum(), r.series().size(), r.failures(), r.warnings(),
-                r.swaps(), r.exceptions().size());
+        long n = r.series().stream().mapToLong(SeriesReview::n).sum();
+        out.printf("%d results in %d series: %d failures, %d warnings, %d probable swaps, %d exceptions.%s%n%n",
+                n, r.series().size(), r.failures(), r.warnings(), r.swaps(), r.exceptions().size(),
+                n == 0 ? " No CRM result: CRM control cannot be judged." : "");
         TextTable t = new TextTable("CRM", "Analyte", "n", "Certified", "SD", "Mean", "Bias %", "95% CI", "Fail",
                 "Warn", "Swap", "Drift");
         for (SeriesReview s : r.series()) {

@@ -13,6 +13,7 @@ import org.cupel.charts.recovery.DeportmentChart;
 import org.cupel.charts.recovery.DifferenceChart;
 import org.cupel.charts.recovery.RecoveryByConditionChart;
 import org.cupel.config.CupelConfig;
+import org.cupel.ingest.ProjectFiles;
 import org.cupel.ingest.ValueConventions;
 import org.cupel.project.InputException;
 import org.cupel.recovery.RecoveryAnalysis;
@@ -72,7 +73,7 @@ public final class RecoveryCommand implements Callable<Integer> {
         if (powerDelta != null) {
             settings = settings.withPowerDifference(positive(powerDelta, "--power-delta"));
         }
-        RecoveryResult result = RecoveryAnalysis.run(TestworkReader.read(folder, settings,
+        RecoveryResult result = RecoveryAnalysis.run(TestworkReader.read(ProjectFiles.of(folder, config), settings,
                 ValueConventions.from(config)), settings);
         PrintWriter out = spec.commandLine().getOut();
         if (charts != null) {

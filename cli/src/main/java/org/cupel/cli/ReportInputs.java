@@ -4,6 +4,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Optional;
 import org.cupel.config.CupelConfig;
+import org.cupel.ingest.ProjectFiles;
 import org.cupel.ingest.ValueConventions;
 import org.cupel.project.Project;
 import org.cupel.recovery.RecoveryAnalysis;
@@ -38,7 +39,7 @@ record ReportInputs(Project project, Optional<RecoveryResult> testwork) {
             return Optional.empty();
         }
         RecoverySettings settings = config.section("recovery", RecoverySettings.class, RecoverySettings.DEFAULTS);
-        return Optional.of(RecoveryAnalysis.run(TestworkReader.read(folder, settings,
+        return Optional.of(RecoveryAnalysis.run(TestworkReader.read(ProjectFiles.of(folder, config), settings,
                 ValueConventions.from(config)), settings));
     }
 }

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Comparator;
+import java.util.List;
 import java.util.stream.Stream;
 import org.cupel.cli.CupelCommand;
 
@@ -16,12 +17,12 @@ final class FuzzCheck {
     }
 
     /** @return null when the outcome is acceptable, else what went wrong */
-    static String problem(FuzzTarget target, byte[] content) throws IOException {
+    static String problem(FuzzCase c) throws IOException {
         Path dir = Files.createTempDirectory("cupel-fuzz-cli");
         try {
-            target.write(dir, content);
-            FuzzTarget.Outcome o = target.run(dir);
-            return judge(target, o, dir);
+            c.target().write(dir, c.content(), c.registerLayout());
+            FuzzTarget.Outcome o = c.target().run(dir);
+            return judge(c.target().blamable(c.registerLayout()), c.target().listsProblemsOnStdout(), o, dir);
         } finally {
             deleteTree(dir);
         }
@@ -30,13 +31,15 @@ final class FuzzCheck {
     /**
      * A damaged file can also leave a usable file with nothing to analyse: then the message names the
      * project folder that holds it ("no duplicates found" in a project whose register lost its rows).
+     *
+     * @param names the files a message may name: the damaged file, and the register when it was laid out wrongly
+     * @param listsOnStdout whether the command ({@code check}) lists fatal problems on stdout
      */
-    static String judge(FuzzTarget target, FuzzTarget.Outcome o, Path dir) {
+    static String judge(List<String> names, boolean listsOnStdout, FuzzTarget.Outcome o, Path dir) {
         if (o.err().contains("\tat ") || o.err().contains("Exception")) {
             return "stack trace or exception name on stderr: " + o.err();
         }
-        String name = Path.of(target.damaged()).getFileName().toString();
-        if (o.code() == CupelCommand.INPUT_ERROR && target.listsProblemsOnStdout() && o.out().contains(name)) {
+        if (o.code() == CupelCommand.INPUT_ERROR && listsOnStdout && names.stream().anyMatch(o.out()::contains)) {
             return null;
         }
         if (o.code() == CupelCommand.INPUT_ERROR) {
@@ -44,8 +47,8 @@ final class FuzzCheck {
             if (msg.isEmpty() || msg.lines().count() != 1 || !msg.startsWith("cupel: ")) {
                 return "exit 2 without one 'cupel: ...' line on stderr: [" + o.err() + "]";
             }
-            if (!msg.contains(name) && !msg.contains(dir.toString())) {
-                return "exit 2 but the message does not name " + name + ": " + msg;
+            if (names.stream().noneMatch(msg::contains) && !msg.contains(dir.toString())) {
+                return "exit 2 but the message does not name " + names + ": " + msg;
             }
             return null;
         }

@@ -17,7 +17,7 @@ import org.cupel.cli.CupelCommand;
  * One reader reached through the command line: the small well-formed files it starts from (invented data),
  * the file that gets damaged, and the command that reads them. Every reader of issue 9 has a target: lab
  * files, register, catalog and cupel.yaml through a project; the plain CSVs of duplicates, censored, crm and
- * blanks; testwork heads and smelts.
+ * blanks; testwork heads and smelts. A project target's register may also be laid out wrongly (issue 15).
  */
 enum FuzzTarget {
     LAB_FILE_CHECK("lab/OAL-1.csv", dir -> args("check", dir.toString(), "--json")),
@@ -71,6 +71,8 @@ enum FuzzTarget {
             + "SM-03,B,1,F1,50.00,button,collected,31.00,470.0,2650\nSM-03,B,1,F1,50.00,slag,loss,40.0,4.1,22\n"
             + "SM-04,B,2,F1,49.95,button,collected,30.90,468.2,2644\nSM-04,B,2,F1,49.95,slag,loss,40.3,4.4,25\n";
 
+    private static final String REGISTER_FILE = "register.csv";
+
     private final String damaged;
     private final Function<Path, String[]> command;
 
@@ -116,11 +118,49 @@ enum FuzzTarget {
 
     /** Writes the seeds into {@code dir} with the damaged file replaced by {@code content}. */
     void write(Path dir, byte[] content) throws IOException {
+        write(dir, content, null);
+    }
+
+    /**
+     * Writes the seeds into {@code dir} with the damaged file replaced by {@code content}, and, when
+     * {@code layout} is given and the target has a register, the register laid out so (absent, under a near-miss
+     * name, as a folder, or as a link to nothing).
+     */
+    void write(Path dir, byte[] content, Mutation.RegisterLayout layout) throws IOException {
         for (Map.Entry<String, String> e : seeds().entrySet()) {
             Path p = dir.resolve(e.getKey());
             Files.createDirectories(p.getParent());
-            Files.write(p, e.getKey().equals(damaged) ? content : e.getValue().getBytes(StandardCharsets.UTF_8));
+            byte[] bytes = e.getKey().equals(damaged) ? content : e.getValue().getBytes(StandardCharsets.UTF_8);
+            if (layout != null && e.getKey().equals(REGISTER_FILE)) {
+                layRegister(dir, bytes, layout);
+            } else {
+                Files.write(p, bytes);
+            }
         }
+    }
+
+    private static void layRegister(Path dir, byte[] bytes, Mutation.RegisterLayout layout) throws IOException {
+        switch (layout) {
+            case ABSENT -> {
+            }
+            case WRONG_CASE -> Files.write(dir.resolve("Register.csv"), bytes);
+            case TSV_NAME -> Files.write(dir.resolve("register.tsv"), bytes);
+            case FOLDER -> Files.write(Files.createDirectories(dir.resolve(REGISTER_FILE)).resolve("inside.csv"), bytes);
+            case DANGLING_LINK -> Files.createSymbolicLink(dir.resolve(REGISTER_FILE), dir.resolve("gone.csv"));
+            default -> throw new AssertionError(layout);
+        }
+    }
+
+    /**
+     * The file names an input-error message may name for this target: the damaged file, and the register
+     * when its layout was changed.
+     */
+    List<String> blamable(Mutation.RegisterLayout layout) {
+        List<String> names = new ArrayList<>(List.of(Path.of(damaged).getFileName().toString()));
+        if (layout != null && seeds().containsKey(REGISTER_FILE)) {
+            names.add(REGISTER_FILE);
+        }
+        return names;
     }
 
     byte[] seed() {

@@ -15,8 +15,9 @@ import org.junit.jupiter.api.Test;
 /**
  * The long fuzz run of guarantee 1 (and the row accounting of guarantee 2): off in CI, switched on with
  * {@code -Dcupel.fuzz.inputs=N} (docs/robustness.md). Inputs come from the same mutations as
- * {@link CliFuzzProperties}, drawn from a fixed seed ({@code -Dcupel.fuzz.seed}, default 9) so that a run
- * can be repeated; the figures are printed and written to {@code target/fuzz-run.txt}.
+ * {@link CliFuzzProperties}, each from a seed drawn from a fixed seed ({@code -Dcupel.fuzz.seed}, default 9)
+ * so that a run can be repeated and a failure replayed alone; the figures are printed and written to
+ * {@code target/fuzz-run.txt}, with each failure's seed, damage and input.
  */
 class LongFuzzRun {
 
@@ -30,16 +31,18 @@ class LongFuzzRun {
         long unaccounted = 0;
         long projects = 0;
         for (int i = 0; i < inputs; i++) {
-            FuzzTarget target = targets[i % targets.length];
-            byte[] content = random.nextInt(10) == 0 ? randomBytes(random)
-                    : Mutation.applyAll(target.seed(), Mutation.some(random));
-            String problem = FuzzCheck.problem(target, content);
+            // Each input from its own seed, drawn in turn, so that a failure can be made again on its own.
+            long seed = random.nextLong();
+            List<FuzzTarget> target = List.of(targets[i % targets.length]);
+            FuzzCase c = random.nextInt(10) == 0 ? FuzzCase.randomBytes(seed, target, 3000)
+                    : FuzzCase.damaged(seed, target);
+            String problem = FuzzCheck.problem(c);
             if (problem != null) {
-                crashes.add(target + " (input " + i + "): " + problem);
+                crashes.add("input " + i + ", " + c.describe() + "\n=> " + problem);
             }
-            if (target.damaged().startsWith("lab/") || target.damaged().equals("register.csv")) {
+            if (c.target().damaged().startsWith("lab/") || c.target().damaged().equals("register.csv")) {
                 projects++;
-                unaccounted += RowAccounting.unaccountedRows(target, content);
+                unaccounted += RowAccounting.unaccountedRows(c);
             }
         }
         String figures = String.format("inputs tried: %d (%d targets, seed %d); crashes: %d; projects accounted: %d;"
@@ -53,9 +56,4 @@ class LongFuzzRun {
         assertEquals(0, unaccounted);
     }
 
-    private static byte[] randomBytes(Random random) {
-        byte[] b = new byte[random.nextInt(3000)];
-        random.nextBytes(b);
-        return b;
-    }
 }

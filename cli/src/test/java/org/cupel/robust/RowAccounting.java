@@ -20,10 +20,10 @@ final class RowAccounting {
     }
 
     /** Rows that are neither analysed nor listed, summed over the files of the project (0 when all is well). */
-    static long unaccountedRows(FuzzTarget target, byte[] content) throws IOException {
+    static long unaccountedRows(FuzzCase c) throws IOException {
         Path dir = Files.createTempDirectory("cupel-fuzz-rows");
         try {
-            target.write(dir, content);
+            c.target().write(dir, c.content(), c.registerLayout());
             return unaccountedRows(ProjectLoader.inspect(dir));
         } finally {
             FuzzCheck.deleteTree(dir);

@@ -17,10 +17,10 @@ import org.cupel.ingest.ParsedValue;
 import org.cupel.ingest.RawRow;
 import org.cupel.ingest.RawTable;
 import org.cupel.ingest.TableReader;
-import org.cupel.ingest.ValueConventions;
 import org.cupel.ingest.ValueParser;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
+import org.cupel.project.MessageText;
 
 /**
  * Reads a plain CSV of blank results without a project (format in docs/blank-csv.md): columns
@@ -58,10 +58,10 @@ public final class BlankCsv {
         int position = require(raw, "position", "seq", "sequence");
         int precedingId = raw.column("preceding_id", "preceding sample");
         List<AnalyteColumns> analytes = analyteColumns(raw);
-        ValueParser parser = new ValueParser(ValueConventions.DEFAULTS);
+        ValueParser parser = ValueParser.forPlainTable();
         SampleTable.Builder table = SampleTable.builder();
         Map<String, Batch> batches = new HashMap<>();
-        List<DataIssue> issues = new ArrayList<>();
+        List<DataIssue> issues = new ArrayList<>(raw.issues());
         List<Object[]> pending = new ArrayList<>();
         for (RawRow row : raw.rows()) {
             String sid = row.cell(id).strip();
@@ -93,10 +93,10 @@ public final class BlankCsv {
             for (Object[] p : pending) {
                 int r = (Integer) p[0];
                 RawRow row = (RawRow) p[1];
-                double dl = a.limit() < 0 ? Double.NaN : number(raw, row, a.limit(), issues);
-                AssayValue v = value(parser, raw, row, a.value(), dl, issues);
+                double dl = a.limit() < 0 ? Double.NaN : number(raw, row, a.limit(), a.header(), issues);
+                AssayValue v = value(parser, raw, row, a.value(), dl, a.header(), issues);
                 AssayValue prev = a.preceding() < 0 ? AssayValue.missing(MissingReason.NOT_ANALYSED)
-                        : value(parser, raw, row, a.preceding(), Double.NaN, issues);
+                        : value(parser, raw, row, a.preceding(), Double.NaN, a.precedingHeader(), issues);
                 if (!prev.isMissing() && a.precedingHeader().unit() != a.header().unit()) {
                     prev = prev.scaled(a.precedingHeader().unit().convert(1, a.header().unit()));
                 }
@@ -116,6 +116,7 @@ public final class BlankCsv {
                         o.value(), dl, o.precedingId(), o.precedingGrade()));
             }
         }
+        parser.checkDecimalMarks();
         return new Blanks(samples, order(samples, obs), issues);
     }
 
@@ -133,7 +134,7 @@ public final class BlankCsv {
         int c = raw.column(aliases);
         if (c < 0) {
             throw new InputException(raw.file() + ":" + raw.headerLine() + ": no '" + aliases[0] + "' column (found "
-                    + String.join(", ", raw.columns()) + "); a blank CSV needs sample_id, batch, position and one "
+                    + MessageText.list(raw.columns()) + "); a blank CSV needs sample_id, batch, position and one "
                     + "column per analyte (Au_ppm); see docs/blank-csv.md.");
         }
         return c;
@@ -167,7 +168,7 @@ public final class BlankCsv {
         }
         if (valueCols.isEmpty()) {
             throw new InputException(raw.file() + ":" + raw.headerLine() + ": no analyte column (found "
-                    + String.join(", ", raw.columns()) + "); name analyte columns with the element and unit, "
+                    + MessageText.list(raw.columns()) + "); name analyte columns with the element and unit, "
                     + "such as Au_ppm or Cu (%); see docs/blank-csv.md.");
         }
         int singlePreceding = raw.column("preceding_grade");
@@ -189,29 +190,30 @@ public final class BlankCsv {
     }
 
     private static AssayValue value(ValueParser parser, RawTable raw, RawRow row, int col, double dl,
-                                    List<DataIssue> issues) {
-        ParsedValue p = parser.parse(row.cell(col), dl, raw.at(row, col));
+                                    AnalyteHeader header, List<DataIssue> issues) {
+        ParsedValue p = parser.parse(row.cell(col), dl, raw.at(row, col), header.unit());
         if (p.issue() != null) {
             issues.add(p.issue());
         }
         return p.usable() ? p.value() : AssayValue.missing(MissingReason.OTHER_CODE);
     }
 
-    private static double number(RawTable raw, RawRow row, int col, List<DataIssue> issues) {
+    /** A detection limit: a positive number at most 100 % in the analyte's unit, else NaN with a warning. */
+    private static double number(RawTable raw, RawRow row, int col, AnalyteHeader header, List<DataIssue> issues) {
         String t = row.cell(col).strip();
         if (t.isEmpty()) {
             return Double.NaN;
         }
         try {
             double v = Double.parseDouble(t);
-            if (v > 0) {
+            if (v > 0 && v <= ValueParser.ceiling(header.unit())) {
                 return v;
             }
         } catch (NumberFormatException e) {
             // reported below
         }
         issues.add(new DataIssue(DataIssue.Severity.WARNING, raw.at(row, col), row.cell(0), t,
-                "detection limit is not a positive number", "a positive number such as 0.005",
+                "detection limit is not a positive number of at most 100 %", "a positive number such as 0.005",
                 "correct the limit or leave the cell empty"));
         return Double.NaN;
     }

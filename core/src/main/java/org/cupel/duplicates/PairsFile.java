@@ -10,10 +10,10 @@ import org.cupel.ingest.ParsedValue;
 import org.cupel.ingest.RawRow;
 import org.cupel.ingest.RawTable;
 import org.cupel.ingest.TableReader;
-import org.cupel.ingest.ValueConventions;
 import org.cupel.ingest.ValueParser;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
+import org.cupel.project.MessageText;
 
 /**
  * Reads a plain pairs table without a project: columns {@code original} and {@code duplicate} (values as a
@@ -46,16 +46,16 @@ public final class PairsFile {
         int dup = table.column(DUPLICATE);
         if (orig < 0 || dup < 0) {
             throw new InputException(table.file() + ":" + table.headerLine() + ": a pairs file needs the columns "
-                    + "'original' and 'duplicate' (found " + String.join(", ", table.columns()) + "); rename the two "
+                    + "'original' and 'duplicate' (found " + MessageText.list(table.columns()) + "); rename the two "
                     + "value columns, or give a project folder instead.");
         }
         int type = table.column("type", "duplicate type", "qc type", "role");
         int batch = table.column("batch", "job", "certificate", "batch id");
         int id = table.column("id", "sample id", "duplicate id", "sample");
         int dl = table.column("dl", "detection limit", "lod", "ldl");
-        ValueParser parser = new ValueParser(ValueConventions.DEFAULTS);
+        ValueParser parser = ValueParser.forPlainTable();
         List<DuplicatePair> pairs = new ArrayList<>();
-        List<DataIssue> issues = new ArrayList<>(table.warnings());
+        List<DataIssue> issues = new ArrayList<>(table.issues());
         for (RawRow row : table.rows()) {
             double limit = Double.NaN;
             if (dl >= 0 && !row.cell(dl).isEmpty()) {
@@ -84,6 +84,7 @@ public final class PairsFile {
             pairs.add(new DuplicatePair(label, "", batch >= 0 ? row.cell(batch) : "", role.get(), withLimit(a.value(),
                     limit), withLimit(b.value(), limit)));
         }
+        parser.checkDecimalMarks();
         return new Result(pairs, issues);
     }
 

@@ -11,6 +11,7 @@ import org.cupel.project.CrmCatalog;
 import org.cupel.project.CrmCertificate;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
+import org.cupel.project.MessageText;
 import org.cupel.units.GradeUnit;
 
 /**
@@ -44,7 +45,7 @@ public final class CatalogReader {
         for (int i = 0; i < cols.length; i++) {
             if (cols[i] < 0) {
                 throw new InputException(displayName + ":" + t.headerLine() + ": no '" + names[i] + "' column among "
-                        + t.columns() + " (expected crm, analyte, unit, certified_value, sd); add or rename the column.");
+                        + MessageText.list(t.columns()) + " (expected crm, analyte, unit, certified_value, sd); add or rename the column.");
             }
         }
         int lo = t.column(CI_LOW);
@@ -52,14 +53,16 @@ public final class CatalogReader {
         int method = t.column(METHOD);
         List<CrmCertificate> certs = new ArrayList<>();
         Map<String, CatalogConflicts.Row> seen = new HashMap<>();
-        List<DataIssue> issues = new ArrayList<>(t.warnings());
+        List<DataIssue> issues = new ArrayList<>(t.issues());
         long excluded = 0;
+        ValueParser parser = ValueParser.forPlainTable();
         for (RawRow row : t.rows()) {
             String code = row.cell(cols[0]);
             String analyte = row.cell(cols[1]);
             Optional<GradeUnit> unit = GradeUnit.parse(row.cell(cols[2]));
-            double value = number(row.cell(cols[3]));
-            double sd = number(row.cell(cols[4]));
+            GradeUnit u = unit.orElse(null);
+            double value = number(parser, t, row, cols[3], u);
+            double sd = number(parser, t, row, cols[4], u);
             String problem = null;
             int at = 0;
             if (code.isEmpty() || analyte.isEmpty()) {
@@ -85,7 +88,8 @@ public final class CatalogReader {
                 continue;
             }
             CrmCertificate c = new CrmCertificate(code, analyte, unit.get(), value, sd,
-                    lo >= 0 ? number(row.cell(lo)) : Double.NaN, hi >= 0 ? number(row.cell(hi)) : Double.NaN,
+                    lo >= 0 ? number(parser, t, row, lo, u) : Double.NaN,
+                    hi >= 0 ? number(parser, t, row, hi, u) : Double.NaN,
                     method >= 0 ? row.cell(method) : "");
             CatalogConflicts.Row here = new CatalogConflicts.Row(t.at(row), c);
             CatalogConflicts.Row first = seen.putIfAbsent(code + "\u0000" + analyte, here);
@@ -97,7 +101,9 @@ public final class CatalogReader {
             GradeUnit target = units.get(analyte);
             certs.add(target == null ? c : c.in(target));
         }
-        return new Result(new CrmCatalog(certs), List.copyOf(issues), t.rows().size(), excluded);
+        parser.checkDecimalMarks();
+        long leftOut = t.rowsLeftOut();
+        return new Result(new CrmCatalog(certs), List.copyOf(issues), t.rows().size() + leftOut, excluded + leftOut);
     }
 
     private static boolean isHeader(List<String> cells) {
@@ -110,13 +116,13 @@ public final class CatalogReader {
         return false;
     }
 
-    private static double number(String text) {
+    /** The cell as a plain number at most 100 % in {@code unit}, else NaN (the row is then left out). */
+    private static double number(ValueParser parser, RawTable t, RawRow row, int column, GradeUnit unit) {
+        String text = row.cell(column);
         if (text.isEmpty()) {
             return Double.NaN;
         }
-        ParsedValue p = PLAIN.parse(text, Double.NaN, null);
+        ParsedValue p = parser.parse(text, Double.NaN, t.at(row, column), unit);
         return p.usable() && p.value().isDetected() ? p.value().value() : Double.NaN;
     }
-
-    private static final ValueParser PLAIN = new ValueParser(ValueConventions.DEFAULTS);
 }

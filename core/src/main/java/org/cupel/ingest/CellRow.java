@@ -10,6 +10,11 @@ import java.util.List;
  * the cells a reader keeps (sample IDs, codes, problems), not for every cell.
  */
 final class CellRow {
+    /** U+FEFF: a byte-order mark, or a zero-width no-break space; invisible, never part of a cell. */
+    static final char BYTE_ORDER_MARK = '\uFEFF';
+    /** U+200B: a zero-width space, invisible, never part of a cell. */
+    private static final char ZERO_WIDTH_SPACE = '\u200B';
+
     private char[] text = new char[256];
     private int[] starts = new int[16];
     private int[] ends = new int[16];
@@ -133,17 +138,24 @@ final class CellRow {
         length += n;
     }
 
-    /** Ends the cell whose text began at {@code from}, trimmed as {@link String#strip()} does. */
+    /**
+     * Ends the cell whose text began at {@code from}, trimmed as {@link String#strip()} does and of
+     * zero-width characters (a sample ID must not differ from the register's by an invisible character).
+     */
     void endCell(int from) {
         int s = from;
         int e = length;
-        while (s < e && Character.isWhitespace(text[s])) {
+        while (s < e && isTrimmed(text[s])) {
             s++;
         }
-        while (e > s && Character.isWhitespace(text[e - 1])) {
+        while (e > s && isTrimmed(text[e - 1])) {
             e--;
         }
         addCell(s, e);
+    }
+
+    private static boolean isTrimmed(char c) {
+        return Character.isWhitespace(c) || c == BYTE_ORDER_MARK || c == ZERO_WIDTH_SPACE;
     }
 
     private void addCell(int s, int e) {

@@ -8,7 +8,7 @@ import org.cupel.project.InputException;
 /**
  * Splits delimited text into records by hand-written character scanning (no regular expressions):
  * RFC 4180 quoting with doubled quotes and line breaks inside quotes, CR, LF and CRLF line ends, cells
- * trimmed. Unquoted cells, nearly all of a lab file, are copied in runs from the read buffer into one
+ * trimmed (also of byte-order marks, which a file saved twice with a mark carries into its first cell). Unquoted cells, nearly all of a lab file, are copied in runs from the read buffer into one
  * reused {@link CellRow}. A field longer than {@link #MAX_FIELD_CHARS} or a record wider than
  * {@link #MAX_CELLS} stops the read with a clear message instead of exhausting memory.
  */
@@ -79,7 +79,7 @@ final class DelimitedTokenizer {
     /** Reads one field into {@code row}; returns the character that ended it (delimiter, '\n' or EOF). */
     private int readField(CellRow row, int from, int column) {
         int c = read();
-        while (c == ' ' || (c == '\t' && delimiter != '\t')) {
+        while (c == ' ' || (c == '\t' && delimiter != '\t') || c == CellRow.BYTE_ORDER_MARK) {
             c = read();
         }
         if (c == '"') {

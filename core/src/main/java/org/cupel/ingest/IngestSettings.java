@@ -18,12 +18,15 @@ import org.cupel.units.GradeUnit;
  * @param sheet the XLSX sheet to read; empty for the first
  * @param dateFormat how dates are written: {@code ISO} ({@code 2025-03-14}), {@code DMY} or {@code MDY}
  *     (with {@code /}, {@code -} or {@code .})
+ * @param followLinksOutsideProject whether a symbolic link in the project may lead to a file outside the
+ *     project folder (see {@link ProjectFiles}); default false
  */
 public record IngestSettings(boolean decimalComma, boolean negativeMeansBelowDetection, boolean thousandsSeparator,
                              List<String> belowDetectionCodes, Map<String, MissingReason> missingCodes,
                              Map<String, Double> detectionLimits, List<String> repeatSuffixes,
                              Map<String, String> columns, Map<String, String> units,
-                             Map<String, List<String>> methodPriority, String sheet, String dateFormat) {
+                             Map<String, List<String>> methodPriority, String sheet, String dateFormat,
+                             boolean followLinksOutsideProject) {
 
     public static final IngestSettings DEFAULTS = of(ValueConventions.DEFAULTS);
 
@@ -72,6 +75,6 @@ public record IngestSettings(boolean decimalComma, boolean negativeMeansBelowDet
     private static IngestSettings of(ValueConventions v) {
         return new IngestSettings(v.decimalComma(), v.negativeMeansBelowDetection(), v.thousandsSeparator(),
                 v.belowDetectionCodes(), v.missingCodes(), v.detectionLimits(), v.repeatSuffixes(),
-                Map.of(), Map.of(), Map.of(), "", "ISO");
+                Map.of(), Map.of(), Map.of(), "", "ISO", false);
     }
 }

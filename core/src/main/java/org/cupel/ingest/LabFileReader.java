@@ -20,26 +20,27 @@ import org.cupel.assay.Qualifier;
 import org.cupel.assay.SourceLocation;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
+import org.cupel.project.MessageText;
 
 /**
  * Reads one lab result file (docs/input-formats.md): the sample ID column, optional batch, date,
  * position, QC role and reference columns, and every analyte column the header grammar recognises.
- * Batch, lab and date default to the lab's header block, then the file name. Rows: a row without an ID,
- * a second row for an ID already in the file, or a row whose cells are all unreadable or blank (with at
- * least one unreadable) is excluded; a row with some unreadable cells is kept and each such cell is listed
- * (severity EXCLUDED: that value is left out). Blank cells add no result.
+ * Batch, lab and date default to the lab's header block, then the file name. Rows: a ragged row (a cell
+ * count other than the header's), a row without an ID, a second row for an ID already in the file, or a
+ * row whose cells are all unreadable or blank (with at least one unreadable) is excluded; a row with some
+ * unreadable cells is kept and each such cell is listed (severity EXCLUDED: that value is left out). Blank
+ * cells add no result. A file that reads one character both as thousands separator and as decimal mark
+ * is refused ({@link ValueParser#checkDecimalMarks}).
  */
 public final class LabFileReader {
     private final IngestSettings settings;
     private final ValueConventions conventions;
     private final HeaderParser headers;
-    private final ValueParser values;
 
     public LabFileReader(IngestSettings settings) {
         this.settings = settings;
         this.conventions = settings.valueConventions();
         this.headers = new HeaderParser(settings.columns());
-        this.values = new ValueParser(conventions);
     }
 
     public LabFile read(Path path, String displayName) {
@@ -47,13 +48,13 @@ public final class LabFileReader {
         long bytes = TableReader.sizeOf(path);
         TableReader.scan(path, displayName, TableReader::hasSampleIdColumn, settings.sheet(), head -> {
             read[0] = new FileRead(head, bytes);
-            return read[0]::readRow;
+            return read[0];
         });
         return read[0].finish();
     }
 
     /** The state of reading one file. */
-    private final class FileRead {
+    private final class FileRead implements TableAssembler.RowSink {
         private final RawTable t;
         private final int idCol;
         private final int batchCol;
@@ -61,7 +62,11 @@ public final class LabFileReader {
         private final int positionCol;
         private final int roleCol;
         private final int refCol;
+        /** One parser per file: it collects the evidence of the file's decimal mark. */
+        private final ValueParser values = new ValueParser(conventions);
         private final List<LabColumn> columns = new ArrayList<>();
+        /** Per analyte column, the largest value its unit allows (100 %). */
+        private double[] ceilings;
         private final List<String> ignored = new ArrayList<>();
         private final List<DataIssue> issues = new ArrayList<>();
         private final Map<String, LocalDate> latestDate = new HashMap<>();
@@ -94,10 +99,10 @@ public final class LabFileReader {
             this.positionCol = t.column(LabColumns.POSITION);
             this.roleCol = t.column(LabColumns.ROLE);
             this.refCol = t.column(LabColumns.REFERENCE);
-            issues.addAll(t.warnings());
+            issues.addAll(t.issues());
             if (idCol < 0) {
                 throw new InputException(t.file() + ":" + t.headerLine() + ": no sample ID column among "
-                        + t.columns() + " (expected a header such as 'sample_id' or 'Sample ID'); rename the "
+                        + MessageText.list(t.columns()) + " (expected a header such as 'sample_id' or 'Sample ID'); rename the "
                         + "column holding the sample IDs.");
             }
             findAnalyteColumns();
@@ -108,14 +113,29 @@ public final class LabFileReader {
         }
 
         LabFile finish() {
+            values.checkDecimalMarks();
+            if (rowsRead == 0) {
+                issues.add(new DataIssue(DataIssue.Severity.WARNING, SourceLocation.ofFile(t.file()), "", "",
+                        "the file has a header on line " + t.headerLine() + " but no data rows",
+                        "one row per sample below the header", "check that the lab's export is complete"));
+            }
             return new LabFile(t.file(), batches(), columns, ignored, kept, issues, excludedIds, rowsRead,
                     rowsExcluded);
         }
 
-        private void readRow(CellRow row) {
+        @Override
+        public void row(CellRow row) {
             if (!readLimits(row)) {
                 readSample(row);
             }
+        }
+
+        /** A ragged row is read and left out; its ID, if it has one where expected, names the sample. */
+        @Override
+        public void ragged(CellRow row, DataIssue issue) {
+            rowsRead++;
+            String id = row.cell(idCol);
+            exclude(issue.where(), id, issue.found(), issue.problem(), issue.expected(), issue.fix());
         }
 
         private void findAnalyteColumns() {
@@ -136,16 +156,21 @@ public final class LabFileReader {
                 String key = a.get().analyte() + " " + a.get().method();
                 String prior = seen.put(key, h);
                 if (prior != null) {
-                    throw new InputException(t.file() + ":" + t.headerLine() + ":" + (c + 1) + ": columns '" + prior
-                            + "' and '" + h + "' both hold " + a.get().analyte() + " by method '" + a.get().method()
+                    throw new InputException(t.file() + ":" + t.headerLine() + ":" + (c + 1) + ": columns '"
+                            + MessageText.clip(prior) + "' and '" + MessageText.clip(h) + "' both hold "
+                            + a.get().analyte() + " by method '" + a.get().method()
                             + "' (expected one column per analyte and method); rename one with its method, e.g. "
                             + a.get().analyte() + "_" + a.get().unit().symbol() + "_FA-GRAV, or map it in ingest.columns.");
                 }
                 double limit = conventions.detectionLimit(a.get().analyte());
                 columns.add(new LabColumn(c, h, a.get(), limit));
             }
+            ceilings = new double[columns.size()];
+            for (int i = 0; i < ceilings.length; i++) {
+                ceilings[i] = ValueParser.ceiling(columns.get(i).analyte().unit());
+            }
             if (columns.isEmpty()) {
-                throw new InputException(t.file() + ":" + t.headerLine() + ": no analyte column among " + t.columns()
+                throw new InputException(t.file() + ":" + t.headerLine() + ": no analyte column among " + MessageText.list(t.columns())
                         + " (expected headers such as 'Au_ppm', 'Au (g/t)' or 'Cu %'); name the columns with analyte "
                         + "and unit, or map them in ingest.columns of cupel.yaml.");
             }
@@ -159,7 +184,7 @@ public final class LabFileReader {
             for (int i = 0; i < columns.size(); i++) {
                 LabColumn col = columns.get(i);
                 ParsedValue p = values.parse(row.cell(col.index()), Double.NaN,
-                        new SourceLocation(t.file(), row.line(), col.index() + 1));
+                        new SourceLocation(t.file(), row.line(), col.index() + 1), col.analyte().unit());
                 if (p.usable() && !p.value().isMissing()) {
                     columns.set(i, new LabColumn(col.index(), col.header(), col.analyte(), p.value().value()));
                 }
@@ -251,8 +276,7 @@ public final class LabFileReader {
             kept.startRow();
             boolean any = false;
             char[] text = row.text();
-            // Made at the row's first cell that is not a plain number, shared by its values; a cell's own
-            // column is set only on an issue.
+            // Made at the row's first cell that is not a plain number: most rows have none.
             SourceLocation rowAt = null;
             for (int c = 0; c < columns.size(); c++) {
                 LabColumn col = columns.get(c);
@@ -262,7 +286,7 @@ public final class LabFileReader {
                     continue;
                 }
                 double v = values.plainNumber(text, row.start(k), row.end(k));
-                if (!Double.isNaN(v)) {
+                if (v <= ceilings[c]) {
                     kept.setResult(c, Qualifier.DETECTED, v, ValueParser.validLimit(col.detectionLimit()),
                             MissingReason.NONE);
                     any = true;
@@ -271,10 +295,11 @@ public final class LabFileReader {
                 if (rowAt == null) {
                     rowAt = rowAt(row);
                 }
-                ParsedValue p = values.parse(row.cell(k), col.detectionLimit(), rowAt);
+                SourceLocation at = rowAt.atColumn(k + 1);
+                ParsedValue p = values.parse(row.cell(k), col.detectionLimit(), at, col.analyte().unit());
                 if (p.issue() != null) {
                     DataIssue i = p.issue();
-                    issues.add(new DataIssue(i.severity(), rowAt.atColumn(k + 1), id, i.found(),
+                    issues.add(new DataIssue(i.severity(), at, id, i.found(),
                             col.header() + ": " + i.problem(), i.expected(), i.fix()));
                 }
                 if (p.usable() && p.value().missingReason() != MissingReason.BLANK_CELL) {

@@ -10,6 +10,9 @@ package org.cupel.ingest;
  * in practice), is the exact quotient {@code digits / 10^decimals} of two doubles, which IEEE 754
  * division rounds correctly (Clinger, 1990, "How to read floating point numbers accurately", the fast
  * path), so it equals {@link Double#parseDouble}; anything else is handed to {@link Double#parseDouble}.
+ * A number outside the range of a double, too large (overflow to infinity) or too small (non-zero digits
+ * that underflow to 0 or to a subnormal double, which has lost digits), is not read: it gives NaN, and
+ * {@link #outOfRange} tells it from a malformed number.
  */
 final class NumberScanner {
     private static final long MAX_EXACT = 1L << 53;
@@ -26,6 +29,8 @@ final class NumberScanner {
     private final char decimalMark;
     private final char groupMark;
     private final boolean grouping;
+    /** Set when a scan refused a well-formed number for its range; read by {@link #outOfRange}. */
+    private boolean outOfRange;
 
     NumberScanner(boolean decimalComma, boolean thousandsSeparator) {
         this.decimalMark = decimalComma ? ',' : '.';
@@ -40,6 +45,11 @@ final class NumberScanner {
 
     /** The number {@code s[from, to)} spells, or NaN when it is not a well-formed number. */
     double scan(char[] s, int from, int to) {
+        return scan(s, from, to, grouping);
+    }
+
+    /** {@link #scan(char[], int, int)} with thousands grouping allowed only when {@code allowGrouping}. */
+    double scan(char[] s, int from, int to, boolean allowGrouping) {
         int i = from;
         boolean negative = false;
         if (i < to && (s[i] == '+' || s[i] == '-')) {
@@ -64,7 +74,7 @@ final class NumberScanner {
                     digits = digits * 10 + (c - '0');
                 }
                 groupLen++;
-            } else if (grouping && isGroupMark(c)) {
+            } else if (allowGrouping && isGroupMark(c)) {
                 if (firstGroupLen < 0) {
                     if (groupLen < 1 || groupLen > 3 || firstDigit == '0') {
                         return Double.NaN;
@@ -119,7 +129,31 @@ final class NumberScanner {
             return negative ? -v : v;
         }
         double v = Double.parseDouble(cleaned(s, from, to));
-        return Double.isFinite(v) ? v : Double.NaN;
+        if (!inRange(v, significant)) {
+            outOfRange = true;
+            return Double.NaN;
+        }
+        return v;
+    }
+
+    /** Whether a parsed value kept its digits: finite, and not underflowed when its digits are not all zero. */
+    private static boolean inRange(double v, int significantDigits) {
+        return Double.isFinite(v) && (significantDigits == 0 || Math.abs(v) >= Double.MIN_NORMAL);
+    }
+
+    /**
+     * Whether {@code s} is a well-formed number that {@link #scan} refuses only because a double cannot hold
+     * it (1e400, 1e-400). Error path only.
+     */
+    boolean outOfRange(String s) {
+        outOfRange = false;
+        scan(s, 0, s.length());
+        return outOfRange;
+    }
+
+    /** The character that groups thousands: ',' with a decimal point, '.' with a decimal comma. */
+    char groupMark() {
+        return groupMark;
     }
 
     /** The well-formed number as {@link Double#parseDouble} reads it: grouping dropped, decimal mark '.'. */

@@ -9,17 +9,20 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.function.UnaryOperator;
 import java.util.stream.Stream;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
+import org.cupel.assay.SourceLocation;
 import org.cupel.config.ConfigException;
 import org.cupel.config.CupelConfig;
 import org.cupel.project.CrmCatalog;
 import org.cupel.project.ExceptionRegister;
 import org.cupel.project.FileAccount;
 import org.cupel.project.InputException;
+import org.cupel.project.MessageText;
 import org.cupel.project.Project;
 import org.cupel.units.GradeUnit;
 
@@ -75,15 +78,18 @@ public final class ProjectLoader {
         return new Load(folder, config, false).run();
     }
 
-    /** The folder's {@code cupel.yaml}, or the defaults when there is none. */
+    /**
+     * The folder's {@code cupel.yaml}, or the defaults when there is none. A link named {@code cupel.yaml}
+     * must lead to a file inside the project: the config cannot allow itself to be read from elsewhere.
+     */
     public static CupelConfig readConfig(Path folder) {
         requireFolder(folder);
-        Path f = folder.resolve(CONFIG);
-        if (!Files.isRegularFile(f)) {
+        Optional<Path> config = ProjectFiles.insideOnly(folder).optional(CONFIG);
+        if (config.isEmpty()) {
             return CupelConfig.defaults();
         }
         try {
-            return CupelConfig.fromYaml(Files.readString(f, StandardCharsets.UTF_8), CONFIG);
+            return CupelConfig.fromYaml(Files.readString(config.get(), StandardCharsets.UTF_8), CONFIG);
         } catch (IOException e) {
             throw new InputException(CONFIG + ": the config could not be read (" + e.getMessage()
                     + "); save it as UTF-8 text or remove it to use the defaults.", e);
@@ -104,13 +110,16 @@ public final class ProjectLoader {
         return dot > 0 ? name.substring(0, dot) : name;
     }
 
-    /** The lab files of a project, in name order (see {@link #BY_NAME}). */
+    /**
+     * The entries of a project's lab folder (or, without {@code lab/}, of the project folder other than the
+     * register and the catalog) whose names are those of table files, in name order (see {@link #BY_NAME}).
+     * Whether each can be read is for {@link ProjectFiles#refusal} to say.
+     */
     public static List<Path> labFiles(Path folder) {
         Path lab = folder.resolve(LAB_DIR);
         Path dir = Files.isDirectory(lab) ? lab : folder;
         try (Stream<Path> s = Files.list(dir)) {
-            return s.filter(Files::isRegularFile)
-                    .filter(p -> isTable(p.getFileName().toString()))
+            return s.filter(p -> isTable(p.getFileName().toString()))
                     .filter(p -> dir == lab || !isProjectFile(p.getFileName().toString()))
                     .sorted(BY_NAME)
                     .toList();
@@ -118,6 +127,43 @@ public final class ProjectLoader {
             throw new InputException(dir + ": the folder could not be listed (" + e.getMessage()
                     + "); check its permissions.", e);
         }
+    }
+
+    /**
+     * Entries of {@code folder} whose names look meant as the register ({@code Register.csv},
+     * {@code register.tsv}, {@code regsiter.csv}, {@code sample-register.xlsx}), in name order.
+     */
+    static List<String> registerNearMisses(Path folder) {
+        try (Stream<Path> s = Files.list(folder)) {
+            return s.map(p -> p.getFileName().toString())
+                    .filter(n -> !n.equals(REGISTER))
+                    .filter(n -> n.toLowerCase(Locale.ROOT).contains("register")
+                            || editDistance(n.toLowerCase(Locale.ROOT), REGISTER) <= 2)
+                    .sorted()
+                    .toList();
+        } catch (IOException e) {
+            return List.of();
+        }
+    }
+
+    /** Levenshtein distance: insertions, deletions and substitutions of one character each count 1. */
+    static int editDistance(String a, String b) {
+        int[] prev = new int[b.length() + 1];
+        int[] cur = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) {
+            prev[j] = j;
+        }
+        for (int i = 1; i <= a.length(); i++) {
+            cur[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                int substitute = prev[j - 1] + (a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1);
+                cur[j] = Math.min(substitute, Math.min(prev[j], cur[j - 1]) + 1);
+            }
+            int[] t = prev;
+            prev = cur;
+            cur = t;
+        }
+        return prev[b.length()];
     }
 
     private static boolean isTable(String name) {
@@ -143,6 +189,7 @@ public final class ProjectLoader {
         private final CupelConfig config;
         private final boolean strict;
         private final IngestSettings settings;
+        private final ProjectFiles files;
         private final ExceptionRegister exceptions = new ExceptionRegister();
         private final List<FileAccount> failed = new ArrayList<>();
 
@@ -151,6 +198,7 @@ public final class ProjectLoader {
             this.config = config;
             this.strict = strict;
             this.settings = IngestSettings.from(config);
+            this.files = ProjectFiles.of(folder, config);
         }
 
         Project run() {
@@ -171,7 +219,7 @@ public final class ProjectLoader {
             CrmCatalog crms = catalog == null ? CrmCatalog.empty() : catalog.catalog();
             join.checkReferences(table, crms, catalog != null);
             if (catalog == null && table.rowsWithRole(QcRole.CRM).length > 0) {
-                exceptions.warn(org.cupel.assay.SourceLocation.ofFile(CATALOG), "", "",
+                exceptions.warn(SourceLocation.ofFile(CATALOG), "", "",
                         "the project has CRM samples but no CRM catalog, so their results cannot be judged",
                         "crm-catalog.csv in the project folder", "add crm-catalog.csv (docs/input-formats.md)");
             }
@@ -189,9 +237,19 @@ public final class ProjectLoader {
             return new Project(name, folder, config, table, columns, crms, exceptions, accounts);
         }
 
+        /** Reads the lab files that may be read, in name order; each entry that may not is a fatal problem. */
         private void readLabs(java.util.function.Consumer<LabFile> sink) {
-            List<Path> files = labFiles(folder);
-            if (files.isEmpty()) {
+            List<Path> entries = labFiles(folder);
+            List<Path> readable = new ArrayList<>();
+            for (Path f : entries) {
+                Optional<String> refusal = files.refusal(f, displayName(f));
+                if (refusal.isPresent()) {
+                    fail(displayName(f), "lab results", new InputException(refusal.get()));
+                } else {
+                    readable.add(f);
+                }
+            }
+            if (entries.isEmpty()) {
                 fail(LAB_DIR, "lab results", new InputException(folder.resolve(LAB_DIR) + ": no lab result files "
                         + "(expected .csv, .tsv, .txt or .xlsx files in lab/); put the lab's result files there."));
             }
@@ -199,7 +257,7 @@ public final class ProjectLoader {
                 LabFileReader reader = new LabFileReader(settings);
                 return f -> reader.read(f, displayName(f));
             }, READ_AHEAD_FILES);
-            reads.readInOrder(files, outcome -> {
+            reads.readInOrder(readable, outcome -> {
                 if (outcome.error() != null) {
                     fail(displayName(outcome.item()), "lab results", outcome.error());
                 } else {
@@ -208,26 +266,39 @@ public final class ProjectLoader {
             });
         }
 
+        /**
+         * The register, or null when there is none (a loud warning: every QC role then comes from the lab
+         * files) or it cannot be used. A file named like a register but not exactly {@code register.csv} is
+         * fatal: reading the project as if it had no register would turn its CRMs, blanks and duplicates into
+         * routine samples, and guessing which near miss is the register would be worse.
+         */
         private SampleRegister readRegister() {
-            Path f = folder.resolve(REGISTER);
-            if (!Files.isRegularFile(f)) {
-                return null;
-            }
             try {
-                return RegisterReader.read(f, REGISTER);
+                Optional<Path> f = files.optional(REGISTER);
+                if (f.isPresent()) {
+                    return RegisterReader.read(f.get(), REGISTER);
+                }
+                List<String> nearMisses = registerNearMisses(folder);
+                if (!nearMisses.isEmpty()) {
+                    throw new InputException(REGISTER + ": not found, but the project folder holds "
+                            + MessageText.list(nearMisses) + "; rename the sample register to register.csv (the name "
+                            + "is case-sensitive and the register is a CSV file), or move the other files away.");
+                }
             } catch (InputException e) {
                 fail(REGISTER, "sample register", e);
                 return null;
             }
+            exceptions.warn(SourceLocation.ofFile(REGISTER), "", "", "the project has no sample register, so QC "
+                            + "roles come only from the lab files (a qc_role column, repeat suffixes): CRMs, blanks and "
+                            + "duplicates not marked there are analysed as routine samples",
+                    "register.csv in the project folder", "add register.csv (docs/input-formats.md)");
+            return null;
         }
 
         private CatalogReader.Result readCatalog(Map<String, GradeUnit> units) {
-            Path f = folder.resolve(CATALOG);
-            if (!Files.isRegularFile(f)) {
-                return null;
-            }
             try {
-                return CatalogReader.read(f, CATALOG, units);
+                Optional<Path> f = files.optional(CATALOG);
+                return f.isEmpty() ? null : CatalogReader.read(f.get(), CATALOG, units);
             } catch (InputException e) {
                 fail(CATALOG, "CRM catalog", e);
                 return null;

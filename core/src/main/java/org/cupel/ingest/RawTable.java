@@ -14,17 +14,19 @@ import org.cupel.project.DataIssue;
  * @param headerBlock {@code key: value} lines above the table, keys lower-case with single spaces
  * @param columns the header row, trimmed
  * @param headerLine the 1-based line (or sheet row) of the header row
- * @param rows the data rows below the header; rows whose cells are all empty are not kept
- * @param warnings problems that did not stop the read (formulas read as cached values, ...)
+ * @param rows the data rows below the header that line up with it; rows whose cells are all empty are not
+ *     kept, ragged rows (see {@link TableAssembler}) are listed in {@code issues} instead
+ * @param issues problems that did not stop the read: formulas read as cached values, sheets not read (warnings),
+ *     cells that cannot be read and ragged rows left out (excluded; a whole row has column 0)
  */
 public record RawTable(String file, Map<String, String> headerBlock, List<String> columns, long headerLine,
-                       List<RawRow> rows, List<DataIssue> warnings) {
+                       List<RawRow> rows, List<DataIssue> issues) {
 
     public RawTable {
         headerBlock = Map.copyOf(headerBlock);
         columns = List.copyOf(columns);
         rows = List.copyOf(rows);
-        warnings = List.copyOf(warnings);
+        issues = List.copyOf(issues);
     }
 
     public RawTable(String file, Map<String, String> headerBlock, List<String> columns, long headerLine,
@@ -52,6 +54,12 @@ public record RawTable(String file, Map<String, String> headerBlock, List<String
             }
         }
         return -1;
+    }
+
+    /** Data rows left out while reading (ragged rows): they count as read and excluded. */
+    public long rowsLeftOut() {
+        return issues.stream().filter(i -> i.severity() == DataIssue.Severity.EXCLUDED && i.where().column() == 0)
+                .count();
     }
 
     /** Where {@code row}'s cell in {@code column} (0-based) is; the location's column is 1-based. */

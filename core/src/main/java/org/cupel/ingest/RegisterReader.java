@@ -10,11 +10,13 @@ import org.cupel.assay.QcRole;
 import org.cupel.assay.SourceLocation;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
+import org.cupel.project.MessageText;
 
 /**
  * Reads the sample register ({@code register.csv}): sample ID, QC role, reference, and optionally hole
- * and interval. A row without an ID, a second row for an ID, or an unknown role code is excluded; a CRM or
- * duplicate without a reference is kept with a warning, since the analyses then cannot pair it.
+ * and interval. A row without an ID, a second row for an ID, an unknown role code or a ragged row (cell count
+ * other than the header's) is excluded; a CRM or duplicate without a reference is kept with a warning, since
+ * the analyses then cannot pair it.
  */
 public final class RegisterReader {
     private static final String[] HOLE = {"hole id", "hole", "holeid", "bhid", "drillhole"};
@@ -29,13 +31,13 @@ public final class RegisterReader {
         long bytes = TableReader.sizeOf(path);
         TableReader.scan(path, displayName, TableReader::hasSampleIdColumn, null, head -> {
             read[0] = new Read(displayName, head, bytes);
-            return read[0]::row;
+            return read[0];
         });
         return read[0].finish();
     }
 
     /** The state of reading the register. */
-    private static final class Read {
+    private static final class Read implements TableAssembler.RowSink {
         private static final NumberScanner PLAIN = new NumberScanner(false, false);
         private final RawTable t;
         private final int id;
@@ -59,7 +61,7 @@ public final class RegisterReader {
             this.id = t.column(LabColumns.sampleId());
             if (id < 0) {
                 throw new InputException(displayName + ":" + t.headerLine() + ": no sample ID column among "
-                        + t.columns() + " (expected 'sample_id'); rename the column holding the submitted sample IDs.");
+                        + MessageText.list(t.columns()) + " (expected 'sample_id'); rename the column holding the submitted sample IDs.");
             }
             this.role = t.column(LabColumns.ROLE);
             this.ref = t.column(LabColumns.REFERENCE);
@@ -70,10 +72,27 @@ public final class RegisterReader {
             // and kept by the sample table, so it is not overestimated much.
             int expected = TableReader.estimatedRows(bytes, t.columns().size(), 5);
             this.entries = new SampleRegister.Builder(displayName, expected);
-            this.issues = new ArrayList<>(t.warnings());
+            this.issues = new ArrayList<>(t.issues());
         }
 
-        void row(CellRow row) {
+        /**
+         * A ragged register row is left out, and so are its sample's lab rows, as for an unknown role: its role
+         * cannot be read, and analysing a CRM or blank as a routine sample would be wrong.
+         */
+        @Override
+        public void ragged(CellRow row, DataIssue issue) {
+            rowsRead++;
+            excluded++;
+            String sampleId = row.cell(id);
+            if (!sampleId.isEmpty()) {
+                rejected.add(sampleId);
+            }
+            issues.add(excluded(issue.where(), sampleId, issue.found(), issue.problem() + (sampleId.isEmpty() ? ""
+                    : " with the sample's lab results"), issue.expected(), issue.fix()));
+        }
+
+        @Override
+        public void row(CellRow row) {
             rowsRead++;
             String sampleId = row.cell(id);
             if (sampleId.isEmpty()) {

@@ -18,7 +18,6 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
-import java.util.function.Consumer;
 import java.util.function.Function;
 import java.util.function.Predicate;
 import java.util.stream.Collectors;
@@ -59,22 +58,35 @@ public final class TableReader {
      */
     public static RawTable read(Path file, String displayName, Predicate<List<String>> isHeaderRow, String sheet) {
         List<RawRow> rows = new ArrayList<>();
+        List<DataIssue> ragged = new ArrayList<>();
         RawTable[] head = new RawTable[1];
         scan(file, displayName, isHeaderRow, sheet, h -> {
             head[0] = h;
-            return r -> rows.add(r.toRawRow());
+            return new TableAssembler.RowSink() {
+                @Override
+                public void row(CellRow row) {
+                    rows.add(row.toRawRow());
+                }
+
+                @Override
+                public void ragged(CellRow row, DataIssue issue) {
+                    ragged.add(issue);
+                }
+            };
         });
         RawTable h = head[0];
-        return new RawTable(h.file(), h.headerBlock(), h.columns(), h.headerLine(), rows, h.warnings());
+        List<DataIssue> issues = new ArrayList<>(h.issues());
+        issues.addAll(ragged);
+        return new RawTable(h.file(), h.headerBlock(), h.columns(), h.headerLine(), rows, issues);
     }
 
     /**
      * Reads {@code file} as {@link #read(Path, String, Predicate, String)} does, but hands each data row to
-     * the consumer that {@code open} returns for the table's head (a {@link RawTable} without rows) instead
-     * of keeping the rows; the row passed is reused for the next one.
+     * the sink that {@code open} returns for the table's head (a {@link RawTable} without rows) instead of
+     * keeping the rows; the row passed is reused for the next one.
      */
     static void scan(Path file, String displayName, Predicate<List<String>> isHeaderRow, String sheet,
-                     Function<RawTable, Consumer<CellRow>> open) {
+                     Function<RawTable, TableAssembler.RowSink> open) {
         if (!Files.isRegularFile(file) || !Files.isReadable(file)) {
             throw new InputException(displayName + ": the file does not exist or cannot be read; check the path "
                     + "and its permissions.");
@@ -82,14 +94,15 @@ public final class TableReader {
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
         List<DataIssue> warnings = new ArrayList<>();
         if (name.endsWith(".xlsx") || name.endsWith(".xlsm")) {
-            Iterator<RawRow> rows = XlsxSheetReader.read(file, displayName, sheet, warnings).iterator();
+            Iterator<RawRow> rows = XlsxSheetReader.read(file, displayName, sheet, isHeaderRow, warnings)
+                    .iterator();
             TableAssembler.assemble(displayName, row -> {
                 if (!rows.hasNext()) {
                     return false;
                 }
                 row.set(rows.next());
                 return true;
-            }, isHeaderRow, warnings, open);
+            }, true, isHeaderRow, warnings, open);
             return;
         }
         if (name.endsWith(".xls")) {
@@ -128,7 +141,7 @@ public final class TableReader {
     }
 
     private static void scanText(Path file, String displayName, Predicate<List<String>> isHeaderRow,
-                                 List<DataIssue> warnings, Function<RawTable, Consumer<CellRow>> open) {
+                                 List<DataIssue> warnings, Function<RawTable, TableAssembler.RowSink> open) {
         byte[] head = head(file, displayName);
         Charset charset = charsetOf(head);
         rejectBinary(head, charset, displayName);
@@ -139,11 +152,26 @@ public final class TableReader {
         if (whole != null) {
             char delimiter = DelimiterSniffer.sniff(whole.array(), whole.limit(), isHeaderRow);
             DelimitedTokenizer t = new DelimitedTokenizer(whole.array(), whole.limit(), delimiter, displayName);
-            TableAssembler.assemble(displayName, t::next, isHeaderRow, warnings, open);
+            TableAssembler.assemble(displayName, t::next, false, isHeaderRow, warnings, open);
             return;
         }
         char[] prefix = decodePrefix(head, charset).toCharArray();
         char delimiter = DelimiterSniffer.sniff(prefix, prefix.length, isHeaderRow);
+        try {
+            scanStream(file, displayName, head, charset, delimiter, isHeaderRow, warnings, open);
+        } catch (InputException e) {
+            // The decoder reads ahead of the tokenizer, so the line it failed on is found again, exactly.
+            if (e.getCause() instanceof CharacterCodingException) {
+                throw new InputException(EncodingErrors.locate(file, displayName, charset, bomLength(head, charset)),
+                        e.getCause());
+            }
+            throw e;
+        }
+    }
+
+    private static void scanStream(Path file, String displayName, byte[] head, Charset charset, char delimiter,
+                                   Predicate<List<String>> isHeaderRow, List<DataIssue> warnings,
+                                   Function<RawTable, TableAssembler.RowSink> open) {
         try (InputStream in = head.length < SNIFF_BYTES ? new ByteArrayInputStream(head) : Files.newInputStream(file);
              Reader reader = new InputStreamReader(skipBom(in, head), charset.newDecoder()
                      .onMalformedInput(CodingErrorAction.REPORT)
@@ -151,7 +179,7 @@ public final class TableReader {
             DelimitedTokenizer t = head.length < SNIFF_BYTES
                     ? new DelimitedTokenizer(reader, delimiter, displayName, head.length + 1)
                     : new DelimitedTokenizer(reader, delimiter, displayName);
-            TableAssembler.assemble(displayName, t::next, isHeaderRow, warnings, open);
+            TableAssembler.assemble(displayName, t::next, false, isHeaderRow, warnings, open);
         } catch (IOException e) {
             throw new InputException(displayName + ": the file could not be read (" + e.getMessage()
                     + "); check that it is not locked or truncated.", e);

@@ -9,7 +9,8 @@ import org.cupel.assay.SourceLocation;
  * @param severity whether the row was still analysed, left out, or the file not read
  * @param where file, line and column
  * @param sampleId the sample concerned, empty when none
- * @param found the offending text, verbatim (escaped only at output)
+ * @param found the offending text, verbatim (escaped only at output), cut short when longer than a few lines
+ *     ({@link MessageText#shorten})
  * @param problem one sentence: what is wrong
  * @param expected what the reader expected there
  * @param fix how to fix it
@@ -29,7 +30,7 @@ public record DataIssue(Severity severity, SourceLocation where, String sampleId
 
     public DataIssue {
         sampleId = sampleId == null ? "" : sampleId;
-        found = found == null ? "" : found;
+        found = found == null ? "" : MessageText.shorten(found);
         expected = expected == null ? "" : expected;
         fix = fix == null ? "" : fix;
     }

@@ -1,6 +1,7 @@
 package org.cupel.recovery;
 
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -13,6 +14,7 @@ import org.cupel.assay.SourceLocation;
 import org.cupel.ingest.AnalyteHeader;
 import org.cupel.ingest.HeaderParser;
 import org.cupel.ingest.ParsedValue;
+import org.cupel.ingest.ProjectFiles;
 import org.cupel.ingest.RawRow;
 import org.cupel.ingest.RawTable;
 import org.cupel.ingest.TableReader;
@@ -20,6 +22,7 @@ import org.cupel.ingest.ValueConventions;
 import org.cupel.ingest.ValueParser;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
+import org.cupel.project.MessageText;
 import org.cupel.units.MassUnit;
 
 /**
@@ -32,32 +35,49 @@ import org.cupel.units.MassUnit;
 public final class TestworkReader {
     private static final String[] EXTENSIONS = {".csv", ".tsv", ".txt", ".xlsx"};
 
+    /** A million tonnes: far beyond any smelt or test product, and small enough that mass times grade stays finite. */
+    static final double MAX_MASS_GRAMS = 1e12;
+
     private final RecoverySettings settings;
-    private final ValueParser values;
+    private final ValueConventions conventions;
+    /** The parser of the table being read: one per file, as it collects the evidence of the decimal mark. */
+    private ValueParser values;
     private final HeaderParser headers = new HeaderParser();
     private final List<DataIssue> issues = new ArrayList<>();
     private final List<String> analytes = new ArrayList<>();
 
     private TestworkReader(RecoverySettings settings, ValueConventions conventions) {
         this.settings = settings;
-        this.values = new ValueParser(conventions);
+        this.conventions = conventions;
     }
 
-    /** Reads the testwork under {@code folder} (a testwork folder or a project holding {@code testwork/}). */
+    /**
+     * Reads the testwork under {@code folder} (a testwork folder or a project holding {@code testwork/}),
+     * following links only inside the folder.
+     */
     public static Testwork read(Path folder, RecoverySettings settings, ValueConventions conventions) {
+        return read(ProjectFiles.insideOnly(folder), settings, conventions);
+    }
+
+    /** Reads the testwork under {@code files.folder()}, following links as {@code files} allows. */
+    public static Testwork read(ProjectFiles files, RecoverySettings settings, ValueConventions conventions) {
+        Path folder = files.folder();
         Path dir = Files.isDirectory(folder.resolve("testwork")) ? folder.resolve("testwork") : folder;
-        Path heads = find(dir, "heads");
-        Path smelts = find(dir, "smelts");
+        Path heads = find(files, dir, "heads");
+        Path smelts = find(files, dir, "smelts");
         TestworkReader reader = new TestworkReader(settings, conventions);
         Map<String, Map<String, List<AssayValue>>> h = reader.readHeads(heads);
         List<Smelt> s = reader.readSmelts(smelts);
         return new Testwork(reader.analytes, h, s, reader.issues);
     }
 
-    private static Path find(Path dir, String stem) {
+    private static Path find(ProjectFiles files, Path dir, String stem) {
         for (String ext : EXTENSIONS) {
             Path p = dir.resolve(stem + ext);
-            if (Files.isRegularFile(p)) {
+            if (Files.exists(p, LinkOption.NOFOLLOW_LINKS)) {
+                files.refusal(p, p.toString()).ifPresent(why -> {
+                    throw new InputException(why);
+                });
                 return p;
             }
         }
@@ -65,9 +85,13 @@ public final class TestworkReader {
                 + ".csv in the testwork folder (see docs/testwork.md for its columns).");
     }
 
-    private static RawTable table(Path file, String requiredColumn) {
-        return TableReader.read(file, file.toString(), cells -> cells.stream()
+    /** The table, its reading issues (ragged rows, formulas) added to the issues of the testwork. */
+    private RawTable table(Path file, String requiredColumn) {
+        RawTable t = TableReader.read(file, file.toString(), cells -> cells.stream()
                 .anyMatch(c -> RawTable.normalise(c).equals(RawTable.normalise(requiredColumn))), null);
+        issues.addAll(t.issues());
+        values = new ValueParser(conventions);
+        return t;
     }
 
     /**
@@ -100,6 +124,7 @@ public final class TestworkReader {
         byLabel.forEach((f, analytesOfFeed) -> analytesOfFeed.forEach((a, labels) -> labels.values().forEach(v -> out
                 .computeIfAbsent(f, k -> new LinkedHashMap<>()).computeIfAbsent(a, k -> new ArrayList<>())
                 .add(mergeDuplicates(v)))));
+        values.checkDecimalMarks();
         return out;
     }
 
@@ -112,9 +137,21 @@ public final class TestworkReader {
                 assays.get(0).limit());
     }
 
+    /**
+     * A ragged smelt row stops the read: its smelt would be balanced without one of its products, which
+     * shifts every recovery of the smelt rather than leaving one value out.
+     */
     private List<Smelt> readSmelts(Path file) {
         RawTable t = table(file, "test_id");
-        return t.column("product") >= 0 ? readLong(t) : readWide(t);
+        for (DataIssue i : t.issues()) {
+            if (i.severity() == DataIssue.Severity.EXCLUDED && i.where().column() == 0) {
+                throw new InputException(i.where() + ": " + i.problem().replace("; the row is left out", "")
+                        + ", and a smelt without one of its rows would not balance; " + i.fix() + ".");
+            }
+        }
+        List<Smelt> smelts = t.column("product") >= 0 ? readLong(t) : readWide(t);
+        values.checkDecimalMarks();
+        return smelts;
     }
 
     private List<Smelt> readLong(RawTable t) {
@@ -247,25 +284,30 @@ public final class TestworkReader {
     }
 
     private Optional<AssayValue> assay(RawTable t, RawRow row, int col, AnalyteHeader h) {
-        ParsedValue v = values.parse(row.cell(col), Double.NaN, t.at(row, col));
+        ParsedValue v = values.parse(row.cell(col), Double.NaN, t.at(row, col), h.unit());
         if (v.issue() != null) {
             issues.add(v.issue());
         }
         return v.usable() ? Optional.of(v.value().scaled(h.unit().gramsPerTonne())) : Optional.empty();
     }
 
+    /**
+     * A positive mass, in grams. Above {@link #MAX_MASS_GRAMS} it is a typing error (and mass times grade
+     * could overflow), so it is refused like an unreadable mass.
+     */
     Optional<Double> positive(RawTable t, RawRow row, int col, MassUnit unit) {
         String text = row.cell(col).strip();
         try {
             double d = Double.parseDouble(text);
-            if (d > 0 && Double.isFinite(d)) {
+            if (d > 0 && Double.isFinite(d) && unit.toGrams(d) <= MAX_MASS_GRAMS) {
                 return Optional.of(unit.toGrams(d));
             }
         } catch (NumberFormatException e) {
             // reported below
         }
-        exclude(t.at(row, col), text, "the mass in column '" + t.columns().get(col) + "' is not a positive number",
-                "a positive mass in " + unit.symbol(), "correct the weighing or remove the row");
+        exclude(t.at(row, col), text, "the mass in column '" + t.columns().get(col) + "' is not a positive number "
+                        + "of at most a million tonnes", "a positive mass in " + unit.symbol(),
+                "correct the weighing or remove the row");
         return Optional.empty();
     }
 
@@ -283,7 +325,7 @@ public final class TestworkReader {
 
     static InputException missingColumn(RawTable t, String column) {
         return new InputException(t.file() + ":" + t.headerLine() + ": the header row has no '" + column
-                + "' column (found " + String.join(", ", t.columns()) + "); add it as described in docs/testwork.md.");
+                + "' column (found " + MessageText.list(t.columns()) + "); add it as described in docs/testwork.md.");
     }
 
     static Optional<Integer> massColumn(RawTable t, String stem) {

@@ -111,14 +111,18 @@ class TableReaderTest {
     }
 
     @Test
-    void cellsAreTrimmedAndShortRowsReadAsEmpty() throws IOException {
-        RawTable t = TableReader.read(write("s.csv", "sample_id , Au_ppm ,Ag_ppm\n  S1 ,  0.5\n"));
+    void cellsAreTrimmedAndAShortRowIsListedNotPadded() throws IOException {
+        RawTable t = TableReader.read(write("s.csv", "sample_id , Au_ppm ,Ag_ppm\n  S1 ,  0.5, \n  S2 ,  0.5\n"));
         assertEquals(1, t.column("AU-PPM"));
         assertEquals("S1", t.rows().get(0).cell(0));
         assertEquals("", t.rows().get(0).cell(2));
         assertEquals("", t.rows().get(0).cell(99));
         assertEquals(-1, t.column("Cu_ppm"));
         assertEquals(3, t.at(t.rows().get(0), 2).column());
+        // S2 has 2 cells under 3 columns: it is ragged (issue 15), not read with a blank Ag.
+        assertEquals(1, t.rows().size());
+        assertEquals(1, t.rowsLeftOut());
+        assertEquals(3, t.issues().get(0).where().line());
     }
 
     @Test

@@ -55,9 +55,9 @@ class XlsxTableTest {
         writeWorkbook(xlsx, true);
         RawTable t = TableReader.read(xlsx);
         assertEquals("2.5", t.rows().get(0).cell(2));
-        assertEquals(1, t.warnings().size());
-        assertEquals(DataIssue.Severity.WARNING, t.warnings().get(0).severity());
-        assertEquals(5, t.warnings().get(0).where().line());
+        assertEquals(1, t.issues().size());
+        assertEquals(DataIssue.Severity.WARNING, t.issues().get(0).severity());
+        assertEquals(5, t.issues().get(0).where().line());
     }
 
     @Test

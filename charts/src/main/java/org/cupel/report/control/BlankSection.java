@@ -35,7 +35,8 @@ public final class BlankSection {
         List<ReportBlock> blocks = new ArrayList<>();
         int fails = report.summaries().stream().mapToInt(BlankSummary::fail).sum();
         int carry = report.summaries().stream().mapToInt(BlankSummary::carryOver).sum();
-        blocks.add(new ReportBlock.Callout(fails > 0 ? ReportBlock.Level.FAIL : ReportBlock.Level.PASS,
+        blocks.add(new ReportBlock.Callout(fails > 0 ? ReportBlock.Level.FAIL
+                : report.results().isEmpty() ? ReportBlock.Level.CANNOT_JUDGE : ReportBlock.Level.PASS,
                 "Blank results failed: " + fails + " of " + report.results().size() + "; right after a high-grade "
                         + "sample (probable carry-over): " + carry + "."));
         blocks.add(new ReportBlock.Paragraph("A blank fails above " + Numbers.compact(s.failMultiple())

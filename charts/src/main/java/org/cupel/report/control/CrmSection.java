@@ -78,7 +78,7 @@ public final class CrmSection {
                 r.failures(), r.warnings(), r.swaps(), drifting, r.exceptions().size());
         ReportBlock.Level level = r.failures() > 0 ? ReportBlock.Level.FAIL
                 : r.warnings() + r.swaps() + drifting + r.exceptions().size() > 0 ? ReportBlock.Level.WARN
-                : ReportBlock.Level.PASS;
+                : n == 0 ? ReportBlock.Level.CANNOT_JUDGE : ReportBlock.Level.PASS;
         return new ReportBlock.Callout(level, text);
     }
 

@@ -20,7 +20,8 @@ public final class InsertionRateSection {
     public static ReportSection build(InsertionRates rates) {
         List<ReportBlock> blocks = new ArrayList<>();
         int below = rates.belowTarget().size();
-        blocks.add(new ReportBlock.Callout(below > 0 ? ReportBlock.Level.WARN : ReportBlock.Level.PASS,
+        blocks.add(new ReportBlock.Callout(below > 0 ? ReportBlock.Level.WARN
+                : rates.batches().isEmpty() ? ReportBlock.Level.CANNOT_JUDGE : ReportBlock.Level.PASS,
                 below + " of " + rates.batches().size() + " batches have some QC type below its target rate."));
         blocks.add(new ReportBlock.Table(table(rates)));
         Map<String, Object> headlines = new LinkedHashMap<>();

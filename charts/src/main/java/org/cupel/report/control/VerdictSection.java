@@ -28,8 +28,10 @@ public final class VerdictSection {
         int failed = BatchVerdicts.count(verdicts, Verdict.FAIL);
         int warned = BatchVerdicts.count(verdicts, Verdict.WARN);
         int unjudged = BatchVerdicts.count(verdicts, Verdict.CANNOT_JUDGE);
-        blocks.add(new ReportBlock.Callout(failed > 0 ? ReportBlock.Level.FAIL : warned > 0 ? ReportBlock.Level.WARN
-                : ReportBlock.Level.PASS, verdicts.size() + " batches: " + failed + " failed, " + warned + " warned, "
+        // Batches without a control result are not passing batches: with none judged, nothing passed.
+        ReportBlock.Level level = failed > 0 ? ReportBlock.Level.FAIL : warned > 0 ? ReportBlock.Level.WARN
+                : unjudged == verdicts.size() ? ReportBlock.Level.CANNOT_JUDGE : ReportBlock.Level.PASS;
+        blocks.add(new ReportBlock.Callout(level, verdicts.size() + " batches: " + failed + " failed, " + warned + " warned, "
                 + unjudged + " could not be judged; " + reassay.entries().size() + " sample results to re-assay."
                 + batchList(verdicts, Verdict.FAIL, " Failed: ") + batchList(verdicts, Verdict.WARN, " Warned: ")));
         blocks.add(new ReportBlock.Paragraph("A batch takes the worst verdict of its control results for each "

@@ -47,7 +47,9 @@ public record CrmData(List<CrmSeries> series, List<CrmException> exceptions) {
             Arrays.fill(slot[c], -1);
         }
         for (CrmCertificate c : catalog.all()) {
-            int a = cols.indexOf(project.analytes().get(c.analyte()));
+            // A certificate of an analyte the results do not hold has no series (the immutable list refuses null).
+            AnalyteColumn col = project.analytes().get(c.analyte());
+            int a = col == null ? -1 : cols.indexOf(col);
             if (a >= 0) {
                 slot[codeIndex.get(c.code())][a] = certs.size();
                 certs.add(c);

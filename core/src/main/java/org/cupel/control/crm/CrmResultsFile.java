@@ -29,6 +29,7 @@ import org.cupel.project.CrmCatalog;
 import org.cupel.project.CrmCertificate;
 import org.cupel.project.ExceptionRegister;
 import org.cupel.project.InputException;
+import org.cupel.project.MessageText;
 import org.cupel.project.Project;
 
 /**
@@ -74,7 +75,7 @@ public final class CrmResultsFile {
         ValueConventions conv = ValueConventions.from(config);
         ValueParser parser = new ValueParser(conv);
         ExceptionRegister register = new ExceptionRegister();
-        t.warnings().forEach(register::add);
+        t.issues().forEach(register::add);
         Map<String, LocalDate> batchDates = batchDates(t, batchCol, dateCol);
         Map<String, Batch> batches = new LinkedHashMap<>();
         SampleTable.Builder table = SampleTable.builder();
@@ -87,13 +88,13 @@ public final class CrmResultsFile {
             Batch b = batches.computeIfAbsent(batchId, k -> new Batch(k, "", batchDates.get(k), t.file()));
             String id = idCol >= 0 && !r.cell(idCol).isEmpty() ? r.cell(idCol) : "line " + r.line();
             if (table.contains(id)) {
-                throw new InputException(t.at(r, idCol) + ": sample ID '" + id + "' appears twice; give each CRM "
+                throw new InputException(t.at(r, idCol) + ": sample ID '" + MessageText.clip(id) + "' appears twice; give each CRM "
                         + "result its own ID.");
             }
             int row = table.add(id, b, position(t, r, posCol, rowNo), QcRole.CRM, r.cell(crm), t.at(r));
             for (Map.Entry<Integer, AnalyteHeader> e : analyteCols.entrySet()) {
                 ParsedValue v = parser.parse(r.cell(e.getKey()), conv.detectionLimit(e.getValue().analyte()),
-                        t.at(r, e.getKey()));
+                        t.at(r, e.getKey()), e.getValue().unit());
                 if (v.issue() != null) {
                     register.add(v.issue());
                 }
@@ -102,6 +103,7 @@ public final class CrmResultsFile {
                 cols.get(e.getKey()).add(row, new MethodValue(e.getValue().method(), value, t.at(r, e.getKey())));
             }
         }
+        parser.checkDecimalMarks();
         SampleTable samples = table.build();
         Map<String, AnalyteColumn> built = new LinkedHashMap<>();
         cols.values().forEach(b -> built.put(b.analyte().name(), b.build(samples.size(), MethodSelector.FIRST)));
@@ -121,7 +123,7 @@ public final class CrmResultsFile {
         try {
             return Integer.parseInt(r.cell(posCol).strip());
         } catch (NumberFormatException e) {
-            throw new InputException(t.at(r, posCol) + ": position '" + r.cell(posCol) + "' is not a whole number; "
+            throw new InputException(t.at(r, posCol) + ": position '" + MessageText.clip(r.cell(posCol)) + "' is not a whole number; "
                     + "give the position of the result in its batch (1, 2, 3 ...).");
         }
     }
@@ -141,7 +143,7 @@ public final class CrmResultsFile {
             try {
                 d = LocalDate.parse(text.strip());
             } catch (DateTimeParseException e) {
-                throw new InputException(t.at(r, dateCol) + ": date '" + text + "' is not an ISO date (expected "
+                throw new InputException(t.at(r, dateCol) + ": date '" + MessageText.clip(text) + "' is not an ISO date (expected "
                         + "YYYY-MM-DD, e.g. 2025-03-14); rewrite the date column in that form.");
             }
             String batchId = batchCol < 0 || r.cell(batchCol).isEmpty() ? "(one batch)" : r.cell(batchCol);
