@@ -15,8 +15,9 @@ import org.cupel.assay.Numbers;
  * MDL_s = t·s, which applies to spiked samples.
  *
  * <p>Every value is used. When some replicates are censored, the mean and SD are those of the censored-data
- * summary recommended for the sample ({@link Recommendation}: Kaplan–Meier, ROS or maximum likelihood, Helsel
- * 2012), and the Student t quantiles keep n − 1 degrees of freedom, an approximation the note states. When no
+ * summary recommended for the sample ({@link Recommendation}: Kaplan–Meier with divisor n − 1, ROS or maximum
+ * likelihood, Helsel 2012), and the Student t quantiles keep n − 1 degrees of freedom, an approximation the note
+ * states. When no
  * SD can be estimated (above 80 % censored, or every value censored), the limits built on s are not given and
  * say why; MDL_b, which ranks the blanks, still is.
  *
@@ -86,7 +87,7 @@ public record BlankLimits(int n, int detected, int below, int above, int missing
             return new Spread(Estimate.of(StatUtils.mean(x), ""), Estimate.of(Math.sqrt(StatUtils.variance(x)), ""),
                     ORDINARY, "");
         }
-        CensoredAnalysis a = CensoredAnalysis.of(s, settings);
+        CensoredAnalysis a = CensoredAnalysis.of(s, spreadSettings(settings));
         CensoredSummary chosen = a.recommended();
         String counts = s.censoredCount() + " of " + n + " values censored";
         if (chosen == null || !chosen.sd().isAvailable()) {
@@ -98,6 +99,16 @@ public record BlankLimits(int n, int detected, int below, int above, int missing
                 + "); t quantiles on n − 1 = " + (n - 1) + " degrees of freedom, as if all were detected";
         return new Spread(Estimate.of(chosen.mean().value(), note), Estimate.of(chosen.sd().value(), note),
                 chosen.method(), "s by " + chosen.method() + ", " + counts);
+    }
+
+    /**
+     * The censored-data settings for s: the Kaplan–Meier SD with divisor n − 1 ({@link KaplanMeier.SdDivisor#SAMPLE},
+     * the ordinary sample SD when nothing is censored, as the t quantiles on n − 1 degrees of freedom assume), and
+     * no ROS bootstrap (only the point estimates are used).
+     */
+    static CensoredSettings spreadSettings(CensoredSettings settings) {
+        return new CensoredSettings(settings.kmLowestMass(), KaplanMeier.SdDivisor.SAMPLE, 0, settings.bootstrapSeed(),
+                settings.bootstrapMaxN());
     }
 
     /** The {@code p} quantile of Student's t with {@code df} degrees of freedom. */

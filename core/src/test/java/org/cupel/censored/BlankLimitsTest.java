@@ -160,7 +160,8 @@ class BlankLimitsTest {
 
     /**
      * Two of twelve below detection: the mean and SD are those of the recommended censored-data summary
-     * (Kaplan–Meier below 50 % censored, Helsel 2012), not of the ten detects alone, and 3·s uses that SD.
+     * (Kaplan–Meier below 50 % censored, Helsel 2012; SD divisor n − 1), not of the ten detects alone, and 3·s
+     * uses that SD.
      */
     @Test
     void someCensoredUseTheRecommendedCensoredSummary() {
@@ -168,7 +169,8 @@ class BlankLimitsTest {
                 .detected(0.002).detected(0.006).detected(0.005).detected(0.003).detected(0.008).detected(0.004)
                 .detected(0.0025).detected(0.007).build();
         BlankLimits b = BlankLimits.of(s, CensoredSettings.DEFAULTS);
-        CensoredSummary km = CensoredAnalysis.of(s, CensoredSettings.DEFAULTS).recommended();
+        CensoredSummary km = CensoredAnalysis.of(s, BlankLimits.spreadSettings(CensoredSettings.DEFAULTS))
+                .recommended();
         assertEquals("Kaplan–Meier", km.method());
         assertEquals(km.method(), b.spreadMethod());
         assertEquals(km.sd().value(), b.sd().value(), 0);
