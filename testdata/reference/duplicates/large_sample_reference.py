@@ -25,6 +25,7 @@ import statsmodels
 import statsmodels.api as sm
 from scipy import stats
 from statsmodels.stats.weightstats import DescrStatsW
+from pair_order import sort_pairs
 
 rng = np.random.default_rng(20261202)
 GROUP = 11
@@ -49,40 +50,10 @@ b = np.array([float(y) for _, y in rows])
 
 m = (a + b) / 2
 d = np.abs(a - b)
-MASK = (1 << 64) - 1
-GOLDEN = 0x9E3779B97F4A7C15
 
 
-def mix(z):
-    z = ((z ^ (z >> 30)) * 0xBF58476D1CE4E5B9) & MASK
-    z = ((z ^ (z >> 27)) * 0x94D049BB133111EB) & MASK
-    return z ^ (z >> 31)
-
-
-def shuffle_ties(ms, ds):
-    # Cupel's PairGroups.shuffleTies: Fisher-Yates within each run of equal means of the (mean, |d|)-sorted pairs,
-    # SplitMix64 seeded with the run's index among tied runs and its length.
-    ds = ds.copy()
-    n, start, run = len(ms), 0, 0
-    while start < n:
-        end = start + 1
-        while end < n and ms[end] == ms[start]:
-            end += 1
-        if end - start > 1:
-            state = (run * GOLDEN + (end - start)) & MASK
-            for i in range(end - start - 1, 0, -1):
-                state = (state + GOLDEN) & MASK
-                j = mix(state) % (i + 1)
-                ds[start + i], ds[start + j] = ds[start + j], ds[start + i]
-            run += 1
-        start = end
-    return ds
-
-
-order = np.lexsort((d, m))
+m_sorted, d_sorted = sort_pairs(m, d)
 g = n // GROUP
-m_sorted = m[order]
-d_sorted = shuffle_ties(m_sorted, d[order])
 ms = m_sorted[: g * GROUP].reshape(g, GROUP)
 ds = d_sorted[: g * GROUP].reshape(g, GROUP)
 group_mean = ms.mean(axis=1)

@@ -17,35 +17,10 @@ import numpy as np
 import scipy
 from scipy import stats
 from scipy.optimize import lsq_linear
+from pair_order import sort_pairs
 
-MASK = (1 << 64) - 1
-GOLDEN = 0x9E3779B97F4A7C15
 GROUP = 11
 SIGMA_PER_MEDIAN = 1 / (np.sqrt(2) * stats.norm.ppf(0.75))
-
-
-def mix(z):
-    z = ((z ^ (z >> 30)) * 0xBF58476D1CE4E5B9) & MASK
-    z = ((z ^ (z >> 27)) * 0x94D049BB133111EB) & MASK
-    return z ^ (z >> 31)
-
-
-def shuffle_ties(ms, ds):
-    ds = ds.copy()
-    n, start, run = len(ms), 0, 0
-    while start < n:
-        end = start + 1
-        while end < n and ms[end] == ms[start]:
-            end += 1
-        if end - start > 1:
-            state = (run * GOLDEN + (end - start)) & MASK
-            for i in range(end - start - 1, 0, -1):
-                state = (state + GOLDEN) & MASK
-                j = mix(state) % (i + 1)
-                ds[start + i], ds[start + j] = ds[start + j], ds[start + i]
-            run += 1
-        start = end
-    return ds
 
 
 def bounded(x, y):
@@ -80,9 +55,7 @@ a = np.array([float(f"{x:.3f}") for x in a])
 b = np.array([float(f"{y:.3f}") for y in b])
 m = (a + b) / 2
 d = np.abs(a - b)
-order = np.lexsort((d, m))
-ms = m[order]
-ds = shuffle_ties(ms, d[order])
+ms, ds = sort_pairs(m, d)
 g = n // GROUP
 gm = ms[: g * GROUP].reshape(g, GROUP).mean(axis=1)
 gd = ds[: g * GROUP].reshape(g, GROUP)
