@@ -25,6 +25,7 @@ import statsmodels
 import statsmodels.api as sm
 from scipy import stats
 from statsmodels.stats.weightstats import DescrStatsW
+from pair_order import sort_pairs
 
 rng = np.random.default_rng(20261202)
 GROUP = 11
@@ -49,10 +50,12 @@ b = np.array([float(y) for _, y in rows])
 
 m = (a + b) / 2
 d = np.abs(a - b)
-order = np.lexsort((d, m))
+
+
+m_sorted, d_sorted = sort_pairs(m, d)
 g = n // GROUP
-ms = m[order][: g * GROUP].reshape(g, GROUP)
-ds = d[order][: g * GROUP].reshape(g, GROUP)
+ms = m_sorted[: g * GROUP].reshape(g, GROUP)
+ds = d_sorted[: g * GROUP].reshape(g, GROUP)
 group_mean = ms.mean(axis=1)
 group_median = np.median(ds, axis=1)
 group_rms = np.sqrt((ds ** 2).sum(axis=1) / (2.0 * GROUP))

@@ -51,7 +51,7 @@ public class DuplicateKernelsBench {
             sortedMeans[i] = PairMeasures.mean(a[i], b[i]);
             sortedAbsDiff[i] = PairMeasures.absDifference(a[i], b[i]);
         }
-        PairGroups.sortByMeanThenDiff(sortedMeans, sortedAbsDiff);
+        PairGroups.sortByMean(sortedMeans, sortedAbsDiff);
     }
 
     @Benchmark

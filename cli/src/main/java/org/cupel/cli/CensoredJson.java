@@ -52,9 +52,13 @@ final class CensoredJson {
         m.put("file", file);
         m.put("column", column);
         m.put("n", b.n());
-        m.put("censoredLeftOut", b.censored());
-        m.put("mean", number(b.mean()));
-        m.put("sd", number(b.sd()));
+        m.put("detected", b.detected());
+        m.put("belowDetection", b.below());
+        m.put("aboveRange", b.above());
+        m.put("missing", b.missing());
+        m.put("spreadMethod", b.spreadMethod());
+        m.put("mean", estimate(b.mean()));
+        m.put("sd", estimate(b.sd()));
         List<Object> limits = new ArrayList<>();
         for (BlankLimits.LimitEstimate l : b.limits()) {
             Map<String, Object> e = new LinkedHashMap<>();

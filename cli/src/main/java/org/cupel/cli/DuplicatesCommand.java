@@ -173,6 +173,19 @@ public final class DuplicatesCommand implements Callable<Integer> {
             }
         }
         m.print(out);
+        for (DuplicateSetResult s : r.sets()) {
+            if (!s.model().available()) {
+                continue;
+            }
+            for (ModelFit f : List.of(s.model().thompsonHowarth(), s.model().rmsRegression())) {
+                if (!f.constraint().isEmpty()) {
+                    out.println(s.type().label() + ", " + f.method() + ": " + f.constraint());
+                }
+            }
+            if (!s.model().fitNote().isEmpty()) {
+                out.println(s.type().label() + ": " + s.model().fitNote());
+            }
+        }
         out.println();
         for (DuplicateSetResult s : r.sets()) {
             out.println(s.type().label() + ": " + s.bias().verdict());

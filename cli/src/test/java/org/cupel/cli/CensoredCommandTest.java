@@ -101,18 +101,57 @@ class CensoredCommandTest {
     }
 
     @Test
-    void dlCheckGivesTheFourLimits(@TempDir Path dir) throws Exception {
+    void dlCheckGivesBothEpaLimitsAndCurrie(@TempDir Path dir) throws Exception {
         Path csv = dir.resolve("blanks.csv");
-        Files.writeString(csv, "Sample ID,Au_ppm\nB1,1\nB2,2\nB3,3\nB4,4\nB5,5\nB6,6\nB7,7\nB8,<0.5\n");
+        Files.writeString(csv, "Sample ID,Au_ppm\nB1,1\nB2,2\nB3,3\nB4,4\nB5,5\nB6,6\nB7,7\n");
         Run r = run("dl-check", csv.toString(), "--column", "Au_ppm", "--json");
         assertEquals(0, r.code(), r.err());
         JsonNode j = new ObjectMapper().readTree(r.out());
-        // s = √(28/6); EPA MDL = t(6, 0.99)·s = 3.143·s (40 CFR 136 App. B table, 3 decimals).
+        // Replicates 1..7: mean 4, s = √(28/6). 40 CFR 136 App. B table t(6, 0.99) = 3.143 (3 decimals, so
+        // 5e-4·s): MDL_s = 3.143·s; every blank numerical, so MDL_b = mean + 3.143·s.
         double s = Math.sqrt(28 / 6.0);
         assertEquals(7, j.get("n").asInt());
-        assertEquals(3.143 * s, j.get("limits").get(3).get("value").asDouble(), 5e-4 * s);
+        assertEquals(0, j.get("missing").asInt());
+        java.util.Map<String, Double> byName = new java.util.HashMap<>();
+        j.get("limits").forEach(l -> byName.put(l.get("name").asText(), l.get("value").asDouble()));
+        assertEquals(3.143 * s, byName.get("EPA MDL_s"), 5e-4 * s);
+        assertEquals(4 + 3.143 * s, byName.get("EPA MDL_b"), 5e-4 * s);
         Run text = run("dl-check", csv.toString(), "--column", "Au_ppm");
-        assertTrue(text.out().contains("Currie L_D"), text.out());
+        assertTrue(text.out().contains("Currie L_D (t)") && text.out().contains("EPA MDL_b")
+                && text.out().contains("includes the blank mean"), text.out());
+    }
+
+    /**
+     * 120 blanks, 118 below detection and a blank cell: nothing is left out silently. The counts are printed,
+     * the SD-based limits say why they are not given, and MDL_b is the blank of rank 119 of 120.
+     */
+    @Test
+    void dlCheckOnMostlyCensoredBlanksAccountsForEveryValue(@TempDir Path dir) throws Exception {
+        StringBuilder csv = new StringBuilder("Sample ID,Au_ppm\n");
+        for (int i = 0; i < 118; i++) {
+            csv.append("B").append(i).append(",<0.005\n");
+        }
+        csv.append("B118,0.005\nB119,0.208\nB120,\n");
+        Path file = dir.resolve("blanks.csv");
+        Files.writeString(file, csv);
+        Run text = run("dl-check", file.toString(), "--column", "Au_ppm");
+        assertEquals(0, text.code(), text.err());
+        assertTrue(text.out().contains("120 replicates used: 2 with a number, 118 below detection; 1 missing"),
+                text.out());
+        assertTrue(text.out().contains("No SD: 118 of 120 values censored"), text.out());
+        JsonNode j = new ObjectMapper().readTree(run("dl-check", file.toString(), "--column", "Au_ppm", "--json").out());
+        assertEquals(118, j.get("belowDetection").asInt());
+        assertTrue(j.get("sd").get("value").isNull());
+        JsonNode mdlB = null;
+        for (JsonNode l : j.get("limits")) {
+            if (l.get("name").asText().equals("EPA MDL_b")) {
+                mdlB = l;
+            } else {
+                assertTrue(l.get("value").isNull() && l.get("note").asText().contains("118 of 120"), l.toString());
+            }
+        }
+        assertEquals(0.005, mdlB.get("value").asDouble(), 0);
+        assertTrue(mdlB.get("rule").asText().contains("rank 119 of 120"), mdlB.toString());
     }
 
     @Test

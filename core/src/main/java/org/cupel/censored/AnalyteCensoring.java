@@ -23,10 +23,11 @@ import org.cupel.project.Project;
  * @param missing rows without a value
  * @param methodCounts how many reported values came from each method (empty name: none given)
  * @param routine censored summary of the routine samples
+ * @param blanks detection limits estimated from the project's blanks (n = 0 when it has none)
  */
 public record AnalyteCensoring(String analyteLabel, List<Double> detectionLimits, List<Double> upperLimits, int values,
                                int below, int above, int missing, Map<String, Integer> methodCounts,
-                               CensoredAnalysis routine) {
+                               CensoredAnalysis routine, BlankLimits blanks) {
 
     public AnalyteCensoring {
         detectionLimits = List.copyOf(detectionLimits);
@@ -68,8 +69,9 @@ public record AnalyteCensoring(String analyteLabel, List<Double> detectionLimits
         }
         CensoredSample routine = CensoredSample.of(column, samples.rowsWithRole(QcRole.ROUTINE));
         CensoredAnalysis analysis = CensoredAnalysis.of(routine, settings);
+        BlankLimits blanks = BlankLimits.of(CensoredSample.of(column, samples.rowsWithRole(QcRole.BLANK)), settings);
         return new AnalyteCensoring(column.analyte().label(), distinct(dls), distinct(uls),
-                column.size() - missing, below, above, missing, column.reportedMethodCounts(), analysis);
+                column.size() - missing, below, above, missing, column.reportedMethodCounts(), analysis, blanks);
     }
 
     private static List<Double> distinct(Tally.Counter limits) {

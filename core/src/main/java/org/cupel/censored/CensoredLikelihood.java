@@ -97,6 +97,26 @@ final class CensoredLikelihood {
         return exactSumSquares / (exactCount - 1);
     }
 
+    /**
+     * Mean and variance (divisor count − 1; 1 when that is not positive) of one point per observation: the
+     * detect, the finite end of a half-line, the midpoint of an interval. A starting value only.
+     */
+    double[] pointMoments() {
+        double w = exactCount;
+        double sum = exactCount > 0 ? exactCount * exactMean : 0;
+        double sumSquares = exactCount > 0 ? exactSumSquares + exactCount * exactMean * exactMean : 0;
+        for (int i = 0; i < low.length; i++) {
+            double y = Double.isInfinite(low[i]) ? high[i] : Double.isInfinite(high[i]) ? low[i]
+                    : 0.5 * (low[i] + high[i]);
+            w += censoredWeight[i];
+            sum += censoredWeight[i] * y;
+            sumSquares += censoredWeight[i] * y * y;
+        }
+        double mean = sum / w;
+        double var = w > 1 ? (sumSquares - w * mean * mean) / (w - 1) : 1;
+        return new double[] {mean, var > 0 ? var : 1};
+    }
+
     Evaluation evaluate(double mu, double tau) {
         double sigma = Math.exp(tau);
         double v = 0;

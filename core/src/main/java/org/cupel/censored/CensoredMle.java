@@ -21,6 +21,24 @@ import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
  * the 95 % interval for the mean is the profile-likelihood interval
  * {@code {m : 2(ℓ̂ − max_σ ℓ(ln m − σ²/2, σ)) ≤ χ²₁(0.95)}} (Cox and Hinkley 1974, "Theoretical
  * Statistics", ch. 9), which, unlike the Wald interval, respects the skew of the mean's distribution.
+ *
+ * <p><b>When the maximum exists.</b> Write each observation as the closed set of values it allows on the
+ * analysis scale: a detect {y}, a value below a limit (−∞, L], above a limit [U, ∞), in an interval [a, b].
+ * A finite maximum of the likelihood exists if and only if
+ * <ol>
+ * <li>no single value c is allowed by every observation (every detect equals c and c lies in every censored
+ *     set), and</li>
+ * <li>some observation is bounded: a detect, or an interval with both ends finite.</li>
+ * </ol>
+ * Derived here: if c exists, the likelihood grows without bound (or towards 1) as μ → c and σ → 0; if every
+ * observation is a half-line and no c exists, it grows towards its supremum as σ → ∞. When both conditions
+ * hold the log-likelihood tends to −∞ at every edge of the parameter space (σ → 0 puts some observation's
+ * probability to 0; σ → ∞ or |μ| → ∞ does so for the bounded observation), so a maximum is attained, and it
+ * is unique because the censored normal log-likelihood is concave in (μ/σ, 1/σ) (Xia, Mi and Zhou 2009, "On
+ * the existence and uniqueness of the maximum likelihood estimators of normal and lognormal population
+ * parameters with grouped data", Journal of Probability and Statistics, 310575). Two different detected values
+ * satisfy both conditions; so does a single detected value with one limit below it or one interval that
+ * excludes it, as in data reported in concentration classes (R's {@code survreg} fits these too).
  */
 public final class CensoredMle {
     /** The fitted model. */
@@ -108,19 +126,74 @@ public final class CensoredMle {
             return "no values";
         }
         Tally detects = sample.detectTally();
-        if (detects.size() < 2 || detects.value(0) == detects.value(detects.distinct() - 1)) {
-            return "not applicable: fewer than two different detected values, so the spread cannot be estimated";
-        }
-        if (d == Distribution.LOGNORMAL && detects.value(0) <= 0) {
+        if (d == Distribution.LOGNORMAL && detects.distinct() > 0 && detects.value(0) <= 0) {
             return "not applicable: a lognormal needs positive values and a detect is zero or negative";
+        }
+        return unidentified(sample);
+    }
+
+    /**
+     * Null when the likelihood has a finite maximum (the two conditions of the class comment), else why not.
+     * The set of values allowed by every observation is an interval [lo, hi] (empty when lo &gt; hi); the
+     * conditions do not depend on the scale, so they are checked on the original one.
+     */
+    static String unidentified(CensoredSample sample) {
+        Tally detects = sample.detectTally();
+        if (detects.distinct() >= 2) {
+            return null;
+        }
+        double lo = Double.NEGATIVE_INFINITY;
+        double hi = Double.POSITIVE_INFINITY;
+        if (detects.distinct() == 1) {
+            lo = detects.value(0);
+            hi = lo;
+        }
+        Tally below = sample.belowTally();
+        if (below.distinct() > 0) {
+            hi = Math.min(hi, below.value(0));
+        }
+        Tally above = sample.aboveTally();
+        if (above.distinct() > 0) {
+            lo = Math.max(lo, above.value(above.distinct() - 1));
+        }
+        CensoredSample.IntervalGroups intervals = sample.intervalGroups();
+        for (int i = 0; i < intervals.distinct(); i++) {
+            lo = Math.max(lo, intervals.low()[i]);
+            hi = Math.min(hi, intervals.high()[i]);
+        }
+        if (lo <= hi) {
+            return detects.distinct() == 1
+                    ? "not applicable: one detected value (" + org.cupel.assay.Numbers.compact(lo) + ") and every "
+                            + "censored value is consistent with it, so the spread cannot be estimated (the "
+                            + "likelihood grows without bound as the SD shrinks to 0)"
+                    : "not applicable: no detected value, and any one value " + range(lo, hi) + " is consistent "
+                            + "with every censored value, so the spread cannot be estimated";
+        }
+        if (detects.distinct() == 0 && intervals.distinct() == 0) {
+            return "not applicable: no detected value and no interval with two finite ends, so the likelihood "
+                    + "keeps growing as the SD grows (values below and above limits alone do not bound it)";
         }
         return null;
     }
 
-    /** Mean and SD of the detects: close enough for Newton–Raphson with step halving. */
+    private static String range(double lo, double hi) {
+        String l = org.cupel.assay.Numbers.compact(lo);
+        String h = org.cupel.assay.Numbers.compact(hi);
+        if (Double.isInfinite(lo)) {
+            return Double.isInfinite(hi) ? "at all" : "at or below " + h;
+        }
+        return Double.isInfinite(hi) ? "at or above " + l : lo == hi ? "of " + l : "between " + l + " and " + h;
+    }
+
+    /**
+     * Mean and SD of the detects when they hold two different values; otherwise of one point per observation
+     * (see {@link CensoredLikelihood#pointMoments()}). Close enough for Newton–Raphson with step halving.
+     */
     private static double[] start(CensoredLikelihood lik) {
-        double var = Math.max(lik.detectVariance(), 1e-12);
-        return new double[] {lik.detectMean(), 0.5 * Math.log(var)};
+        double[] m = lik.detectVariance() > 0 ? new double[] {lik.detectMean(), lik.detectVariance()}
+                : lik.pointMoments();
+        double var = Math.max(m[1], 1e-12);
+        return new double[] {m[0], 0.5 * Math.log(var)};
     }
 
     /** −H⁻¹g when H is negative definite; otherwise a scaled gradient step uphill. */

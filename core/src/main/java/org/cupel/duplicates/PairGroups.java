@@ -15,7 +15,7 @@ package org.cupel.duplicates;
  */
 public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, double[] rmsSd, int dropped,
                          double droppedFromMean) {
-    /** Runs this short are sorted by insertion before {@link #sortByMeanThenDiff} merges them. */
+    /** Runs this short are sorted by insertion before {@link #sortByMean} merges them. */
     private static final int RUN = 32;
 
     public PairGroups {
@@ -70,10 +70,23 @@ public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, 
     }
 
     /**
-     * Sorts pairs by mean, ties broken by |d|, so that the grouping and everything computed from it does not
-     * depend on the order the pairs were given in: {@code means} and {@code absDiff} are reordered together, in
-     * place. A merge sort of the values themselves (no index indirection, no boxing); pairs with equal mean and
-     * |d| are interchangeable, so only the sorted values matter.
+     * Sorts pairs by mean so that the grouping, and everything computed from it, does not depend on the order the
+     * pairs were given in, and shuffles each run of equal means (common with rounded assays) into a fixed
+     * pseudo-random order ({@link #shuffleTies}). {@code means} and {@code absDiff} are reordered together, in
+     * place. Leaving a run of ties in order of |d| put its small differences into one group and its large ones
+     * into the next, which biased the group medians and so σ₀ (on 50,000 simulated pairs with σ₀ = 0.010 rounded
+     * to 0.001: 0.0117 against about 0.0104 for random orders); any order that keeps equal |d| together does the
+     * same in a smaller way, because the median of a block of equal values is that value.
+     */
+    static void sortByMean(double[] means, double[] absDiff) {
+        sortByMeanThenDiff(means, absDiff);
+        shuffleTies(means, absDiff);
+    }
+
+    /**
+     * Sorts pairs by mean, ties broken by |d|: the canonical order of the multiset of pairs (pairs with equal mean
+     * and |d| are interchangeable, so only the sorted values matter). A merge sort of the values themselves (no
+     * index indirection, no boxing).
      */
     static void sortByMeanThenDiff(double[] means, double[] absDiff) {
         int n = means.length;
@@ -99,6 +112,43 @@ public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, 
             System.arraycopy(m, 0, means, 0, n);
             System.arraycopy(d, 0, absDiff, 0, n);
         }
+    }
+
+    /**
+     * Fisher–Yates shuffle (Knuth, The Art of Computer Programming vol. 2, Algorithm 3.4.2 P) of the |d| within
+     * each run of equal means of pairs in canonical order, drawing from SplitMix64 (Steele, Lea and Flood 2014,
+     * "Fast splittable pseudorandom number generators", OOPSLA) seeded with the run's index and length. The seed
+     * depends on nothing but the canonical order, so the result is the same for every input order and for every
+     * change of unit that keeps the order (a positive scale factor that rounds no means together).
+     */
+    static void shuffleTies(double[] sortedMeans, double[] absDiff) {
+        int n = sortedMeans.length;
+        long run = 0;
+        for (int from = 0; from < n; ) {
+            int to = from + 1;
+            while (to < n && sortedMeans[to] == sortedMeans[from]) {
+                to++;
+            }
+            if (to - from > 1) {
+                long state = run * 0x9E3779B97F4A7C15L + (to - from);
+                for (int i = to - from - 1; i > 0; i--) {
+                    state += 0x9E3779B97F4A7C15L;
+                    int j = (int) Long.remainderUnsigned(mix(state), i + 1);
+                    double t = absDiff[from + i];
+                    absDiff[from + i] = absDiff[from + j];
+                    absDiff[from + j] = t;
+                }
+                run++;
+            }
+            from = to;
+        }
+    }
+
+    /** The SplitMix64 output function. */
+    private static long mix(long z) {
+        z = (z ^ (z >>> 30)) * 0xBF58476D1CE4E5B9L;
+        z = (z ^ (z >>> 27)) * 0x94D049BB133111EBL;
+        return z ^ (z >>> 31);
     }
 
     private static boolean after(double m1, double d1, double m2, double d2) {

@@ -48,6 +48,36 @@ record RobustLine(double intercept, double slope, double interceptVariance, doub
         return new RobustLine(line[0], line[1], varIntercept, varSlope, covLevelSlope - mx * varSlope, n);
     }
 
+    /**
+     * The HC3 covariance of the non-negative line {@code line} of {@code y} on {@code x}: the ordinary line's
+     * when no bound holds; with b₀ held at 0, that of the line through the origin, b₁ = Σxy/Σx², leverages
+     * hᵢ = xᵢ²/Σx², Var b₁ = Σ xᵢ²eᵢ²/(1 − hᵢ)² / (Σx²)²; with b₁ held at 0, that of the mean, hᵢ = 1/n,
+     * Var b₀ = Σ eᵢ²/(1 − 1/n)² / n². A coefficient held at its bound has variance 0 here.
+     */
+    static RobustLine fit(double[] x, double[] y, NonNegativeLine line) {
+        int n = x.length;
+        if (!line.constrained()) {
+            return fit(x, y);
+        }
+        if (line.heldIntercept() && line.heldSlope()) {
+            return new RobustLine(0, 0, 0, 0, 0, n);
+        }
+        double sxx = 0;
+        for (double v : x) {
+            sxx += v * v;
+        }
+        double sum = 0;
+        for (int i = 0; i < n; i++) {
+            double e = y[i] - line.intercept() - line.slope() * x[i];
+            double h = line.heldIntercept() ? x[i] * x[i] / sxx : 1.0 / n;
+            double w = e * e / ((1 - h) * (1 - h));
+            sum += line.heldIntercept() ? x[i] * x[i] * w : w;
+        }
+        return line.heldIntercept()
+                ? new RobustLine(0, line.slope(), 0, sum / (sxx * sxx), 0, n)
+                : new RobustLine(line.intercept(), 0, sum / ((double) n * n), 0, 0, n);
+    }
+
     /** The line of c·y: both coefficients times c, the covariance times c². */
     RobustLine scaled(double c) {
         return new RobustLine(c * intercept, c * slope, c * c * interceptVariance, c * c * slopeVariance,

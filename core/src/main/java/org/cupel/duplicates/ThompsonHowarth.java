@@ -3,8 +3,6 @@ package org.cupel.duplicates;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;
-import org.apache.commons.math3.distribution.BinomialDistribution;
-import org.apache.commons.math3.stat.regression.SimpleRegression;
 
 /**
  * Concentration-dependent precision from duplicate pairs.
@@ -22,6 +20,16 @@ import org.apache.commons.math3.stat.regression.SimpleRegression;
  * geochemical samples", Geochemistry: Exploration, Environment, Analysis 8, 173–182) give the unbiased
  * alternative computed here beside it: regress the group RMS SD √(Σd²/(2g)) on group mean; intercept and
  * slope are σ₀ and k directly.
+ *
+ * <p>Both lines are fitted with σ₀ ≥ 0 and k ≥ 0 ({@link NonNegativeLine}): when the ordinary line's intercept
+ * is negative, the line is refitted through the origin (σ₀ = 0), and the fit says so in {@link ModelFit#constraint()}.
+ * This bound is Cupel's choice, not part of the published method, which fits the line unconstrained; a search of
+ * the literature (Thompson and Howarth; Stanley and Lawie 2008) found no published rule for a negative intercept.
+ * Pairs with equal means are ordered by a hash of their values, not by |d| ({@link PairGroups#sortByMean}).
+ *
+ * <p>Whether the model describes the pairs is tested by the counts above its 90 % and 99 % lines
+ * ({@link ControlLineCheck}); when either count is far above expectation the result carries a note
+ * ({@link PrecisionModelResult#fitNote()}).
  *
  * <p>Intervals for σ₀, k and P_c come from a seeded bootstrap over pairs: pairs are drawn with replacement,
  * regrouped and both lines refitted. Above {@link DuplicateSettings#bootstrapMaxPairs()} pairs, where that costs
@@ -54,27 +62,48 @@ public final class ThompsonHowarth {
         }
         double[] sm = m.clone();
         double[] sd = d.clone();
-        PairGroups.sortByMeanThenDiff(sm, sd);
+        PairGroups.sortByMean(sm, sd);
         PairGroups groups = PairGroups.ofSorted(sm, sd, settings.thGroupSize());
-        SimpleRegression thLine = line(groups.means(), groups.medianAbsDiff());
-        SimpleRegression rmsLine = line(groups.means(), groups.rmsSd());
-        PrecisionModel th = new PrecisionModel(NormalDifferenceConstants.SIGMA_PER_MEDIAN * thLine.getIntercept(),
-                NormalDifferenceConstants.SIGMA_PER_MEDIAN * thLine.getSlope());
-        PrecisionModel rms = new PrecisionModel(rmsLine.getIntercept(), rmsLine.getSlope());
+        double[] means = groups.means();
+        NonNegativeLine thLine = NonNegativeLine.fit(means, groups.medianAbsDiff());
+        NonNegativeLine rmsLine = NonNegativeLine.fit(means, groups.rmsSd());
+        double c = NormalDifferenceConstants.SIGMA_PER_MEDIAN;
+        PrecisionModel th = new PrecisionModel(c * thLine.intercept(), c * thLine.slope());
+        PrecisionModel rms = new PrecisionModel(rmsLine.intercept(), rmsLine.slope());
 
         Uncertainties u = settings.bootstraps(n) ? bootstrap(sm, sd, settings)
-                : largeSample(groups, settings.bootstrapMaxPairs());
-        ModelFit thFit = new ModelFit("Thompson–Howarth (median |d|)", thLine.getIntercept(), thLine.getSlope(),
-                thLine.getRSquare(), th, u.th().sigma0(th, n), u.th().k(th, n));
-        ModelFit rmsFit = new ModelFit("RMS SD regression (Stanley & Lawie 2008)", rmsLine.getIntercept(),
-                rmsLine.getSlope(), rmsLine.getRSquare(), rms, u.rms().sigma0(rms, n), u.rms().k(rms, n));
+                : largeSample(groups, thLine, rmsLine, settings.bootstrapMaxPairs());
+        ModelFit thFit = new ModelFit("Thompson–Howarth (median |d|)", thLine.intercept(), thLine.slope(),
+                thLine.rSquared(means, groups.medianAbsDiff()), th, u.th().sigma0(th, n), u.th().k(th, n),
+                constraint(thLine, c));
+        ModelFit rmsFit = new ModelFit("RMS SD regression (Stanley & Lawie 2008)", rmsLine.intercept(),
+                rmsLine.slope(), rmsLine.rSquared(means, groups.rmsSd()), rms, u.rms().sigma0(rms, n),
+                u.rms().k(rms, n), constraint(rmsLine, 1));
         List<GradePrecision> atGrades = new ArrayList<>();
-        for (double c : grades) {
-            atGrades.add(new GradePrecision(c, precision(u.th(), th, c, n), precision(u.rms(), rms, c, n)));
+        for (double g : grades) {
+            atGrades.add(new GradePrecision(g, precision(u.th(), th, g, n), precision(u.rms(), rms, g, n)));
         }
-        return new PrecisionModelResult("", n, groups, thFit, rmsFit,
-                controlLine(90, NormalDifferenceConstants.P90, th, m, d),
-                controlLine(99, NormalDifferenceConstants.P99, th, m, d), atGrades);
+        ControlLineCheck line90 = controlLine(90, NormalDifferenceConstants.P90, th, m, d);
+        ControlLineCheck line99 = controlLine(99, NormalDifferenceConstants.P99, th, m, d);
+        return new PrecisionModelResult("", n, groups, thFit, rmsFit, line90, line99, atGrades,
+                ControlLineCheck.fitNote(line90, line99));
+    }
+
+    /** What the σ₀ ≥ 0, k ≥ 0 bounds did to a line, in the model's units (coefficients times {@code scale}). */
+    private static String constraint(NonNegativeLine line, double scale) {
+        if (!line.constrained()) {
+            return "";
+        }
+        String free = "the unconstrained line gives σ₀ = " + org.cupel.assay.Numbers.significant(
+                scale * line.unconstrainedIntercept(), 3) + " and k = " + org.cupel.assay.Numbers.significant(
+                scale * line.unconstrainedSlope(), 3);
+        if (line.heldIntercept() && !line.heldSlope()) {
+            return free + "; an SD cannot be negative, so the line is refitted through the origin (σ₀ = 0, "
+                    + "least squares with σ₀ ≥ 0, k ≥ 0)";
+        }
+        return free + "; an SD cannot be negative, so " + (line.heldSlope() && line.heldIntercept()
+                ? "both are held at 0" : "k is held at 0 and σ₀ is the mean of the group points")
+                + " (least squares with σ₀ ≥ 0, k ≥ 0)";
     }
 
     /** Pairs whose |d| lies above {@code factor}·σ_c of {@code model} at their mean. */
@@ -96,18 +125,7 @@ public final class ThompsonHowarth {
                 count++;
             }
         }
-        double pExceed = 1.0 - percentile / 100.0;
-        BinomialDistribution binomial = new BinomialDistribution(null, n, pExceed);
-        double p = count == 0 ? 1.0 : 1.0 - binomial.cumulativeProbability(count - 1);
-        return new ControlLineCheck(percentile, factor, n, count, n * pExceed, p);
-    }
-
-    private static SimpleRegression line(double[] x, double[] y) {
-        SimpleRegression r = new SimpleRegression(true);
-        for (int i = 0; i < x.length; i++) {
-            r.addData(x[i], y[i]);
-        }
-        return r;
+        return ControlLineCheck.of(percentile, factor, n, count);
     }
 
     private static Estimate precision(Uncertainty u, PrecisionModel model, double c, int n) {
@@ -156,17 +174,29 @@ public final class ThompsonHowarth {
      * Normal intervals from the HC3 covariance of the model's line over the groups: σ₀ and k are the line's
      * intercept and slope (times 1.048358 for Thompson–Howarth), and P_c = (2/c)·σ₀ + 2k is linear in them,
      * so Var P_c = (2/c)²·Var σ₀ + 4·Var k + 2·(2/c)·2·Cov(σ₀, k). The group points are treated as
-     * independent, which holds closely when the groups are many and each holds different pairs.
+     * independent, which holds closely when the groups are many and each holds different pairs. A coefficient
+     * held at 0 by its bound gets the interval of the unconstrained line ({@code free}) cut at 0 (the bound only
+     * removes impossible values); the other coefficient's comes from the constrained line.
      */
-    private record LineCovariance(RobustLine line, String how) implements Uncertainty {
+    private record LineCovariance(RobustLine line, RobustLine free, NonNegativeLine bounds, String how)
+            implements Uncertainty {
         @Override
         public Estimate sigma0(PrecisionModel model, int n) {
-            return estimate(model.sigma0(), NormalInterval.around(model.sigma0(), line.interceptVariance()), n, how);
+            double[] ci = bounds.heldIntercept()
+                    ? cutAtZero(NormalInterval.around(free.intercept(), free.interceptVariance()))
+                    : NormalInterval.around(model.sigma0(), line.interceptVariance());
+            return estimate(model.sigma0(), ci, n, how);
         }
 
         @Override
         public Estimate k(PrecisionModel model, int n) {
-            return estimate(model.k(), NormalInterval.around(model.k(), line.slopeVariance()), n, how);
+            double[] ci = bounds.heldSlope() ? cutAtZero(NormalInterval.around(free.slope(), free.slopeVariance()))
+                    : NormalInterval.around(model.k(), line.slopeVariance());
+            return estimate(model.k(), ci, n, how);
+        }
+
+        private static double[] cutAtZero(double[] ci) {
+            return new double[] {Math.max(0, ci[0]), Math.max(0, ci[1])};
         }
 
         @Override
@@ -181,14 +211,18 @@ public final class ThompsonHowarth {
     }
 
     /** Thompson–Howarth and RMS SD uncertainty from the HC3 covariance of their lines over the groups. */
-    private static Uncertainties largeSample(PairGroups groups, int bootstrapMaxPairs) {
+    private static Uncertainties largeSample(PairGroups groups, NonNegativeLine thLine, NonNegativeLine rmsLine,
+                                             int bootstrapMaxPairs) {
         String how = "95 % normal interval from HC3 standard errors (MacKinnon and White 1985) of the line over "
                 + groups.groups() + " groups; bootstrap skipped above duplicates.bootstrapMaxPairs = "
                 + bootstrapMaxPairs + " pairs";
         double[] means = groups.means();
-        return new Uncertainties(new LineCovariance(RobustLine.fit(means, groups.medianAbsDiff())
-                .scaled(NormalDifferenceConstants.SIGMA_PER_MEDIAN), how),
-                new LineCovariance(RobustLine.fit(means, groups.rmsSd()), how));
+        double c = NormalDifferenceConstants.SIGMA_PER_MEDIAN;
+        double[] med = groups.medianAbsDiff();
+        double[] rms = groups.rmsSd();
+        return new Uncertainties(new LineCovariance(RobustLine.fit(means, med, thLine).scaled(c),
+                RobustLine.fit(means, med).scaled(c), thLine, how),
+                new LineCovariance(RobustLine.fit(means, rms, rmsLine), RobustLine.fit(means, rms), rmsLine, how));
     }
 
     /**
@@ -217,15 +251,16 @@ public final class ThompsonHowarth {
                 }
             }
             PairGroups g = PairGroups.ofSorted(rm, rd, settings.thGroupSize());
-            double[] th = leastSquares(g.means(), g.medianAbsDiff());
-            double[] rms = leastSquares(g.means(), g.rmsSd());
-            thSigma0[r] = NormalDifferenceConstants.SIGMA_PER_MEDIAN * th[0];
-            thK[r] = NormalDifferenceConstants.SIGMA_PER_MEDIAN * th[1];
-            rmsSigma0[r] = rms[0];
-            rmsK[r] = rms[1];
+            double[] means = g.means();
+            NonNegativeLine th = NonNegativeLine.fit(means, g.medianAbsDiff());
+            NonNegativeLine rms = NonNegativeLine.fit(means, g.rmsSd());
+            thSigma0[r] = NormalDifferenceConstants.SIGMA_PER_MEDIAN * th.intercept();
+            thK[r] = NormalDifferenceConstants.SIGMA_PER_MEDIAN * th.slope();
+            rmsSigma0[r] = rms.intercept();
+            rmsK[r] = rms.slope();
         }
         String how = "95 % percentile bootstrap over pairs, " + resamples + " resamples, seed "
-                + settings.bootstrapSeed();
+                + settings.bootstrapSeed() + "; each resample fitted with σ₀ ≥ 0, k ≥ 0";
         return new Uncertainties(new Replicates(thSigma0, thK, how), new Replicates(rmsSigma0, rmsK, how));
     }
 

@@ -18,6 +18,15 @@ public record PairComparison(String analyte, String first, String second, WelchT
                              GamesHowell gamesHowell, Tost tost, ComparisonVerdict verdict,
                              ComparisonVerdict verdictCensoredAtZero, PowerPlanning.Plan plan) {
 
+    /**
+     * Whether the verdict is "cannot tell" although the unadjusted Welch interval excludes zero: the Holm
+     * adjustment for the other comparisons of the analyte (Holm 1979) is what keeps it from "different".
+     */
+    public boolean heldBackByHolm() {
+        return verdict == ComparisonVerdict.CANNOT_TELL && welch.computed()
+                && (welch.lower() > 0 || welch.upper() < 0);
+    }
+
     /** Whether counting censored loss assays as zero instead of at their limit changes the conclusion. */
     public boolean conclusionDependsOnCensoring() {
         return verdict != verdictCensoredAtZero;

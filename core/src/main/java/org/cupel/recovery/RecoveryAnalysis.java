@@ -60,14 +60,43 @@ public final class RecoveryAnalysis {
         }
         boolean anyCensored = smelts.stream().anyMatch(SmeltRecovery::lossCensored);
         return new RecoveryResult(settings, testwork.analytes(), heads, smelts, conditions, atZero, comparisons,
-                balances, deportment, smeltDeportment, anyCensored, notes(settings, anyCensored), testwork.issues());
+                balances, deportment, smeltDeportment, anyCensored, notes(settings, anyCensored, conditions),
+                testwork.issues());
     }
 
-    private static List<String> notes(RecoverySettings settings, boolean anyCensored) {
+    /**
+     * Why no condition has a bootstrap interval, with the real smelt counts: n smelts give C(2n − 1, n) distinct
+     * resamples (Efron &amp; Tibshirani 1993, §6.4; the count of multisets of size n from n items), far too few
+     * for percentile limits with the handful of replicates testwork has.
+     */
+    public static String bootstrapNote(List<ConditionRecovery> conditions) {
+        java.util.TreeSet<Integer> ns = new java.util.TreeSet<>();
+        conditions.stream().filter(c -> c.n() > 0).forEach(c -> ns.add(c.n()));
+        if (ns.isEmpty()) {
+            return "No bootstrap intervals: no condition has a usable smelt.";
+        }
+        List<String> smelts = new ArrayList<>();
+        List<String> resamples = new ArrayList<>();
+        for (int n : ns) {
+            smelts.add(Integer.toString(n));
+            resamples.add(Long.toString(org.apache.commons.math3.util.CombinatoricsUtils.binomialCoefficient(
+                    2 * n - 1, n)));
+        }
+        return "No bootstrap intervals: with " + or(smelts) + " smelts per condition there are only " + or(resamples)
+                + " distinct resamples, too few for percentile limits (Efron & Tibshirani 1993); the t, GUM and "
+                + "Fieller intervals are given instead.";
+    }
+
+    private static String or(List<String> xs) {
+        return xs.size() == 1 ? xs.get(0) : String.join(", ", xs.subList(0, xs.size() - 1)) + " or "
+                + xs.get(xs.size() - 1);
+    }
+
+    private static List<String> notes(RecoverySettings settings, boolean anyCensored,
+                                      List<ConditionRecovery> conditions) {
         List<String> notes = new ArrayList<>();
         notes.add("Condition means and comparisons use the recovery " + settings.recoveryDefinition().label() + ".");
-        notes.add("No bootstrap intervals: with 2 or 3 smelts per condition there are only 3 or 10 distinct "
-                + "resamples, too few for percentile limits (Efron & Tibshirani 1993).");
+        notes.add(bootstrapNote(conditions));
         notes.add("Intervals of means at or above " + settings.nearComplete() + "% are computed on the log of the "
                 + "loss, so they cannot pass 100%.");
         if (anyCensored) {

@@ -19,6 +19,9 @@ import java.util.List;
 public record SmeltBalance(String testId, String analyte, List<String> variables, Reconciliation reconciliation,
                            double reconciledRecovery, String note) {
 
+    /** Variance, relative to the largest in the balance, given to a quantity known without error. */
+    private static final double HELD_FIXED = 1e-24;
+
     /** Whether the χ² test rejects closure at α. */
     public boolean rejectsClosure(double alpha) {
         return reconciliation != null && reconciliation.p() < alpha;
@@ -52,10 +55,12 @@ public record SmeltBalance(String testId, String analyte, List<String> variables
             return new SmeltBalance(id, s.analyte(), names, null, Double.NaN,
                     "no measurement uncertainty to weight the balance with: set recovery.assayRelativeSd");
         }
+        double largest = java.util.Arrays.stream(v).max().orElse(0);
         for (int i = 0; i < v.length; i++) {
             // A product with no metal (a censored assay counted as zero) has no variance: it is held fixed,
-            // which a vanishing variance does without making A V Aᵀ singular.
-            v[i] = Math.max(v[i], 1e-30);
+            // which a variance negligible beside the others does. Relative, so that the balance of a charge
+            // holding micrograms of metal is reconciled as one holding kilograms is.
+            v[i] = Math.max(v[i], HELD_FIXED * largest);
         }
         Reconciliation r = Reconciliation.adjust(x, v, a);
         double collected = 0;

@@ -44,8 +44,27 @@ final class Reference {
 
     /** mixed.csv: the manganese data with interval and right-censored values (lower 0 = below detection). */
     static CensoredSample mixed() {
+        return intervals("mixed.csv");
+    }
+
+    /** identification_reference.csv: key → value, written by identification_reference.R. */
+    static Map<String, Double> identification() {
+        Map<String, Double> out = new HashMap<>();
+        List<String> all = lines("identification_reference.csv");
+        for (String line : all.subList(1, all.size())) {
+            String[] kv = line.split(",");
+            out.put(kv[0], Double.parseDouble(kv[1]));
+        }
+        return out;
+    }
+
+    /**
+     * A lower,upper file: lower = upper a detect, lower 0 below detection at upper, upper Inf above range at
+     * lower, otherwise the interval (lower, upper].
+     */
+    static CensoredSample intervals(String name) {
         CensoredSample.Builder b = CensoredSample.builder();
-        List<String> all = lines("mixed.csv");
+        List<String> all = lines(name);
         for (String line : all.subList(1, all.size())) {
             String[] f = line.split(",");
             double lo = Double.parseDouble(f[0]);

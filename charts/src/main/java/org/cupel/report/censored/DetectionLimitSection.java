@@ -8,6 +8,7 @@ import java.util.function.Function;
 import java.util.stream.Collectors;
 import org.cupel.assay.Numbers;
 import org.cupel.censored.AnalyteCensoring;
+import org.cupel.censored.BlankLimits;
 import org.cupel.censored.CensoredSummary;
 import org.cupel.censored.Estimate;
 import org.cupel.censored.Quantile;
@@ -48,6 +49,9 @@ public final class DetectionLimitSection {
         blocks.add(new ReportBlock.Paragraph("Values below the detection limit and above the upper range of a method "
                 + "are kept as censored values throughout: none is replaced by a number in any analysis."));
         blocks.add(new ReportBlock.Table(limitsTable(analytes)));
+        if (analytes.stream().anyMatch(a -> a.blanks().n() > 0)) {
+            blocks.add(new ReportBlock.Table(blankLimitsTable(analytes)));
+        }
         blocks.add(new ReportBlock.Paragraph("Treatment of censored values in each analysis:"));
         for (String t : TREATMENT) {
             blocks.add(new ReportBlock.Paragraph("• " + t));
@@ -86,6 +90,41 @@ public final class DetectionLimitSection {
                         "Missing", "Reported values by method"), rows,
                 "Limits as stated by the laboratory on each value; the method of each reported value as selected by "
                         + "the configured method priority, every other result kept in the data.");
+    }
+
+    /** Detection limits estimated from the project's blanks, each labelled with its definition in the note. */
+    static ReportTable blankLimitsTable(List<AnalyteCensoring> analytes) {
+        List<List<String>> rows = new ArrayList<>();
+        for (AnalyteCensoring a : analytes) {
+            BlankLimits b = a.blanks();
+            if (b.n() == 0) {
+                continue;
+            }
+            List<String> notes = new ArrayList<>();
+            b.limits().stream().filter(l -> !l.value().note().isEmpty()).map(l -> l.name() + ": " + l.value().note())
+                    .distinct().forEach(notes::add);
+            rows.add(List.of(a.analyteLabel(), b.n() + " (" + b.detected() + " with a number, " + b.below()
+                            + " below detection)", list(a.detectionLimits()), limit(b, "EPA MDL_b"), limit(b, "3·s"),
+                    limit(b, "Currie L_C (t)"), limit(b, "Currie L_D (t)"), limit(b, "EPA MDL_s"),
+                    b.sd().isAvailable() ? String.join("; ", notes) : b.sd().note()));
+        }
+        return new ReportTable("blank-detection-limits", "Detection limits estimated from the project's blanks",
+                List.of("Analyte", "Blanks", "Stated detection limits", "EPA MDL_b", "3·s", "Currie L_C (t)",
+                        "Currie L_D (t)", "EPA MDL_s", "Notes"), rows,
+                "EPA MDL_b (US EPA, 40 CFR 136 App. B Rev. 2): the blank mean + t(n − 1, 0.99)·s when every blank has "
+                        + "a number; the highest numerical blank (n < 100) or the blank of rank round(0.99·n) when some "
+                        + "are below detection; not applicable when none has a number. It includes the blank mean. "
+                        + "EPA MDL_s = t(n − 1, 0.99)·s is the spiked-sample formula, shown for comparison: applied to "
+                        + "blanks it leaves out their mean. 3·s (common practice) and Currie's critical level L_C and "
+                        + "detection limit L_D (t-based with s₀ = s·√(1 + 1/n), Currie 1995, IUPAC) are net levels "
+                        + "above the blank mean. With censored blanks s comes from the censored-data summary "
+                        + "(Helsel 2012), and above 80 % censored no s is estimated. Project blanks also carry "
+                        + "contamination and carry-over, so these describe the whole blank process. — = not "
+                        + "estimated (see notes).");
+    }
+
+    private static String limit(BlankLimits b, String name) {
+        return value(b.limit(name).value());
     }
 
     static ReportTable summaryTable(AnalyteCensoring a) {

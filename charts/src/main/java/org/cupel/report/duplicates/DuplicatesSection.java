@@ -127,6 +127,12 @@ public final class DuplicatesSection {
             blocks.add(new ReportBlock.Callout(ReportBlock.Level.FAIL, sb.toString()));
         }
         blocks.add(new ReportBlock.Table(modelTable(report)));
+        for (DuplicateSetResult set : report.sets()) {
+            if (set.model().available() && !set.model().fitNote().isEmpty()) {
+                blocks.add(new ReportBlock.Callout(ReportBlock.Level.WARN, a + " " + set.type().label() + "s: "
+                        + set.model().fitNote() + "."));
+            }
+        }
         ReportTable grades = gradeTable(report);
         if (!grades.rows().isEmpty()) {
             blocks.add(new ReportBlock.Table(grades));
@@ -248,23 +254,29 @@ public final class DuplicatesSection {
         for (DuplicateSetResult s : r.sets()) {
             PrecisionModelResult m = s.model();
             if (!m.available()) {
-                rows.add(List.of(s.type().label(), "—", m.note(), "", "", "", "", "", ""));
+                rows.add(List.of(s.type().label(), "—", m.note(), "", "", "", "", "", "", ""));
                 continue;
             }
             for (ModelFit f : List.of(m.thompsonHowarth(), m.rmsRegression())) {
                 boolean th = f == m.thompsonHowarth();
+                String notes = String.join("; ", java.util.stream.Stream.of(f.constraint(), th ? m.fitNote() : "")
+                        .filter(x -> !x.isEmpty()).toList());
                 rows.add(List.of(s.type().label(), f.method(), estimate(f.sigma0(), 4), estimate(f.k(), 4),
                         fmt(f.rSquared(), 3), Integer.toString(m.groups().groups()),
                         Integer.toString(m.groups().dropped()), th ? line(m.line90()) : "",
-                        th ? line(m.line99()) : ""));
+                        th ? line(m.line99()) : "", notes));
             }
         }
         return new ReportTable("duplicates-model-" + r.analyte(), r.analyte() + ": precision model σ_c = σ₀ + k·c",
                 List.of("Type", "Method", "σ₀ (" + r.unit() + ", 95 % CI)", "k (95 % CI)", "R²", "Groups",
-                        "Pairs dropped", "Above 90 % line (expected; p)", "Above 99 % line (expected; p)"), rows,
-                "Thompson–Howarth (1978): groups of pairs by mean, median |d| regressed on group mean, scaled by "
-                        + "1.048358. RMS SD regression: group √(Σd²/2n) on group mean (Stanley & Lawie 2008), "
-                        + "unbiased when errors are not normal. p: binomial upper tail of the exceedance count.");
+                        "Pairs dropped", "Above 90 % line (expected; p)", "Above 99 % line (expected; p)", "Notes"),
+                rows,
+                "Thompson–Howarth (1978): pairs sorted by mean (runs of equal means in a fixed pseudo-random order), "
+                        + "groups of 11 from the lowest, median |d| regressed on group mean by least squares with "
+                        + "σ₀ ≥ 0 and k ≥ 0, scaled by 1.048358. RMS SD regression: group √(Σd²/2n) on group mean "
+                        + "(Stanley & Lawie 2008), unbiased when errors are not normal, same bounds. p: binomial "
+                        + "upper tail of the exceedance count; a p below 0.01 says the model does not fit. "
+                        + "See docs/duplicates.md.");
     }
 
     private static ReportTable gradeTable(DuplicateReport r) {

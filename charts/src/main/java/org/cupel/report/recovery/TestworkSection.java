@@ -13,6 +13,7 @@ import org.cupel.recovery.ComparisonVerdict;
 import org.cupel.recovery.ConditionRecovery;
 import org.cupel.recovery.Deportment;
 import org.cupel.recovery.PairComparison;
+import org.cupel.recovery.RecoveryAnalysis;
 import org.cupel.recovery.RecoveryInterval;
 import org.cupel.recovery.RecoveryResult;
 import org.cupel.recovery.SmeltBalance;
@@ -100,7 +101,7 @@ public final class TestworkSection {
                 conf + "% CI, GUM (%)", "ν_eff", conf + "% CI, Fieller (%)", "Bounds, censored loss (%)",
                 "Mean, censored = 0 (%)", "Notes"), rows, "Intervals marked † are computed on the log of the loss and "
                 + "cannot pass 100%. Censored loss assays are counted at their detection limit unless stated. "
-                + "No bootstrap intervals: with 2 or 3 smelts there are only 3 or 10 distinct resamples.");
+                + RecoveryAnalysis.bootstrapNote(r.conditions()));
     }
 
     public static ReportTable comparisons(RecoveryResult r) {
@@ -116,7 +117,8 @@ public final class TestworkSection {
                     pValue(p.welch().p()), pValue(p.holmP()), pValue(p.gamesHowell().p()), pValue(p.tost().p()),
                     p.verdict().label(), r.anyCensoredLoss() ? p.verdictCensoredAtZero().label()
                             + (p.conclusionDependsOnCensoring() ? " (changes)" : "") : DASH, plan,
-                    p.welch().note()));
+                    String.join("; ", java.util.stream.Stream.of(holmReason(r, p), p.welch().note())
+                            .filter(x -> !x.isEmpty()).toList())));
         }
         return new ReportTable("recovery-comparisons", "Pairwise comparison of conditions", List.of("Analyte", "Pair",
                 "Difference (pp)", conf + "% CI (pp)", "Welch p", "Holm p", "Games–Howell p", "TOST p (±"
@@ -125,6 +127,18 @@ public final class TestworkSection {
                 "Equivalent: TOST p < α. Different: Holm-adjusted Welch p < α. Otherwise cannot tell; the replicate "
                         + "count is for " + Math.round(100 * r.settings().power()) + "% power at α = "
                         + num(r.settings().alpha(), 3) + " with the pooled replicate SD (noncentral t).");
+    }
+
+    /** Beside a "cannot tell" whose unadjusted interval excludes zero: the Holm adjustment is the reason. */
+    private static String holmReason(RecoveryResult r, PairComparison p) {
+        if (!p.heldBackByHolm()) {
+            return "";
+        }
+        long family = r.comparisons().stream().filter(c -> c.analyte().equals(p.analyte())).count();
+        return "cannot tell although the unadjusted " + Math.round(100 * r.settings().confidence())
+                + "% CI excludes 0 (Welch p = " + pValue(p.welch().p()) + "): the Holm-adjusted p = "
+                + pValue(p.holmP()) + " over the " + family + " comparisons of " + p.analyte() + " is not below α = "
+                + num(r.settings().alpha(), 3);
     }
 
     public static ReportTable balance(RecoveryResult r) {
