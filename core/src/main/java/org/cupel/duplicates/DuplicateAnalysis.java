@@ -7,6 +7,7 @@ import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.cupel.assay.LimitComparison;
 import org.cupel.assay.QcRole;
 
 /** Runs the whole duplicate analysis of one analyte over a list of pairs, per type and per batch. */
@@ -125,7 +126,7 @@ public final class DuplicateAnalysis {
         double[] b = rel.b();
         int[] rows = rel.rows();
         for (int i = 0; i < rows.length; i++) {
-            if (PairMeasures.hard(a[i], b[i]) > hardLimit) {
+            if (LimitComparison.above(PairMeasures.hard(a[i], b[i]), hardLimit)) {
                 flagged.computeIfAbsent(rows[i], k -> new ArrayList<>()).add(OutlierPair.Test.OUTSIDE_HARD_LIMIT);
             }
         }

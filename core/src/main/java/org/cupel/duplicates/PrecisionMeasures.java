@@ -1,5 +1,6 @@
 package org.cupel.duplicates;
 
+import org.cupel.assay.LimitComparison;
 import org.cupel.assay.QcRole;
 
 /** Computes a {@link PrecisionSummary} from screened pairs: HARD acceptance, average CV, repeatability. */
@@ -37,7 +38,8 @@ public final class PrecisionMeasures {
         double limit = settings.hardLimit(type);
         Estimate within = percentWithin(ra, rb, limit);
         RuleOutcome rule = !within.available() ? RuleOutcome.NOT_JUDGED
-                : within.value() >= settings.acceptancePercent() ? RuleOutcome.PASS : RuleOutcome.FAIL;
+                : LimitComparison.atLeast(within.value(), settings.acceptancePercent()) ? RuleOutcome.PASS
+                : RuleOutcome.FAIL;
         Estimate sr = repeatabilitySd(abs.a(), abs.b());
         Estimate r = sr.available() ? Estimate.point(REPEATABILITY_FACTOR * sr.value(), sr.n()) : sr;
         return new PrecisionSummary(type, set.pairs().size(), abs.size(), rel.size(), set.excludedAbsolute(),
@@ -45,7 +47,10 @@ public final class PrecisionMeasures {
                 settings.acceptancePercent(), within, rule, rmsCv, meanCv(ra, rb), medianHard(ra, rb), sr, r);
     }
 
-    /** Share of pairs with HARD ≤ {@code limit}, in %. */
+    /**
+     * Share of pairs with HARD ≤ {@code limit}, in %. "≤" by {@link LimitComparison#atMost}: 1.1 / 0.9 has
+     * HARD exactly 10 % in its decimals (the double is 0.10000000000000003) and is within a 10 % limit.
+     */
     public static Estimate percentWithin(double[] a, double[] b, double limit) {
         int n = a.length;
         if (n == 0) {
@@ -53,7 +58,7 @@ public final class PrecisionMeasures {
         }
         int within = 0;
         for (int i = 0; i < n; i++) {
-            if (PairMeasures.hard(a[i], b[i]) <= limit) {
+            if (LimitComparison.atMost(PairMeasures.hard(a[i], b[i]), limit)) {
                 within++;
             }
         }

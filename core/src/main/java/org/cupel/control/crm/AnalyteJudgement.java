@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.cupel.assay.LimitComparison;
 import org.cupel.control.Verdict;
 import org.cupel.project.CrmCatalog;
 import org.cupel.project.CrmCertificate;
@@ -85,7 +86,7 @@ final class AnalyteJudgement {
             for (int i = 0; i < n; i++) {
                 CrmPoint p = cs.points().get(i);
                 zs[i] = lim.z(p.value().value());
-                Optional<String> m = Math.abs(zs[i]) > 3
+                Optional<String> m = LimitComparison.beyond(zs[i], 3)
                         ? SwapCheck.match(p.value(), cs.certificate(), others, settings.swapWithinSd(),
                         settings.blankLevelMultiple())
                         : Optional.empty();
