@@ -52,6 +52,23 @@ class CrmCommandTest {
     }
 
     @Test
+    void aCatalogAnalyteTheResultsLackIsLeftOutNotACrash(@TempDir Path dir) throws IOException {
+        // The catalog certifies Ag as well; the results file has Au only. Before the fix: exit 3
+        // (NullPointerException in CrmData). The Au review is unchanged by the extra certificates.
+        Path results = Files.writeString(dir.resolve("crm-results.csv"), RESULTS);
+        Path catalog = Files.writeString(dir.resolve("crm-catalog.csv"), CATALOG
+                + "LOW,Ag,ppm,3.8,0.3\nMID,Ag,ppm,11.4,0.6\nOTHER,Cu,%,0.2,0.008\n");
+        Run r = run("crm", "--results", results.toString(), "--catalog", catalog.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("12 results in 3 series: 1 failures, 0 warnings, 1 probable swaps, 2 exceptions"),
+                r.out());
+        assertTrue(!r.out().contains("Ag ("), "no Ag series: " + r.out());
+        Run json = run("crm", "--results", results.toString(), "--catalog", catalog.toString(), "--json");
+        assertEquals(0, json.code(), json.err());
+        assertEquals(3, new ObjectMapper().readTree(json.out()).get("series").size());
+    }
+
+    @Test
     void jsonModeFollowsDocumentedSchema(@TempDir Path dir) throws IOException {
         Path[] f = files(dir);
         Run r = run("crm", "--results", f[0].toString(), "--catalog", f[1].toString(), "--json");
