@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.cupel.assay.Numbers;
 import org.cupel.assay.QcRole;
 import org.cupel.charts.PngWriter;
 import org.cupel.charts.duplicates.DuplicateCharts;
@@ -192,15 +193,7 @@ public final class DuplicatesCommand implements Callable<Integer> {
             if (shown.size() > BATCHES_SHOWN) {
                 out.println("  ... " + (shown.size() - BATCHES_SHOWN) + " more flagged batches (all in --json)");
             }
-            List<OutlierPair> o = s.outliers();
-            if (!o.isEmpty()) {
-                out.println("  " + o.size() + " flagged pairs; largest HARD:");
-                for (OutlierPair x : o.subList(0, Math.min(5, o.size()))) {
-                    out.println("    " + x.id() + (x.originalId().isEmpty() ? "" : " / " + x.originalId())
-                            + (x.batch().isEmpty() ? "" : " [" + x.batch() + "]") + ": " + x.original() + " vs "
-                            + x.duplicate() + ", HARD " + pct(x.hard(), 1) + " — " + x.testLabels());
-                }
-            }
+            printOutliers(out, s);
         }
         if (!r.orphans().isEmpty()) {
             out.println(r.orphans().size() + " duplicates without an original, e.g. " + r.orphans().get(0).id() + ": "
@@ -208,6 +201,31 @@ public final class DuplicatesCommand implements Callable<Integer> {
         }
         out.println();
         out.flush();
+    }
+
+    /** Flagged pairs, original first in IDs and values; those below the relative threshold apart. */
+    private static void printOutliers(PrintWriter out, DuplicateSetResult s) {
+        List<OutlierPair> o = s.outliers();
+        if (!o.isEmpty()) {
+            out.println("  " + o.size() + " flagged pairs (original / duplicate); largest HARD:");
+            for (OutlierPair x : o.subList(0, Math.min(5, o.size()))) {
+                out.println("    " + pairText(x) + ", HARD " + pct(x.hard(), 1) + " — " + x.testLabels());
+            }
+        }
+        List<OutlierPair> low = s.outliersBelowRelativeThreshold();
+        if (!low.isEmpty()) {
+            out.println("  " + low.size() + " pairs below the relative-measure threshold (mean < "
+                    + Numbers.compact(s.precision().limitMultiple()) + "× DL, not judged by HARD) above the 99 % "
+                    + "line; largest |d|:");
+            for (OutlierPair x : low.subList(0, Math.min(5, low.size()))) {
+                out.println("    " + pairText(x) + ", |d| " + sig(x.absDifference()));
+            }
+        }
+    }
+
+    private static String pairText(OutlierPair x) {
+        return x.idsOriginalFirst() + (x.batch().isEmpty() ? "" : " [" + x.batch() + "]") + ": " + x.original()
+                + " vs " + x.duplicate();
     }
 
     private void writeCharts(List<DuplicateReport> reports, PrintWriter out) {

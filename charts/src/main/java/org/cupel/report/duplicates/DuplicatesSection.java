@@ -303,21 +303,27 @@ public final class DuplicatesSection {
         List<List<String>> rows = new ArrayList<>();
         int more = 0;
         for (DuplicateSetResult s : r.sets()) {
-            List<OutlierPair> list = s.outliers();
-            for (int i = 0; i < list.size(); i++) {
-                if (i >= OUTLIERS_LISTED) {
-                    more += list.size() - OUTLIERS_LISTED;
-                    break;
-                }
-                OutlierPair o = list.get(i);
-                rows.add(List.of(s.type().label(), o.id(), o.originalId(), o.batch(), o.original(), o.duplicate(),
-                        pct1(o.hard()), o.testLabels()));
-            }
+            more += outlierRows(s, s.outliers(), o -> pct1(o.hard()), rows);
+            String notJudged = "not used: mean < " + compact(s.precision().limitMultiple()) + "× DL";
+            more += outlierRows(s, s.outliersBelowRelativeThreshold(), o -> notJudged, rows);
         }
         return new ReportTable("duplicates-outliers-" + r.analyte(), r.analyte() + ": pairs flagged",
-                List.of("Type", "Duplicate ID", "Original ID", "Batch", "Original", "Duplicate", "HARD", "Flagged by"), rows,
-                more > 0 ? more + " further flagged pairs not listed (the " + OUTLIERS_LISTED
-                        + " with the largest HARD per type are shown)." : "");
+                List.of("Type", "Original ID", "Duplicate ID", "Batch", "Original", "Duplicate", "HARD", "Flagged by"),
+                rows, "Per type, the pairs used in relative measures come first, largest HARD first; then the pairs "
+                        + "whose mean is below the detection-limit multiple, which are not judged or ranked by HARD and "
+                        + "are flagged only by the Thompson–Howarth 99 % line, largest |d| first."
+                        + (more > 0 ? " " + more + " further flagged pairs not listed (the first " + OUTLIERS_LISTED
+                        + " of each list per type are shown)." : ""));
+    }
+
+    /** Adds up to {@link #OUTLIERS_LISTED} rows of {@code list}, original first; returns how many were left out. */
+    private static int outlierRows(DuplicateSetResult s, List<OutlierPair> list,
+                                   java.util.function.Function<OutlierPair, String> hard, List<List<String>> rows) {
+        for (OutlierPair o : list.subList(0, Math.min(OUTLIERS_LISTED, list.size()))) {
+            rows.add(List.of(s.type().label(), o.originalId(), o.id(), o.batch(), o.original(), o.duplicate(),
+                    hard.apply(o), o.testLabels()));
+        }
+        return Math.max(0, list.size() - OUTLIERS_LISTED);
     }
 
     private static ReportTable orphanTable(DuplicateReport r) {
