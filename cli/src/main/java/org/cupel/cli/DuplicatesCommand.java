@@ -185,7 +185,8 @@ public final class DuplicatesCommand implements Callable<Integer> {
                 out.println("  batch " + (b.batch().isEmpty() ? "(none)" : b.batch()) + ": "
                         + String.format(Locale.ROOT, "%.1f%%", bp.percentWithinLimit().value()) + " of "
                         + bp.usedRelative() + " pairs within HARD " + pct(bp.hardLimit(), 0)
-                        + (b.failsRule() ? " (fails the rule)" : "") + ", RMS CV " + interval(bp.rmsCv())
+                        + (b.failsRule() ? String.format(Locale.ROOT, " (fails the rule: binomial p = %.2g)",
+                        b.rule().pValue()) : "") + ", RMS CV " + interval(bp.rmsCv())
                         + (b.lessPrecise() ? String.format(Locale.ROOT,
                         " — less precise than the set (%.1f× its RMS CV, chi-square p = %.2g)",
                         b.dispersion().ratio(), b.dispersion().pValue()) : ""));
@@ -193,6 +194,7 @@ public final class DuplicatesCommand implements Callable<Integer> {
             if (shown.size() > BATCHES_SHOWN) {
                 out.println("  ... " + (shown.size() - BATCHES_SHOWN) + " more flagged batches (all in --json)");
             }
+            printTooFew(out, s);
             printOutliers(out, s);
         }
         if (!r.orphans().isEmpty()) {
@@ -201,6 +203,24 @@ public final class DuplicatesCommand implements Callable<Integer> {
         }
         out.println();
         out.flush();
+    }
+
+    /** Batches whose share is below the rule but whose pairs are too few to show it (BatchRuleTest). */
+    private static void printTooFew(PrintWriter out, DuplicateSetResult s) {
+        List<BatchPrecision> few = s.batches().stream().filter(BatchPrecision::tooFewPairs).toList();
+        if (few.isEmpty()) {
+            return;
+        }
+        BatchPrecision first = few.get(0);
+        StringBuilder sb = new StringBuilder("  " + few.size() + (few.size() == 1 ? " batch" : " batches")
+                + " below " + Numbers.compact(first.rule().acceptancePercent()) + " % within but too few pairs to "
+                + "judge (one-sided binomial p >= " + Numbers.compact(first.rule().alpha()) + "): ");
+        for (int i = 0; i < Math.min(BATCHES_SHOWN, few.size()); i++) {
+            BatchPrecision b = few.get(i);
+            sb.append(i == 0 ? "" : ", ").append(b.batch().isEmpty() ? "(none)" : b.batch()).append(" (")
+                    .append(b.rule().within()).append(" of ").append(b.rule().n()).append(')');
+        }
+        out.println(sb + (few.size() > BATCHES_SHOWN ? ", ..." : ""));
     }
 
     /** Flagged pairs, original first in IDs and values; those below the relative threshold apart. */

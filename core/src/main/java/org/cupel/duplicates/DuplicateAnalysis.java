@@ -79,9 +79,10 @@ public final class DuplicateAnalysis {
         }
         List<BatchPrecision> out = new ArrayList<>();
         for (Map.Entry<String, BatchPairs> e : byBatch.entrySet()) {
-            PrecisionSummary p = PrecisionMeasures.summariseBatch(type, decisions.of(e.getValue().indices()),
-                    settings);
-            out.add(new BatchPrecision(e.getKey(), p, BatchDispersion.test(p.rmsCv(), setRmsCv),
+            ScreenedPairs batch = decisions.of(e.getValue().indices());
+            BatchRuleTest rule = PrecisionMeasures.batchRule(type, batch, settings);
+            PrecisionSummary p = PrecisionMeasures.summariseBatch(type, batch, settings, rule);
+            out.add(new BatchPrecision(e.getKey(), p, rule, BatchDispersion.test(p.rmsCv(), setRmsCv),
                     settings.batchTestAlpha()));
         }
         return out;

@@ -104,6 +104,8 @@ public final class DuplicatesSection {
             }
             headlines.put(key + ".rule", p.rule().name());
             headlines.put(key + ".batchesFailingRule", set.batches().stream().filter(BatchPrecision::failsRule).count());
+            headlines.put(key + ".batchesTooFewPairs", set.batches().stream().filter(BatchPrecision::tooFewPairs)
+                    .count());
             headlines.put(key + ".batchesLessPrecise",
                     set.batches().stream().filter(BatchPrecision::lessPrecise).count());
             if (set.bias().meanRelativeBias().available()) {
@@ -227,6 +229,7 @@ public final class DuplicatesSection {
                 rows.add(List.of(b.batch().isEmpty() ? "(no batch)" : b.batch(), s.type().label(),
                         Integer.toString(p.pairs()), Integer.toString(p.usedRelative()),
                         value(p.percentWithinLimit(), 1, ""), p.rule().name().toLowerCase(Locale.ROOT).replace('_', ' '),
+                        b.rule().n() > 0 ? p(b.rule().pValue()) : b.rule().note(),
                         p.rmsCv().available() ? pct2(p.rmsCv().value()) : p.rmsCv().note(),
                         b.dispersion().available() ? fmt(b.dispersion().ratio(), 3) : "",
                         b.dispersion().available() ? p(b.dispersion().pValue()) : b.dispersion().note(),
@@ -234,11 +237,13 @@ public final class DuplicatesSection {
             }
         }
         return new ReportTable("duplicates-batches-" + r.analyte(), r.analyte() + ": precision by batch",
-                List.of("Batch", "Type", "Pairs", "Used (relative)", "% within limit", "Rule", "RMS CV",
-                        "RMS CV / set's", "p (chi-square)", "Flag"), rows,
-                "A batch fails the rule when fewer than the required share of its pairs lie within the type's HARD "
-                        + "limit; with few pairs per batch one wide pair decides. The chi-square test of the batch's "
-                        + "RMS CV against the set's (NIST/SEMATECH e-Handbook 7.2.3.1) flags a batch that is "
+                List.of("Batch", "Type", "Pairs", "Used (relative)", "% within limit", "Rule", "p (binomial)",
+                        "RMS CV", "RMS CV / set's", "p (chi-square)", "Flag"), rows,
+                "A batch has few pairs, and one wide pair moves its share by tens of points, so it fails the rule "
+                        + "only when the one-sided exact binomial test rejects \"share within the HARD limit ≥ the "
+                        + "required share\" (p below duplicates.batchRuleAlpha, default 0.05); a share below the rule "
+                        + "that the test cannot show is \"too few pairs\" (to judge), not a failure. The chi-square "
+                        + "test of the batch's RMS CV against the set's (NIST/SEMATECH e-Handbook 7.2.3.1) flags a batch that is "
                         + "significantly less precise; it assumes one relative error over the grade range, and with "
                         + "many batches about 1 in 100 is flagged by chance at the default level.");
     }
