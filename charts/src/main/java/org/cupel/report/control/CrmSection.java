@@ -111,7 +111,8 @@ public final class CrmSection {
             }
         }
         return new ReportTable("crm-rules", "Rules in force", List.of("Rule", "Action", "Looks for", "Source"), rows,
-                "Limits are strict (beyond 2 SD means |z| > 2); runs count consecutive results of one CRM across "
+                "Limits are strict (beyond 2 SD means |z| > 2; a result exactly on a limit in its reported decimals is "
+                        + "not beyond it); runs count consecutive results of one CRM across "
                         + "batches; R-4s looks within one batch. See docs/control-rules.md.");
     }
 

@@ -11,6 +11,7 @@ import org.cupel.duplicates.DuplicateAnalysis;
 import org.cupel.duplicates.DuplicatePair;
 import org.cupel.duplicates.DuplicateReport;
 import org.cupel.duplicates.DuplicateSettings;
+import org.cupel.charts.duplicates.SimulatedPairs;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportTable;
 import org.junit.jupiter.api.Test;
@@ -18,25 +19,18 @@ import org.junit.jupiter.api.Test;
 /**
  * The report's flagged-pairs table: the original's ID beside the original's value, the duplicate's beside the
  * duplicate's (the demo's lab repeat VH0001166 = 0.783, VH0001166-R = 0.895 was printed crossed), and a pair
- * below 10 × DL without a HARD ranking. Same hand-built set as core FlaggedPairsTest: 66 pulp pairs with a 2 %
- * spread, O-HI / D-HI = 1.00 / 1.50 (HARD 20 %), O-LO / D-LO = 0.005 / 0.030 at DL 0.005 (mean below 0.05).
+ * below 10 × DL without a HARD ranking. The 300 simulated pulp pairs of {@link SimulatedPairs} (DL 0.01) plus
+ * O-HI / D-HI = 1.00 / 1.50 (HARD 0.5 / 2.5 = 20 %, above the 10 % limit) and O-LO / D-LO = 0.01 / 0.09 (mean
+ * 0.05 below 10 × 0.01 = 0.1; |d| = 0.08, about six times σ_c = 0.01 + 0.05·0.05 there, so above the 99 % line).
  */
 class FlaggedPairsTableTest {
 
-    private static DuplicatePair pair(String id, String originalId, double original, double duplicate) {
-        return new DuplicatePair(id, originalId, "J1", QcRole.PULP_DUPLICATE, AssayValue.detected(original, 0.005),
-                AssayValue.detected(duplicate, 0.005));
-    }
-
     private static ReportTable table() {
-        List<DuplicatePair> pairs = new ArrayList<>();
-        for (int i = 0; i < 66; i++) {
-            double c = 0.2 * Math.pow(1.05, i);
-            double spread = 0.02 * ((i % 5) - 2) / 2.0;
-            pairs.add(pair("D" + i, "O" + i, c * (1 + spread), c * (1 - spread)));
-        }
-        pairs.add(pair("D-HI", "O-HI", 1.00, 1.50));
-        pairs.add(pair("D-LO", "O-LO", 0.005, 0.030));
+        List<DuplicatePair> pairs = new ArrayList<>(SimulatedPairs.pairs(300, 0, 7L));
+        pairs.add(new DuplicatePair("D-HI", "O-HI", "J1", QcRole.PULP_DUPLICATE, AssayValue.detected(1.00, 0.01),
+                AssayValue.detected(1.50, 0.01)));
+        pairs.add(new DuplicatePair("D-LO", "O-LO", "J1", QcRole.PULP_DUPLICATE, AssayValue.detected(0.01, 0.01),
+                AssayValue.detected(0.09, 0.01)));
         DuplicateReport r = DuplicateAnalysis.run("Au", "g/t", pairs, List.of(), new double[0],
                 DuplicateSettings.DEFAULTS);
         return DuplicatesSection.build(List.of(r), k -> false).blocks().stream()
@@ -44,22 +38,32 @@ class FlaggedPairsTableTest {
                 .filter(t -> t.id().equals("duplicates-outliers-Au")).findFirst().orElseThrow();
     }
 
+    private static int rowOf(List<List<String>> rows, String originalId) {
+        for (int i = 0; i < rows.size(); i++) {
+            if (rows.get(i).get(1).equals(originalId)) {
+                return i;
+            }
+        }
+        throw new AssertionError(originalId + " not listed: " + rows);
+    }
+
     @Test
     void originalIdSitsBesideTheOriginalValue() {
         ReportTable t = table();
         assertEquals(List.of("Type", "Original ID", "Duplicate ID", "Batch", "Original", "Duplicate", "HARD",
                 "Flagged by"), t.columns());
-        List<String> hi = t.rows().get(0);
+        List<String> hi = t.rows().get(rowOf(t.rows(), "O-HI"));
         assertEquals(List.of("O-HI", "D-HI", "1", "1.5", "20.0 %"), List.of(hi.get(1), hi.get(2), hi.get(4),
                 hi.get(5), hi.get(6)));
     }
 
     @Test
-    void aPairBelowTheRelativeThresholdComesLastWithoutHard() {
+    void aPairBelowTheRelativeThresholdComesAfterTheRankedPairsWithoutHard() {
         List<List<String>> rows = table().rows();
-        List<String> last = rows.get(rows.size() - 1);
-        assertEquals("O-LO", last.get(1));
-        assertEquals("not used: mean < 10× DL", last.get(6));
-        assertTrue(rows.subList(0, rows.size() - 1).stream().noneMatch(r -> r.get(1).equals("O-LO")));
+        int lo = rowOf(rows, "O-LO");
+        assertEquals("not used: mean < 10× DL", rows.get(lo).get(6));
+        assertTrue(rows.subList(lo, rows.size()).stream().allMatch(r -> r.get(6).startsWith("not used")),
+                "pairs below the threshold come after every pair ranked by HARD");
+        assertTrue(lo > rowOf(rows, "O-HI"));
     }
 }

@@ -35,6 +35,15 @@ class DriftOutlierTest {
         return z;
     }
 
+    /** 15 background results, then 15 at {@code level} ± 0.3. */
+    private static double[] stepTo(double level) {
+        double[] z = background(30);
+        for (int i = 15; i < 30; i++) {
+            z[i] += level;
+        }
+        return z;
+    }
+
     @Test
     void oneFiveSdResultIsAnOutlierNotDrift() {
         // 30 results, result 16 at +5 SD (1.250). Before the spike the EWMA oscillates about ±0.033 (E = 0.06 +
@@ -61,11 +70,7 @@ class DriftOutlierTest {
     void aStepShiftIsDrift() {
         // 15 background results, then 15 at +1.5 ± 0.3 (z 1.8, 1.2, ...): C⁺ grows by 1.3 and 0.7 in turn, so it
         // passes h = 5 at the sixth shifted result (1.3 + 0.7 + 1.3 + 0.7 + 1.3 + 0.7 = 6.0). No result is beyond 3.
-        double[] z = background(30);
-        for (int i = 15; i < 30; i++) {
-            z[i] = 1.5 + (i % 2 == 0 ? 0.3 : -0.3);
-        }
-        SeriesDrift d = review(z).drift();
+        SeriesDrift d = review(stepTo(1.5)).drift();
         assertTrue(d.drifting());
         assertEquals(List.of(), d.outliers());
         assertTrue(d.findings().stream().anyMatch(f -> f.startsWith("CUSUM")), d.findings().toString());
@@ -76,11 +81,7 @@ class DriftOutlierTest {
     void aLargeStepShiftBeyondThreeSdIsDriftNotOutliers() {
         // 15 background results, then 15 at +4 ± 0.3 (z 4.3, 3.7): every shifted result is beyond 3 SD but has a
         // neighbour beyond 2 SD on its side, so none is isolated and the shift stays in the drift statistics.
-        double[] z = background(30);
-        for (int i = 15; i < 30; i++) {
-            z[i] = 4 + (i % 2 == 0 ? 0.3 : -0.3);
-        }
-        SeriesDrift d = review(z).drift();
+        SeriesDrift d = review(stepTo(4)).drift();
         assertTrue(d.drifting());
         assertEquals(List.of(), d.outliers());
     }
