@@ -107,6 +107,8 @@ final class ThresholdsInForce {
                 + "× DL are left out of relative measures", PRACTICE);
         add("duplicates.batchTestAlpha", s.batchTestAlpha(), "significance level of a batch's RMS CV against "
                 + "its set's", PRACTICE);
+        add("duplicates.batchRuleAlpha", s.batchRuleAlpha(), "a batch fails the acceptance rule only when the "
+                + "one-sided binomial test of its share within the HARD limit gives p below this", PRACTICE);
         add("duplicates.thGroupSize", s.thGroupSize(), "pairs per Thompson–Howarth group",
                 "Thompson & Howarth 1978 (recalled from memory)");
         add("duplicates.thMinimumPairs", s.thMinimumPairs(), "fewest usable pairs for a precision model",
@@ -128,6 +130,10 @@ final class ThresholdsInForce {
     private void reassay(ReassaySettings s) {
         add("reassay.scope", s.scope().name().toLowerCase(java.util.Locale.ROOT), "which samples a failed control "
                 + "sends for re-assay", PRACTICE);
+        add("reassay.crmBracket", s.crmBracket().name().toLowerCase(java.util.Locale.ROOT), "what bounds the "
+                + "bracket of a failed CRM (passing CRMs; blanks do not test accuracy at grade)", PRACTICE);
+        add("reassay.blankFollowing", s.blankFollowing(), "most samples a failed blank sends back (0: up to the "
+                + "next passing blank)", PRACTICE);
     }
 
     private void censored(CensoredSettings s) {

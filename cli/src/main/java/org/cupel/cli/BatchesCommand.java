@@ -15,6 +15,7 @@ import org.cupel.control.BatchReview;
 import org.cupel.control.BatchVerdict;
 import org.cupel.control.InsertionRate;
 import org.cupel.control.ReassayEntry;
+import org.cupel.control.ReassaySettings;
 import org.cupel.control.Verdict;
 import org.cupel.control.VerdictReason;
 import org.cupel.control.crm.CrmReview;
@@ -110,7 +111,10 @@ final class BatchesCommand implements Callable<Integer> {
             out.println("Re-assay list: empty (no control failure calls for re-assay).");
         } else {
             out.println("Re-assay list (" + review.reassay().entries().size() + " sample results, scope "
-                    + review.reassay().scope() + ")");
+                    + review.reassay().scope() + (review.reassay().scope() == ReassaySettings.Scope.BRACKET
+                    ? ", CRM brackets bounded by " + (review.reassay().crmBracket()
+                    == ReassaySettings.CrmBracket.PASSING_CRM ? "passing CRMs" : "passing CRMs or blanks") : "")
+                    + ")");
             TextTable r = new TextTable("Sample", "Batch", "Position", "Analyte", "Triggered by");
             for (ReassayEntry e : review.reassay().entries()) {
                 r.row(e.sampleId(), e.batch(), e.position(), e.analyte(), String.join(", ", e.triggeredBy()));

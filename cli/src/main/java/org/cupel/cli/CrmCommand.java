@@ -148,6 +148,8 @@ public final class CrmCommand implements Callable<Integer> {
         out.println();
         for (SeriesReview s : r.series()) {
             s.drift().findings().forEach(f -> out.printf("Drift, %s %s: %s%n", s.crm(), s.analyte().name(), f));
+            s.drift().outliers().forEach(o -> out.printf("Outlier, %s %s: %s%n", s.crm(), s.analyte().name(),
+                    o.finding()));
         }
         for (AnalyteReview a : r.analytes()) {
             a.drift().findings().forEach(f -> out.printf("Drift, all CRMs %s: %s%n", a.analyte(), f));

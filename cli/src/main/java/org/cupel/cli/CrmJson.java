@@ -122,14 +122,23 @@ final class CrmJson {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("timeAxis", d.timeAxis());
         m.put("trend", fit(d.trend()));
-        m.put("ewmaFirstSignal", d.ewma().firstSignal() < 0 ? null : d.ewma().firstSignal() + 1);
+        m.put("ewmaFirstSignal", d.ewma().firstSignal() < 0 ? null : d.judgedIndex(d.ewma().firstSignal()) + 1);
         m.put("ewmaLambda", d.ewma().lambda());
         m.put("ewmaL", d.ewma().width());
-        m.put("cusumFirstSignal", d.cusum().firstSignal() < 0 ? null : d.cusum().firstSignal() + 1);
+        m.put("cusumFirstSignal", d.cusum().firstSignal() < 0 ? null : d.judgedIndex(d.cusum().firstSignal()) + 1);
         m.put("cusumK", d.cusum().k());
         m.put("cusumH", d.cusum().h());
         m.put("drifting", d.drifting());
         m.put("findings", d.findings());
+        m.put("outliers", d.outliers().stream().map(o -> {
+            Map<String, Object> x = new LinkedHashMap<>();
+            x.put("result", o.index() + 1);
+            x.put("sampleId", o.sampleId());
+            x.put("batch", o.batchId());
+            x.put("z", o.z());
+            x.put("finding", o.finding());
+            return x;
+        }).toList());
         return m;
     }
 

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.cupel.assay.Numbers;
 import org.cupel.assay.QcRole;
 import org.cupel.charts.PngWriter;
 import org.cupel.charts.duplicates.DuplicateCharts;
@@ -196,7 +197,8 @@ public final class DuplicatesCommand implements Callable<Integer> {
                 out.println("  batch " + (b.batch().isEmpty() ? "(none)" : b.batch()) + ": "
                         + String.format(Locale.ROOT, "%.1f%%", bp.percentWithinLimit().value()) + " of "
                         + bp.usedRelative() + " pairs within HARD " + pct(bp.hardLimit(), 0)
-                        + (b.failsRule() ? " (fails the rule)" : "") + ", RMS CV " + interval(bp.rmsCv())
+                        + (b.failsRule() ? String.format(Locale.ROOT, " (fails the rule: binomial p = %.2g)",
+                        b.rule().pValue()) : "") + ", RMS CV " + interval(bp.rmsCv())
                         + (b.lessPrecise() ? String.format(Locale.ROOT,
                         " — less precise than the set (%.1f× its RMS CV, chi-square p = %.2g)",
                         b.dispersion().ratio(), b.dispersion().pValue()) : ""));
@@ -204,15 +206,8 @@ public final class DuplicatesCommand implements Callable<Integer> {
             if (shown.size() > BATCHES_SHOWN) {
                 out.println("  ... " + (shown.size() - BATCHES_SHOWN) + " more flagged batches (all in --json)");
             }
-            List<OutlierPair> o = s.outliers();
-            if (!o.isEmpty()) {
-                out.println("  " + o.size() + " flagged pairs; largest HARD:");
-                for (OutlierPair x : o.subList(0, Math.min(5, o.size()))) {
-                    out.println("    " + x.id() + (x.originalId().isEmpty() ? "" : " / " + x.originalId())
-                            + (x.batch().isEmpty() ? "" : " [" + x.batch() + "]") + ": " + x.original() + " vs "
-                            + x.duplicate() + ", HARD " + pct(x.hard(), 1) + " — " + x.testLabels());
-                }
-            }
+            printTooFew(out, s);
+            printOutliers(out, s);
         }
         if (!r.orphans().isEmpty()) {
             out.println(r.orphans().size() + " duplicates without an original, e.g. " + r.orphans().get(0).id() + ": "
@@ -220,6 +215,49 @@ public final class DuplicatesCommand implements Callable<Integer> {
         }
         out.println();
         out.flush();
+    }
+
+    /** Batches whose share is below the rule but whose pairs are too few to show it (BatchRuleTest). */
+    private static void printTooFew(PrintWriter out, DuplicateSetResult s) {
+        List<BatchPrecision> few = s.batches().stream().filter(BatchPrecision::tooFewPairs).toList();
+        if (few.isEmpty()) {
+            return;
+        }
+        BatchPrecision first = few.get(0);
+        StringBuilder sb = new StringBuilder("  " + few.size() + (few.size() == 1 ? " batch" : " batches")
+                + " below " + Numbers.compact(first.rule().acceptancePercent()) + " % within but too few pairs to "
+                + "judge (one-sided binomial p >= " + Numbers.compact(first.rule().alpha()) + "): ");
+        for (int i = 0; i < Math.min(BATCHES_SHOWN, few.size()); i++) {
+            BatchPrecision b = few.get(i);
+            sb.append(i == 0 ? "" : ", ").append(b.batch().isEmpty() ? "(none)" : b.batch()).append(" (")
+                    .append(b.rule().within()).append(" of ").append(b.rule().n()).append(')');
+        }
+        out.println(sb + (few.size() > BATCHES_SHOWN ? ", ..." : ""));
+    }
+
+    /** Flagged pairs, original first in IDs and values; those below the relative threshold apart. */
+    private static void printOutliers(PrintWriter out, DuplicateSetResult s) {
+        List<OutlierPair> o = s.outliers();
+        if (!o.isEmpty()) {
+            out.println("  " + o.size() + " flagged pairs (original / duplicate); largest HARD:");
+            for (OutlierPair x : o.subList(0, Math.min(5, o.size()))) {
+                out.println("    " + pairText(x) + ", HARD " + pct(x.hard(), 1) + " — " + x.testLabels());
+            }
+        }
+        List<OutlierPair> low = s.outliersBelowRelativeThreshold();
+        if (!low.isEmpty()) {
+            out.println("  " + low.size() + " pairs below the relative-measure threshold (mean < "
+                    + Numbers.compact(s.precision().limitMultiple()) + "× DL, not judged by HARD) above the 99 % "
+                    + "line; largest |d|:");
+            for (OutlierPair x : low.subList(0, Math.min(5, low.size()))) {
+                out.println("    " + pairText(x) + ", |d| " + sig(x.absDifference()));
+            }
+        }
+    }
+
+    private static String pairText(OutlierPair x) {
+        return x.idsOriginalFirst() + (x.batch().isEmpty() ? "" : " [" + x.batch() + "]") + ": " + x.original()
+                + " vs " + x.duplicate();
     }
 
     private void writeCharts(List<DuplicateReport> reports, PrintWriter out) {

@@ -52,6 +52,44 @@ class CrmCommandTest {
     }
 
     @Test
+    void aCatalogAnalyteTheResultsLackIsLeftOutNotACrash(@TempDir Path dir) throws IOException {
+        // The catalog certifies Ag as well; the results file has Au only. Before the fix: exit 3
+        // (NullPointerException in CrmData). The Au review is unchanged by the extra certificates.
+        Path results = Files.writeString(dir.resolve("crm-results.csv"), RESULTS);
+        Path catalog = Files.writeString(dir.resolve("crm-catalog.csv"), CATALOG
+                + "LOW,Ag,ppm,3.8,0.3\nMID,Ag,ppm,11.4,0.6\nOTHER,Cu,%,0.2,0.008\n");
+        Run r = run("crm", "--results", results.toString(), "--catalog", catalog.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("12 results in 3 series: 1 failures, 0 warnings, 1 probable swaps, 2 exceptions"),
+                r.out());
+        assertTrue(!r.out().contains("Ag ("), "no Ag series: " + r.out());
+        Run json = run("crm", "--results", results.toString(), "--catalog", catalog.toString(), "--json");
+        assertEquals(0, json.code(), json.err());
+        assertEquals(3, new ObjectMapper().readTree(json.out()).get("series").size());
+    }
+
+    @Test
+    void aSingleFiveSdResultIsReportedAsAnOutlierNotDrift(@TempDir Path dir) throws IOException {
+        // LOW (0.50 ± 0.03) over 30 batches alternating 0.509 / 0.491 (z ±0.3), batch 16 at 0.65 (z +5). The
+        // EWMA (λ 0.2) jumps to about 1.03 against a limit of 1.00 at that result: drift before the outlier rule.
+        StringBuilder csv = new StringBuilder("crm,batch,position,Au_ppm\n");
+        for (int i = 1; i <= 30; i++) {
+            String v = i == 16 ? "0.65" : i % 2 == 1 ? "0.509" : "0.491";
+            csv.append("LOW,J").append(String.format("%02d", i)).append(",1,").append(v).append('\n');
+        }
+        Path results = Files.writeString(dir.resolve("spike.csv"), csv.toString());
+        Path catalog = Files.writeString(dir.resolve("crm-catalog.csv"), CATALOG);
+        Run r = run("crm", "--results", results.toString(), "--catalog", catalog.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("Outlier, LOW Au: line 17 (batch J16, result 16, z = +5"), r.out());
+        assertTrue(!r.out().contains("Drift, "), r.out());
+        JsonNode drift = new ObjectMapper().readTree(run("crm", "--results", results.toString(), "--catalog",
+                catalog.toString(), "--json").out()).get("series").get(0).get("drift");
+        assertEquals(false, drift.get("drifting").asBoolean());
+        assertEquals(16, drift.get("outliers").get(0).get("result").asInt());
+    }
+
+    @Test
     void jsonModeFollowsDocumentedSchema(@TempDir Path dir) throws IOException {
         Path[] f = files(dir);
         Run r = run("crm", "--results", f[0].toString(), "--catalog", f[1].toString(), "--json");

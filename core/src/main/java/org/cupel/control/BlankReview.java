@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.AssayValue;
+import org.cupel.assay.LimitComparison;
 import org.cupel.assay.MissingReason;
 import org.cupel.assay.Numbers;
 import org.cupel.assay.QcRole;
@@ -129,7 +130,7 @@ public final class BlankReview {
         }
         boolean carry = v.verdict() == Verdict.FAIL && t != null && !prev.isMissing()
                 && prev.qualifier() != org.cupel.assay.Qualifier.BELOW_DETECTION
-                && prev.value() >= settings.highGradeMultiple() * t.fail();
+                && LimitComparison.atLeast(prev.value(), settings.highGradeMultiple() * t.fail());
         ControlOutcome outcome = ControlOutcome.described(o.row(), o.analyte(), v.verdict(), v.rule(),
                 () -> reason(o, v, carry), v.verdict() == Verdict.FAIL);
         return new BlankResult(o, t, v, ratio, ratioNote, carry, outcome);

@@ -1,5 +1,7 @@
 package org.cupel.control;
 
+import org.cupel.assay.LimitComparison;
+
 /**
  * The warning and failure levels in force for one blank result, in the analyte's unit. A result
  * exceeds a level only when it is strictly above it: a blank reported at exactly 5×DL passes the 5×DL
@@ -13,16 +15,16 @@ package org.cupel.control;
 public record BlankThreshold(double warn, double fail, String failRule, String warnRule) {
 
     /**
-     * Relative slack in the comparison: reported values are short decimals, and 5 × 0.01 need not equal
-     * the double nearest 0.05, so a value equal to a level at printed precision is not "above" it.
+     * Whether {@code value} is above the failure level. Reported values are short decimals and 3 × 0.1 is
+     * not the double nearest 0.3, so the comparison is {@link LimitComparison#above}: a value equal to the
+     * level at printed precision is not above it.
      */
-    static final double RELATIVE_SLACK = 1e-9;
-
     public boolean aboveFail(double value) {
-        return value > fail * (1 + RELATIVE_SLACK);
+        return LimitComparison.above(value, fail);
     }
 
+    /** Whether {@code value} is above the warning level, compared as {@link #aboveFail}. */
     public boolean aboveWarn(double value) {
-        return value > warn * (1 + RELATIVE_SLACK);
+        return LimitComparison.above(value, warn);
     }
 }

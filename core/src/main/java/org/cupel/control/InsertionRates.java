@@ -2,6 +2,7 @@ package org.cupel.control;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.cupel.assay.LimitComparison;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
 
@@ -65,7 +66,7 @@ public record InsertionRates(List<BatchInsertion> batches, BatchInsertion overal
             int c = countsByRole[role.ordinal()];
             double rate = routine == 0 ? Double.NaN : (double) c / routine;
             double target = settings.target(role);
-            boolean low = target > 0 && routine > 0 && rate < target;
+            boolean low = target > 0 && routine > 0 && LimitComparison.below(rate, target);
             below |= low;
             rates.add(new InsertionRate(role.label(), c, routine, rate, target, low));
         }

@@ -12,9 +12,15 @@ import org.cupel.assay.SampleTable;
 /**
  * The samples to re-assay, from control outcomes of any source (common practice):
  * <ul>
- *   <li>a failed CRM (or any non-blank control): the samples between the nearest passing control samples
- *       (CRM or blank) before and after it in the batch, or the batch start / end when there is none;</li>
- *   <li>a failed blank: the samples after it up to the next passing blank, or the batch end;</li>
+ *   <li>a failed CRM (or any non-blank control): the samples between the nearest passing CRMs before and after
+ *       it in the batch, or the batch start / end when there is none. A blank is passed over: it shows that
+ *       nothing was carried into the run at detection level, not that the samples around it were measured
+ *       accurately at grade. ({@link ReassaySettings.CrmBracket#PASSING_CONTROL} lets a passing blank bound the
+ *       bracket as well.)</li>
+ *   <li>a failed blank: the samples after it up to the next passing blank, or the batch end: contamination
+ *       (carry-over from a high-grade sample, a dirty pulveriser bowl or crucible) reaches forward in run order
+ *       until a clean blank shows it has stopped; the sample before a blank is the likely source, not a victim.
+ *       {@link ReassaySettings#blankFollowing()} caps the count where blanks are sparse;</li>
  *   <li>with {@link ReassaySettings.Scope#WHOLE_BATCH}: every sample of the batch.</li>
  * </ul>
  * "Passing" is per analyte: a control whose outcomes for that analyte are all PASS or WARN (a warning
@@ -26,9 +32,11 @@ import org.cupel.assay.SampleTable;
  * @param entries one per sample and analyte, in batch, position and analyte order
  * @param brackets one per triggering outcome, in the order of the entries
  * @param scope the scope in force
+ * @param crmBracket what bounds the bracket of a failed CRM
+ * @param blankFollowing the cap on samples after a failed blank, 0 for none
  */
 public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brackets,
-                          ReassaySettings.Scope scope) {
+                          ReassaySettings.Scope scope, ReassaySettings.CrmBracket crmBracket, int blankFollowing) {
 
     private static final Verdict[] VERDICTS = Verdict.values();
 
@@ -75,7 +83,7 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
         List<ReassayBracket> brackets = new ArrayList<>();
         for (ControlOutcome o : triggers) {
             int a = analyteIndex.get(o.analyte());
-            brackets.add(bracket(table, seq, o, status[a], settings.scope(), row -> byKey.computeIfAbsent(
+            brackets.add(bracket(table, seq, o, status[a], settings, row -> byKey.computeIfAbsent(
                     (startOfBatch[seq.batchOf(row)] + seq.indexInBatch(row)) * analytes.size() + a,
                     key -> new Builder(row, o.analyte()))));
         }
@@ -84,61 +92,86 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
         for (long key : keys) {
             entries.add(byKey.get(key).build(table, seq));
         }
-        return new ReassayList(entries, brackets, settings.scope());
+        return new ReassayList(entries, brackets, settings.scope(), settings.crmBracket(), settings.blankFollowing());
     }
 
     private static ReassayBracket bracket(SampleTable table, BatchSequence seq, ControlOutcome o, byte[] status,
-                                          ReassaySettings.Scope scope, IntFunction<Builder> entry) {
+                                          ReassaySettings settings, IntFunction<Builder> entry) {
         int b = seq.batchOf(o.row());
-        int size = seq.batchSize(b);
-        int at = seq.indexInBatch(o.row());
-        boolean blank = table.role(o.row()) == QcRole.BLANK;
-        int from;
-        int to;
-        String note;
-        if (scope == ReassaySettings.Scope.WHOLE_BATCH) {
-            from = 0;
-            to = size - 1;
-            note = "whole batch";
-        } else if (blank) {
-            int next = nextPassing(table, seq, b, at, +1, status, true);
-            from = at + 1;
-            to = next < 0 ? size - 1 : next - 1;
-            note = "after the blank, up to " + (next < 0 ? "the end of the batch (no passing blank after it)"
-                    : "passing blank " + table.id(seq.row(b, next)));
-        } else {
-            int prev = nextPassing(table, seq, b, at, -1, status, false);
-            int next = nextPassing(table, seq, b, at, +1, status, false);
-            from = prev < 0 ? 0 : prev + 1;
-            to = next < 0 ? size - 1 : next - 1;
-            note = "from " + (prev < 0 ? "the start of the batch (no passing control before it)"
-                    : "passing control " + table.id(seq.row(b, prev))) + " to "
-                    + (next < 0 ? "the end of the batch (no passing control after it)"
-                    : "passing control " + table.id(seq.row(b, next)));
-        }
+        Range r = range(table, seq, o.row(), status, settings);
         int n = 0;
+        int to = r.to();
         String why = table.role(o.row()).label() + " " + table.id(o.row()) + " failed (" + o.rule() + ")";
-        for (int k = from; k <= to; k++) {
+        for (int k = r.from(); k <= r.to() && n < r.cap(); k++) {
             int row = seq.row(b, k);
-            if (!isReassayed(table.role(row))) {
-                continue;
+            if (isReassayed(table.role(row))) {
+                n++;
+                to = k;
+                entry.apply(row).add(table.id(o.row()), why);
             }
-            n++;
-            entry.apply(row).add(table.id(o.row()), why);
         }
-        int fromPosition = from <= to ? table.position(seq.row(b, from)) : table.position(o.row());
-        int toPosition = from <= to ? table.position(seq.row(b, to)) : table.position(o.row());
+        to = n == r.cap() ? to : r.to();
+        int fromPosition = r.from() <= to ? table.position(seq.row(b, r.from())) : table.position(o.row());
+        int toPosition = r.from() <= to ? table.position(seq.row(b, to)) : table.position(o.row());
         return new ReassayBracket(table.id(o.row()), table.role(o.row()).label(), seq.batch(b).id(),
-                o.analyte(), o.rule(), fromPosition, toPosition, n, note);
+                o.analyte(), o.rule(), fromPosition, toPosition, n, r.note());
     }
 
-    /** Index in batch {@code b} of the nearest passing control in direction {@code step}, or -1. */
+    /** Indices in the batch a failed control reaches, at most {@code cap} listed samples, and how it was bounded. */
+    private record Range(int from, int to, int cap, String note) {
+    }
+
+    private static Range range(SampleTable table, BatchSequence seq, int failed, byte[] status,
+                               ReassaySettings settings) {
+        int b = seq.batchOf(failed);
+        int size = seq.batchSize(b);
+        int at = seq.indexInBatch(failed);
+        if (settings.scope() == ReassaySettings.Scope.WHOLE_BATCH) {
+            return new Range(0, size - 1, Integer.MAX_VALUE, "whole batch");
+        }
+        if (table.role(failed) == QcRole.BLANK) {
+            int next = nextPassing(table, seq, b, at, +1, status, Bound.BLANK);
+            int cap = settings.blankFollowing() > 0 ? settings.blankFollowing() : Integer.MAX_VALUE;
+            return new Range(at + 1, next < 0 ? size - 1 : next - 1, cap, "after the blank, up to "
+                    + (next < 0 ? "the end of the batch (no passing blank after it)"
+                    : "passing blank " + table.id(seq.row(b, next)))
+                    + (cap < Integer.MAX_VALUE ? ", at most " + cap + " samples (reassay.blankFollowing)" : ""));
+        }
+        Bound bound = settings.crmBracket() == ReassaySettings.CrmBracket.PASSING_CRM ? Bound.CRM : Bound.CONTROL;
+        int prev = nextPassing(table, seq, b, at, -1, status, bound);
+        int next = nextPassing(table, seq, b, at, +1, status, bound);
+        return new Range(prev < 0 ? 0 : prev + 1, next < 0 ? size - 1 : next - 1, Integer.MAX_VALUE, "from "
+                + (prev < 0 ? "the start of the batch (no " + bound.label + " before it)"
+                : bound.label + " " + table.id(seq.row(b, prev))) + " to "
+                + (next < 0 ? "the end of the batch (no " + bound.label + " after it)"
+                : bound.label + " " + table.id(seq.row(b, next))));
+    }
+
+    /** Which controls end a bracket when they pass. */
+    private enum Bound {
+        CRM("passing CRM"), BLANK("passing blank"), CONTROL("passing control");
+
+        private final String label;
+
+        Bound(String label) {
+            this.label = label;
+        }
+
+        boolean admits(QcRole role) {
+            switch (this) {
+                case CRM: return role == QcRole.CRM;
+                case BLANK: return role == QcRole.BLANK;
+                default: return isControl(role);
+            }
+        }
+    }
+
+    /** Index in batch {@code b} of the nearest passing control of kind {@code bound} in direction {@code step}, or -1. */
     private static int nextPassing(SampleTable table, BatchSequence seq, int b, int at, int step, byte[] status,
-                                   boolean blanksOnly) {
+                                   Bound bound) {
         for (int k = at + step; k >= 0 && k < seq.batchSize(b); k += step) {
             int row = seq.row(b, k);
-            QcRole role = table.role(row);
-            if (blanksOnly ? role != QcRole.BLANK : !isControl(role)) {
+            if (!bound.admits(table.role(row))) {
                 continue;
             }
             int v = status[row] - 1;

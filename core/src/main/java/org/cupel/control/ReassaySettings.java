@@ -5,26 +5,54 @@ package org.cupel.control;
  *
  * <pre>
  * reassay:
- *   scope: BRACKET      # or WHOLE_BATCH
+ *   scope: BRACKET             # or WHOLE_BATCH
+ *   crmBracket: PASSING_CRM    # or PASSING_CONTROL
+ *   blankFollowing: 0          # 0: up to the next passing blank; N: at most N samples after a failed blank
  * </pre>
  *
  * @param scope {@link Scope#BRACKET} (default, common practice) or {@link Scope#WHOLE_BATCH}
+ * @param crmBracket what bounds the bracket of a failed CRM: the nearest passing CRMs (default) or the nearest
+ *     passing control of any kind, blanks included
+ * @param blankFollowing at most this many samples after a failed blank go back (still stopping at the next passing
+ *     blank); 0 (default) for no cap
  */
-public record ReassaySettings(Scope scope) {
-    public static final ReassaySettings DEFAULTS = new ReassaySettings(Scope.BRACKET);
+public record ReassaySettings(Scope scope, CrmBracket crmBracket, int blankFollowing) {
+    public static final ReassaySettings DEFAULTS = new ReassaySettings(Scope.BRACKET, CrmBracket.PASSING_CRM, 0);
 
     public ReassaySettings {
         scope = scope == null ? Scope.BRACKET : scope;
+        crmBracket = crmBracket == null ? CrmBracket.PASSING_CRM : crmBracket;
+        if (blankFollowing < 0) {
+            throw new IllegalArgumentException("reassay.blankFollowing must be 0 (up to the next passing blank) or "
+                    + "a positive number of samples, got " + blankFollowing);
+        }
+    }
+
+    /** The settings of {@code scope} with the default brackets. */
+    public ReassaySettings(Scope scope) {
+        this(scope, CrmBracket.PASSING_CRM, 0);
     }
 
     /** How far a re-assay request reaches. */
     public enum Scope {
         /**
-         * A failed CRM: the samples between the nearest passing control samples before and after it; a
-         * failed blank: the samples after it up to the next passing blank.
+         * A failed CRM: the samples between the nearest passing controls before and after it ({@link CrmBracket});
+         * a failed blank: the samples after it up to the next passing blank.
          */
         BRACKET,
         /** Every non-control sample of the batch. */
         WHOLE_BATCH
+    }
+
+    /**
+     * What bounds the bracket of a failed CRM. A CRM tests accuracy at grade; a blank tests contamination at
+     * detection level and says nothing about a bias at grade, so by default only a passing CRM shows that the
+     * samples beyond it were measured accurately (common practice).
+     */
+    public enum CrmBracket {
+        /** The nearest passing CRM (of the same analyte) before and after the failed one (default). */
+        PASSING_CRM,
+        /** The nearest passing control of any kind, a blank included (how Cupel bracketed before this setting). */
+        PASSING_CONTROL
     }
 }

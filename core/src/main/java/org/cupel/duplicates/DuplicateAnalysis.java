@@ -7,6 +7,7 @@ import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.cupel.assay.LimitComparison;
 import org.cupel.assay.QcRole;
 
 /** Runs the whole duplicate analysis of one analyte over a list of pairs, per type and per batch. */
@@ -56,8 +57,9 @@ public final class DuplicateAnalysis {
         PrecisionSummary precision = PrecisionMeasures.summarise(type, screened, settings);
         PrecisionModelResult model = ThompsonHowarth.fit(abs.a(), abs.b(), grades, settings);
         BiasResult bias = BiasAnalysis.compare(type, rel.a(), rel.b());
-        List<OutlierPair> outliers = outliers(screened, model, settings.hardLimit(type));
-        return new DuplicateSetResult(analyte, unit, type, precision, model, bias, outliers,
+        Flagged outliers = outliers(screened, model, settings.hardLimit(type));
+        return new DuplicateSetResult(analyte, unit, type, precision, model, bias, outliers.ranked(),
+                outliers.belowThreshold(),
                 new DuplicateSetResult.PairValues(abs.a(), abs.b(), rel.a(), rel.b()),
                 batches(type, pairs, decisions, precision.rmsCv(), settings));
     }
@@ -77,9 +79,10 @@ public final class DuplicateAnalysis {
         }
         List<BatchPrecision> out = new ArrayList<>();
         for (Map.Entry<String, BatchPairs> e : byBatch.entrySet()) {
-            PrecisionSummary p = PrecisionMeasures.summariseBatch(type, decisions.of(e.getValue().indices()),
-                    settings);
-            out.add(new BatchPrecision(e.getKey(), p, BatchDispersion.test(p.rmsCv(), setRmsCv),
+            ScreenedPairs batch = decisions.of(e.getValue().indices());
+            BatchRuleTest rule = PrecisionMeasures.batchRule(type, batch, settings);
+            PrecisionSummary p = PrecisionMeasures.summariseBatch(type, batch, settings, rule);
+            out.add(new BatchPrecision(e.getKey(), p, rule, BatchDispersion.test(p.rmsCv(), setRmsCv),
                     settings.batchTestAlpha()));
         }
         return out;
@@ -107,7 +110,17 @@ public final class DuplicateAnalysis {
         }
     }
 
-    private static List<OutlierPair> outliers(ScreenedPairs set, PrecisionModelResult model, double hardLimit) {
+    /**
+     * The flagged pairs of a set: those above the 99 % line of the Thompson–Howarth model (over the pairs of
+     * absolute measures) and those above the type's HARD limit (over the pairs of relative measures). Pairs used
+     * in relative measures come in {@code ranked}, largest HARD first. Pairs whose mean is below the
+     * detection-limit multiple are not judged by HARD (near the limit a relative difference says little), so
+     * when the 99 % line flags one it goes to {@code belowThreshold}, largest |d| first.
+     */
+    private record Flagged(List<OutlierPair> ranked, List<OutlierPair> belowThreshold) {
+    }
+
+    private static Flagged outliers(ScreenedPairs set, PrecisionModelResult model, double hardLimit) {
         Map<Integer, List<OutlierPair.Test>> flagged = new java.util.TreeMap<>();
         ScreenedPairs.Members abs = set.absolute();
         if (model.available()) {
@@ -124,21 +137,25 @@ public final class DuplicateAnalysis {
         double[] a = rel.a();
         double[] b = rel.b();
         int[] rows = rel.rows();
+        boolean[] relative = new boolean[set.pairs().size()];
         for (int i = 0; i < rows.length; i++) {
-            if (PairMeasures.hard(a[i], b[i]) > hardLimit) {
+            relative[rows[i]] = true;
+            if (LimitComparison.above(PairMeasures.hard(a[i], b[i]), hardLimit)) {
                 flagged.computeIfAbsent(rows[i], k -> new ArrayList<>()).add(OutlierPair.Test.OUTSIDE_HARD_LIMIT);
             }
         }
-        List<OutlierPair> out = new ArrayList<>();
-        flagged.forEach((row, tests) -> out.add(outlier(set.pairs().get(row), tests)));
-        out.sort(Comparator.comparingDouble(OutlierPair::hard).reversed());
-        return out;
+        List<OutlierPair> ranked = new ArrayList<>();
+        List<OutlierPair> low = new ArrayList<>();
+        flagged.forEach((row, tests) -> (relative[row] ? ranked : low).add(outlier(set.pairs().get(row), tests)));
+        ranked.sort(Comparator.comparingDouble(OutlierPair::hard).reversed());
+        low.sort(Comparator.comparingDouble(OutlierPair::absDifference).reversed());
+        return new Flagged(ranked, low);
     }
 
     private static OutlierPair outlier(DuplicatePair p, List<OutlierPair.Test> tests) {
         double a = p.original().value();
         double b = p.duplicate().value();
         return new OutlierPair(p.id(), p.originalId(), p.batch(), p.original().display(), p.duplicate().display(),
-                PairMeasures.hard(a, b), tests);
+                PairMeasures.hard(a, b), PairMeasures.absDifference(a, b), tests);
     }
 }

@@ -30,19 +30,23 @@ import org.cupel.config.SettingException;
  *     bootstrap's own Monte Carlo error (checked in {@code LargeSampleAgreementTest})
  * @param precisionGrades grades at which to state precision; empty means the project's CRM grades
  * @param batchTestAlpha significance level of the test of a batch's RMS CV against its set's (default 0.01)
+ * @param batchRuleAlpha a batch fails the acceptance rule only when the one-sided binomial test of its share
+ *     within the HARD limit against {@code acceptancePercent} gives p below this (default 0.05,
+ *     {@link BatchRuleTest})
  */
 public record DuplicateSettings(double limitMultipleOfDetection, boolean censoredAtHalfLimit,
                                 double acceptancePercent, double fieldHardLimitPercent,
                                 double coarseHardLimitPercent, double pulpHardLimitPercent,
                                 double labRepeatHardLimitPercent, double umpireHardLimitPercent, int thGroupSize,
                                 int thMinimumPairs, int bootstrapResamples, long bootstrapSeed,
-                                int bootstrapMaxPairs, List<Double> precisionGrades, double batchTestAlpha) {
+                                int bootstrapMaxPairs, List<Double> precisionGrades, double batchTestAlpha,
+                                double batchRuleAlpha) {
 
     /** Smallest allowed {@link #bootstrapMaxPairs()}: below it the normal approximation is not relied on. */
     public static final int LARGE_SAMPLE_MINIMUM = 1000;
 
     public static final DuplicateSettings DEFAULTS = new DuplicateSettings(10, false, 90, 30, 20, 10, 10, 10, 11,
-            50, 1000, 20240601L, 5000, List.of(), 0.01);
+            50, 1000, 20240601L, 5000, List.of(), 0.01, 0.05);
 
     /**
      * Most resamples allowed: 100 times the default. A thousand resamples serve percentile intervals (common
@@ -71,11 +75,12 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
         }
         if (!(limitMultipleOfDetection >= 0) || !(acceptancePercent > 0 && acceptancePercent <= 100)
                 || thGroupSize < 3 || thMinimumPairs < thGroupSize * 2L || bootstrapResamples < 100
-                || bootstrapMaxPairs < LARGE_SAMPLE_MINIMUM || !(batchTestAlpha > 0 && batchTestAlpha < 1)) {
+                || bootstrapMaxPairs < LARGE_SAMPLE_MINIMUM || !(batchTestAlpha > 0 && batchTestAlpha < 1)
+                || !(batchRuleAlpha > 0 && batchRuleAlpha < 1)) {
             throw new IllegalArgumentException("duplicates settings out of range: limitMultipleOfDetection >= 0, "
                     + "0 < acceptancePercent <= 100, thGroupSize >= 3, thMinimumPairs >= 2 groups, "
                     + "bootstrapResamples >= 100, bootstrapMaxPairs >= " + LARGE_SAMPLE_MINIMUM
-                    + ", 0 < batchTestAlpha < 1");
+                    + ", 0 < batchTestAlpha < 1, 0 < batchRuleAlpha < 1");
         }
     }
 
@@ -85,6 +90,18 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
             throw new SettingException(Numbers.compact(percent) + " % is not a HARD limit: write a percentage above 0 "
                     + "and at most 100 (common practice: 30 field, 20 coarse, 10 pulp)", key);
         }
+    }
+
+    /** The settings with the default {@link #batchRuleAlpha()} of 0.05. */
+    public DuplicateSettings(double limitMultipleOfDetection, boolean censoredAtHalfLimit, double acceptancePercent,
+                             double fieldHardLimitPercent, double coarseHardLimitPercent, double pulpHardLimitPercent,
+                             double labRepeatHardLimitPercent, double umpireHardLimitPercent, int thGroupSize,
+                             int thMinimumPairs, int bootstrapResamples, long bootstrapSeed, int bootstrapMaxPairs,
+                             List<Double> precisionGrades, double batchTestAlpha) {
+        this(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent, fieldHardLimitPercent,
+                coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent, umpireHardLimitPercent,
+                thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, bootstrapMaxPairs, precisionGrades,
+                batchTestAlpha, 0.05);
     }
 
     /** Whether a statistic over {@code pairs} pairs gets the bootstrap interval (else the large-sample one). */
@@ -120,27 +137,27 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
         return new DuplicateSettings(multiple, censoredAtHalfLimit, acceptancePercent, fieldHardLimitPercent,
                 coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent, umpireHardLimitPercent,
                 thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, bootstrapMaxPairs, precisionGrades,
-                batchTestAlpha);
+                batchTestAlpha, batchRuleAlpha);
     }
 
     public DuplicateSettings withCensoredAtHalfLimit(boolean halfLimit) {
         return new DuplicateSettings(limitMultipleOfDetection, halfLimit, acceptancePercent, fieldHardLimitPercent,
                 coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent, umpireHardLimitPercent,
                 thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, bootstrapMaxPairs, precisionGrades,
-                batchTestAlpha);
+                batchTestAlpha, batchRuleAlpha);
     }
 
     public DuplicateSettings withBootstrapMaxPairs(int maxPairs) {
         return new DuplicateSettings(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent,
                 fieldHardLimitPercent, coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent,
                 umpireHardLimitPercent, thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, maxPairs,
-                precisionGrades, batchTestAlpha);
+                precisionGrades, batchTestAlpha, batchRuleAlpha);
     }
 
     public DuplicateSettings withPrecisionGrades(List<Double> grades) {
         return new DuplicateSettings(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent,
                 fieldHardLimitPercent, coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent,
                 umpireHardLimitPercent, thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, bootstrapMaxPairs,
-                grades, batchTestAlpha);
+                grades, batchTestAlpha, batchRuleAlpha);
     }
 }

@@ -1,21 +1,29 @@
 package org.cupel.duplicates;
 
 /**
- * A pair flagged for a look: its IDs, batch, values and the test that flagged it.
+ * A pair flagged for a look: its IDs, batch, values and the test that flagged it. Read it original first:
+ * {@code originalId} with {@code original}, then {@code id} with {@code duplicate}.
  *
  * @param id duplicate sample ID
  * @param originalId original sample ID
  * @param batch the duplicate's batch
  * @param original the original as reported
  * @param duplicate the duplicate as reported
- * @param hard HARD of the pair as a fraction
+ * @param hard HARD of the pair as a fraction (for a pair below the detection-limit multiple it is shown for
+ *     reference only: such pairs are neither judged nor ranked by HARD)
+ * @param absDifference |original − duplicate| in the analyte's unit
  * @param tests which tests flagged it
  */
 public record OutlierPair(String id, String originalId, String batch, String original, String duplicate,
-                          double hard, java.util.List<Test> tests) {
+                          double hard, double absDifference, java.util.List<Test> tests) {
 
     public OutlierPair {
         tests = java.util.List.copyOf(tests);
+    }
+
+    /** "original ID / duplicate ID", the order in which the values are given; the duplicate ID alone without one. */
+    public String idsOriginalFirst() {
+        return originalId.isEmpty() ? id : originalId + " / " + id;
     }
 
     /** The tests' labels joined for a table cell. */

@@ -1,5 +1,7 @@
 package org.cupel.duplicates;
 
+import java.util.function.Function;
+import org.cupel.assay.LimitComparison;
 import org.cupel.assay.QcRole;
 
 /** Computes a {@link PrecisionSummary} from screened pairs: HARD acceptance, average CV, repeatability. */
@@ -12,32 +14,42 @@ public final class PrecisionMeasures {
     private PrecisionMeasures() {
     }
 
-    /** The summary of a set, its RMS CV with a 95 % interval. */
+    /** The summary of a set, its RMS CV with a 95 % interval; the rule is the plain share within the limit. */
     public static PrecisionSummary summarise(QcRole type, ScreenedPairs set, DuplicateSettings settings) {
         ScreenedPairs.Members rel = set.relative();
-        return summary(type, set, settings, rmsCv(rel.a(), rel.b(), settings));
+        return summary(type, set, settings, rmsCv(rel.a(), rel.b(), settings), within -> !within.available()
+                ? RuleOutcome.NOT_JUDGED : LimitComparison.atLeast(within.value(), settings.acceptancePercent())
+                ? RuleOutcome.PASS : RuleOutcome.FAIL);
     }
 
     /**
-     * The summary of one batch: as {@link #summarise}, but the RMS CV is a point estimate. A batch is judged by
-     * its acceptance rule and by the test of its RMS CV against the set's ({@link BatchDispersion}); an
-     * interval over a batch's few pairs would add nothing to that and cost a bootstrap per batch.
+     * The summary of one batch: as {@link #summarise}, but the RMS CV is a point estimate and the rule is
+     * {@code rule}, the binomial test of {@link #batchRule}. A batch is judged by that rule and by the test of its
+     * RMS CV against the set's ({@link BatchDispersion}); an interval over a batch's few pairs would add nothing
+     * to that and cost a bootstrap per batch.
      */
-    public static PrecisionSummary summariseBatch(QcRole type, ScreenedPairs batch, DuplicateSettings settings) {
+    public static PrecisionSummary summariseBatch(QcRole type, ScreenedPairs batch, DuplicateSettings settings,
+                                                  BatchRuleTest rule) {
         ScreenedPairs.Members rel = batch.relative();
-        return summary(type, batch, settings, rmsCvPoint(rel.a(), rel.b()));
+        return summary(type, batch, settings, rmsCvPoint(rel.a(), rel.b()), within -> rule.outcome());
+    }
+
+    /** The acceptance rule of one batch as a binomial test ({@link BatchRuleTest}). */
+    public static BatchRuleTest batchRule(QcRole type, ScreenedPairs batch, DuplicateSettings settings) {
+        ScreenedPairs.Members rel = batch.relative();
+        return BatchRuleTest.of(countWithin(rel.a(), rel.b(), settings.hardLimit(type)), rel.size(),
+                settings.acceptancePercent(), settings.batchRuleAlpha());
     }
 
     private static PrecisionSummary summary(QcRole type, ScreenedPairs set, DuplicateSettings settings,
-                                            Estimate rmsCv) {
+                                            Estimate rmsCv, Function<Estimate, RuleOutcome> ruleOf) {
         ScreenedPairs.Members rel = set.relative();
         ScreenedPairs.Members abs = set.absolute();
         double[] ra = rel.a();
         double[] rb = rel.b();
         double limit = settings.hardLimit(type);
         Estimate within = percentWithin(ra, rb, limit);
-        RuleOutcome rule = !within.available() ? RuleOutcome.NOT_JUDGED
-                : within.value() >= settings.acceptancePercent() ? RuleOutcome.PASS : RuleOutcome.FAIL;
+        RuleOutcome rule = ruleOf.apply(within);
         Estimate sr = repeatabilitySd(abs.a(), abs.b());
         Estimate r = sr.available() ? Estimate.point(REPEATABILITY_FACTOR * sr.value(), sr.n()) : sr;
         return new PrecisionSummary(type, set.pairs().size(), abs.size(), rel.size(), set.excludedAbsolute(),
@@ -45,19 +57,27 @@ public final class PrecisionMeasures {
                 settings.acceptancePercent(), within, rule, rmsCv, meanCv(ra, rb), medianHard(ra, rb), sr, r);
     }
 
-    /** Share of pairs with HARD ≤ {@code limit}, in %. */
+    /**
+     * Share of pairs with HARD ≤ {@code limit}, in %. "≤" by {@link LimitComparison#atMost}: 1.1 / 0.9 has
+     * HARD exactly 10 % in its decimals (the double is 0.10000000000000003) and is within a 10 % limit.
+     */
     public static Estimate percentWithin(double[] a, double[] b, double limit) {
         int n = a.length;
         if (n == 0) {
             return Estimate.unavailable(0, "no pair usable for relative measures");
         }
+        return Estimate.point(100.0 * countWithin(a, b, limit) / n, n);
+    }
+
+    /** Pairs with HARD ≤ {@code limit} ({@link LimitComparison#atMost}). */
+    public static int countWithin(double[] a, double[] b, double limit) {
         int within = 0;
-        for (int i = 0; i < n; i++) {
-            if (PairMeasures.hard(a[i], b[i]) <= limit) {
+        for (int i = 0; i < a.length; i++) {
+            if (LimitComparison.atMost(PairMeasures.hard(a[i], b[i]), limit)) {
                 within++;
             }
         }
-        return Estimate.point(100.0 * within / n, n);
+        return within;
     }
 
     /**

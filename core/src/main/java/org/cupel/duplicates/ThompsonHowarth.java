@@ -3,6 +3,9 @@ package org.cupel.duplicates;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;
+import org.apache.commons.math3.distribution.BinomialDistribution;
+import org.apache.commons.math3.stat.regression.SimpleRegression;
+import org.cupel.assay.LimitComparison;
 
 /**
  * Concentration-dependent precision from duplicate pairs.
@@ -110,10 +113,18 @@ public final class ThompsonHowarth {
     public static boolean[] above(double factor, PrecisionModel model, double[] a, double[] b) {
         boolean[] out = new boolean[a.length];
         for (int i = 0; i < a.length; i++) {
-            double line = factor * Math.max(0.0, model.sigmaAt(PairMeasures.mean(a[i], b[i])));
-            out[i] = PairMeasures.absDifference(a[i], b[i]) > line;
+            out[i] = aboveLine(PairMeasures.mean(a[i], b[i]), PairMeasures.absDifference(a[i], b[i]), factor, model);
         }
         return out;
+    }
+
+    /**
+     * Whether a pair of mean {@code m} and |d| = {@code d} lies above the control line factor·max(0, σ_c(m)).
+     * Compared by {@link LimitComparison#above}, as every limit in Cupel: a difference on the line is not
+     * above it.
+     */
+    public static boolean aboveLine(double m, double d, double factor, PrecisionModel model) {
+        return LimitComparison.above(d, factor * Math.max(0.0, model.sigmaAt(m)));
     }
 
     static ControlLineCheck controlLine(double percentile, double factor, PrecisionModel model, double[] m,
@@ -121,7 +132,7 @@ public final class ThompsonHowarth {
         int n = m.length;
         int count = 0;
         for (int i = 0; i < n; i++) {
-            if (d[i] > factor * Math.max(0.0, model.sigmaAt(m[i]))) {
+            if (aboveLine(m[i], d[i], factor, model)) {
                 count++;
             }
         }

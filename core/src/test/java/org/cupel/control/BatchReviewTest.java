@@ -24,8 +24,9 @@ class BatchReviewTest {
         BatchReview r = BatchReview.of(p, crm);
         assertEquals(List.of(Verdict.FAIL, Verdict.FAIL), r.verdicts().stream().map(BatchVerdict::verdict).toList());
         // Blank J1-3 failed: J1-4, J1-5 up to the next passing blank J1-9 (the CRM at 6 is skipped);
-        // CRM J2-2 failed: from the batch start to the passing blank J2-5.
-        assertEquals(List.of("J1-4", "J1-5", "J1-7", "J1-8", "J2-1", "J2-3", "J2-4"),
+        // CRM J2-2 failed: from the batch start to the batch end, since J2 has no other CRM (the passing blank
+        // J2-5 shows no contamination, not accuracy at grade, so it does not bound a CRM's bracket).
+        assertEquals(List.of("J1-4", "J1-5", "J1-7", "J1-8", "J2-1", "J2-3", "J2-4", "J2-6"),
                 r.reassay().entries().stream().map(ReassayEntry::sampleId).toList());
         assertTrue(r.anyBatchFailed());
         // insertion.crm 0.2 from the config: 1 CRM in 10 is below it.

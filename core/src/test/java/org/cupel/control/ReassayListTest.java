@@ -27,13 +27,15 @@ class ReassayListTest {
     }
 
     @Test
-    void failedCrmBetweenPassingControls() {
+    void failedCrmBetweenPassingCrms() {
+        // The passing blank at 9 does not end the failed CRM's bracket: only a passing CRM does (the default
+        // reassay.crmBracket: PASSING_CRM), so it reaches the batch end.
         SampleTable t = new Sequences().batch("J", "RRCRRCRRBRR").table();
         ReassayList l = run(t, ReassaySettings.Scope.BRACKET, "J-3", Verdict.PASS, "J-6", Verdict.FAIL,
                 "J-9", Verdict.PASS);
-        assertEquals(List.of("J-4", "J-5", "J-7", "J-8"), ids(l));
+        assertEquals(List.of("J-4", "J-5", "J-7", "J-8", "J-10", "J-11"), ids(l));
         ReassayBracket b = l.brackets().get(0);
-        assertEquals(List.of(4, 8, 4), List.of(b.fromPosition(), b.toPosition(), b.nSamples()));
+        assertEquals(List.of(4, 11, 6), List.of(b.fromPosition(), b.toPosition(), b.nSamples()));
     }
 
     @Test

@@ -4,6 +4,7 @@ import java.time.LocalDate;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
+import org.cupel.assay.LimitComparison;
 import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
@@ -56,7 +57,7 @@ public final class CrmZScoreChart {
             List<CrmResult> judged = s.results().stream().filter(r -> !r.isSwap()).toList();
             boolean[] beyond = new boolean[judged.size()];
             for (int i = 0; i < beyond.length; i++) {
-                beyond[i] = Math.abs(judged.get(i).z()) > 2;
+                beyond[i] = LimitComparison.beyond(judged.get(i).z(), 2);
             }
             int[] idx = PointBudget.thinned(beyond, PointBudget.DEFAULT / Math.max(1, series.size()));
             flagged += PointBudget.count(beyond);

@@ -4,6 +4,7 @@ import java.awt.BasicStroke;
 import java.awt.Color;
 import java.util.Arrays;
 import java.util.Locale;
+import org.cupel.assay.LimitComparison;
 import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
@@ -18,6 +19,7 @@ import org.cupel.duplicates.PairMeasures;
 import org.cupel.duplicates.PrecisionModel;
 import org.cupel.duplicates.PrecisionModelResult;
 import org.cupel.duplicates.RmaFit;
+import org.cupel.duplicates.ThompsonHowarth;
 import org.knowm.xchart.AnnotationTextPanel;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
@@ -292,7 +294,7 @@ public final class DuplicateCharts {
     private static boolean[] beyondHard(double[] a, double[] b, double limit) {
         boolean[] out = new boolean[a.length];
         for (int i = 0; i < a.length; i++) {
-            out[i] = PairMeasures.hard(a[i], b[i]) > limit;
+            out[i] = LimitComparison.above(PairMeasures.hard(a[i], b[i]), limit);
         }
         return out;
     }
@@ -306,7 +308,7 @@ public final class DuplicateCharts {
         PrecisionModel pm = model.thompsonHowarth().model();
         double factor = model.line99().factor();
         for (int i = 0; i < m.length; i++) {
-            out[i] = d[i] > factor * Math.max(0.0, pm.sigmaAt(m[i]));
+            out[i] = ThompsonHowarth.aboveLine(m[i], d[i], factor, pm);
         }
         return out;
     }

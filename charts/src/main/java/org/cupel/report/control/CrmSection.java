@@ -111,7 +111,8 @@ public final class CrmSection {
             }
         }
         return new ReportTable("crm-rules", "Rules in force", List.of("Rule", "Action", "Looks for", "Source"), rows,
-                "Limits are strict (beyond 2 SD means |z| > 2); runs count consecutive results of one CRM across "
+                "Limits are strict (beyond 2 SD means |z| > 2; a result exactly on a limit in its reported decimals is "
+                        + "not beyond it); runs count consecutive results of one CRM across "
                         + "batches; R-4s looks within one batch. See docs/control-rules.md.");
     }
 
@@ -158,7 +159,9 @@ public final class CrmSection {
         return new ReportTable("crm-drift", "Drift: trend of z on time, EWMA and tabular CUSUM",
                 List.of("Series", "Analyte", "Time axis", "Trend of z", "Findings"), rows, String.format(Locale.ROOT,
                         "EWMA λ = %s, L = %s (NIST/SEMATECH e-Handbook 6.3.2.4); CUSUM k = %s, h = %s (Montgomery, "
-                                + "Introduction to Statistical Quality Control); trend reported when p < %s.",
+                                + "Introduction to Statistical Quality Control); trend reported when p < %s. A result "
+                                + "beyond 3 SD whose neighbours in its series are not beyond 2 SD on its side is an "
+                                + "outlier (a 1-3s matter), not drift, and is left out of trend, EWMA and CUSUM.",
                         Numbers.compact(r.settings().ewmaLambda()), Numbers.compact(r.settings().ewmaWidth()),
                         Numbers.compact(r.settings().cusumK()), Numbers.compact(r.settings().cusumH()),
                         Numbers.compact(r.settings().driftAlpha())));
@@ -168,8 +171,9 @@ public final class CrmSection {
         String trend = d.trend().estimated() ? String.format(Locale.ROOT, "%s (95 %% CI %s to %s, %s, n = %d)",
                 num(d.trend().slope()), num(d.trend().slopeLow()), num(d.trend().slopeHigh()), d.trend().pText(),
                 d.trend().n()) : d.trend().note();
-        return List.of(series, analyte, d.timeAxis(), trend, d.findings().isEmpty() ? "none"
-                : String.join("; ", d.findings()));
+        List<String> found = new ArrayList<>(d.findings());
+        d.outliers().forEach(o -> found.add("outlier, not drift: " + o.finding()));
+        return List.of(series, analyte, d.timeAxis(), trend, found.isEmpty() ? "none" : String.join("; ", found));
     }
 
     private static ReportTable exceptions(List<CrmException> xs) {

@@ -37,7 +37,7 @@ public final class VerdictSection {
         blocks.add(new ReportBlock.Paragraph("A batch takes the worst verdict of its control results for each "
                 + "analyte (fail over warn over cannot judge over pass), and the worst over analytes. A batch "
                 + "without a control result for an analyte cannot be judged for it. Re-assay (common practice): "
-                + scope(reassay.scope())));
+                + scope(reassay)));
         if (failed + warned > 0) {
             blocks.add(new ReportBlock.Table(actionTable(verdicts)));
         }
@@ -55,13 +55,20 @@ public final class VerdictSection {
         return new ReportSection("verdicts", "Batch verdicts and re-assay list", blocks, headlines);
     }
 
-    private static String scope(ReassaySettings.Scope scope) {
-        if (scope == ReassaySettings.Scope.WHOLE_BATCH) {
+    private static String scope(ReassayList reassay) {
+        if (reassay.scope() == ReassaySettings.Scope.WHOLE_BATCH) {
             return "every sample of a batch with a failed control (user setting reassay.scope: WHOLE_BATCH).";
         }
-        return "for a failed CRM, the samples between the nearest passing control samples before and after it; "
-                + "for a failed blank, the samples after it up to the next passing blank. Control samples are "
-                + "not listed; a warning does not fail a control.";
+        String crm = reassay.crmBracket() == ReassaySettings.CrmBracket.PASSING_CRM
+                ? "the nearest passing CRMs before and after it (a blank does not bound it: it tests contamination, "
+                + "not accuracy at grade)"
+                : "the nearest passing control samples, CRM or blank, before and after it (user setting "
+                + "reassay.crmBracket: PASSING_CONTROL)";
+        String blank = reassay.blankFollowing() > 0 ? ", at most " + reassay.blankFollowing() + " samples (user "
+                + "setting reassay.blankFollowing)" : "";
+        return "for a failed CRM, the samples between " + crm + "; for a failed blank, the samples after it up to "
+                + "the next passing blank" + blank + ". Control samples are not listed; a warning does not fail a "
+                + "control.";
     }
 
     static ReportTable verdictTable(List<BatchVerdict> verdicts) {

@@ -104,6 +104,8 @@ public final class DuplicatesSection {
             }
             headlines.put(key + ".rule", p.rule().name());
             headlines.put(key + ".batchesFailingRule", set.batches().stream().filter(BatchPrecision::failsRule).count());
+            headlines.put(key + ".batchesTooFewPairs", set.batches().stream().filter(BatchPrecision::tooFewPairs)
+                    .count());
             headlines.put(key + ".batchesLessPrecise",
                     set.batches().stream().filter(BatchPrecision::lessPrecise).count());
             if (set.bias().meanRelativeBias().available()) {
@@ -233,6 +235,7 @@ public final class DuplicatesSection {
                 rows.add(List.of(b.batch().isEmpty() ? "(no batch)" : b.batch(), s.type().label(),
                         Integer.toString(p.pairs()), Integer.toString(p.usedRelative()),
                         value(p.percentWithinLimit(), 1, ""), p.rule().name().toLowerCase(Locale.ROOT).replace('_', ' '),
+                        b.rule().n() > 0 ? p(b.rule().pValue()) : b.rule().note(),
                         p.rmsCv().available() ? pct2(p.rmsCv().value()) : p.rmsCv().note(),
                         b.dispersion().available() ? fmt(b.dispersion().ratio(), 3) : "",
                         b.dispersion().available() ? p(b.dispersion().pValue()) : b.dispersion().note(),
@@ -240,11 +243,13 @@ public final class DuplicatesSection {
             }
         }
         return new ReportTable("duplicates-batches-" + r.analyte(), r.analyte() + ": precision by batch",
-                List.of("Batch", "Type", "Pairs", "Used (relative)", "% within limit", "Rule", "RMS CV",
-                        "RMS CV / set's", "p (chi-square)", "Flag"), rows,
-                "A batch fails the rule when fewer than the required share of its pairs lie within the type's HARD "
-                        + "limit; with few pairs per batch one wide pair decides. The chi-square test of the batch's "
-                        + "RMS CV against the set's (NIST/SEMATECH e-Handbook 7.2.3.1) flags a batch that is "
+                List.of("Batch", "Type", "Pairs", "Used (relative)", "% within limit", "Rule", "p (binomial)",
+                        "RMS CV", "RMS CV / set's", "p (chi-square)", "Flag"), rows,
+                "A batch has few pairs, and one wide pair moves its share by tens of points, so it fails the rule "
+                        + "only when the one-sided exact binomial test rejects \"share within the HARD limit ≥ the "
+                        + "required share\" (p below duplicates.batchRuleAlpha, default 0.05); a share below the rule "
+                        + "that the test cannot show is \"too few pairs\" (to judge), not a failure. The chi-square "
+                        + "test of the batch's RMS CV against the set's (NIST/SEMATECH e-Handbook 7.2.3.1) flags a batch that is "
                         + "significantly less precise; it assumes one relative error over the grade range, and with "
                         + "many batches about 1 in 100 is flagged by chance at the default level.");
     }
@@ -315,21 +320,27 @@ public final class DuplicatesSection {
         List<List<String>> rows = new ArrayList<>();
         int more = 0;
         for (DuplicateSetResult s : r.sets()) {
-            List<OutlierPair> list = s.outliers();
-            for (int i = 0; i < list.size(); i++) {
-                if (i >= OUTLIERS_LISTED) {
-                    more += list.size() - OUTLIERS_LISTED;
-                    break;
-                }
-                OutlierPair o = list.get(i);
-                rows.add(List.of(s.type().label(), o.id(), o.originalId(), o.batch(), o.original(), o.duplicate(),
-                        pct1(o.hard()), o.testLabels()));
-            }
+            more += outlierRows(s, s.outliers(), o -> pct1(o.hard()), rows);
+            String notJudged = "not used: mean < " + compact(s.precision().limitMultiple()) + "× DL";
+            more += outlierRows(s, s.outliersBelowRelativeThreshold(), o -> notJudged, rows);
         }
         return new ReportTable("duplicates-outliers-" + r.analyte(), r.analyte() + ": pairs flagged",
-                List.of("Type", "Duplicate ID", "Original ID", "Batch", "Original", "Duplicate", "HARD", "Flagged by"), rows,
-                more > 0 ? more + " further flagged pairs not listed (the " + OUTLIERS_LISTED
-                        + " with the largest HARD per type are shown)." : "");
+                List.of("Type", "Original ID", "Duplicate ID", "Batch", "Original", "Duplicate", "HARD", "Flagged by"),
+                rows, "Per type, the pairs used in relative measures come first, largest HARD first; then the pairs "
+                        + "whose mean is below the detection-limit multiple, which are not judged or ranked by HARD and "
+                        + "are flagged only by the Thompson–Howarth 99 % line, largest |d| first."
+                        + (more > 0 ? " " + more + " further flagged pairs not listed (the first " + OUTLIERS_LISTED
+                        + " of each list per type are shown)." : ""));
+    }
+
+    /** Adds up to {@link #OUTLIERS_LISTED} rows of {@code list}, original first; returns how many were left out. */
+    private static int outlierRows(DuplicateSetResult s, List<OutlierPair> list,
+                                   java.util.function.Function<OutlierPair, String> hard, List<List<String>> rows) {
+        for (OutlierPair o : list.subList(0, Math.min(OUTLIERS_LISTED, list.size()))) {
+            rows.add(List.of(s.type().label(), o.originalId(), o.id(), o.batch(), o.original(), o.duplicate(),
+                    hard.apply(o), o.testLabels()));
+        }
+        return Math.max(0, list.size() - OUTLIERS_LISTED);
     }
 
     private static ReportTable orphanTable(DuplicateReport r) {

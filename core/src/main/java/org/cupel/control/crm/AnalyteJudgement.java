@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.cupel.assay.LimitComparison;
 import org.cupel.control.Verdict;
 import org.cupel.project.CrmCatalog;
 import org.cupel.project.CrmCertificate;
@@ -31,6 +32,8 @@ final class AnalyteJudgement {
     private final int[][] judged;
     /** Per series and result: bit {@code 1 << ordinal} for each rule whose pattern the result completes. */
     private final int[][] hits;
+    /** Per series and result: whether it is an isolated outlier, left out of drift ({@link IsolatedOutliers}). */
+    private final boolean[][] outlier;
     /** Per series: findings with the index of their signalling result, in the order found. */
     private final List<List<Found>> findings = new ArrayList<>();
     /** Every judged result of the analyte in time order (batch date, position, row): series and index. */
@@ -53,6 +56,7 @@ final class AnalyteJudgement {
         this.swaps = new String[n][];
         this.judged = new int[n][];
         this.hits = new int[n][];
+        this.outlier = new boolean[n][];
     }
 
     static Judged judge(List<CrmSeries> series, CrmCatalog catalog, CrmSettings settings) {
@@ -85,7 +89,7 @@ final class AnalyteJudgement {
             for (int i = 0; i < n; i++) {
                 CrmPoint p = cs.points().get(i);
                 zs[i] = lim.z(p.value().value());
-                Optional<String> m = Math.abs(zs[i]) > 3
+                Optional<String> m = LimitComparison.beyond(zs[i], 3)
                         ? SwapCheck.match(p.value(), cs.certificate(), others, settings.swapWithinSd(),
                         settings.blankLevelMultiple())
                         : Optional.empty();
@@ -98,8 +102,23 @@ final class AnalyteJudgement {
             swaps[s] = sw;
             judged[s] = Arrays.copyOf(keep, kept);
             hits[s] = new int[n];
+            outlier[s] = isolatedOutliers(zs, judged[s]);
             findings.add(new ArrayList<>());
         }
+    }
+
+    /** Isolated outliers among the judged results of one series, as flags over all its results. */
+    private static boolean[] isolatedOutliers(double[] zs, int[] judgedIndex) {
+        double[] zj = new double[judgedIndex.length];
+        for (int k = 0; k < zj.length; k++) {
+            zj[k] = zs[judgedIndex[k]];
+        }
+        boolean[] flags = IsolatedOutliers.of(zj);
+        boolean[] out = new boolean[zs.length];
+        for (int k = 0; k < zj.length; k++) {
+            out[judgedIndex[k]] = flags[k];
+        }
+        return out;
     }
 
     /**
@@ -226,8 +245,12 @@ final class AnalyteJudgement {
         // Findings in series order of their signal (stable: the order found breaks ties).
         List<Found> found = new ArrayList<>(findings.get(s));
         found.sort((a, b) -> Integer.compare(a.signal(), b.signal()));
+        boolean[] judgedOutlier = new boolean[judged[s].length];
+        for (int k = 0; k < judgedOutlier.length; k++) {
+            judgedOutlier[k] = outlier[s][judged[s][k]];
+        }
         return new SeriesReview(cs.analyte(), cs.certificate(), lim, pl, results, bias,
-                DriftAnalysis.of(judgedResults, settings), found.stream().map(Found::finding).toList());
+                DriftAnalysis.of(judgedResults, judgedOutlier, settings), found.stream().map(Found::finding).toList());
     }
 
     /**
@@ -256,12 +279,17 @@ final class AnalyteJudgement {
         return new CrmResult(p, zi, ZBand.of(zi), runningMean, v, ids, reassay, "", wording);
     }
 
-    /** Drift of every judged result of the analyte, all CRMs together, in time order. */
+    /**
+     * Drift of every judged result of the analyte, all CRMs together, in time order, leaving out the results that
+     * are isolated outliers in their own CRM's series.
+     */
     private SeriesDrift labDrift(List<List<CrmResult>> results) {
         List<CrmResult> all = new ArrayList<>(mergedSeries.length);
+        boolean[] isolated = new boolean[mergedSeries.length];
         for (int k = 0; k < mergedSeries.length; k++) {
             all.add(results.get(mergedSeries[k]).get(mergedIndex[k]));
+            isolated[k] = outlier[mergedSeries[k]][mergedIndex[k]];
         }
-        return DriftAnalysis.of(all, settings);
+        return DriftAnalysis.of(all, isolated, settings);
     }
 }

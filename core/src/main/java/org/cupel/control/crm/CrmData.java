@@ -47,9 +47,9 @@ public record CrmData(List<CrmSeries> series, List<CrmException> exceptions) {
             Arrays.fill(slot[c], -1);
         }
         for (CrmCertificate c : catalog.all()) {
-            // A certificate of an analyte the results do not hold has no series (the immutable list refuses null).
-            AnalyteColumn col = project.analytes().get(c.analyte());
-            int a = col == null ? -1 : cols.indexOf(col);
+            // A catalog certifies analytes the lab may not have run (Ag on a gold-only job): no series then.
+            AnalyteColumn certified = project.analytes().get(c.analyte());
+            int a = certified == null ? -1 : cols.indexOf(certified);
             if (a >= 0) {
                 slot[codeIndex.get(c.code())][a] = certs.size();
                 certs.add(c);

@@ -7,7 +7,10 @@ package org.cupel.control.crm;
  * <p>Edge cases, the same for every rule (docs/control-rules.md):
  * <ul>
  *   <li>"beyond k SD" is strict: |z| &gt; k; "within 1 SD" is strict: |z| &lt; 1. A point exactly on a
- *       limit is neither beyond nor within it. (The ISO 13528 bands in {@link ZBand} use ≥ 3 instead.)</li>
+ *       limit is neither beyond nor within it. (The ISO 13528 bands in {@link ZBand} use ≥ 3 instead.)
+ *       "Exactly on a limit" is judged on the reported decimals with the relative tolerance of
+ *       {@link org.cupel.assay.LimitComparison}: 1.100 on 1.000 ± 0.050 is on +2 SD although the double
+ *       z is 2.0000000000000018.</li>
  *   <li>"on one side" is strict: a point exactly on the certified value (z = 0) breaks a run.</li>
  *   <li>"consecutive" / "in a row" means consecutive results of the same CRM and analyte in series order
  *       (batch date, then position), across batch boundaries. Only R₄s looks within one batch, over every

@@ -6,12 +6,30 @@ import java.util.List;
 import java.util.Locale;
 import org.cupel.assay.Numbers;
 
-/** Builds a {@link SeriesDrift} from judged results in time order. */
+/**
+ * Builds a {@link SeriesDrift} from judged results in time order: the isolated outliers given are listed as
+ * outlier findings and left out; trend, EWMA and CUSUM are computed over the rest.
+ */
 final class DriftAnalysis {
     private DriftAnalysis() {
     }
 
-    static SeriesDrift of(List<CrmResult> judged, CrmSettings s) {
+    /** @param outlier for each judged result, whether it is an isolated outlier ({@link IsolatedOutliers}) */
+    static SeriesDrift of(List<CrmResult> judged, boolean[] outlier, CrmSettings s) {
+        List<CrmResult> used = new ArrayList<>(judged.size());
+        List<DriftOutlier> outliers = new ArrayList<>();
+        for (int i = 0; i < judged.size(); i++) {
+            CrmResult r = judged.get(i);
+            if (outlier[i]) {
+                outliers.add(new DriftOutlier(i, r.point().sampleId(), r.point().batchId(), r.z()));
+            } else {
+                used.add(r);
+            }
+        }
+        return of(used, outliers, s);
+    }
+
+    private static SeriesDrift of(List<CrmResult> judged, List<DriftOutlier> outliers, CrmSettings s) {
         int n = judged.size();
         double[] z = new double[n];
         double[] t = new double[n];
@@ -33,21 +51,24 @@ final class DriftAnalysis {
         }
         String axis = dated ? "days since " + LocalDate.ofEpochDay(origin) : "sequence number (some batches undated)";
         String per = dated ? "per day" : "per result";
+        String left = outliers.isEmpty() ? "" : ", " + outliers.size() + " isolated outlier"
+                + (outliers.size() == 1 ? "" : "s") + " left out";
         LinearFit trend = LinearFit.of(t, z, s.confidence());
         Ewma ewma = Ewma.of(z, 0, 1, s.ewmaLambda(), s.ewmaWidth());
         TabularCusum cusum = TabularCusum.of(z, 0, 1, s.cusumK(), s.cusumH());
         List<String> findings = new ArrayList<>();
         if (trend.estimated() && trend.pValue() < s.driftAlpha()) {
-            findings.add(String.format(Locale.ROOT, "z trend %s SD %s (%d %% CI %s to %s, %s, n = %d)",
+            findings.add(String.format(Locale.ROOT, "z trend %s SD %s (%d %% CI %s to %s, %s, n = %d%s)",
                     signed(trend.slope()), per, Math.round(s.confidence() * 100), Numbers.significant(trend.slopeLow(), 3),
-                    Numbers.significant(trend.slopeHigh(), 3), trend.pText(), n));
+                    Numbers.significant(trend.slopeHigh(), 3), trend.pText(), n, left));
         }
         if (ewma.firstSignal() >= 0) {
             CrmResult r = judged.get(ewma.firstSignal());
             findings.add(String.format(Locale.ROOT, "EWMA (λ = %s, L = %s) outside its limits from %s (batch %s, "
                             + "result %d of %d), %d results outside in all", Numbers.compact(s.ewmaLambda()),
-                    Numbers.compact(s.ewmaWidth()), r.point().sampleId(), r.point().batchId(), ewma.firstSignal() + 1,
-                    n, ewma.signals().size()));
+                    Numbers.compact(s.ewmaWidth()), r.point().sampleId(), r.point().batchId(),
+                    SeriesDrift.judgedIndex(ewma.firstSignal(), outliers) + 1, n + outliers.size(),
+                    ewma.signals().size()));
         }
         if (cusum.firstSignal() >= 0) {
             int i = cusum.firstSignal();
@@ -55,9 +76,9 @@ final class DriftAnalysis {
             String side = cusum.upper().get(i) > s.cusumH() ? "results read high" : "results read low";
             findings.add(String.format(Locale.ROOT, "CUSUM (k = %s, h = %s) above h from %s (batch %s, result %d of "
                             + "%d): %s", Numbers.compact(s.cusumK()), Numbers.compact(s.cusumH()), r.point().sampleId(),
-                    r.point().batchId(), i + 1, n, side));
+                    r.point().batchId(), SeriesDrift.judgedIndex(i, outliers) + 1, n + outliers.size(), side));
         }
-        return new SeriesDrift(axis, trend, ewma, cusum, !findings.isEmpty(), findings);
+        return new SeriesDrift(axis, trend, ewma, cusum, !findings.isEmpty(), findings, outliers);
     }
 
     private static String signed(double v) {

@@ -3,10 +3,13 @@ package org.cupel.control.crm;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoublePredicate;
+import org.cupel.assay.LimitComparison;
 
 /**
  * Evaluates the {@link CrmRule run rules} on a sequence of z-scores in series order. The edge cases
- * (strict limits, what "in a row" means, which points are flagged) are set out on {@link CrmRule}.
+ * (strict limits, what "in a row" means, which points are flagged) are set out on {@link CrmRule}. Every
+ * comparison of z with ±1, ±2 or ±3 goes through {@link LimitComparison}, so a result exactly on a limit
+ * in its reported decimals is on it, whatever the last bit of the computed z.
  */
 public final class RunRules {
     private RunRules() {
@@ -32,8 +35,8 @@ public final class RunRules {
             case N_2: return sameSideInARow(rule, z, 9, 0);
             case N_3: return trend(rule, z, 6);
             case N_4: return alternating(rule, z, 14);
-            case N_7: return inARow(rule, z, 15, v -> Math.abs(v) < 1);
-            case N_8: return inARow(rule, z, 8, v -> Math.abs(v) > 1);
+            case N_7: return inARow(rule, z, 15, v -> LimitComparison.within(v, 1));
+            case N_8: return inARow(rule, z, 8, v -> LimitComparison.beyond(v, 1));
             default: throw new IllegalStateException("no evaluation for " + rule);
         }
     }
@@ -41,7 +44,7 @@ public final class RunRules {
     private static List<RuleViolation> single(CrmRule rule, double[] z, double limit) {
         List<RuleViolation> out = new ArrayList<>();
         for (int i = 0; i < z.length; i++) {
-            if (Math.abs(z[i]) > limit) {
+            if (LimitComparison.beyond(z[i], limit)) {
                 out.add(new RuleViolation(rule, i, List.of(i)));
             }
         }
@@ -50,8 +53,8 @@ public final class RunRules {
 
     /** {@code n} in a row beyond {@code +limit}, or {@code n} in a row beyond {@code −limit}. */
     private static List<RuleViolation> sameSideInARow(CrmRule rule, double[] z, int n, double limit) {
-        List<RuleViolation> out = new ArrayList<>(inARow(rule, z, n, v -> v > limit));
-        out.addAll(inARow(rule, z, n, v -> v < -limit));
+        List<RuleViolation> out = new ArrayList<>(inARow(rule, z, n, v -> LimitComparison.above(v, limit)));
+        out.addAll(inARow(rule, z, n, v -> LimitComparison.below(v, -limit)));
         out.sort((a, b) -> Integer.compare(a.signal(), b.signal()));
         return out;
     }
@@ -72,13 +75,13 @@ public final class RunRules {
     private static List<RuleViolation> kOfM(CrmRule rule, double[] z, int k, int m, double limit) {
         List<RuleViolation> out = new ArrayList<>();
         for (int i = m - 1; i < z.length; i++) {
-            double side = z[i] > limit ? 1 : z[i] < -limit ? -1 : 0;
+            double side = LimitComparison.above(z[i], limit) ? 1 : LimitComparison.below(z[i], -limit) ? -1 : 0;
             if (side == 0) {
                 continue;
             }
             List<Integer> hits = new ArrayList<>();
             for (int j = i - m + 1; j <= i; j++) {
-                if (side * z[j] > limit) {
+                if (LimitComparison.above(side * z[j], limit)) {
                     hits.add(j);
                 }
             }
@@ -142,13 +145,15 @@ public final class RunRules {
                 lastHigh = -1;
                 lastLow = -1;
             }
-            int opposite = z[i] > 2 ? lastLow : z[i] < -2 ? lastHigh : -1;
+            boolean high = LimitComparison.above(z[i], 2);
+            boolean low = LimitComparison.below(z[i], -2);
+            int opposite = high ? lastLow : low ? lastHigh : -1;
             if (opposite >= batchStart && opposite >= 0) {
                 out.add(new RuleViolation(rule, i, List.of(opposite, i)));
             }
-            if (z[i] > 2 && lastHigh < 0) {
+            if (high && lastHigh < 0) {
                 lastHigh = i;
-            } else if (z[i] < -2 && lastLow < 0) {
+            } else if (low && lastLow < 0) {
                 lastLow = i;
             }
         }

@@ -3,6 +3,7 @@ package org.cupel.control.crm;
 import java.util.List;
 import java.util.Optional;
 import org.cupel.assay.AssayValue;
+import org.cupel.assay.LimitComparison;
 import org.cupel.project.CrmCertificate;
 
 /**
@@ -29,7 +30,7 @@ public final class SwapCheck {
                 continue;
             }
             double z = Math.abs(value.value() - c.certifiedValue()) / c.sd();
-            if (z <= withinSd && z < bestZ) {
+            if (LimitComparison.atMost(z, withinSd) && z < bestZ) {
                 best = c.code();
                 bestZ = z;
             }
@@ -38,7 +39,8 @@ public final class SwapCheck {
             return Optional.of(best);
         }
         boolean blankLevel = Double.isFinite(value.limit()) && blankMultiple > 0
-                && value.value() <= blankMultiple * value.limit() && own.certifiedValue() > blankMultiple * value.limit();
+                && LimitComparison.atMost(value.value(), blankMultiple * value.limit())
+                && LimitComparison.above(own.certifiedValue(), blankMultiple * value.limit());
         return blankLevel ? Optional.of(BLANK) : Optional.empty();
     }
 }

@@ -1,0 +1,58 @@
+package org.cupel.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Flagged duplicate pairs as the CLI prints them, on the demo project. The demo's lab file OAL-00010.csv reports
+ * VH0001166 (the original) at 0.783 g/t and its lab repeat VH0001166-R at 0.895; OAL-00016.csv reports VH0001934
+ * at 0.005 and its field duplicate VH0001936 at 0.063 (mean 0.034, below 10 × the FA-AAS limit 0.005 = 0.05).
+ */
+class DuplicatesFlaggedPairsCommandTest {
+    @TempDir
+    Path dir;
+
+    private static String[] run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = CupelCommand.run(args, new PrintWriter(out), new PrintWriter(err));
+        assertEquals(0, code, err.toString());
+        return new String[] {out.toString(), err.toString()};
+    }
+
+    @Test
+    void idsAreInTheOrderOfTheValuesAndLowPairsAreNotRankedByHard() throws Exception {
+        Path demo = dir.resolve("demo");
+        run("demo", demo.toString());
+        String out = run("duplicates", demo.toString(), "--analyte", "Au")[0];
+        // Before: "VH0001166-R / VH0001166 [OAL-00010]: 0.783 vs 0.895", the duplicate's ID before the original's value.
+        assertTrue(out.contains("VH0001166 / VH0001166-R [OAL-00010]: 0.783 vs 0.895"), out);
+        assertFalse(out.contains("VH0001166-R / VH0001166"), out);
+        // Before: the field pair led the "largest HARD" list at 85.3 %, although HARD is not used below 10 × DL.
+        assertFalse(out.contains("VH0001934 / VH0001936 [OAL-00016]: 0.005 vs 0.063, HARD"), out);
+        assertTrue(out.contains("VH0001934 / VH0001936 [OAL-00016]: 0.005 vs 0.063, |d| 0.058"), out);
+        assertTrue(out.contains("below the relative-measure threshold (mean < 10× DL, not judged by HARD)"), out);
+
+        JsonNode doc = new ObjectMapper().readTree(run("duplicates", demo.toString(), "--analyte", "Au", "--json")[0]);
+        JsonNode field = doc.get("analytes").get(0).get("sets").get(0);
+        assertEquals("FIELD_DUPLICATE", field.get("type").asText());
+        for (JsonNode o : field.get("outliers")) {
+            assertFalse(o.get("id").asText().equals("VH0001936"), "ranked by HARD: " + o);
+        }
+        boolean listedApart = false;
+        for (JsonNode o : field.get("outliersBelowRelativeThreshold")) {
+            listedApart |= o.get("id").asText().equals("VH0001936") && o.get("originalId").asText().equals("VH0001934")
+                    && o.get("original").asText().equals("0.005") && o.get("duplicate").asText().equals("0.063");
+        }
+        assertTrue(listedApart, field.get("outliersBelowRelativeThreshold").toString());
+    }
+}

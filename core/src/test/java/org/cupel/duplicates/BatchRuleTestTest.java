@@ -1,0 +1,81 @@
+package org.cupel.duplicates;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.util.ArrayList;
+import java.util.List;
+import org.cupel.assay.AssayValue;
+import org.cupel.assay.QcRole;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The per-batch acceptance rule as a one-sided exact binomial test, against scipy.stats.binomtest (scipy 1.10,
+ * alternative='less'; testdata/reference/duplicates/batch_rule_binomial.py), and its outcomes at the edges.
+ */
+class BatchRuleTestTest {
+
+    @Test
+    void pValuesMatchScipyBinomtest() throws Exception {
+        // 2,016 (n, k, p0) cases, n = 1..30, 50, 125, p0 = 0.8, 0.9, 0.95. Tolerance 1e-12 relative (plus 1e-300
+        // absolute): the p-value is a sum of at most 126 positive point probabilities, each accurate to a few ulps
+        // (Loader's saddle point), so its relative error is below ~126 × 1e-15; scipy's value is from Boost's
+        // incomplete beta, to near double precision. Observed worst: 6.2e-14.
+        List<String> lines = Files.readAllLines(ReferenceData.dir().resolve("batch_rule_binomial.csv"));
+        double worst = 0;
+        for (String line : lines.subList(1, lines.size())) {
+            String[] c = line.split(",");
+            int n = Integer.parseInt(c[0]);
+            int k = Integer.parseInt(c[1]);
+            double p0 = Double.parseDouble(c[2]);
+            double expected = Double.parseDouble(c[3]);
+            double got = BatchRuleTest.of(k, n, 100 * p0, 0.05).pValue();
+            double err = Math.abs(got - expected) / Math.max(expected, 1e-300);
+            worst = Math.max(worst, err);
+            assertEquals(expected, got, 1e-12 * expected + 1e-300, "n " + n + ", k " + k + ", p0 " + p0);
+        }
+        assertTrue(worst < 1e-12, "worst relative error " + worst);
+    }
+
+    @Test
+    void outcomesAtTheEdgesForTheDefaultRule() {
+        // p0 = 0.9, α = 0.05. By hand: P(X ≤ 0 | 1) = 0.1; P(X ≤ 0 | 2) = 0.01; P(X ≤ 1 | 2) = 1 − 0.81 = 0.19;
+        // P(X ≤ 2 | 5) = 0.00856; P(X ≤ 3 | 5) = 0.08146; P(X ≤ 4 | 5) = 1 − 0.9^5 = 0.40951.
+        assertEquals(RuleOutcome.TOO_FEW_PAIRS, BatchRuleTest.of(0, 1, 90, 0.05).outcome(), "one wide pair of one");
+        assertEquals(RuleOutcome.FAIL, BatchRuleTest.of(0, 2, 90, 0.05).outcome());
+        assertEquals(RuleOutcome.TOO_FEW_PAIRS, BatchRuleTest.of(1, 2, 90, 0.05).outcome());
+        assertEquals(RuleOutcome.FAIL, BatchRuleTest.of(2, 5, 90, 0.05).outcome());
+        assertEquals(RuleOutcome.TOO_FEW_PAIRS, BatchRuleTest.of(3, 5, 90, 0.05).outcome());
+        assertEquals(RuleOutcome.TOO_FEW_PAIRS, BatchRuleTest.of(4, 5, 90, 0.05).outcome());
+        assertEquals(RuleOutcome.PASS, BatchRuleTest.of(5, 5, 90, 0.05).outcome());
+        assertEquals(RuleOutcome.PASS, BatchRuleTest.of(9, 10, 90, 0.05).outcome(), "9 of 10 is exactly 90 %");
+        assertEquals(RuleOutcome.NOT_JUDGED, BatchRuleTest.of(0, 0, 90, 0.05).outcome());
+        assertEquals(0.40951, BatchRuleTest.of(4, 5, 90, 0.05).pValue(), 1e-12);
+        assertTrue(BatchRuleTest.of(4, 5, 90, 0.05).note().startsWith("too few pairs to judge: 4 of 5 within"));
+    }
+
+    @Test
+    void aBatchWithOneWidePairIsNotFlagged() {
+        // Before: "0.0 % of 1 pairs within HARD 30 % (fails the rule)". One field pair 1.0 / 2.0 (HARD 33 %) in
+        // batch J2 beside 20 tight pairs in J1.
+        List<DuplicatePair> pairs = new ArrayList<>();
+        for (int i = 0; i < 20; i++) {
+            pairs.add(pair("J1", 1.0 + 0.01 * i, 1.02 + 0.01 * i));
+        }
+        pairs.add(pair("J2", 1.0, 2.0));
+        DuplicateSetResult set = DuplicateAnalysis.run("Au", "g/t", pairs, List.of(), new double[0],
+                DuplicateSettings.DEFAULTS).sets().get(0);
+        BatchPrecision j2 = set.batches().stream().filter(b -> b.batch().equals("J2")).findFirst().orElseThrow();
+        assertFalse(j2.failsRule());
+        assertTrue(j2.tooFewPairs());
+        assertEquals(RuleOutcome.TOO_FEW_PAIRS, j2.precision().rule());
+        assertEquals(0.1, j2.rule().pValue(), 1e-12);
+    }
+
+    private static DuplicatePair pair(String batch, double a, double b) {
+        return new DuplicatePair("D", "O", batch, QcRole.FIELD_DUPLICATE, AssayValue.detected(a, 0.005),
+                AssayValue.detected(b, 0.005));
+    }
+}
