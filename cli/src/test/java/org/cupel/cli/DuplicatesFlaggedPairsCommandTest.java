@@ -15,7 +15,9 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * Flagged duplicate pairs as the CLI prints them, on the demo project. The demo's lab file OAL-00010.csv reports
  * VH0001166 (the original) at 0.783 g/t and its lab repeat VH0001166-R at 0.895; OAL-00016.csv reports VH0001934
- * at 0.005 and its field duplicate VH0001936 at 0.063 (mean 0.034, below 10 × the FA-AAS limit 0.005 = 0.05).
+ * at 0.005 and its field duplicate VH0001936 at 0.063 (mean 0.034, below 10 × the FA-AAS limit 0.005 = 0.05);
+ * OAL-00002.csv reports VH0000231 at 0.027 and its coarse-reject duplicate VH0000232 at 0.063 (mean 0.045, also
+ * below 0.05, and |d| = 0.036 above the 99 % line of the coarse-reject Thompson–Howarth model).
  */
 class DuplicatesFlaggedPairsCommandTest {
     @TempDir
@@ -39,7 +41,7 @@ class DuplicatesFlaggedPairsCommandTest {
         assertFalse(out.contains("VH0001166-R / VH0001166"), out);
         // Before: the field pair led the "largest HARD" list at 85.3 %, although HARD is not used below 10 × DL.
         assertFalse(out.contains("VH0001934 / VH0001936 [OAL-00016]: 0.005 vs 0.063, HARD"), out);
-        assertTrue(out.contains("VH0001934 / VH0001936 [OAL-00016]: 0.005 vs 0.063, |d| 0.058"), out);
+        assertTrue(out.contains("VH0000231 / VH0000232 [OAL-00002]: 0.027 vs 0.063, |d| 0.036"), out);
         assertTrue(out.contains("below the relative-measure threshold (mean < 10× DL, not judged by HARD)"), out);
 
         JsonNode doc = new ObjectMapper().readTree(run("duplicates", demo.toString(), "--analyte", "Au", "--json")[0]);
@@ -48,11 +50,13 @@ class DuplicatesFlaggedPairsCommandTest {
         for (JsonNode o : field.get("outliers")) {
             assertFalse(o.get("id").asText().equals("VH0001936"), "ranked by HARD: " + o);
         }
+        JsonNode coarse = doc.get("analytes").get(0).get("sets").get(1);
+        assertEquals("COARSE_DUPLICATE", coarse.get("type").asText());
         boolean listedApart = false;
-        for (JsonNode o : field.get("outliersBelowRelativeThreshold")) {
-            listedApart |= o.get("id").asText().equals("VH0001936") && o.get("originalId").asText().equals("VH0001934")
-                    && o.get("original").asText().equals("0.005") && o.get("duplicate").asText().equals("0.063");
+        for (JsonNode o : coarse.get("outliersBelowRelativeThreshold")) {
+            listedApart |= o.get("id").asText().equals("VH0000232") && o.get("originalId").asText().equals("VH0000231")
+                    && o.get("original").asText().equals("0.027") && o.get("duplicate").asText().equals("0.063");
         }
-        assertTrue(listedApart, field.get("outliersBelowRelativeThreshold").toString());
+        assertTrue(listedApart, coarse.get("outliersBelowRelativeThreshold").toString());
     }
 }

@@ -57,7 +57,10 @@ class NumberScannerProperties {
         });
     }
 
-    /** The scanner as it was: checks the grammar while copying the cleaned characters, then parseDouble. */
+    /**
+     * The scanner as it was, with the range rule of issue 15: checks the grammar while copying the cleaned
+     * characters, then parseDouble.
+     */
     private static double reference(String s, boolean decimalComma, boolean grouping) {
         char decimalMark = decimalComma ? ',' : '.';
         char groupMark = decimalComma ? '.' : ',';
@@ -130,6 +133,9 @@ class NumberScannerProperties {
             return Double.NaN;
         }
         double v = Double.parseDouble(out.toString());
-        return Double.isFinite(v) ? v : Double.NaN;
+        // Out of a double's range: overflow, or non-zero digits that underflow to 0 or a subnormal (digits lost).
+        boolean nonZeroDigits = out.chars().limit(out.indexOf("e") < 0 ? out.length() : out.indexOf("e"))
+                .anyMatch(c -> c >= '1' && c <= '9');
+        return Double.isFinite(v) && (!nonZeroDigits || Math.abs(v) >= Double.MIN_NORMAL) ? v : Double.NaN;
     }
 }
