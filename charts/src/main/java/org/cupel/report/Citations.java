@@ -1,27 +1,35 @@
 package org.cupel.report;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
 import java.util.function.Consumer;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
 
 /**
- * Finds author–year citations ("Stanley &amp; Lawie (2007)", "Westgard, Barry, Hunt &amp; Groth 1981",
- * "Helsel–Cohn 1988") in the text of a section: paragraphs, callouts, captions, table titles, notes and the
- * cells of the rows shown. The methods section lists each with its full reference.
+ * What a section cites: author–year citations ("Stanley &amp; Lawie (2007)", "Westgard, Barry, Hunt &amp;
+ * Groth 1981", "Helsel–Cohn 1988") and the methods it names ("Welch t", "Kaplan–Meier"; the names are those
+ * of {@link Bibliography#methods()}), found in every text a reader sees: the title, paragraphs, callouts,
+ * captions, table titles, notes, column headings and the cells of the rows shown. The methods section
+ * lists the full reference of each.
  */
 final class Citations {
     private static final String NAME = "[A-Z][a-zA-Z'’]+(?:[–-][A-Z][a-zA-Z'’]+)*";
+    /** Names joined by commas, "&amp;" or "and", or by a space within a name of several words ("Western Electric"). */
     private static final Pattern CITATION = Pattern.compile("\\b(" + NAME + "(?:(?:,\\s*|\\s+(?:&|and)\\s+|,\\s+(?:&|and)"
-            + "\\s+)" + NAME + ")*(?:\\s+et al\\.)?)\\s*,?\\s*\\(?((?:19|20)\\d{2})\\b(?![-:.]\\d)");
+            + "\\s+|\\s+)" + NAME + ")*(?:\\s+et al\\.)?)\\s*,?\\s*\\(?((?:19|20)\\d{2})\\b(?![-:.]\\d)");
+    private static final Set<String> MONTHS = Set.of("January", "February", "March", "April", "May", "June",
+            "July", "August", "September", "October", "November", "December");
     /** Capitalised words before a year that are not authors. */
-    private static final Set<String> NOT_AUTHORS = Set.of("January", "February", "March", "April", "May", "June",
-            "July", "August", "September", "October", "November", "December", "In", "The", "See", "Since", "Table",
-            "Section", "Figure", "Appendix", "Part", "Note", "CFR", "From", "To", "Until", "Year", "Reported", "Date",
-            "Version", "Edition", "As", "Of", "After", "Before", "By");
+    private static final Set<String> NOT_AUTHORS = Stream.concat(MONTHS.stream(), Stream.of("In", "The", "See",
+            "Since", "Table", "Section", "Figure", "Appendix", "Part", "Note", "CFR", "From", "To", "Until", "Year",
+            "Reported", "Date", "Version", "Edition", "As", "Of", "After", "Before", "By"))
+            .collect(Collectors.toUnmodifiableSet());
 
     /** One citation as written: the names and the year. */
     record Cited(String names, int year) {
@@ -35,7 +43,30 @@ final class Citations {
 
     static List<Cited> in(ReportSection s) {
         Set<Cited> found = new LinkedHashSet<>();
-        Consumer<String> scan = text -> scan(text, found);
+        texts(s, text -> scan(text, found));
+        return new ArrayList<>(found);
+    }
+
+    /** The methods of {@code bibliography} that the section names, in the bibliography's order. */
+    static List<Bibliography.Method> methodsIn(ReportSection s, Bibliography bibliography) {
+        Set<Bibliography.Method> found = new LinkedHashSet<>();
+        texts(s, text -> {
+            for (Bibliography.Method m : bibliography.methods()) {
+                if (!found.contains(m) && m.pattern().matcher(text).find()) {
+                    found.add(m);
+                }
+            }
+        });
+        return bibliography.methods().stream().filter(found::contains).toList();
+    }
+
+    /** Every text of the section a reader sees, in reading order; null and empty texts are skipped. */
+    static void texts(ReportSection s, Consumer<String> each) {
+        Consumer<String> scan = text -> {
+            if (text != null && !text.isEmpty()) {
+                each.accept(text);
+            }
+        };
         scan.accept(s.title());
         for (ReportBlock b : s.blocks()) {
             if (b instanceof ReportBlock.Paragraph p) {
@@ -51,7 +82,6 @@ final class Citations {
                 t.table().rows().stream().limit(TableLimit.SHOWN).forEach(row -> row.forEach(scan));
             }
         }
-        return new ArrayList<>(found);
     }
 
     static void scan(String text, Set<Cited> out) {
@@ -60,11 +90,28 @@ final class Citations {
         }
         Matcher m = CITATION.matcher(text);
         while (m.find()) {
-            String names = m.group(1);
-            String first = names.split("[\\s,–-]+")[0];
-            if (!NOT_AUTHORS.contains(first)) {
+            String names = authors(m.group(1));
+            if (!names.isEmpty()) {
                 out.add(new Cited(names, Integer.parseInt(m.group(2))));
             }
         }
+    }
+
+    /**
+     * The names without the common words before them ("See Helsel" is Helsel); empty when none is left or a
+     * month is among them (a date such as "in March 2025" is not a citation).
+     */
+    private static String authors(String names) {
+        String[] words = names.split("\\s+");
+        int first = 0;
+        while (first < words.length && NOT_AUTHORS.contains(words[first].replace(",", ""))) {
+            first++;
+        }
+        for (int i = first; i < words.length; i++) {
+            if (MONTHS.contains(words[i].replace(",", ""))) {
+                return "";
+            }
+        }
+        return String.join(" ", Arrays.copyOfRange(words, first, words.length));
     }
 }

@@ -9,72 +9,61 @@ import java.util.Map;
 import org.cupel.config.CupelConfig;
 
 /**
- * Section "Methods and references": every source the other sections cite (found by author and year in
- * their text, see {@link Citations}, or listed in {@link ReportSection#references()}), numbered in order of first
- * citation with the sections citing it, the sources of the report format itself, the thresholds in force
- * with their origin (published source, common practice or user setting; {@link ThresholdsInForce}), and the
- * settings the user changed in the project config.
+ * Section "Methods and references": the methods the report names, each with its sources; every source the
+ * sections cite by author and year ({@link Citations}), list ({@link ReportSection#references()}) or rely
+ * on through a named method, numbered in order of first citation with the sections citing it, all from the
+ * one {@link Bibliography}; the sources of the report format itself; the thresholds in force with their
+ * origin ({@link ThresholdsInForce}); and the settings the user changed in the project config.
+ *
+ * <p>A citation that names no entry, or more than one, a listed reference that is not the bibliography's
+ * own, and a method named in the text that the bibliography gives no source for, are shown in a warning and
+ * counted in the headline {@code citationsWithoutReference}.
  */
 public final class MethodsSection {
     public static final String ID = "methods";
+    private static final String TITLE = "Methods and references";
 
     /** Sources of the report's own conventions (chart colours, CSV format and safety). */
-    static final List<Reference> OWN = List.of(
-            new Reference("Okabe, M. and Ito, K.", 2008, "Color Universal Design (CUD): how to make figures and "
-                    + "presentations that are friendly to colorblind people", "J*Fly, jfly.uni-koeln.de/color"),
-            new Reference("Shafranovich, Y.", 2005, "Common Format and MIME Type for Comma-Separated Values (CSV) "
-                    + "Files", "IETF RFC 4180"),
-            new Reference("OWASP Foundation", 2024, "CSV Injection", "owasp.org/www-community/attacks/CSV_Injection"));
+    static final List<Reference> OWN = List.of(Bibliography.get("okabe2008"), Bibliography.get("rfc4180"),
+            Bibliography.get("owasp"));
 
     private MethodsSection() {
     }
 
     public static ReportSection build(List<ReportSection> cited, CupelConfig config) {
-        Map<String, List<String>> citedIn = new LinkedHashMap<>();
-        Map<String, Reference> byCitation = new LinkedHashMap<>();
-        List<String> missing = new ArrayList<>();
-        for (ReportSection s : cited) {
-            List<Reference> refs = new ArrayList<>(s.references());
-            for (Citations.Cited c : Citations.in(s)) {
-                var entry = Bibliography.find(c.names(), c.year());
-                if (entry.isPresent()) {
-                    refs.add(entry.get().reference());
-                } else if (!citedInOwnList(s, c) && !missing.contains(c.asWritten())) {
-                    missing.add(c.asWritten());
-                }
-            }
-            for (Reference r : refs) {
-                byCitation.putIfAbsent(r.citation(), r);
-                List<String> where = citedIn.computeIfAbsent(r.citation(), k -> new ArrayList<>());
-                if (!where.contains(s.title())) {
-                    where.add(s.title());
-                }
-            }
+        return build(cited, config, Bibliography.standard());
+    }
+
+    static ReportSection build(List<ReportSection> cited, CupelConfig config, Bibliography bibliography) {
+        ReportTable thresholds = ThresholdsInForce.table(config);
+        List<ReportSection> all = new ArrayList<>(cited);
+        // The thresholds table cites too ("Westgard et al. 1981"), and is named as the place that cites.
+        all.add(new ReportSection(ID, thresholds.title(), List.of(new ReportBlock.Table(thresholds)), Map.of()));
+        Sources sources = new Sources(bibliography);
+        for (ReportSection s : all) {
+            sources.collect(s);
         }
         for (Reference r : OWN) {
-            byCitation.putIfAbsent(r.citation(), r);
-            citedIn.computeIfAbsent(r.citation(), k -> new ArrayList<>()).add("report format");
-        }
-        List<List<String>> rows = new ArrayList<>();
-        int n = 1;
-        for (Map.Entry<String, Reference> e : byCitation.entrySet()) {
-            rows.add(List.of(String.valueOf(n++), e.getKey(), String.join("; ", citedIn.get(e.getKey()))));
+            sources.add(r, "report format");
         }
         List<ReportBlock> blocks = new ArrayList<>();
         blocks.add(new ReportBlock.Paragraph("Each section states the formulas it applies beside its tables and "
                 + "charts, and the thresholds in force with their origin: a published source, common practice in "
-                + "assay QC, or a setting made in the project config. The sources are listed here."));
+                + "assay QC, or a setting made in the project config. The methods the report names and every "
+                + "source it cites are listed here; the numbers in brackets are those of the references table."));
+        blocks.add(new ReportBlock.Table(new ReportTable("method-sources", "Methods named in the report",
+                List.of("Method", "Sources", "Used in"), sources.methodRows(), "Each method is listed with the "
+                        + "sources of its formulas, whether or not the sentence naming it gives the author and year.")));
         blocks.add(new ReportBlock.Table(new ReportTable("references", "References",
-                List.of("No.", "Source", "Cited in"), rows, "Sources found cited by author and year in the sections' "
-                        + "text, and those the sections list; journal details are to be checked against the "
-                        + "publications before the appendix is published.")));
-        if (!missing.isEmpty()) {
-            blocks.add(new ReportBlock.Callout(ReportBlock.Level.WARN, "Cited in the text but without a full "
-                    + "reference in Cupel's bibliography: " + String.join("; ", missing) + "."));
+                List.of("No.", "Source", "Cited in"), sources.referenceRows(), "Sources cited by author and year "
+                        + "in the sections, listed by a section, behind a method the report names, or behind the "
+                        + "report format (chart colours, CSV files).")));
+        if (!sources.problems.isEmpty()) {
+            blocks.add(new ReportBlock.Callout(ReportBlock.Level.WARN, "Cited or named in the text but without exactly "
+                    + "one entry in Cupel's bibliography: " + String.join("; ", sources.problems) + "."));
         }
         blocks.add(new ReportBlock.Paragraph("The thresholds in force, as the analyses applied them, and where "
                 + "each comes from:"));
-        ReportTable thresholds = ThresholdsInForce.table(config);
         blocks.add(new ReportBlock.Table(thresholds));
         List<List<String>> settings = new ArrayList<>();
         flatten("", config.tree(), settings);
@@ -87,17 +76,92 @@ public final class MethodsSection {
                     List.of("Setting", "Value"), settings, "As written in " + config.source() + ".")));
         }
         Map<String, Object> h = new LinkedHashMap<>();
-        h.put("references", rows.size());
-        h.put("citationsWithoutReference", missing.size());
+        h.put("references", sources.byCitation.size());
+        h.put("methodsNamed", sources.methodsUsedIn.size());
+        h.put("citationsWithoutReference", sources.problems.size());
         h.put("userSettings", settings.size());
         h.put("thresholds", thresholds.rows().size());
-        return new ReportSection(ID, "Methods and references", blocks, h);
+        return new ReportSection(ID, TITLE, blocks, h);
     }
 
-    /** A citation that names a source the section already lists in full ("Okabe & Ito 2008"). */
-    private static boolean citedInOwnList(ReportSection s, Citations.Cited c) {
-        return s.references().stream().anyMatch(r -> r.year() == c.year()
-                && c.names().contains(r.authors().split("[,\\s]+")[0]));
+    /** The sources found so far, in order of first citation, with where each is cited and what is wrong. */
+    private static final class Sources {
+        private final Bibliography bibliography;
+        private final Map<String, Reference> byCitation = new LinkedHashMap<>();
+        private final Map<String, List<String>> citedIn = new LinkedHashMap<>();
+        private final Map<Bibliography.Method, List<String>> methodsUsedIn = new LinkedHashMap<>();
+        private final List<String> problems = new ArrayList<>();
+
+        Sources(Bibliography bibliography) {
+            this.bibliography = bibliography;
+        }
+
+        void collect(ReportSection s) {
+            for (Reference r : s.references()) {
+                if (bibliography.entryOf(r).isPresent()) {
+                    add(r, s.title());
+                } else {
+                    problem(r.citation() + " (listed by " + s.title() + ", not the bibliography's entry)");
+                }
+            }
+            for (Citations.Cited c : Citations.in(s)) {
+                List<Bibliography.Entry> found = bibliography.resolve(c);
+                if (found.size() == 1) {
+                    add(found.get(0).reference(), s.title());
+                } else {
+                    problem(c.asWritten() + (found.isEmpty() ? "" : " (names " + found.size() + " entries)"));
+                }
+            }
+            for (Bibliography.Method m : Citations.methodsIn(s, bibliography)) {
+                addOnce(methodsUsedIn.computeIfAbsent(m, k -> new ArrayList<>()), s.title());
+                if (m.sources().isEmpty()) {
+                    problem(m.name() + " (named in " + s.title() + ", no source in the bibliography)");
+                }
+                for (String key : m.sources()) {
+                    add(bibliography.entry(key).orElseThrow().reference(), s.title());
+                }
+            }
+        }
+
+        void add(Reference r, String where) {
+            byCitation.putIfAbsent(r.citation(), r);
+            addOnce(citedIn.computeIfAbsent(r.citation(), k -> new ArrayList<>()), where);
+        }
+
+        private void problem(String what) {
+            if (!problems.contains(what)) {
+                problems.add(what);
+            }
+        }
+
+        List<List<String>> referenceRows() {
+            List<List<String>> rows = new ArrayList<>();
+            int n = 1;
+            for (String citation : byCitation.keySet()) {
+                rows.add(List.of(String.valueOf(n++), citation, String.join("; ", citedIn.get(citation))));
+            }
+            return rows;
+        }
+
+        List<List<String>> methodRows() {
+            List<String> numbers = new ArrayList<>(byCitation.keySet());
+            List<List<String>> rows = new ArrayList<>();
+            for (Map.Entry<Bibliography.Method, List<String>> e : methodsUsedIn.entrySet()) {
+                List<String> cites = new ArrayList<>();
+                for (String key : e.getKey().sources()) {
+                    Bibliography.Entry entry = bibliography.entry(key).orElseThrow();
+                    cites.add(entry.shortForm() + " [" + (numbers.indexOf(entry.reference().citation()) + 1) + "]");
+                }
+                rows.add(List.of(e.getKey().name(), String.join("; ", cites), String.join("; ", e.getValue())));
+            }
+            return rows;
+        }
+
+        private static void addOnce(List<String> list, String value) {
+            if (!list.contains(value)) {
+                list.add(value);
+            }
+        }
     }
 
     private static void flatten(String prefix, JsonNode node, List<List<String>> out) {

@@ -110,7 +110,7 @@ final class ThresholdsInForce {
         add("duplicates.batchRuleAlpha", s.batchRuleAlpha(), "a batch fails the acceptance rule only when the "
                 + "one-sided binomial test of its share within the HARD limit gives p below this", PRACTICE);
         add("duplicates.thGroupSize", s.thGroupSize(), "pairs per Thompson–Howarth group",
-                "Thompson & Howarth 1978 (recalled from memory)");
+                "Thompson & Howarth 1978");
         add("duplicates.thMinimumPairs", s.thMinimumPairs(), "fewest usable pairs for a precision model",
                 PRACTICE);
     }

@@ -83,9 +83,7 @@ final class ReportFixture {
                 new ReportBlock.Figure(SCRIPT, "Chart " + SCRIPT, ReportFixture::chart),
                 new ReportBlock.Figure(TRAVERSAL, "Second chart", ReportFixture::chart));
         return new ReportSection("checks" + SCRIPT, "Checks " + SCRIPT, blocks, Map.of("failures", 1,
-                "bias", Double.NaN), List.of(new Reference("Westgard, J. O., Barry, P. L., Hunt, M. R. and Groth, T.",
-                        1981, "A multi-rule Shewhart chart for quality control in clinical chemistry",
-                        "Clinical Chemistry 27(3), 493-501")));
+                "bias", Double.NaN), List.of(Bibliography.get("westgard1981")));
     }
 
     static XYChart chart() {

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.function.Predicate;
+import java.util.stream.Stream;
 import org.cupel.charts.duplicates.DuplicateCharts;
 import org.cupel.duplicates.BatchPrecision;
 import org.cupel.duplicates.BiasResult;
@@ -24,6 +25,7 @@ import org.cupel.duplicates.PrecisionSummary;
 import org.cupel.duplicates.RmaFit;
 import org.cupel.duplicates.RuleOutcome;
 import org.cupel.duplicates.TestResult;
+import org.cupel.report.Bibliography;
 import org.cupel.report.Reference;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportSection;
@@ -31,30 +33,9 @@ import org.cupel.report.ReportTable;
 
 /** The duplicates section of the QC appendix, formatted from the core duplicate results. */
 public final class DuplicatesSection {
-    /** The sources of the section's formulas, for "Methods and references" (details recalled where marked in core). */
-    static final List<Reference> REFERENCES = List.of(
-            new Reference("Shaw, W. J.", 1997, "Validation of sampling and assaying quality for bankable feasibility "
-                    + "studies", "The Resource Database Towards 2000, AusIMM, Wollongong"),
-            new Reference("Stanley, C. R. and Lawie, D.", 2007, "Average relative error in geochemical "
-                    + "determinations: clarification, calculation, and a plea for consistency",
-                    "Exploration and Mining Geology 16, 267–275"),
-            new Reference("Stanley, C. R. and Lawie, D.", 2008, "Thompson–Howarth error analysis: unbiased "
-                    + "alternatives to the large-sample method for assessing non-normally distributed measurement "
-                    + "error in geochemical samples", "Geochemistry: Exploration, Environment, Analysis 8, 173–182"),
-            new Reference("Thompson, M. and Howarth, R. J.", 1976, "Duplicate analysis in geochemical practice",
-                    "Analyst 101, 690–698 and 699–709"),
-            new Reference("Thompson, M. and Howarth, R. J.", 1978, "A new approach to the estimation of analytical "
-                    + "precision", "Journal of Geochemical Exploration 9, 23–30"),
-            new Reference("International Organization for Standardization", 1994, "ISO 5725-2 and 5725-6: Accuracy "
-                    + "(trueness and precision) of measurement methods and results", "ISO, Geneva"),
-            new Reference("Miller, R. L. and Kahn, J. S.", 1962, "Statistical Analysis in the Geological Sciences",
-                    "Wiley, New York"),
-            new Reference("Wilcoxon, F.", 1945, "Individual comparisons by ranking methods",
-                    "Biometrics Bulletin 1, 80–83"),
-            new Reference("Efron, B. and Tibshirani, R. J.", 1993, "An Introduction to the Bootstrap",
-                    "Chapman & Hall, New York"),
-            new Reference("NIST/SEMATECH", 2012, "e-Handbook of Statistical Methods, section 7.2.3.1: chi-square "
-                    + "test for the variance", "https://www.itl.nist.gov/div898/handbook/"));
+    /** The sources of the section's formulas, for "Methods and references" (entries of the one bibliography). */
+    static final List<Reference> REFERENCES = Stream.of("shaw1997", "stanley2007", "stanley2008", "thompson1978",
+            "iso5725", "millerkahn1962", "wilcoxon1945", "efron1993", "nistsematech").map(Bibliography::get).toList();
 
     /** Outlier rows listed per set; the rest are counted. */
     public static final int OUTLIERS_LISTED = 50;
