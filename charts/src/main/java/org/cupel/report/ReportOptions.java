@@ -5,7 +5,7 @@ import org.cupel.charts.PngWriter;
 /**
  * How the output folder is written.
  *
- * @param paper PDF paper size
+ * @param paper paper size of the PDF and of the Word copy
  * @param chartDpi resolution of {@code charts/*.png}: {@link PngWriter#PRINT_DPI} or
  *     {@link PngWriter#SCREEN_DPI}; the PDF always uses print resolution
  * @param force replace an existing output folder written by Cupel

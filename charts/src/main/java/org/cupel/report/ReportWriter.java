@@ -12,14 +12,15 @@ import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.Comparator;
+import java.util.function.Function;
 import java.util.stream.Stream;
 import org.cupel.charts.PngWriter;
 import org.cupel.project.FileProblems;
 import org.cupel.project.InputException;
 
 /**
- * Writes the report's output folder: {@code index.html}, {@code appendix.pdf}, {@code charts/*.png},
- * {@code tables/*.csv}, {@code summary.json} and the marker file {@value #MARKER}.
+ * Writes the report's output folder: {@code index.html}, {@code appendix.pdf}, {@code appendix.docx},
+ * {@code charts/*.png}, {@code tables/*.csv}, {@code summary.json} and the marker file {@value #MARKER}.
  *
  * <p>Atomic: everything is written into a hidden temporary folder beside the target, and only a complete
  * folder is moved into place (a rename within one file system). An existing folder is replaced only with
@@ -141,14 +142,15 @@ public final class ReportWriter {
 
     /**
      * The charts are drawn on worker threads from the start; meanwhile this thread writes the tables and
-     * the page, then the PDF, which takes each chart as soon as it is written. Drawing the charts and
-     * laying out the PDF are the two largest costs of a big report, and they no longer wait for each other.
+     * the page, then the PDF, which takes each chart as soon as it is written, then the Word copy. Drawing
+     * the charts and laying out the PDF are the two largest costs of a big report, and they no longer wait
+     * for each other.
      */
     private static void build(QcReport report, Path dir, ReportOptions options, ReportProgress progress)
             throws IOException {
         ReportFiles files = new ReportFiles(report);
         boolean separatePrint = options.chartDpi() != PngWriter.PRINT_DPI;
-        progress.start(files.figures().size() * (separatePrint ? 2L : 1L) + files.tables().size() + 3);
+        progress.start(files.figures().size() * (separatePrint ? 2L : 1L) + files.tables().size() + 4);
         Files.createDirectory(dir.resolve("charts"));
         Files.createDirectory(dir.resolve("tables"));
         Path print = separatePrint ? Files.createDirectory(dir.resolve(".print")) : dir;
@@ -160,13 +162,20 @@ public final class ReportWriter {
             }
             progress.step("index.html");
             Files.writeString(dir.resolve("index.html"), HtmlReport.render(report, files), StandardCharsets.UTF_8);
+            Function<ReportBlock.Figure, byte[]> printPngs = f -> printPng(charts, f, separatePrint
+                    ? print.resolve(ChartJobs.printName(files.chart(f))) : dir.resolve(files.chart(f)));
             progress.step("appendix.pdf");
             // OpenPDF writes many small pieces (one per PDF object and content operator run): buffer them.
             try (OutputStream os = new BufferedOutputStream(Files.newOutputStream(dir.resolve("appendix.pdf")),
                     1 << 16)) {
-                PdfReport.write(report, files, f -> printPng(charts, f, separatePrint
-                        ? print.resolve(ChartJobs.printName(files.chart(f))) : dir.resolve(files.chart(f))),
-                        options.paper(), os);
+                PdfReport.write(report, files, printPngs, options.paper(), os);
+            } catch (UncheckedIOException e) {
+                throw e.getCause();
+            }
+            progress.step("appendix.docx");
+            try (OutputStream os = new BufferedOutputStream(Files.newOutputStream(dir.resolve("appendix.docx")),
+                    1 << 16)) {
+                DocxReport.write(report, files, printPngs, options.paper(), os);
             } catch (UncheckedIOException e) {
                 throw e.getCause();
             }

@@ -27,7 +27,7 @@ class ReportWriterTest {
     void writesEveryPartUnderSafeNames(@TempDir Path dir) throws IOException {
         Path out = dir.resolve("qc");
         ReportWriter.write(ReportFixture.report(), out, SCREEN, ReportProgress.NONE);
-        for (String f : List.of("index.html", "appendix.pdf", "summary.json", ReportWriter.MARKER,
+        for (String f : List.of("index.html", "appendix.pdf", "appendix.docx", "summary.json", ReportWriter.MARKER,
                 "charts/script_alert_1_script.png", "charts/x.png", "tables/x.csv", "tables/data-exceptions.csv",
                 "tables/scope-batches.csv", "tables/references.csv")) {
             assertTrue(Files.size(out.resolve(f)) > 0, f);

@@ -33,8 +33,9 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code cupel report}: the QC appendix of a project (or of the demo project) as one output folder. */
 @Command(name = "report", mixinStandardHelpOptions = true,
-        description = {"Write the QC appendix of a project: index.html, appendix.pdf, charts/*.png, tables/*.csv",
-                "and summary.json, into a new folder (written in full, then moved into place)."},
+        description = {"Write the QC appendix of a project: index.html, appendix.pdf, appendix.docx (an editable",
+                "Word copy), charts/*.png, tables/*.csv and summary.json, into a new folder (written in full, then",
+                "moved into place)."},
         footer = {"", "Examples:",
                 "  cupel report demo-project --out qc-appendix",
                 "  cupel report my-project --out week-12 --since 2025-03-17 --until 2025-03-23 --force",

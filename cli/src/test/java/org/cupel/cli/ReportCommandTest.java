@@ -26,8 +26,8 @@ class ReportCommandTest {
     void writesTheAppendixOfAProjectFolder(@TempDir Path dir) throws Exception {
         Path qc = dir.resolve("qc");
         assertEquals(0, run("report", MESSY.toString(), "--out", qc.toString(), "--screen", "--quiet"), err.toString());
-        for (String f : new String[] {"index.html", "appendix.pdf", "summary.json", "tables/scope-batches.csv",
-            "tables/data-exceptions.csv"}) {
+        for (String f : new String[] {"index.html", "appendix.pdf", "appendix.docx", "summary.json",
+            "tables/scope-batches.csv", "tables/data-exceptions.csv"}) {
             assertTrue(Files.size(qc.resolve(f)) > 0, f);
         }
         assertTrue(out.toString().contains("written to"));

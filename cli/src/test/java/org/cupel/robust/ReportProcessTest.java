@@ -79,6 +79,13 @@ class ReportProcessTest {
                 Files.readAllBytes(runs.resolve("b").resolve("appendix.pdf")));
     }
 
+    /** The Word copy too: its dates come from the variable, not from the clock of either process. */
+    @Test
+    void twoRunsWithTheSameSourceDateEpochGiveAnIdenticalWordCopy() throws Exception {
+        assertArrayEquals(Files.readAllBytes(runs.resolve("a").resolve("appendix.docx")),
+                Files.readAllBytes(runs.resolve("b").resolve("appendix.docx")));
+    }
+
     static void copyTree(Path from, Path to) throws IOException {
         try (Stream<Path> s = Files.walk(from)) {
             for (Path p : s.toList()) {
