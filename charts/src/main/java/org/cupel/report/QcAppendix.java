@@ -51,7 +51,7 @@ public final class QcAppendix {
         List<Supplier<ReportSection>> builders = new ArrayList<>();
         builders.add(() -> ScopeSection.build(ProjectSummary.of(project), selection));
         builders.add(() -> InsertionRateSection.build(batches.insertion()));
-        builders.add(() -> VerdictSection.build(batches.verdicts(), batches.reassay()));
+        builders.add(() -> VerdictSection.build(batches.groups(), batches.reassay(), batches.resubmit()));
         builders.add(() -> DataExceptionsSection.build(project));
         builders.add(() -> DetectionLimitSection.build(analyses.censoring()));
         builders.add(() -> CrmSection.of(analyses.crms()));
