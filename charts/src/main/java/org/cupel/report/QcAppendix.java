@@ -23,8 +23,8 @@ import org.cupel.report.duplicates.DuplicatesSection;
 import org.cupel.report.recovery.TestworkSection;
 
 /**
- * The one place that lists the sections of the QC appendix, in the order a reviewer reads them: scope and
- * insertion rates, batch verdicts and the re-assay list, data exceptions and the detection-limit
+ * The one place that lists the sections of the QC appendix, in the order a reviewer reads them: the summary
+ * (the verdict in plain words), scope and insertion rates, batch verdicts and the re-assay list, data exceptions and the detection-limit
  * treatment, CRMs, blanks, duplicates, metallurgical testwork (when given), methods and references,
  * cautions. The core analyses compute every result; each section builder only formats them.
  */
@@ -58,6 +58,7 @@ public final class QcAppendix {
         builders.add(() -> BlankSection.build(batches.blanks(), project.config()));
         builders.add(() -> DuplicatesSection.build(analyses.duplicates(), path -> project.config().isUserSet(path)));
         testwork.ifPresent(r -> builders.add(() -> TestworkSection.build(r)));
+        builders.add(0, () -> SummarySection.build(batches, analyses.crms(), analyses.duplicates(), testwork));
         List<ReportSection> sections = buildAll(builders);
         ReportSection cautions = CautionsSection.build();
         List<ReportSection> citing = new ArrayList<>(sections);
