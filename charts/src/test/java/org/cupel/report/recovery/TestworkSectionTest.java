@@ -17,9 +17,7 @@ class TestworkSectionTest {
 
     @Test
     void sectionCarriesTablesChartsAndTheCaution() {
-        Path dir = Path.of(System.getProperty("cupel.testdata", "../testdata"), "recovery", "testwork");
-        RecoveryResult r = RecoveryAnalysis.run(TestworkReader.read(dir, RecoverySettings.DEFAULTS,
-                ValueConventions.DEFAULTS), RecoverySettings.DEFAULTS);
+        RecoveryResult r = fixture();
         ReportSection s = TestworkSection.build(r);
         assertEquals(4, s.blocks().stream().filter(b -> b instanceof ReportBlock.Table).count());
         assertEquals(6, s.blocks().stream().filter(b -> b instanceof ReportBlock.Figure).count());
@@ -35,9 +33,7 @@ class TestworkSectionTest {
     // 17.5: the section opens with plain-words findings, one box per analyte and one for the metal balance.
     @Test
     void findingsNameEachConditionAndSayWhichIsHigherWherePairsDiffer() {
-        Path dir = Path.of(System.getProperty("cupel.testdata", "../testdata"), "recovery", "testwork");
-        RecoveryResult r = RecoveryAnalysis.run(TestworkReader.read(dir, RecoverySettings.DEFAULTS,
-                ValueConventions.DEFAULTS), RecoverySettings.DEFAULTS);
+        RecoveryResult r = fixture();
         ReportSection s = TestworkSection.build(r);
         java.util.List<ReportBlock.Callout> findings = TestworkSection.findings(r);
         assertEquals(r.analytes().size() + 1, findings.size());
@@ -68,6 +64,13 @@ class TestworkSectionTest {
         }
         ReportBlock.Callout balance = findings.get(findings.size() - 1);
         assertTrue(balance.text().startsWith("The metal balance"), balance.text());
+    }
+
+    /** The recovery results of the testwork fixture (testdata/recovery/testwork). */
+    private static RecoveryResult fixture() {
+        Path dir = Path.of(System.getProperty("cupel.testdata", "../testdata"), "recovery", "testwork");
+        return RecoveryAnalysis.run(TestworkReader.read(dir, RecoverySettings.DEFAULTS, ValueConventions.DEFAULTS),
+                RecoverySettings.DEFAULTS);
     }
 
     private static double mean(RecoveryResult r, String analyte, String condition) {
