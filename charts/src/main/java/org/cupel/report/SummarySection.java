@@ -121,7 +121,8 @@ public final class SummarySection {
         long samples = review.reassay().sampleCount();
         int results = review.reassay().entries().size();
         String reassayCsv = csv("reassay-list");
-        blocks.add(new ReportBlock.Callout(samples == 0 ? ReportBlock.Level.PASS : ReportBlock.Level.WARN,
+        // An empty list is a note, not a pass: with no control sample, nothing fails and nothing is shown sound.
+        blocks.add(new ReportBlock.Callout(samples == 0 ? ReportBlock.Level.INFO : ReportBlock.Level.WARN,
                 samples == 0 ? "Re-assay: no control failure calls for re-assay."
                         : "Re-assay: " + samples + " samples" + (results == samples ? ""
                         : " (" + results + " results by analyte)") + ", listed under "
@@ -129,7 +130,7 @@ public final class SummarySection {
         List<ResubmitEntry> resubmit = review.resubmit().entries();
         String resubmitCsv = csv("resubmit-list");
         blocks.add(resubmit.isEmpty()
-                ? new ReportBlock.Callout(ReportBlock.Level.PASS, "Re-submit: the lab reported no sample insufficient "
+                ? new ReportBlock.Callout(ReportBlock.Level.INFO, "Re-submit: the lab reported no sample insufficient "
                         + "or not received.")
                 : new ReportBlock.Callout(ReportBlock.Level.WARN, "Re-submit " + resubmit.size() + " samples the lab "
                         + "returned without a result (re-assay cannot help: the material is short or missing). "
