@@ -85,12 +85,14 @@ public final class PdfReport {
         try {
             PdfWriter writer = PdfWriter.getInstance(doc, out);
             writer.setPageEvent(new PdfPageFrame(report.project() + " — " + QcReport.TITLE, fonts));
+            PdfContents toc = new PdfContents(fonts);
+            writer.setPageEvent(toc);
             writer.setViewerPreferences(PdfWriter.PageModeUseOutlines);
             doc.addTitle(report.project() + " — " + QcReport.TITLE);
             doc.addCreator("Cupel");
             doc.open();
             fixIdentity(writer);
-            titlePage();
+            titlePage(writer, toc);
             List<ReportSection> sections = report.sections();
             for (int i = 0; i < sections.size(); i++) {
                 doc.add(chapter(i + 1, sections.get(i)));
@@ -133,7 +135,7 @@ public final class PdfReport {
         }
     }
 
-    private void titlePage() {
+    private void titlePage(PdfWriter writer, PdfContents toc) {
         Paragraph kicker = new Paragraph(QcReport.TITLE.toUpperCase(Locale.ROOT), fonts.kicker());
         kicker.setSpacingBefore(150f);
         doc.add(kicker);
@@ -149,14 +151,19 @@ public final class PdfReport {
         doc.add(contents);
         List<ReportSection> sections = report.sections();
         for (int i = 0; i < sections.size(); i++) {
-            Paragraph p = new Paragraph((i + 1) + "   " + sections.get(i).title(), fonts.body());
+            Paragraph p = toc.entry(writer, i + 1, sections.get(i).title());
             p.setIndentationLeft(8f);
+            p.setIndentationRight(8f);
             doc.add(p);
         }
     }
 
     private Chapter chapter(int number, ReportSection s) throws IOException {
-        Paragraph heading = new Paragraph(s.title(), fonts.heading1());
+        Paragraph heading = new Paragraph();
+        heading.setFont(fonts.heading1());
+        Chunk title = new Chunk(s.title(), fonts.heading1());
+        title.setLocalDestination(PdfContents.anchor(number));
+        heading.add(title);
         heading.setSpacingAfter(8f);
         Chapter ch = new Chapter(heading, number);
         ch.setNumberDepth(1);

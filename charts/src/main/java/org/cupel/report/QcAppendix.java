@@ -23,8 +23,8 @@ import org.cupel.report.duplicates.DuplicatesSection;
 import org.cupel.report.recovery.TestworkSection;
 
 /**
- * The one place that lists the sections of the QC appendix, in the order a reviewer reads them: scope and
- * insertion rates, batch verdicts and the re-assay list, data exceptions and the detection-limit
+ * The one place that lists the sections of the QC appendix, in the order a reviewer reads them: the summary
+ * (the verdict in plain words), scope and insertion rates, batch verdicts and the re-assay list, data exceptions and the detection-limit
  * treatment, CRMs, blanks, duplicates, metallurgical testwork (when given), methods and references,
  * cautions. The core analyses compute every result; each section builder only formats them.
  */
@@ -51,13 +51,14 @@ public final class QcAppendix {
         List<Supplier<ReportSection>> builders = new ArrayList<>();
         builders.add(() -> ScopeSection.build(ProjectSummary.of(project), selection));
         builders.add(() -> InsertionRateSection.build(batches.insertion()));
-        builders.add(() -> VerdictSection.build(batches.verdicts(), batches.reassay()));
+        builders.add(() -> VerdictSection.build(batches.groups(), batches.reassay(), batches.resubmit()));
         builders.add(() -> DataExceptionsSection.build(project));
         builders.add(() -> DetectionLimitSection.build(analyses.censoring()));
         builders.add(() -> CrmSection.of(analyses.crms()));
         builders.add(() -> BlankSection.build(batches.blanks(), project.config()));
         builders.add(() -> DuplicatesSection.build(analyses.duplicates(), path -> project.config().isUserSet(path)));
         testwork.ifPresent(r -> builders.add(() -> TestworkSection.build(r)));
+        builders.add(0, () -> SummarySection.build(batches, analyses.crms(), analyses.duplicates(), testwork));
         List<ReportSection> sections = buildAll(builders);
         ReportSection cautions = CautionsSection.build();
         List<ReportSection> citing = new ArrayList<>(sections);

@@ -28,6 +28,7 @@ import org.junit.jupiter.api.io.TempDir;
 class RenderedReportTest {
     private static final String CHROMIUM = "/usr/bin/chromium";
     private static final String PDFTOPPM = "/usr/bin/pdftoppm";
+    private static final String PDFTOTEXT = "/usr/bin/pdftotext";
 
     @TempDir
     static Path dir;
@@ -93,6 +94,55 @@ class RenderedReportTest {
             }
         }
         assertTrue(chartPages >= 1, "the charts are drawn on at least one page");
+    }
+
+    @Test
+    void contentsPageNumbersAreThePagesWhereTheSectionsStart() throws Exception {
+        assumeTrue(ExternalTool.installed(PDFTOTEXT), "pdftotext is not installed at " + PDFTOTEXT
+                + " (Debian package poppler-utils); skipping the contents-page test");
+        List<Integer> contents = contentsPages(out.resolve("appendix.pdf"), report.sections(), dir);
+        List<String> pages = pageTexts(out.resolve("appendix.pdf"), dir);
+        for (int i = 0; i < contents.size(); i++) {
+            String heading = (i + 1) + ". " + report.sections().get(i).title();
+            assertEquals(contents.get(i), firstPageWithLine(pages, heading),
+                    "contents page of \"" + heading + "\" against the page its heading is on");
+        }
+        // The fixture's long table pushes later sections on: the numbers are not simply 2, 3, 4, ...
+        assertTrue(contents.get(contents.size() - 1) > contents.size() + 1, contents.toString());
+    }
+
+    /**
+     * The page numbers the title page's contents list gives, in section order. Read with layout kept, where
+     * each entry is one line: number, title, leader (drawn, not text), page.
+     */
+    static List<Integer> contentsPages(Path pdf, List<ReportSection> sections, Path work) throws Exception {
+        String first = ExternalTool.run(List.of(PDFTOTEXT, "-layout", "-f", "1", "-l", "1", pdf.toString(), "-"),
+                work, 120);
+        List<Integer> pages = new ArrayList<>();
+        for (int i = 0; i < sections.size(); i++) {
+            Pattern entry = Pattern.compile("^\\s*" + (i + 1) + "\\s+" + Pattern.quote(sections.get(i).title())
+                    + "\\s+(\\d+)\\s*$", Pattern.MULTILINE);
+            Matcher m = entry.matcher(first);
+            assertTrue(m.find(), "contents entry " + (i + 1) + " " + sections.get(i).title() + " in\n" + first);
+            pages.add(Integer.parseInt(m.group(1)));
+        }
+        return pages;
+    }
+
+    /** The text of every page; pdftotext ends each page with a form feed. */
+    static List<String> pageTexts(Path pdf, Path work) throws Exception {
+        String all = ExternalTool.run(List.of(PDFTOTEXT, pdf.toString(), "-"), work, 120);
+        return List.of(all.split("\f", -1));
+    }
+
+    /** The 1-based number of the first page holding {@code line} as a whole line, or -1. */
+    static int firstPageWithLine(List<String> pages, String line) {
+        for (int p = 0; p < pages.size(); p++) {
+            if (pages.get(p).lines().anyMatch(l -> l.strip().equals(line))) {
+                return p + 1;
+            }
+        }
+        return -1;
     }
 
     private List<String> chromium(String mode, String url) throws IOException {

@@ -16,6 +16,8 @@ import org.cupel.control.BatchVerdict;
 import org.cupel.control.InsertionRate;
 import org.cupel.control.ReassayEntry;
 import org.cupel.control.ReassaySettings;
+import org.cupel.control.ResubmitEntry;
+import org.cupel.control.UmpireLab;
 import org.cupel.control.Verdict;
 import org.cupel.control.VerdictReason;
 import org.cupel.control.crm.CrmReview;
@@ -72,6 +74,8 @@ final class BatchesCommand implements Callable<Integer> {
             doc.put("blanks", review.blanks());
             doc.put("insertion", review.insertion());
             doc.put("outcomes", review.outcomes());
+            doc.put("umpireLabs", review.groups().umpireLabs());
+            doc.put("resubmit", review.resubmit().entries());
             Json.print(out, doc);
         } else {
             print(out, project, review);
@@ -82,7 +86,7 @@ final class BatchesCommand implements Callable<Integer> {
     private static void print(PrintWriter out, Project project, BatchReview review) {
         out.println("Batch verdicts: " + project.name());
         TextTable t = new TextTable("Batch", "Lab", "Samples", "Verdict", "Per analyte (control results)");
-        for (BatchVerdict v : review.verdicts()) {
+        for (BatchVerdict v : review.groups().primary()) {
             List<String> per = new ArrayList<>();
             for (AnalyteVerdict a : v.analytes()) {
                 per.add(a.analyte() + " " + label(a.verdict()) + " (" + a.nControls() + ")");
@@ -90,10 +94,13 @@ final class BatchesCommand implements Callable<Integer> {
             t.row(v.batch(), v.lab(), v.nSamples(), label(v.verdict()), String.join(", ", per));
         }
         t.print(out);
+        for (UmpireLab u : review.groups().umpireLabs()) {
+            out.println(wrap(VerdictSection.umpireLine(u), LINE));
+        }
         out.println();
         out.println("Reasons");
         boolean any = false;
-        for (BatchVerdict v : review.verdicts()) {
+        for (BatchVerdict v : review.groups().primary()) {
             for (VerdictReason r : v.reasons()) {
                 any = true;
                 out.println("  " + v.batch() + "  " + label(r.verdict()) + "  " + VerdictSection.reason(r));
@@ -101,8 +108,8 @@ final class BatchesCommand implements Callable<Integer> {
         }
         if (!any) {
             // A batch without control results has no reason listed when no analyte has a control at all.
-            boolean judged = !review.verdicts().isEmpty()
-                    && review.verdicts().stream().allMatch(v -> v.verdict() == Verdict.PASS);
+            boolean judged = !review.groups().primary().isEmpty()
+                    && review.groups().primary().stream().allMatch(v -> v.verdict() == Verdict.PASS);
             out.println(judged ? "  every control result passed"
                     : "  no control results (no CRM or blank result in any batch): no batch can be judged");
         }
@@ -122,9 +129,45 @@ final class BatchesCommand implements Callable<Integer> {
             r.print(out);
         }
         out.println();
+        printResubmit(out, review);
+        out.println();
         BlankTables.print(out, review.blanks());
         out.println();
         printInsertion(out, review);
+    }
+
+    /** Terminal width the prose lines are wrapped to. */
+    private static final int LINE = 120;
+
+    /** {@code text} broken at spaces into lines of at most {@code width} characters (a longer word stands alone). */
+    static String wrap(String text, int width) {
+        StringBuilder out = new StringBuilder();
+        int lineStart = 0;
+        for (String word : text.split(" ")) {
+            if (out.length() > lineStart && out.length() - lineStart + 1 + word.length() > width) {
+                out.append('\n');
+                lineStart = out.length();
+            } else if (out.length() > lineStart) {
+                out.append(' ');
+            }
+            out.append(word);
+        }
+        return out.toString();
+    }
+
+    private static void printResubmit(PrintWriter out, BatchReview review) {
+        if (review.resubmit().entries().isEmpty()) {
+            out.println("Samples to re-submit: none (the lab reported no sample insufficient or not received).");
+            return;
+        }
+        out.println("Samples to re-submit (" + review.resubmit().entries().size()
+                + ", reported insufficient or not received: no result to re-assay)");
+        TextTable r = new TextTable("Sample", "Batch", "Position", "Analytes", "Lab code", "Reason", "File", "Line");
+        for (ResubmitEntry e : review.resubmit().entries()) {
+            r.row(e.sampleId(), e.batch(), e.position(), String.join(", ", e.analytes()),
+                    String.join(", ", e.labCodes()), e.reasonText(), e.source().file(), e.source().line());
+        }
+        r.print(out);
     }
 
     private static final List<String> SHORT = InsertionRateSection.SHORT_NAMES;

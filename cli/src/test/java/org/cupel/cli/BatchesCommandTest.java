@@ -85,6 +85,33 @@ class BatchesCommandTest {
         assertTrue(r[1].contains("probable carry-over"));
     }
 
+    // The demo generator codes three samples IS and two NR in both analyte columns (docs/demo.md, planted
+    // problems; PlantLog), and sends 125 umpire checks to Brisk Fen Analytical in five batches of 25.
+    @Test
+    void tableListsTheSamplesToResubmitAndTheUmpireLabApart() throws Exception {
+        String[] r = run("batches", project.toString());
+        assertEquals("0", r[0], r[2]);
+        String[][] planted = {{"VH0000502", "OAL-00005", "IS", "insufficient sample"},
+            {"VH0000898", "OAL-00008", "NR", "not received"}, {"VH0001650", "OAL-00014", "IS", "insufficient sample"},
+            {"VH0002252", "OAL-00019", "NR", "not received"}, {"VH0002769", "OAL-00023", "IS", "insufficient sample"}};
+        String out = r[1];
+        String resubmit = out.substring(out.indexOf("Samples to re-submit (5,"));
+        for (String[] p : planted) {
+            assertTrue(resubmit.lines().anyMatch(l -> l.startsWith(p[0]) && l.contains(p[1]) && l.contains("Au, Ag")
+                    && l.contains(" " + p[2] + " ") && l.contains(p[3])), String.join(" ", p) + "\n" + resubmit);
+        }
+        assertTrue(out.replace('\n', ' ').contains("Umpire lab (Brisk Fen Analytical): 5 batches (BFA-U0001–BFA-U0005), "
+                + "125 check assays, not counted among the batches above"), out);
+        assertTrue(out.lines().allMatch(l -> !l.startsWith("Umpire") || l.length() <= 120), "prose wrapped to 120");
+        String table = out.substring(0, out.indexOf("Reasons"));
+        assertTrue(table.lines().noneMatch(l -> l.startsWith("BFA-")), "umpire batches are not primary rows");
+        assertTrue(!out.contains("cannot judge"), "no primary batch of the demo lacks controls");
+        JsonNode doc = new ObjectMapper().readTree(run("batches", project.toString(), "--json")[1]);
+        assertEquals(5, doc.get("resubmit").size());
+        assertEquals("IS", doc.get("resubmit").get(0).get("labCodes").get(0).asText());
+        assertEquals(125, doc.get("umpireLabs").get(0).get("checkAssays").asInt());
+    }
+
     @Test
     void missingFolderIsAnInputError() {
         assertEquals("2", run("batches", dir.resolve("nope").toString())[0]);

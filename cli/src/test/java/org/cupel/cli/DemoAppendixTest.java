@@ -131,4 +131,20 @@ class DemoAppendixTest {
         assertEquals(4, table("data-exceptions.csv").size(), "header and exactly the three planted exceptions");
         assertTrue(json().contains("\"excluded\" : 3"));
     }
+
+    // Planted codes: three samples IS, two NR (PlantLog). The summary opens the page and the PDF, and the
+    // samples to re-submit are in their own table with the lab's code.
+    @Test
+    void theSummaryComesFirstAndTheSamplesToResubmitHaveTheirTable() throws IOException {
+        String html = Files.readString(qc.resolve("index.html"));
+        int first = html.indexOf("<section id=\"");
+        assertTrue(html.startsWith("<section id=\"s-summary\">", first), html.substring(first, first + 60));
+        String[][] planted = {{"VH0000502", "OAL-00005", "IS"}, {"VH0000898", "OAL-00008", "NR"},
+            {"VH0001650", "OAL-00014", "IS"}, {"VH0002252", "OAL-00019", "NR"}, {"VH0002769", "OAL-00023", "IS"}};
+        for (String[] p : planted) {
+            assertEquals(1, rows("resubmit-list.csv", p[0] + "," + p[1] + ",", "," + p[2] + ",").size(), p[0]);
+        }
+        assertEquals(planted.length + 1, table("resubmit-list.csv").size(), "header and the five planted samples");
+        assertTrue(json().contains("\"summary\" : {"), "summary.json has the summary's headlines");
+    }
 }

@@ -29,9 +29,11 @@ public final class AnalyteColumn {
     private final List<String> methods;
     private final Map<Integer, List<MethodValue>> candidatesByRow;
     private final Map<Integer, String> selectionReasons;
+    /** The lab's code of a reported missing value ("IS", "NR"), for the rows that have one. */
+    private final Map<Integer, String> missingCodes;
 
     private AnalyteColumn(Analyte analyte, int size, List<String> methods, byte[] qualifiers, double[] values,
-                          double[] limits, byte[] missing, short[] methodIndex) {
+                          double[] limits, byte[] missing, short[] methodIndex, Map<Integer, String> missingCodes) {
         this.analyte = analyte;
         this.size = size;
         this.qualifiers = qualifiers;
@@ -42,6 +44,7 @@ public final class AnalyteColumn {
         this.methods = methods;
         this.candidatesByRow = new HashMap<>();
         this.selectionReasons = new HashMap<>();
+        this.missingCodes = missingCodes;
     }
 
     public Analyte analyte() {
@@ -91,6 +94,16 @@ public final class AnalyteColumn {
     /** Why the reported value was chosen, for rows with more than one candidate; else empty. */
     public String selectionReason(int row) {
         return selectionReasons.getOrDefault(row, "");
+    }
+
+    /**
+     * The text the lab wrote for the reported value when it is missing by a code ("IS" for insufficient
+     * sample, "NR" for not received), as it stood in the cell; empty when the value is not missing, the cell
+     * was blank, or the reported value is not the row's first result (the codes of later candidates are not
+     * kept: their reason still is).
+     */
+    public String missingCode(int row) {
+        return missingCodes.getOrDefault(row, "");
     }
 
     /** Rows with more than one candidate result, ascending. */
@@ -146,6 +159,7 @@ public final class AnalyteColumn {
         private int[] sourceFile = new int[0];
         private int[] sourceLine = new int[0];
         private final Map<Integer, Integer> sourceColumn = new HashMap<>();
+        private final Map<Integer, String> missingCodes = new HashMap<>();
         private final List<String> files = new ArrayList<>();
         private final Map<String, Integer> fileIdx = new HashMap<>();
         private String lastFile;
@@ -212,6 +226,16 @@ public final class AnalyteColumn {
             }
             all.add(new MethodValue(method, new AssayValue(qualifier, value, limit, reason),
                     file == null ? null : new SourceLocation(file, line, column)));
+        }
+
+        /**
+         * The lab's code of the missing result just added to {@code row}, kept when it is the row's first
+         * result (see {@link AnalyteColumn#missingCode(int)}).
+         */
+        public void missingCode(int row, String code) {
+            if (!several.containsKey(row) && qualifiers[row] == (byte) Qualifier.MISSING.ordinal()) {
+                missingCodes.put(row, code);
+            }
         }
 
         /** Methods are numbered as first results bring them; one column's results mostly share one. */
@@ -283,8 +307,9 @@ public final class AnalyteColumn {
                     methodOf[row] = 0;
                 }
             }
+            missingCodes.keySet().removeIf(row -> row >= rowCount);
             AnalyteColumn col = new AnalyteColumn(analyte, rowCount, methods, qualifiers, values, limits, missing,
-                    methodOf);
+                    methodOf, missingCodes);
             int[] rows = several.keySet().stream().mapToInt(Integer::intValue).filter(r -> r < rowCount).sorted()
                     .toArray();
             for (int row : rows) {
@@ -308,6 +333,9 @@ public final class AnalyteColumn {
             }
             col.candidatesByRow.put(row, List.copyOf(ordered));
             col.selectionReasons.put(row, s.reason());
+            if (s.index() != 0) {
+                col.missingCodes.remove(row);
+            }
             AssayValue v = chosen.value();
             col.qualifiers[row] = (byte) v.qualifier().ordinal();
             col.values[row] = v.value();

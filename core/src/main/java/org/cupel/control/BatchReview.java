@@ -14,9 +14,12 @@ import org.cupel.project.Project;
  * @param blanks the blank review
  * @param insertion insertion rates per batch and overall
  * @param outcomes every control outcome the verdicts were built from (other sources first, then blanks)
+ * @param groups the verdicts split into primary and umpire-lab batches
+ * @param resubmit the samples the lab reported insufficient or not received
  */
 public record BatchReview(List<BatchVerdict> verdicts, ReassayList reassay, BlankReport blanks,
-                          InsertionRates insertion, List<ControlOutcome> outcomes) {
+                          InsertionRates insertion, List<ControlOutcome> outcomes, BatchGroups groups,
+                          ResubmitList resubmit) {
 
     public BatchReview {
         verdicts = List.copyOf(verdicts);
@@ -34,9 +37,11 @@ public record BatchReview(List<BatchVerdict> verdicts, ReassayList reassay, Blan
         ReassaySettings reassay = project.config().section("reassay", ReassaySettings.class, ReassaySettings.DEFAULTS);
         InsertionSettings insertion = project.config().section("insertion", InsertionSettings.class,
                 InsertionSettings.DEFAULTS);
-        return new BatchReview(BatchVerdicts.judge(project.samples(), seq, all),
-                ReassayList.build(project.samples(), seq, all, reassay), blanks,
-                InsertionRates.compute(project.samples(), seq, insertion), all);
+        List<BatchVerdict> verdicts = BatchVerdicts.judge(project.samples(), seq, all);
+        return new BatchReview(verdicts, ReassayList.build(project.samples(), seq, all, reassay), blanks,
+                InsertionRates.compute(project.samples(), seq, insertion), all,
+                BatchGroups.of(project.samples(), seq, verdicts),
+                ResubmitList.of(project.samples(), seq, project.analytes().values()));
     }
 
     public boolean anyBatchFailed() {

@@ -45,6 +45,11 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
         brackets = List.copyOf(brackets);
     }
 
+    /** Distinct samples on the list (an entry is one sample and analyte). */
+    public long sampleCount() {
+        return entries.stream().map(ReassayEntry::sampleId).distinct().count();
+    }
+
     public static ReassayList build(SampleTable table, List<ControlOutcome> outcomes, ReassaySettings settings) {
         return build(table, BatchSequence.of(table), outcomes, settings);
     }

@@ -305,6 +305,9 @@ public final class LabFileReader {
                 if (p.usable() && p.value().missingReason() != MissingReason.BLANK_CELL) {
                     AssayValue a = p.value();
                     kept.setResult(c, a.qualifier(), a.value(), a.limit(), a.missingReason());
+                    if (a.isMissing()) {
+                        kept.setCode(c, row.cell(k).strip());
+                    }
                     any = true;
                 }
             }

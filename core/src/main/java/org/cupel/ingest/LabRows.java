@@ -1,6 +1,8 @@
 package org.cupel.ingest;
 
 import java.util.Arrays;
+import java.util.HashMap;
+import java.util.Map;
 import org.cupel.assay.MissingReason;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.Qualifier;
@@ -28,6 +30,8 @@ public final class LabRows {
     private double[] values;
     private double[] limits;
     private byte[] missing;
+    /** The lab's code of a missing result ("IS", "NR"), by cell; few cells have one. */
+    private final Map<Integer, String> codes = new HashMap<>();
 
     /**
      * @param width the number of analyte columns
@@ -99,12 +103,25 @@ public final class LabRows {
         return REASONS[missing[row * width + column]];
     }
 
+    /** The text the lab wrote for a missing result ("IS", "NR"); empty when the cell has none. */
+    public String code(int row, int column) {
+        return codes.isEmpty() ? "" : codes.getOrDefault(row * width + column, "");
+    }
+
     /** Clears the cells of the row being read (row {@link #size()}) to no result. */
     void startRow() {
         if (size == ids.length) {
             grow();
         }
         Arrays.fill(qualifiers, size * width, (size + 1) * width, NO_RESULT);
+    }
+
+    /**
+     * Keeps the lab's code of the missing result just set in {@code column} of the row being read. A row
+     * with a result set is always kept, so a code never outlives its row.
+     */
+    void setCode(int column, String code) {
+        codes.put(size * width + column, code);
     }
 
     void setResult(int column, Qualifier q, double value, double limit, MissingReason reason) {

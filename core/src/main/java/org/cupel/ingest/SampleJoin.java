@@ -130,6 +130,10 @@ final class SampleJoin {
                 }
             }
             builders[c].add(r, q, value, limit, rows.missingReason(row, c), a.method(), file, rows.line(row), 0);
+            String code = rows.code(row, c);
+            if (!code.isEmpty()) {
+                builders[c].missingCode(r, code);
+            }
         }
     }
 

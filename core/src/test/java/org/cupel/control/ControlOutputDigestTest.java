@@ -46,7 +46,9 @@ import org.junit.jupiter.params.provider.CsvSource;
  * outliers (beyond 3 SD, no neighbour beyond 2 SD on their side) were left out of drift: every drift object
  * carries an outlier list; in the 12,000-sample project VH0003746 (VHC-23 Au, z = 3.21) is one, so its
  * series' EWMA signal now starts at VH0004040 instead of at that single result, and the drifting series are
- * the same five.
+ * the same five. And again when the batch review came to carry the batches split into primary and umpire-lab
+ * batches ({@code groups}) and the samples to re-submit ({@code resubmit}): with those two parts left out of
+ * the JSON, both texts still gave the previous digests.
  */
 class ControlOutputDigestTest {
     private static final ObjectMapper JSON = JsonMapper.builder()
@@ -69,8 +71,8 @@ class ControlOutputDigestTest {
 
     @ParameterizedTest
     @CsvSource({
-        "2500, 20260302, be4589c3b578b79910feecf4496956919945dfaf5f41026d2e9bfc3c03d8b405",
-        "12000, 7, d8f4a054c652f5eefeab748d081642205ca971b1c40304ee1408d54024fd194e",
+        "2500, 20260302, f4bf1e3014efd0c8904cc7544977ea273abb241abc873508456a030f7ee61150",
+        "12000, 7, 285f3dab35d20c4c909e9674db5dcfd467cc1e97f44d6c141c365d1dd7dd6ae5",
     })
     void outputsAreUnchanged(int samples, long seed, String expected) throws Exception {
         DemoGenerator.generate(new DemoSettings(samples, seed), rel -> {

@@ -118,4 +118,15 @@ class ReassayListTest {
         assertEquals(List.of("J-1", "J-3"), ids(l));
         assertEquals("J", l.entries().get(0).batch());
     }
+
+    @Test
+    void sampleCountCountsEachSampleOnceOverItsAnalytes() {
+        // Three entries, two samples: S1 for Au and Ag, S2 for Au.
+        ReassayList l = new ReassayList(List.of(
+                new ReassayEntry("S1", "J", 1, "Au", List.of("C1"), "r"),
+                new ReassayEntry("S1", "J", 1, "Ag", List.of("C1"), "r"),
+                new ReassayEntry("S2", "J", 2, "Au", List.of("C1"), "r")), List.of(), ReassaySettings.Scope.BRACKET,
+                ReassaySettings.CrmBracket.PASSING_CRM, 0);
+        assertEquals(2, l.sampleCount());
+    }
 }

@@ -211,6 +211,22 @@ public final class CrmSection {
                 ? String.format(Locale.ROOT, " (%+.2f to %+.2f)", lo, hi) : "";
     }
 
+    /**
+     * The mean bias of one CRM series in words for the summary: "+6.20 % (95 % CI +4.10 to +8.30), significant",
+     * significant when the interval excludes zero (the certified value lies outside it).
+     */
+    public static String biasText(BiasEstimate b) {
+        if (!Double.isFinite(b.meanBiasPct())) {
+            return "no bias estimate (" + b.note() + ")";
+        }
+        if (!Double.isFinite(b.meanLowPct())) {
+            return pct(b.meanBiasPct()) + " % (" + b.note() + ")";
+        }
+        return String.format(Locale.ROOT, "%s %% (%d %% CI %s to %s), %s", pct(b.meanBiasPct()),
+                Math.round(100 * b.confidence()), pct(b.meanLowPct()), pct(b.meanHighPct()),
+                b.certifiedInsideMeanInterval() ? "not significant" : "significant");
+    }
+
     private static String inside(BiasEstimate b) {
         if (!Double.isFinite(b.meanLowPct())) {
             return "–";

@@ -5,26 +5,44 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.cupel.assay.MissingReason;
 import org.cupel.control.AnalyteVerdict;
+import org.cupel.control.BatchGroups;
 import org.cupel.control.BatchVerdict;
 import org.cupel.control.BatchVerdicts;
 import org.cupel.control.ReassayBracket;
 import org.cupel.control.ReassayEntry;
 import org.cupel.control.ReassayList;
 import org.cupel.control.ReassaySettings;
+import org.cupel.control.ResubmitEntry;
+import org.cupel.control.ResubmitList;
+import org.cupel.control.UmpireLab;
 import org.cupel.control.Verdict;
 import org.cupel.control.VerdictReason;
+import org.cupel.report.BatchRanges;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
 
-/** The verdict summary: every batch with pass / warn / fail and the reasons, and the re-assay list. */
+/**
+ * The verdict summary: every primary batch with pass / warn / fail and the reasons, the umpire-lab batches
+ * apart, the re-assay list and the samples to re-submit.
+ */
 public final class VerdictSection {
+    /** The section's title, which the summary names as the place of the lists. */
+    public static final String TITLE = "Batch verdicts and re-assay list";
+
     private VerdictSection() {
     }
 
-    public static ReportSection build(List<BatchVerdict> verdicts, ReassayList reassay) {
+    /**
+     * @param groups the batch verdicts, primary and umpire-lab batches apart
+     * @param reassay the re-assay list
+     * @param resubmit the samples the lab reported insufficient or not received
+     */
+    public static ReportSection build(BatchGroups groups, ReassayList reassay, ResubmitList resubmit) {
         List<ReportBlock> blocks = new ArrayList<>();
+        List<BatchVerdict> verdicts = groups.primary();
         int failed = BatchVerdicts.count(verdicts, Verdict.FAIL);
         int warned = BatchVerdicts.count(verdicts, Verdict.WARN);
         int unjudged = BatchVerdicts.count(verdicts, Verdict.CANNOT_JUDGE);
@@ -32,27 +50,58 @@ public final class VerdictSection {
         ReportBlock.Level level = failed > 0 ? ReportBlock.Level.FAIL : warned > 0 ? ReportBlock.Level.WARN
                 : unjudged == verdicts.size() ? ReportBlock.Level.CANNOT_JUDGE : ReportBlock.Level.PASS;
         blocks.add(new ReportBlock.Callout(level, verdicts.size() + " batches: " + failed + " failed, " + warned + " warned, "
-                + unjudged + " could not be judged; " + reassay.entries().size() + " sample results to re-assay."
+                + unjudged + " could not be judged; " + reassay.entries().size() + " sample results to re-assay; "
+                + resubmit.entries().size() + " samples to re-submit."
                 + batchList(verdicts, Verdict.FAIL, " Failed: ") + batchList(verdicts, Verdict.WARN, " Warned: ")));
+        for (UmpireLab u : groups.umpireLabs()) {
+            blocks.add(new ReportBlock.Callout(ReportBlock.Level.INFO, umpireLine(u)));
+        }
         blocks.add(new ReportBlock.Paragraph("A batch takes the worst verdict of its control results for each "
                 + "analyte (fail over warn over cannot judge over pass), and the worst over analytes. A batch "
                 + "without a control result for an analyte cannot be judged for it. Re-assay (common practice): "
-                + scope(reassay)));
+                + scope(reassay) + " Re-submit: a sample the lab reported insufficient or not received has no "
+                + "result to re-assay; it goes back to the lab from the coarse reject or a new split (common "
+                + "practice)."));
         if (failed + warned > 0) {
             blocks.add(new ReportBlock.Table(actionTable(verdicts)));
         }
         blocks.add(new ReportBlock.Table(verdictTable(verdicts)));
+        if (!groups.umpireLabs().isEmpty()) {
+            blocks.add(new ReportBlock.Table(umpireTable(groups)));
+        }
         blocks.add(new ReportBlock.Table(reassayTable(reassay)));
         if (!reassay.brackets().isEmpty()) {
             blocks.add(new ReportBlock.Table(bracketTable(reassay)));
         }
+        blocks.add(new ReportBlock.Table(resubmitTable(resubmit)));
         Map<String, Object> headlines = new LinkedHashMap<>();
         headlines.put("batches", verdicts.size());
         headlines.put("batchesFailed", failed);
         headlines.put("batchesWarned", warned);
         headlines.put("batchesNotJudged", unjudged);
+        headlines.put("umpireBatches", groups.umpireBatches());
         headlines.put("reassayResults", reassay.entries().size());
-        return new ReportSection("verdicts", "Batch verdicts and re-assay list", blocks, headlines);
+        headlines.put("reassaySamples", reassay.sampleCount());
+        headlines.put("resubmitInsufficient", resubmit.count(MissingReason.INSUFFICIENT_SAMPLE));
+        headlines.put("resubmitNotReceived", resubmit.count(MissingReason.NOT_RECEIVED));
+        return new ReportSection("verdicts", TITLE, blocks, headlines);
+    }
+
+    /**
+     * One umpire lab in a sentence: its batches are check assays of the primary lab's samples, judged by the
+     * comparison of the two labs, and are not counted among the batches above.
+     */
+    public static String umpireLine(UmpireLab u) {
+        int failed = BatchVerdicts.count(u.batches(), Verdict.FAIL);
+        int warned = BatchVerdicts.count(u.batches(), Verdict.WARN);
+        int judged = u.batches().size() - BatchVerdicts.count(u.batches(), Verdict.CANNOT_JUDGE);
+        String controls = judged == 0 ? "they hold no CRM or blank of their own"
+                : "by their own CRMs and blanks " + failed + " failed and " + warned + " warned";
+        return "Umpire lab" + (u.lab().isEmpty() ? "" : " (" + u.lab() + ")") + ": " + u.batches().size()
+                + (u.batches().size() == 1 ? " batch (" : " batches (")
+                + BatchRanges.compact(u.batches().stream().map(BatchVerdict::batch).toList()) + "), "
+                + u.checkAssays() + " check assays, not counted among the batches above; " + controls + ". The "
+                + "check assays are compared with the primary lab under Duplicates and precision (umpire checks).";
     }
 
     private static String scope(ReassayList reassay) {
@@ -69,6 +118,32 @@ public final class VerdictSection {
         return "for a failed CRM, the samples between " + crm + "; for a failed blank, the samples after it up to "
                 + "the next passing blank" + blank + ". Control samples are not listed; a warning does not fail a "
                 + "control.";
+    }
+
+    static ReportTable umpireTable(BatchGroups groups) {
+        List<List<String>> rows = new ArrayList<>();
+        for (UmpireLab u : groups.umpireLabs()) {
+            for (BatchVerdict v : u.batches()) {
+                rows.add(List.of(v.batch(), v.lab(), Integer.toString(v.nSamples()), label(v.verdict())));
+            }
+        }
+        return new ReportTable("umpire-batches", "Umpire-lab batches",
+                List.of("Batch", "Lab", "Samples", "Verdict by own controls"), rows,
+                "Batches of umpire checks (and at most CRMs and blanks): judged by the comparison with the primary "
+                        + "lab, not counted among the batch verdicts.");
+    }
+
+    /** The samples to re-submit as a table; also printed by {@code cupel batches}. */
+    public static ReportTable resubmitTable(ResubmitList resubmit) {
+        List<List<String>> rows = new ArrayList<>();
+        for (ResubmitEntry e : resubmit.entries()) {
+            rows.add(List.of(e.sampleId(), e.batch(), Integer.toString(e.position()), e.role(),
+                    String.join(", ", e.analytes()), String.join(", ", e.labCodes()), e.reasonText(),
+                    e.source().file(), Long.toString(e.source().line())));
+        }
+        return new ReportTable("resubmit-list", "Samples to re-submit (reported insufficient or not received)",
+                List.of("Sample ID", "Batch", "Position", "Role", "Analytes", "Lab code", "Reason", "File", "Line"),
+                rows, rows.isEmpty() ? "The lab reported no sample insufficient or not received." : "");
     }
 
     static ReportTable verdictTable(List<BatchVerdict> verdicts) {

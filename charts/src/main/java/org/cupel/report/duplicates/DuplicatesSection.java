@@ -181,7 +181,8 @@ public final class DuplicatesSection {
         return false;
     }
 
-    static String ruleText(PrecisionSummary p) {
+    /** The acceptance rule's outcome and the RMS CV of one set, in a sentence (also used by the summary). */
+    public static String ruleText(PrecisionSummary p) {
         if (p.rule() == RuleOutcome.NOT_JUDGED) {
             return "not judged: " + p.percentWithinLimit().note();
         }

@@ -35,6 +35,7 @@ public final class TestworkSection {
 
     public static ReportSection build(RecoveryResult r) {
         List<ReportBlock> blocks = new ArrayList<>();
+        blocks.addAll(findings(r));
         blocks.add(new ReportBlock.Paragraph(summary(r)));
         blocks.add(new ReportBlock.Table(recoveries(r)));
         for (String a : r.analytes()) {
@@ -67,6 +68,65 @@ public final class TestworkSection {
         headlines.put("recovery.balancesNotClosing", r.smelts().stream().filter(s -> s.usable() && !s.balanceCloses())
                 .count());
         return new ReportSection("testwork", "Metallurgical testwork: smelt recoveries", blocks, headlines);
+    }
+
+    /**
+     * The findings in plain words, one callout per analyte (recovery of each condition with its t-interval,
+     * the pairs that differ, how many cannot be told apart or are equivalent) and, when some smelt's metal
+     * balance does not close, a warning naming them. The summary of the appendix shows the same callouts.
+     */
+    public static List<ReportBlock.Callout> findings(RecoveryResult r) {
+        List<ReportBlock.Callout> out = new ArrayList<>();
+        for (String a : r.analytes()) {
+            out.add(new ReportBlock.Callout(ReportBlock.Level.INFO, analyteFinding(r, a)));
+        }
+        List<String> open = r.smelts().stream().filter(s -> s.usable() && !s.balanceCloses())
+                .map(s -> s.smelt().testId() + " " + s.analyte()).toList();
+        long balances = r.smelts().stream().filter(SmeltRecovery::usable).count();
+        String tolerance = num(100 * r.settings().balanceTolerance(), 1);
+        out.add(open.isEmpty()
+                ? new ReportBlock.Callout(ReportBlock.Level.PASS, "The metal balance closes within ±" + tolerance
+                        + "% for all " + balances + " smelt balances.")
+                : new ReportBlock.Callout(ReportBlock.Level.WARN, "The metal balance does not close within ±"
+                        + tolerance + "% for " + open.size() + " of " + balances + " smelt balances: "
+                        + String.join(", ", open) + "; check the weights and assays of these smelts."));
+        return out;
+    }
+
+    private static String analyteFinding(RecoveryResult r, String analyte) {
+        int conf = (int) Math.round(100 * r.settings().confidence());
+        List<String> conditions = new ArrayList<>();
+        for (ConditionRecovery c : r.conditions()) {
+            if (c.analyte().equals(analyte)) {
+                RecoveryInterval t = c.tInterval();
+                conditions.add(c.condition() + " " + num(c.mean(), 2) + "%" + (t.computed()
+                        ? " (" + num(t.lower(), 2) + " to " + num(t.upper(), 2) + ")" : ""));
+            }
+        }
+        List<PairComparison> mine = r.comparisons().stream().filter(p -> p.analyte().equals(analyte)).toList();
+        List<String> differ = mine.stream().filter(p -> p.verdict() == ComparisonVerdict.DIFFERENT)
+                .map(TestworkSection::difference).toList();
+        long cannotTell = mine.stream().filter(p -> p.verdict() == ComparisonVerdict.CANNOT_TELL).count();
+        long equivalent = mine.stream().filter(p -> p.verdict() == ComparisonVerdict.EQUIVALENT).count();
+        StringBuilder sb = new StringBuilder(analyte + " recovery (" + r.settings().recoveryDefinition().label()
+                + ", mean with " + conf + "% t-interval): " + String.join("; ", conditions) + ". ");
+        sb.append(differ.isEmpty() ? "No pair of conditions is shown to differ" : "Different: "
+                + String.join("; ", differ));
+        sb.append(". ").append(cannotTell).append(" of ").append(mine.size()).append(" pairs cannot be told apart "
+                + "with this many replicates; ").append(equivalent).append(" shown equivalent within ±")
+                .append(num(r.settings().equivalenceMargin(), 2)).append(" pp.");
+        return sb.toString();
+    }
+
+    /** "LIT90-1050 higher than LIT60-1050 by 6.08 pp (Holm p = 0.001)", with the larger recovery first. */
+    private static String difference(PairComparison p) {
+        double d = p.welch().difference();
+        String higher = d >= 0 ? p.first() : p.second();
+        String lower = d >= 0 ? p.second() : p.first();
+        String holm = p.holmP() < 0.001 ? "Holm p < 0.001" : "Holm p = " + pValue(p.holmP());
+        return higher + " higher than " + lower + " by " + num(Math.abs(d), 2) + " pp (" + holm
+                + (p.conclusionDependsOnCensoring() ? "; " + p.verdictCensoredAtZero().label() + " when censored loss "
+                + "assays count as zero" : "") + ")";
     }
 
     static String summary(RecoveryResult r) {

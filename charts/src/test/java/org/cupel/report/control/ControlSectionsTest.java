@@ -5,10 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.cupel.assay.AssayValue;
+import org.cupel.assay.MissingReason;
 import org.cupel.assay.Batch;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
 import org.cupel.assay.SourceLocation;
+import org.cupel.control.BatchGroups;
+import org.cupel.control.BatchSequence;
 import org.cupel.control.BatchVerdicts;
 import org.cupel.control.BlankObservation;
 import org.cupel.control.BlankReport;
@@ -19,6 +22,8 @@ import org.cupel.control.InsertionRates;
 import org.cupel.control.InsertionSettings;
 import org.cupel.control.ReassayList;
 import org.cupel.control.ReassaySettings;
+import org.cupel.control.ResubmitEntry;
+import org.cupel.control.ResubmitList;
 import org.cupel.control.Verdict;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportSection;
@@ -51,7 +56,8 @@ class ControlSectionsTest {
                 new ControlOutcome(2, "Au", Verdict.PASS, "within 2 SD", "ok", false),
                 new ControlOutcome(5, "Au", Verdict.FAIL, "blank > 5×DL", "S6 Au: 0.3 g/t is above 0.025 g/t", true));
         ReassayList r = ReassayList.build(t, outs, ReassaySettings.DEFAULTS);
-        ReportSection s = VerdictSection.build(BatchVerdicts.judge(t, outs), r);
+        ReportSection s = VerdictSection.build(BatchGroups.of(t, BatchSequence.of(t), BatchVerdicts.judge(t, outs)), r,
+                new ResubmitList(List.of()));
         ReportTable v = table(s, "batch-verdicts");
         assertEquals("fail", v.rows().get(0).get(3));
         assertEquals("S6 Au: 0.3 g/t is above 0.025 g/t [blank: blank > 5×DL]", v.rows().get(0).get(5));
@@ -63,10 +69,40 @@ class ControlSectionsTest {
         assertEquals(List.of(List.of("J1", "fail", "Au", "S6", "blank", "blank > 5×DL", "fail",
                 "S6 Au: 0.3 g/t is above 0.025 g/t")), act.rows(), "only the result that did not pass");
         assertTrue(((ReportBlock.Callout) s.blocks().get(0)).text().endsWith("Failed: J1."));
+        assertEquals(List.of(), table(s, "resubmit-list").rows());
         assertTrue(s.blocks().indexOf(s.blocks().stream().filter(b -> b instanceof ReportBlock.Table x
                 && x.table().id().equals("batches-to-act-on")).findFirst().orElseThrow())
                 < s.blocks().indexOf(s.blocks().stream().filter(b -> b instanceof ReportBlock.Table x
                 && x.table().id().equals("batch-verdicts")).findFirst().orElseThrow()), "failures lead");
+    }
+
+    @Test
+    void verdictSectionCountsUmpireBatchesApartAndListsTheSamplesToResubmit() {
+        SampleTable.Builder b = SampleTable.builder();
+        Batch j = new Batch("J1", "Lab", null, "j1.csv");
+        Batch u = new Batch("U1", "Check Lab", null, "u1.csv");
+        b.add("S1", j, 1, QcRole.ROUTINE, "", new SourceLocation("j1.csv", 2, 0));
+        b.add("S2", j, 2, QcRole.CRM, "K", new SourceLocation("j1.csv", 3, 0));
+        b.add("S1U", u, 1, QcRole.UMPIRE, "S1", new SourceLocation("u1.csv", 2, 0));
+        SampleTable t = b.build();
+        List<ControlOutcome> outs = List.of(new ControlOutcome(1, "Au", Verdict.PASS, "within 2 SD", "ok", false));
+        ResubmitList resubmit = new ResubmitList(List.of(new ResubmitEntry("S1", "J1", "Lab", 1, "routine",
+                MissingReason.INSUFFICIENT_SAMPLE, List.of("IS"), List.of("Au"), new SourceLocation("j1.csv", 2, 0))));
+        ReportSection s = VerdictSection.build(BatchGroups.of(t, BatchSequence.of(t), BatchVerdicts.judge(t, outs)),
+                ReassayList.build(t, outs, ReassaySettings.DEFAULTS), resubmit);
+        String verdict = ((ReportBlock.Callout) s.blocks().get(0)).text();
+        // The umpire batch U1 has no control: among the primary batches it would be "could not be judged".
+        assertTrue(verdict.startsWith("1 batches: 0 failed, 0 warned, 0 could not be judged;"), verdict);
+        assertTrue(verdict.contains("1 samples to re-submit"), verdict);
+        String umpire = ((ReportBlock.Callout) s.blocks().get(1)).text();
+        assertTrue(umpire.startsWith("Umpire lab (Check Lab): 1 batch (U1), 1 check assays, not counted"), umpire);
+        assertEquals(List.of("J1"), table(s, "batch-verdicts").rows().stream().map(r -> r.get(0)).toList());
+        assertEquals(List.of(List.of("U1", "Check Lab", "1", "cannot judge")), table(s, "umpire-batches").rows());
+        assertEquals(List.of(List.of("S1", "J1", "1", "routine", "Au", "IS", "insufficient sample", "j1.csv", "2")),
+                table(s, "resubmit-list").rows());
+        assertEquals(0, s.headlines().get("batchesNotJudged"));
+        assertEquals(1, s.headlines().get("umpireBatches"));
+        assertEquals(1L, s.headlines().get("resubmitInsufficient"));
     }
 
     @Test

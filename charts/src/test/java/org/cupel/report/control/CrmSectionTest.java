@@ -35,4 +35,19 @@ class CrmSectionTest {
             }
         }
     }
+
+    @Test
+    void biasTextGivesTheMeanBiasItsIntervalAndWhetherItIsSignificant() {
+        // Results 1.1, 1.2, 1.3 on a certified 1.0: biases 10, 20, 30 %; mean 20 %, SD 10 %, n 3. Student t
+        // (0.975, 2 df) = 4.3027 (any t table): half-width 4.3027 × 10 / √3 = 24.84, so the interval -4.84 to
+        // +44.84 holds 0: not significant.
+        assertEquals("+20.00 % (95 % CI -4.84 to +44.84), not significant", CrmSection.biasText(
+                org.cupel.control.crm.BiasEstimate.of(new double[] {1.1, 1.2, 1.3}, 1.0, 0.95)));
+        // Results 1.10, 1.11, 1.12: biases 10, 11, 12 %; SD 1 %: half-width 4.3027 × 1 / √3 = 2.48, interval +8.52 to +13.48.
+        assertEquals("+11.00 % (95 % CI +8.52 to +13.48), significant", CrmSection.biasText(
+                org.cupel.control.crm.BiasEstimate.of(new double[] {1.10, 1.11, 1.12}, 1.0, 0.95)));
+        // One result: no interval; the estimate's note says why.
+        assertEquals("+5.00 % (one result: no interval for the mean bias)", CrmSection.biasText(
+                org.cupel.control.crm.BiasEstimate.of(new double[] {1.05}, 1.0, 0.95)));
+    }
 }
