@@ -83,15 +83,15 @@ public final class RecoveryByConditionChart {
 
     /**
      * The recovery axis: from below {@code lo} to above {@code hi} by {@value #MARGIN} of their range, out to
-     * the next multiple of a round step (1, 2, 2.5 or 5 × 10^k, about a quarter of the range), never below zero.
-     * 91.5 to 98.9 % gives 90 to 100 %.
+     * the next multiple of a round step (1, 2, 2.5 or 5 × 10^k, about a fifth of the range), never below zero
+     * and, when no value is above 100 %, not above 100 %. 91.5 to 98.9 % gives 90 to 100 %.
      */
     static double[] axisRange(double lo, double hi) {
         double span = Math.max(hi - lo, 1e-6);
-        double step = roundStep(span / 4);
+        double step = roundStep(span / 5);
         double a = Math.floor((lo - MARGIN * span) / step) * step;
         double b = Math.ceil((hi + MARGIN * span) / step) * step;
-        return new double[] {lo >= 0 ? Math.max(0, a) : a, b};
+        return new double[] {lo >= 0 ? Math.max(0, a) : a, hi <= 100 ? Math.min(100, b) : b};
     }
 
     /** The smallest of 1, 2, 2.5, 5 × 10^k not below {@code x}. */

@@ -85,14 +85,16 @@ class RecoveryChartsTest {
     }
 
     /**
-     * Hand-worked: recoveries from 91.5 to 98.9 % span 7.4; a quarter of it, 1.85, rounds up to the step 2; with
-     * the 4 % margin (0.296) the axis runs from floor(91.204 / 2)·2 = 90 to ceil(99.196 / 2)·2 = 100. From 0.5
-     * to 3 % the axis starts at zero (step 1, floor(0.4) = 0), and says nothing about it.
+     * Hand-worked: recoveries from 91.5 to 98.9 % span 7.4; a fifth of it, 1.48, rounds up to the step 2; with
+     * the 4 % margin (0.296) the axis runs from floor(91.204 / 2)·2 = 90 to ceil(99.196 / 2)·2 = 100. From 81.3
+     * to 99.3 % (step 5, margin 0.72) it would end at ceil(100.02 / 5)·5 = 105, and stops at 100, above which
+     * none lies. From 0.5 to 3 % (step 0.5, margin 0.1) it starts at zero and ends at 3.5.
      */
     @Test
     void theAxisRangeIsRoundedOutwardAndExcludesZeroForHighRecoveries() {
         assertArrayEquals(new double[] {90, 100}, RecoveryByConditionChart.axisRange(91.5, 98.9), 1e-12);
-        assertArrayEquals(new double[] {0, 4}, RecoveryByConditionChart.axisRange(0.5, 3), 1e-12);
+        assertArrayEquals(new double[] {80, 100}, RecoveryByConditionChart.axisRange(81.3, 99.3), 1e-12);
+        assertArrayEquals(new double[] {0, 3.5}, RecoveryByConditionChart.axisRange(0.5, 3), 1e-12);
         assertEquals(2, RecoveryByConditionChart.roundStep(1.85), 1e-12);
         assertEquals(2.5, RecoveryByConditionChart.roundStep(2.1), 1e-12);
         assertEquals(0.05, RecoveryByConditionChart.roundStep(0.05), 1e-12);
