@@ -352,7 +352,7 @@ public final class ChartFigure extends Chart<XYStyler, XYSeries> {
                 g.draw(new Line2D.Double(s.getX(), s.getCenterY(), s.getMaxX(), s.getCenterY()));
             }
             if (e.marker() != null) {
-                e.marker().paint(g, s.getCenterX(), s.getCenterY(), ChartStyle.MARKER_SIZE);
+                e.marker().paint(g, s.getCenterX(), s.getCenterY(), e.markerSize());
             }
             g.setColor(INK);
             Text.draw(g, List.of(e.label()), b.font(), b.label(), Text.Align.LEFT);

@@ -52,6 +52,8 @@ public final class ChartStyle {
     static final String FONT = "DejaVu Sans";
     /** Point markers, in chart units. */
     public static final int MARKER_SIZE = 6;
+    /** Point markers of a panel, half a figure wide. */
+    public static final int PANEL_MARKER_SIZE = 5;
 
     private ChartStyle() {
     }
@@ -107,7 +109,7 @@ public final class ChartStyle {
         s.setAxisTitleFont(new Font(FONT, Font.PLAIN, 13));
         s.setAxisTickLabelsFont(new Font(FONT, Font.PLAIN, 11));
         s.setAxisTitlePadding(4);
-        chart.getStyler().setMarkerSize(5);
+        chart.getStyler().setMarkerSize(PANEL_MARKER_SIZE);
     }
 
     private static void applyAxes(AxesChartStyler s) {

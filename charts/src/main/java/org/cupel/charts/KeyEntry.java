@@ -10,12 +10,23 @@ import org.knowm.xchart.style.markers.Marker;
  *
  * @param stroke the line, or null for points only
  * @param marker the point marker, or null for a line only
+ * @param markerSize the marker's size, as the chart draws it
  */
-public record KeyEntry(String label, Color colour, BasicStroke stroke, Marker marker) {
+public record KeyEntry(String label, Color colour, BasicStroke stroke, Marker marker, int markerSize) {
     public KeyEntry {
         if (stroke == null && marker == null) {
             throw new IllegalArgumentException("a key entry needs a line or a marker: " + label);
         }
+    }
+
+    /** An entry whose marker has the charts' usual size. */
+    public KeyEntry(String label, Color colour, BasicStroke stroke, Marker marker) {
+        this(label, colour, stroke, marker, ChartStyle.MARKER_SIZE);
+    }
+
+    /** The same entry with its marker drawn at {@code size}, as a chart with larger markers draws it. */
+    public KeyEntry sized(int size) {
+        return new KeyEntry(label, colour, stroke, marker, size);
     }
 
     public static KeyEntry line(String label, Color colour, BasicStroke stroke) {

@@ -262,8 +262,8 @@ public final class PdfReport {
     private void addFigure(Chapter ch, ReportBlock.Figure f) throws IOException {
         Image img = PdfPngImage.of(png.apply(f));
         float width = doc.getPageSize().getWidth() - 2 * MARGIN_X;
-        // A chart takes at most half a page, so two share one; a figure of panels, taller than wide, a page
-        // with room left for its caption.
+        // A chart takes at most half a page, so two share one; a figure of panels (higher than three quarters
+        // of its width) a page, with room left for its caption.
         float share = img.getHeight() > img.getWidth() * TALL_FIGURE ? 0.86f : 0.55f;
         float height = (doc.getPageSize().getHeight() - MARGIN_TOP - MARGIN_BOTTOM) * share;
         img.scaleToFit(width, height);

@@ -25,57 +25,55 @@ public final class DuplicateFigures {
 
     /** (a)... original against duplicate per type; last: ranked HARD of every type. */
     public static ChartFigure pairs(DuplicateReport r) {
-        List<ChartFigure.Panel> panels = new ArrayList<>();
-        List<DuplicateSetResult> sets = r.sets();
-        for (int i = 0; i < sets.size(); i++) {
-            panels.add(DuplicateCharts.scatter(sets.get(i), ChartFigure.letter(i), cellWidth(), CHART_HEIGHT));
-        }
-        panels.add(DuplicateSummaryCharts.rankedHard(sets, ChartFigure.letter(sets.size()), cellWidth(),
-                CHART_HEIGHT));
         List<KeyEntry> key = new ArrayList<>(List.of(DuplicatePlots.KEY_PAIRS,
                 DuplicatePlots.flaggedKey("pair beyond the HARD limit (flagged)"), DuplicatePlots.KEY_ONE_TO_ONE,
                 DuplicatePlots.KEY_HARD_LINES));
-        if (sets.stream().anyMatch(s -> s.type() == QcRole.UMPIRE && s.bias().rma().available())) {
+        if (r.sets().stream().anyMatch(s -> s.type() == QcRole.UMPIRE && s.bias().rma().available())) {
             key.add(KeyEntry.line("reduced major axis (umpire)", ChartStyle.SECOND, DuplicatePlots.RMA));
         }
-        return ChartFigure.grid(ChartStyle.WIDTH, COLUMNS, CHART_HEIGHT, panels, key);
+        return figure(r, DuplicateCharts::scatter, DuplicateSummaryCharts::rankedHard, key);
     }
 
     /** (a)... relative difference against pair mean per type; last: mean relative bias of every type. */
     public static ChartFigure bias(DuplicateReport r) {
-        List<ChartFigure.Panel> panels = new ArrayList<>();
-        List<DuplicateSetResult> sets = r.sets();
-        for (int i = 0; i < sets.size(); i++) {
-            panels.add(DuplicateCharts.relativeDifference(sets.get(i), ChartFigure.letter(i), cellWidth(),
-                    CHART_HEIGHT));
-        }
-        panels.add(DuplicateSummaryCharts.bias(sets, ChartFigure.letter(sets.size()), cellWidth(), CHART_HEIGHT));
-        List<KeyEntry> key = List.of(DuplicatePlots.KEY_PAIRS,
-                DuplicatePlots.flaggedKey("pair beyond the HARD limit (flagged)"),
+        return figure(r, DuplicateCharts::relativeDifference, DuplicateSummaryCharts::bias, List.of(
+                DuplicatePlots.KEY_PAIRS, DuplicatePlots.flaggedKey("pair beyond the HARD limit (flagged)"),
                 KeyEntry.line("mean", ChartStyle.SECOND, DuplicatePlots.MEAN),
                 KeyEntry.line("95 % interval of the mean", ChartStyle.SECOND, DuplicatePlots.MEAN_INTERVAL),
                 KeyEntry.line("zero", ChartStyle.REFERENCE, DuplicatePlots.ZERO),
-                KeyEntry.line("type's HARD limit (±2 × limit)", ChartStyle.WARNING, DuplicatePlots.HARD_LINES));
-        return ChartFigure.grid(ChartStyle.WIDTH, COLUMNS, CHART_HEIGHT, panels, key);
+                KeyEntry.line("type's HARD limit (±2 × limit)", ChartStyle.WARNING, DuplicatePlots.HARD_LINES)));
     }
 
     /** (a)... Thompson–Howarth plot per type; last: precision by grade of every type. */
     public static ChartFigure precision(DuplicateReport r) {
-        List<ChartFigure.Panel> panels = new ArrayList<>();
-        List<DuplicateSetResult> sets = r.sets();
-        for (int i = 0; i < sets.size(); i++) {
-            panels.add(DuplicateCharts.thompsonHowarth(sets.get(i), ChartFigure.letter(i), cellWidth(),
-                    CHART_HEIGHT));
-        }
-        panels.add(DuplicateSummaryCharts.precision(sets, ChartFigure.letter(sets.size()), cellWidth(),
-                CHART_HEIGHT));
-        List<KeyEntry> key = List.of(DuplicatePlots.KEY_PAIRS,
-                DuplicatePlots.flaggedKey("pair above the 99 % line (flagged)"),
-                KeyEntry.points("group median |d|", ChartStyle.BLACK, DuplicatePlots.MEDIAN_MARKER),
+        return figure(r, DuplicateCharts::thompsonHowarth, DuplicateSummaryCharts::precision, List.of(
+                DuplicatePlots.KEY_PAIRS, DuplicatePlots.flaggedKey("pair above the 99 % line (flagged)"),
+                KeyEntry.points("group median |d|", ChartStyle.BLACK, DuplicatePlots.MEDIAN_MARKER)
+                        .sized(ChartStyle.PANEL_MARKER_SIZE),
                 KeyEntry.line("fitted median |d|", ChartStyle.REFERENCE, DuplicatePlots.FITTED),
                 KeyEntry.line("90 % line", ChartStyle.WARNING, DuplicatePlots.LINE90),
                 KeyEntry.line("99 % line", ChartStyle.FAILURE, DuplicatePlots.LINE99),
-                KeyEntry.line("|d| at the type's HARD limit", ChartStyle.REDDISH_PURPLE, DuplicatePlots.TARGET));
+                KeyEntry.line("|d| at the type's HARD limit", ChartStyle.REDDISH_PURPLE, DuplicatePlots.TARGET)));
+    }
+
+    /** A panel of one type, lettered, at a size. */
+    private interface TypePanel {
+        ChartFigure.Panel of(DuplicateSetResult set, String letter, int width, int height);
+    }
+
+    /** The panel that compares the types, lettered, at a size. */
+    private interface SummaryPanel {
+        ChartFigure.Panel of(List<DuplicateSetResult> sets, String letter, int width, int height);
+    }
+
+    private static ChartFigure figure(DuplicateReport r, TypePanel perType, SummaryPanel summary, List<KeyEntry> key) {
+        List<ChartFigure.Panel> panels = new ArrayList<>();
+        List<DuplicateSetResult> sets = r.sets();
+        int width = ChartStyle.WIDTH / COLUMNS;
+        for (int i = 0; i < sets.size(); i++) {
+            panels.add(perType.of(sets.get(i), ChartFigure.letter(i), width, CHART_HEIGHT));
+        }
+        panels.add(summary.of(sets, ChartFigure.letter(sets.size()), width, CHART_HEIGHT));
         return ChartFigure.grid(ChartStyle.WIDTH, COLUMNS, CHART_HEIGHT, panels, key);
     }
 
@@ -93,9 +91,5 @@ public final class DuplicateFigures {
     /** The letter of the last panel, which compares the types. */
     public static String summaryLetter(DuplicateReport r) {
         return ChartFigure.letter(r.sets().size());
-    }
-
-    private static int cellWidth() {
-        return ChartStyle.WIDTH / COLUMNS;
     }
 }

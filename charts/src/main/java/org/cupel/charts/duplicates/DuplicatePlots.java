@@ -46,7 +46,7 @@ final class DuplicatePlots {
     static final BasicStroke TARGET = ChartStyle.dotted(2f);
     static final Marker MEDIAN_MARKER = ChartMarkers.DIAMOND;
 
-    static final KeyEntry KEY_PAIRS = KeyEntry.points("pair", PAIRS, PAIR_MARKER);
+    static final KeyEntry KEY_PAIRS = KeyEntry.points("pair", PAIRS, PAIR_MARKER).sized(ChartStyle.PANEL_MARKER_SIZE);
     static final KeyEntry KEY_ONE_TO_ONE = KeyEntry.line("1:1", ChartStyle.REFERENCE, ONE_TO_ONE);
     static final KeyEntry KEY_HARD_LINES = KeyEntry.line("type's HARD limit", ChartStyle.WARNING, HARD_LINES);
 
@@ -63,7 +63,7 @@ final class DuplicatePlots {
 
     /** Key entry of the pairs a panel marks. */
     static KeyEntry flaggedKey(String what) {
-        return KeyEntry.points(what, FLAGGED, FLAGGED_MARKER);
+        return KeyEntry.points(what, FLAGGED, FLAGGED_MARKER).sized(ChartStyle.PANEL_MARKER_SIZE);
     }
 
     /** The colour that stands for a duplicate type wherever types are compared on one panel. */

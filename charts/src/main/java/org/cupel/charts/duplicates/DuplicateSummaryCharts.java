@@ -22,7 +22,6 @@ import org.cupel.duplicates.PrecisionModel;
 import org.cupel.duplicates.RuleOutcome;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
-import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
  * The panels that put the duplicate types of one analyte side by side: ranked HARD against each type's limit,
@@ -88,7 +87,8 @@ public final class DuplicateSummaryCharts {
                 DuplicatePlots.points(chart, shortName(r) + " at limit", new double[] {limit},
                         new double[] {within.value()}, colour, DuplicatePlots.marker(r.type()));
             }
-            key.add(new KeyEntry(shortName(r) + ": " + withinText(r), colour, CURVE, DuplicatePlots.marker(r.type())));
+            key.add(new KeyEntry(shortName(r) + ": " + withinText(r), colour, CURVE, DuplicatePlots.marker(r.type()),
+                    MARKER));
         }
         right = Math.min(100, right);
         double accept = sets.get(0).precision().acceptancePercent();
@@ -141,13 +141,13 @@ public final class DuplicateSummaryCharts {
         double pad = Math.max(1, 0.1 * (hi - lo));
         chart.getStyler().setXAxisMin(lo - pad).setXAxisMax(hi + pad).setYAxisMin(0.4).setYAxisMax(rows + 0.6);
         chart.getStyler().setMarkerSize(MARKER);
-        XYSeries zero = line(chart, "zero", new double[] {0, 0}, new double[] {0.4, rows + 0.6}, ChartStyle.REFERENCE,
+        line(chart, "zero", new double[] {0, 0}, new double[] {0.4, rows + 0.6}, ChartStyle.REFERENCE,
                 DuplicatePlots.ZERO);
-        zero.setMarker(SeriesMarkers.NONE);
         List<KeyEntry> key = List.of(
-                new KeyEntry("no bias shown (interval includes 0)", ChartStyle.DATA, INTERVAL, ChartMarkers.CIRCLE),
+                new KeyEntry("no bias shown (interval includes 0)", ChartStyle.DATA, INTERVAL, ChartMarkers.CIRCLE,
+                        MARKER),
                 new KeyEntry("bias shown (interval excludes 0)", ChartStyle.FAILURE, INTERVAL,
-                        DuplicatePlots.FLAGGED_MARKER));
+                        DuplicatePlots.FLAGGED_MARKER, MARKER));
         return new ChartFigure.Panel(letter + " Mean relative bias, every type", chart,
                 "Student-t interval of the mean relative difference over the pairs used in relative measures")
                 .withKey(key).with(AxisLabels.left(at, names, ChartFigure.PANEL_NOTE_FONT));

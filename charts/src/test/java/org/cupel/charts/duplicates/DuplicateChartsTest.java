@@ -6,17 +6,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import org.cupel.assay.AssayValue;
-import org.cupel.assay.QcRole;
 import org.cupel.charts.ChartFigure;
 import org.cupel.charts.FigureChecks;
 import org.cupel.charts.PngWriter;
 import org.cupel.charts.PointBudget;
 import org.cupel.duplicates.DuplicateAnalysis;
-import org.cupel.duplicates.DuplicatePair;
 import org.cupel.duplicates.DuplicateReport;
 import org.cupel.duplicates.DuplicateSetResult;
 import org.cupel.duplicates.DuplicateSettings;
@@ -59,20 +55,14 @@ class DuplicateChartsTest {
     }
 
     /**
-     * 300 simulated pulp pairs (DL 0.01) plus O-HI / D-HI = 1.00 / 1.50 (HARD 0.5 / 2.5 = 20 %, above the 10 %
-     * limit) and O-LO / D-LO = 0.01 / 0.09: mean 0.05, below 10 × DL, so not judged by HARD although its HARD is
-     * 0.08 / 0.10 = 80 %; its |d| = 0.08 is about six σ_c = 0.01 + 0.05·0.05 there, above the 99 % line. The
-     * panels mark what the analysis flagged: D-HI beyond the HARD limit, D-LO above the 99 % line only.
+     * {@link SimulatedPairs#withFlaggedPairs}: D-LO's HARD is 0.08 / 0.10 = 80 %, far beyond the 10 % limit, but
+     * it is not judged by HARD (mean below 10 × DL); it is above the 99 % line. The panels mark what the
+     * analysis flagged: D-HI beyond the HARD limit, D-LO above the 99 % line only.
      */
     @Test
     void thePanelsMarkThePairsTheAnalysisFlagged() {
-        List<DuplicatePair> pairs = new ArrayList<>(SimulatedPairs.pairs(300, 0, 7L));
-        pairs.add(new DuplicatePair("D-HI", "O-HI", "J1", QcRole.PULP_DUPLICATE, AssayValue.detected(1.00, 0.01),
-                AssayValue.detected(1.50, 0.01)));
-        pairs.add(new DuplicatePair("D-LO", "O-LO", "J1", QcRole.PULP_DUPLICATE, AssayValue.detected(0.01, 0.01),
-                AssayValue.detected(0.09, 0.01)));
-        DuplicateSetResult set = DuplicateAnalysis.run("Au", "g/t", pairs, List.of(), new double[0],
-                DuplicateSettings.DEFAULTS).sets().get(0);
+        DuplicateSetResult set = DuplicateAnalysis.run("Au", "g/t", SimulatedPairs.withFlaggedPairs(), List.of(),
+                new double[0], DuplicateSettings.DEFAULTS).sets().get(0);
         XYChart scatter = (XYChart) DuplicateCharts.scatter(set, "(a)", 450, 270).chart();
         XYSeries flagged = scatter.getSeriesMap().get("flagged pairs");
         assertEquals(count(set.pairs().absoluteFlags().beyondHardLimit()), flagged.getXData().length);
