@@ -22,6 +22,9 @@ public final class ChartMarkers {
     public static final Marker TRIANGLE_UP = of(SeriesMarkers.TRIANGLE_UP);
     public static final Marker TRIANGLE_DOWN = of(SeriesMarkers.TRIANGLE_DOWN);
 
+    /** One shape per thing compared on one chart, with {@link ChartStyle#CATEGORIES}. */
+    public static final Marker[] CATEGORIES = {CIRCLE, SQUARE, DIAMOND, TRIANGLE_UP, TRIANGLE_DOWN};
+
     private ChartMarkers() {
     }
 

@@ -36,15 +36,44 @@ public final class ChartStyle {
     /** A second data series (umpire lab, second condition). */
     public static final Color SECOND = BLUISH_GREEN;
 
+    /**
+     * Things of one kind compared on one chart (CRMs, duplicate types): Okabe–Ito colours other than the
+     * orange and vermillion that mean warning and failure.
+     */
+    public static final Color[] CATEGORIES = {BLUE, REDDISH_PURPLE, BLUISH_GREEN, SKY_BLUE, BLACK, GREY};
+
     public static final Color[] SERIES = {BLUE, VERMILLION, BLUISH_GREEN, ORANGE, REDDISH_PURPLE, SKY_BLUE, BLACK,
         YELLOW};
 
     public static final int WIDTH = 900;
     public static final int HEIGHT = 560;
 
-    private static final String FONT = "DejaVu Sans";
+    /** The one typeface of charts and figures. */
+    static final String FONT = "DejaVu Sans";
+    /** Point markers, in chart units. */
+    public static final int MARKER_SIZE = 6;
+    /** Point markers of a panel, half a figure wide. */
+    public static final int PANEL_MARKER_SIZE = 5;
 
     private ChartStyle() {
+    }
+
+    /**
+     * Black or white, whichever reads better on {@code fill}: black on fills lighter than mid-grey by relative
+     * luminance (W3C 2008, "Web Content Accessibility Guidelines (WCAG) 2.0", definition of relative
+     * luminance), white on darker ones.
+     */
+    public static Color textOn(Color fill) {
+        return luminance(fill) > 0.18 ? BLACK : Color.WHITE;
+    }
+
+    static double luminance(Color c) {
+        return 0.2126 * linear(c.getRed()) + 0.7152 * linear(c.getGreen()) + 0.0722 * linear(c.getBlue());
+    }
+
+    private static double linear(int channel) {
+        double v = channel / 255.0;
+        return v <= 0.03928 ? v / 12.92 : Math.pow((v + 0.055) / 1.055, 2.4);
     }
 
     public static BasicStroke solid(float width) {
@@ -61,11 +90,26 @@ public final class ChartStyle {
 
     public static void apply(XYChart chart) {
         applyAxes(chart.getStyler());
-        chart.getStyler().setMarkerSize(6);
+        chart.getStyler().setMarkerSize(MARKER_SIZE);
     }
 
     public static void apply(CategoryChart chart) {
         applyAxes(chart.getStyler());
+    }
+
+    /**
+     * The style of a chart drawn as a panel of a {@link ChartFigure}: no title (the figure writes the panel's
+     * heading), no legend (the figure's key serves every panel) and type a size smaller, for half the width.
+     */
+    public static void applyPanel(XYChart chart) {
+        apply(chart);
+        AxesChartStyler s = chart.getStyler();
+        s.setChartTitleVisible(false);
+        s.setLegendVisible(false);
+        s.setAxisTitleFont(new Font(FONT, Font.PLAIN, 13));
+        s.setAxisTickLabelsFont(new Font(FONT, Font.PLAIN, 11));
+        s.setAxisTitlePadding(4);
+        chart.getStyler().setMarkerSize(PANEL_MARKER_SIZE);
     }
 
     private static void applyAxes(AxesChartStyler s) {

@@ -57,6 +57,8 @@ public final class PdfReport {
     /** Tables of many columns print smaller, so that their cells wrap less on a portrait page. */
     static final float WIDE_TABLE_FONT = 6.6f;
     static final int WIDE_TABLE_COLUMNS = 8;
+    /** Height to width beyond which a figure is a page of panels rather than a chart. */
+    static final float TALL_FIGURE = 0.75f;
 
     private final QcReport report;
     private final ReportFiles files;
@@ -267,7 +269,10 @@ public final class PdfReport {
     private void addFigure(Chapter ch, ReportBlock.Figure f) throws IOException {
         Image img = PdfPngImage.of(png.apply(f));
         float width = doc.getPageSize().getWidth() - 2 * MARGIN_X;
-        float height = (doc.getPageSize().getHeight() - MARGIN_TOP - MARGIN_BOTTOM) * 0.55f;
+        // A chart takes at most half a page, so two share one; a figure of panels (higher than three quarters
+        // of its width) a page, with room left for its caption.
+        float share = img.getHeight() > img.getWidth() * TALL_FIGURE ? 0.86f : 0.55f;
+        float height = (doc.getPageSize().getHeight() - MARGIN_TOP - MARGIN_BOTTOM) * share;
         img.scaleToFit(width, height);
         PdfPTable holder = new PdfPTable(1);
         holder.setTotalWidth(width);

@@ -14,7 +14,7 @@ import java.util.concurrent.Callable;
 import org.cupel.assay.Numbers;
 import org.cupel.assay.QcRole;
 import org.cupel.charts.PngWriter;
-import org.cupel.charts.duplicates.DuplicateCharts;
+import org.cupel.charts.duplicates.DuplicateFigures;
 import org.cupel.duplicates.BatchPrecision;
 import org.cupel.duplicates.DuplicateAnalysis;
 import org.cupel.duplicates.DuplicatePair;
@@ -265,21 +265,15 @@ public final class DuplicatesCommand implements Callable<Integer> {
             Files.createDirectories(chartDir);
             int n = 0;
             for (DuplicateReport r : reports) {
-                for (DuplicateSetResult s : r.sets()) {
-                    String stem = safe(r.analyte() + "-" + s.type().name().toLowerCase(Locale.ROOT));
-                    PngWriter.write(DuplicateCharts.scatter(s, true), chartDir.resolve(stem + "-scatter.png"),
-                            PngWriter.PRINT_DPI);
-                    PngWriter.write(DuplicateCharts.rankedHard(s), chartDir.resolve(stem + "-ranked-hard.png"),
-                            PngWriter.PRINT_DPI);
-                    PngWriter.write(DuplicateCharts.relativeDifference(s),
-                            chartDir.resolve(stem + "-relative-difference.png"), PngWriter.PRINT_DPI);
-                    n += 3;
-                    if (s.model().available()) {
-                        PngWriter.write(DuplicateCharts.thompsonHowarth(s),
-                                chartDir.resolve(stem + "-thompson-howarth.png"), PngWriter.PRINT_DPI);
-                        n++;
-                    }
+                if (r.sets().isEmpty()) {
+                    continue;
                 }
+                String stem = safe("duplicates-" + r.analyte());
+                PngWriter.write(DuplicateFigures.pairs(r), chartDir.resolve(stem + "-pairs.png"), PngWriter.PRINT_DPI);
+                PngWriter.write(DuplicateFigures.bias(r), chartDir.resolve(stem + "-bias.png"), PngWriter.PRINT_DPI);
+                PngWriter.write(DuplicateFigures.precision(r), chartDir.resolve(stem + "-precision.png"),
+                        PngWriter.PRINT_DPI);
+                n += 3;
             }
             if (!json) {
                 out.println(n + " charts written to " + chartDir);

@@ -60,7 +60,8 @@ public final class DuplicateAnalysis {
         Flagged outliers = outliers(screened, model, settings.hardLimit(type));
         return new DuplicateSetResult(analyte, unit, type, precision, model, bias, outliers.ranked(),
                 outliers.belowThreshold(),
-                new DuplicateSetResult.PairValues(abs.a(), abs.b(), rel.a(), rel.b()),
+                new DuplicateSetResult.PairValues(abs.a(), abs.b(), rel.a(), rel.b(), outliers.flags(abs),
+                        outliers.flags(rel)),
                 batches(type, pairs, decisions, precision.rmsCv(), settings));
     }
 
@@ -117,7 +118,21 @@ public final class DuplicateAnalysis {
      * detection-limit multiple are not judged by HARD (near the limit a relative difference says little), so
      * when the 99 % line flags one it goes to {@code belowThreshold}, largest |d| first.
      */
-    private record Flagged(List<OutlierPair> ranked, List<OutlierPair> belowThreshold) {
+    private record Flagged(List<OutlierPair> ranked, List<OutlierPair> belowThreshold,
+                           Map<Integer, List<OutlierPair.Test>> byRow) {
+
+        /** The flags of {@code members}' pairs, in their order: the charts mark what the tables list. */
+        DuplicateSetResult.PairFlags flags(ScreenedPairs.Members members) {
+            int[] rows = members.rows();
+            boolean[] hard = new boolean[rows.length];
+            boolean[] line = new boolean[rows.length];
+            for (int i = 0; i < rows.length; i++) {
+                List<OutlierPair.Test> tests = byRow.getOrDefault(rows[i], List.of());
+                hard[i] = tests.contains(OutlierPair.Test.OUTSIDE_HARD_LIMIT);
+                line[i] = tests.contains(OutlierPair.Test.ABOVE_99_PERCENT_LINE);
+            }
+            return new DuplicateSetResult.PairFlags(hard, line);
+        }
     }
 
     private static Flagged outliers(ScreenedPairs set, PrecisionModelResult model, double hardLimit) {
@@ -149,7 +164,7 @@ public final class DuplicateAnalysis {
         flagged.forEach((row, tests) -> (relative[row] ? ranked : low).add(outlier(set.pairs().get(row), tests)));
         ranked.sort(Comparator.comparingDouble(OutlierPair::hard).reversed());
         low.sort(Comparator.comparingDouble(OutlierPair::absDifference).reversed());
-        return new Flagged(ranked, low);
+        return new Flagged(ranked, low, flagged);
     }
 
     private static OutlierPair outlier(DuplicatePair p, List<OutlierPair.Test> tests) {

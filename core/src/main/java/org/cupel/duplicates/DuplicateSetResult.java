@@ -30,13 +30,24 @@ public record DuplicateSetResult(String analyte, String unit, QcRole type, Preci
         batches = List.copyOf(batches);
     }
 
-    /** The values behind the charts: pairs used in absolute and in relative measures. */
-    public record PairValues(double[] absoluteA, double[] absoluteB, double[] relativeA, double[] relativeB) {
+    /**
+     * The values behind the charts: pairs used in absolute and in relative measures, each with the flags the
+     * analysis gave it, so that a chart marks the pairs the flagged-pair tables list and never judges a pair
+     * itself.
+     *
+     * @param absoluteFlags per pair of {@code absoluteA}/{@code absoluteB}
+     * @param relativeFlags per pair of {@code relativeA}/{@code relativeB}
+     */
+    public record PairValues(double[] absoluteA, double[] absoluteB, double[] relativeA, double[] relativeB,
+                             PairFlags absoluteFlags, PairFlags relativeFlags) {
         public PairValues {
             absoluteA = absoluteA.clone();
             absoluteB = absoluteB.clone();
             relativeA = relativeA.clone();
             relativeB = relativeB.clone();
+            if (absoluteFlags.size() != absoluteA.length || relativeFlags.size() != relativeA.length) {
+                throw new IllegalArgumentException("one flag per pair expected");
+            }
         }
 
         @Override
@@ -57,6 +68,37 @@ public record DuplicateSetResult(String analyte, String unit, QcRole type, Preci
         @Override
         public double[] relativeB() {
             return relativeB.clone();
+        }
+    }
+
+    /**
+     * Which pairs of a member list the analysis flagged, index-aligned with its values.
+     *
+     * @param beyondHardLimit flagged {@link OutlierPair.Test#OUTSIDE_HARD_LIMIT}: judged by HARD (used in
+     *     relative measures) and above the type's limit
+     * @param aboveLine99 flagged {@link OutlierPair.Test#ABOVE_99_PERCENT_LINE}
+     */
+    public record PairFlags(boolean[] beyondHardLimit, boolean[] aboveLine99) {
+        public PairFlags {
+            if (beyondHardLimit.length != aboveLine99.length) {
+                throw new IllegalArgumentException("both flag arrays must have one entry per pair");
+            }
+            beyondHardLimit = beyondHardLimit.clone();
+            aboveLine99 = aboveLine99.clone();
+        }
+
+        public int size() {
+            return beyondHardLimit.length;
+        }
+
+        @Override
+        public boolean[] beyondHardLimit() {
+            return beyondHardLimit.clone();
+        }
+
+        @Override
+        public boolean[] aboveLine99() {
+            return aboveLine99.clone();
         }
     }
 }

@@ -62,4 +62,47 @@ class FlaggedPairsTest {
         assertEquals(List.of(OutlierPair.Test.ABOVE_99_PERCENT_LINE), lo.tests());
         assertEquals(0.025, lo.absDifference(), 1e-15);
     }
+
+    /**
+     * The per-pair flags the charts draw are the decisions of the lists above, pair for pair: D-HI is beyond the
+     * HARD limit among both the absolute and the relative pairs; D-LO is above the 99 % line but, left out of
+     * relative measures, never beyond the HARD limit, although its HARD (71 %) is above 10 %.
+     */
+    @Test
+    void pairFlagsAreTheListedDecisions() {
+        DuplicateSetResult s = set();
+        DuplicateSetResult.PairValues v = s.pairs();
+        int hi = indexOf(v.absoluteA(), v.absoluteB(), 1.00, 1.50);
+        int lo = indexOf(v.absoluteA(), v.absoluteB(), 0.005, 0.030);
+        assertTrue(v.absoluteFlags().beyondHardLimit()[hi]);
+        assertTrue(v.absoluteFlags().aboveLine99()[lo]);
+        assertTrue(!v.absoluteFlags().beyondHardLimit()[lo], "not judged by HARD below 10 x DL");
+        assertEquals(-1, indexOf(v.relativeA(), v.relativeB(), 0.005, 0.030), "D-LO is not a relative pair");
+        assertTrue(v.relativeFlags().beyondHardLimit()[indexOf(v.relativeA(), v.relativeB(), 1.00, 1.50)]);
+        long listedHard = s.outliers().stream().filter(o -> o.tests().contains(OutlierPair.Test.OUTSIDE_HARD_LIMIT))
+                .count();
+        long listedLine = java.util.stream.Stream.concat(s.outliers().stream(),
+                s.outliersBelowRelativeThreshold().stream())
+                .filter(o -> o.tests().contains(OutlierPair.Test.ABOVE_99_PERCENT_LINE)).count();
+        assertEquals(listedHard, count(v.relativeFlags().beyondHardLimit()));
+        assertEquals(listedHard, count(v.absoluteFlags().beyondHardLimit()), "every relative pair here is absolute");
+        assertEquals(listedLine, count(v.absoluteFlags().aboveLine99()));
+    }
+
+    private static int indexOf(double[] a, double[] b, double original, double duplicate) {
+        for (int i = 0; i < a.length; i++) {
+            if (a[i] == original && b[i] == duplicate) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    private static long count(boolean[] flags) {
+        long n = 0;
+        for (boolean f : flags) {
+            n += f ? 1 : 0;
+        }
+        return n;
+    }
 }

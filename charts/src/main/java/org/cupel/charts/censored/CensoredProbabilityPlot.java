@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import org.cupel.assay.Numbers;
 import org.cupel.censored.Ros;
+import org.cupel.charts.ChartFigure;
 import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
@@ -31,7 +32,7 @@ public final class CensoredProbabilityPlot {
      * @param valueLabel the axis label with unit, e.g. "Au (g/t)"
      * @param title chart title
      */
-    public static XYChart create(Ros.Result ros, String valueLabel, String title) {
+    public static ChartFigure create(Ros.Result ros, String valueLabel, String title) {
         XYChart chart = new XYChartBuilder().width(ChartStyle.WIDTH).height(ChartStyle.HEIGHT).title(title)
                 .xAxisTitle("Normal quantile of the plotting position (z)").yAxisTitle(valueLabel + ", log scale")
                 .build();
@@ -51,7 +52,7 @@ public final class CensoredProbabilityPlot {
                     ChartStyle.HEIGHT / 2.0 + 12, true));
             chart.addAnnotation(new AnnotationText(cut > 0 ? why.substring(cut + 1).strip() : why,
                     ChartStyle.WIDTH / 2.0, ChartStyle.HEIGHT / 2.0 - 12, true));
-            return chart;
+            return ChartFigure.of(chart, "");
         }
         points.sort(Comparator.comparingDouble(Ros.Point::normalQuantile));
         int drawnDetects = addPoints(chart, points, true, "Detected", ChartStyle.DATA, ChartMarkers.CIRCLE);
@@ -73,9 +74,7 @@ public final class CensoredProbabilityPlot {
         long censored = points.stream().filter(p -> !p.detected()).count();
         String note = ChartNotes.count(n, drawnDetects + drawnImputed) + String.format(Locale.US,
                 "; %d censored (%.0f %%)", censored, 100.0 * censored / n);
-        // Screen-space y counts from the bottom edge: this puts the note at the top left of the plot area.
-        chart.addAnnotation(new AnnotationText(note, 190, ChartStyle.HEIGHT - 70, true));
-        return chart;
+        return ChartFigure.of(chart, note);
     }
 
     private static int addPoints(XYChart chart, List<Ros.Point> all, boolean detected, String name,

@@ -2,13 +2,13 @@ package org.cupel.charts.control;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.cupel.charts.ChartFigure;
 import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
 import org.cupel.charts.PointBudget;
 import org.cupel.control.BlankResult;
 import org.cupel.control.Verdict;
-import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
@@ -16,19 +16,23 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
  * Blank results of one analyte in run order on a log scale, with the warning and failure thresholds as
- * step lines, the grade of the sample run just before each blank, failures ringed, and dotted lines
- * between batches.
+ * step lines, the grade of the sample run just before each blank, failures in the failure colour (named under
+ * the chart), and dotted lines between batches.
  */
 public final class BlankChart {
     static final String PRECEDING = "Preceding sample";
     static final String FAILED = "Failed blank";
     static final int MAX_LABELS = 12;
+    static final String WARN = "Warn above ";
+    /** The threshold lines, as the legend shows them. */
+    static final java.awt.BasicStroke FAIL_LINE = ChartStyle.solid(1.6f);
+    static final java.awt.BasicStroke WARN_LINE = ChartStyle.dashed(1.6f);
 
     private BlankChart() {
     }
 
     /** @param results the blanks of one analyte, in batch and run order (as {@code BlankReport} lists them) */
-    public static XYChart sequence(List<BlankResult> results) {
+    public static ChartFigure sequence(List<BlankResult> results) {
         String analyte = results.isEmpty() ? "" : results.get(0).observation().analyte();
         String unit = results.isEmpty() ? "" : results.get(0).observation().unit();
         XYChart chart = new XYChartBuilder().width(ChartStyle.WIDTH).height(ChartStyle.HEIGHT)
@@ -51,8 +55,8 @@ public final class BlankChart {
         Points censored = new Points();
         Points preceding = new Points();
         Points failed = new Points();
-        Points warn = new Points();
-        Points fail = new Points();
+        Steps warn = new Steps();
+        Steps fail = new Steps();
         for (int i : keep) {
             BlankResult r = results.get(i);
             double x = i + 1;
@@ -73,36 +77,38 @@ public final class BlankChart {
             }
         }
         preceding.addTo(chart, PRECEDING, ChartStyle.GREY, ChartMarkers.DIAMOND);
-        line(fail.addTo(chart, "Fail above " + rule(results, true), ChartStyle.FAILURE, SeriesMarkers.NONE), ChartStyle.solid(1.6f));
-        line(warn.addTo(chart, "Warn above " + rule(results, false), ChartStyle.WARNING, SeriesMarkers.NONE), ChartStyle.dashed(1.6f));
+        fail.addTo(chart, "Fail above " + rule(results, true), ChartStyle.FAILURE, FAIL_LINE);
+        warn.addTo(chart, WARN + rule(results, false), ChartStyle.WARNING, WARN_LINE);
         detected.addTo(chart, "Blank", ChartStyle.DATA, ChartMarkers.CIRCLE);
         censored.addTo(chart, "Blank < DL (at DL)", ChartStyle.SKY_BLUE, ChartMarkers.TRIANGLE_DOWN);
         failed.addTo(chart, FAILED, ChartStyle.FAILURE, ChartMarkers.CIRCLE);
-        labelFailures(chart, results);
-        if (keep.length < n) {
-            ChartNote.add(chart, ChartNotes.count(n, keep.length, PointBudget.count(flagged),
-                    PointBudget.flaggedAmong(flagged, keep), "warnings and failures"));
-        }
+        String note = String.join("; ", java.util.stream.Stream.of(keep.length < n ? ChartNotes.count(n, keep.length,
+                PointBudget.count(flagged), PointBudget.flaggedAmong(flagged, keep), "warnings and failures") : "",
+                failures(results)).filter(t -> !t.isEmpty()).toList());
 
         BatchBoundaries.draw(chart, n, i -> results.get(i).observation().batch(), "Blank number in run order", "");
         if (n > 0) {
             chart.getStyler().setXAxisMin(0.5);
             chart.getStyler().setXAxisMax(n + 0.5);
         }
-        return chart;
+        return ChartFigure.of(chart, note);
     }
 
-    /** Failed blanks are named on the chart (the first {@value #MAX_LABELS}), so a reader can find them in the tables. */
-    static void labelFailures(XYChart chart, List<BlankResult> results) {
-        int labelled = 0;
-        for (int i = 0; i < results.size() && labelled < MAX_LABELS; i++) {
+    /**
+     * The failed blanks by name and position (the first {@value #MAX_LABELS}), for the note under the chart,
+     * so that a reader can find them in the tables; names on the plot would cover its points.
+     */
+    static String failures(List<BlankResult> results) {
+        List<String> named = new ArrayList<>();
+        int count = 0;
+        for (int i = 0; i < results.size(); i++) {
             BlankResult r = results.get(i);
-            if (r.verdict().verdict() == Verdict.FAIL && r.observation().value().value() > 0) {
-                String text = r.observation().sampleId() + (r.carryOver() ? " (carry-over)" : "");
-                chart.addAnnotation(new AnnotationText(text, i + 1, r.observation().value().value() * 1.45, false));
-                labelled++;
+            if (r.verdict().verdict() == Verdict.FAIL && ++count <= MAX_LABELS) {
+                named.add(r.observation().sampleId() + " (no. " + (i + 1) + (r.carryOver() ? ", carry-over" : "") + ")");
             }
         }
+        return named.isEmpty() ? "" : "Failed blanks: " + String.join(", ", named)
+                + (count > named.size() ? " and " + (count - named.size()) + " more" : "");
     }
 
     /** "5×DL" when every blank has the same rule, else "(per analyte)". */
@@ -121,9 +127,38 @@ public final class BlankChart {
         return rule == null ? "" : rule;
     }
 
-    private static void line(XYSeries s, java.awt.BasicStroke stroke) {
-        if (s != null) {
-            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Step);
+    /**
+     * A threshold in run order as a step line with a vertex only where it changes: XChart starts the dash
+     * pattern afresh on each segment, so a dashed line with a vertex per blank would be drawn solid, unlike
+     * its legend entry. Each blank's threshold holds from half a position before it to the next change.
+     */
+    static final class Steps {
+        private final List<double[]> xy = new ArrayList<>();
+        private double lastX;
+        private double lastY;
+
+        void add(double x, double y) {
+            if (xy.isEmpty()) {
+                xy.add(new double[] {x - 0.5, y});
+            } else if (y != lastY) {
+                xy.add(new double[] {x - 0.5, lastY});
+                xy.add(new double[] {x - 0.5, y});
+            }
+            lastX = x;
+            lastY = y;
+        }
+
+        void addTo(XYChart chart, String name, java.awt.Color colour, java.awt.BasicStroke stroke) {
+            if (xy.isEmpty()) {
+                return;
+            }
+            List<double[]> all = new ArrayList<>(xy);
+            all.add(new double[] {lastX + 0.5, lastY});
+            XYSeries s = chart.addSeries(name, all.stream().mapToDouble(p -> p[0]).toArray(),
+                    all.stream().mapToDouble(p -> p[1]).toArray());
+            s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+            s.setMarker(SeriesMarkers.NONE);
+            s.setLineColor(colour);
             s.setLineStyle(stroke);
         }
     }
@@ -131,7 +166,6 @@ public final class BlankChart {
     static void legendRight(XYChart chart) {
         chart.getStyler().setLegendPosition(org.knowm.xchart.style.Styler.LegendPosition.OutsideE);
         chart.getStyler().setLegendLayout(org.knowm.xchart.style.Styler.LegendLayout.Vertical);
-        chart.getStyler().setAnnotationTextFontColor(ChartStyle.FAILURE);
     }
 
     /** Growing x/y arrays for one series; a series with no point is left out of the chart. */

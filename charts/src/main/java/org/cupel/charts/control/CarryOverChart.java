@@ -3,6 +3,7 @@ package org.cupel.charts.control;
 import java.util.ArrayList;
 import java.util.List;
 import org.cupel.assay.Numbers;
+import org.cupel.charts.ChartFigure;
 import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
@@ -24,7 +25,7 @@ public final class CarryOverChart {
     private CarryOverChart() {
     }
 
-    public static XYChart scatter(List<BlankResult> results, CarryOverRelation relation) {
+    public static ChartFigure scatter(List<BlankResult> results, CarryOverRelation relation) {
         String analyte = results.isEmpty() ? relation.analyte() : results.get(0).observation().analyte();
         String unit = results.isEmpty() ? "" : results.get(0).observation().unit();
         XYChart chart = new XYChartBuilder().width(ChartStyle.WIDTH).height(ChartStyle.HEIGHT)
@@ -81,11 +82,8 @@ public final class CarryOverChart {
         pass.addTo(chart, "Blank", ChartStyle.DATA, ChartMarkers.CIRCLE);
         censored.addTo(chart, "Blank < DL (at DL)", ChartStyle.SKY_BLUE, ChartMarkers.TRIANGLE_DOWN);
         failed.addTo(chart, BlankChart.FAILED, ChartStyle.FAILURE, ChartMarkers.CIRCLE);
-        if (keep.length < drawn) {
-            ChartNote.add(chart, ChartNotes.count(drawn, keep.length, PointBudget.count(flagged),
-                    PointBudget.flaggedAmong(flagged, keep), "failed blanks"));
-        }
-        return chart;
+        return ChartFigure.of(chart, keep.length < drawn ? ChartNotes.count(drawn, keep.length,
+                PointBudget.count(flagged), PointBudget.flaggedAmong(flagged, keep), "failed blanks") : "");
     }
 
     private static boolean plottable(BlankResult r) {

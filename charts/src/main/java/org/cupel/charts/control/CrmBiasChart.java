@@ -3,6 +3,7 @@ package org.cupel.charts.control;
 import java.util.List;
 import java.util.Locale;
 import org.cupel.assay.Numbers;
+import org.cupel.charts.ChartFigure;
 import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartStyle;
 import org.cupel.control.crm.BiasVsGrade;
@@ -21,7 +22,7 @@ public final class CrmBiasChart {
     private CrmBiasChart() {
     }
 
-    public static XYChart of(BiasVsGrade grade, List<SeriesReview> series) {
+    public static ChartFigure of(BiasVsGrade grade, List<SeriesReview> series) {
         List<SeriesReview> usable = series.stream().filter(s -> Double.isFinite(s.bias().meanBiasPct())).toList();
         String unit = series.isEmpty() ? "" : series.get(0).analyte().unit().symbol();
         XYChart c = new XYChartBuilder().width(ChartStyle.WIDTH).height(ChartStyle.HEIGHT)
@@ -45,7 +46,7 @@ public final class CrmBiasChart {
             XYSeries p = c.addSeries(s.crm() + " (n = " + s.bias().n() + ")", new double[] {x},
                     new double[] {s.bias().meanBiasPct()}, new double[] {half});
             p.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-            java.awt.Color col = CrmZScoreChart.CRM_COLOURS[k % CrmZScoreChart.CRM_COLOURS.length];
+            java.awt.Color col = ChartStyle.CATEGORIES[k % ChartStyle.CATEGORIES.length];
             p.setMarker(ChartMarkers.CIRCLE).setMarkerColor(col).setLineColor(col);
         }
         if (usable.isEmpty()) {
@@ -53,10 +54,9 @@ public final class CrmBiasChart {
             maxX = 1;
         }
         double[] ends = {0, maxX * 1.08};
-        // Headroom at the top keeps the note box clear of the error bars.
         double spanY = Math.max(highY - lowY, 1);
         c.getStyler().setXAxisMin(0.0).setXAxisMax(maxX * 1.08).setYAxisMin(lowY - 0.05 * spanY)
-                .setYAxisMax(highY + 0.2 * spanY);
+                .setYAxisMax(highY + 0.05 * spanY);
         XYSeries zero = c.addSeries("No bias", ends, new double[] {0, 0});
         zero.setMarker(SeriesMarkers.NONE).setLineColor(ChartStyle.REFERENCE).setLineStyle(ChartStyle.solid(1.2f));
         String note;
@@ -71,7 +71,6 @@ public final class CrmBiasChart {
         } else {
             note = "n = " + usable.size() + " CRMs; no line: " + grade.fit().note();
         }
-        ChartNote.add(c, note);
-        return c;
+        return ChartFigure.of(c, note);
     }
 }

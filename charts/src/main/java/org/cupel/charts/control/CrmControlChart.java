@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.cupel.assay.Numbers;
+import org.cupel.charts.ChartFigure;
 import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
@@ -13,7 +14,6 @@ import org.cupel.control.Verdict;
 import org.cupel.control.crm.CertifiedLimits;
 import org.cupel.control.crm.CrmResult;
 import org.cupel.control.crm.SeriesReview;
-import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
@@ -23,7 +23,7 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * Control chart of one CRM and analyte: results in series order, certified value, ±2 SD and ±3 SD
  * certificate limits, the project's running mean, batch boundaries as dotted verticals, and each result
  * marked by its outcome. The value axis spans certified ± 5 SD (wider when judged results need it);
- * results beyond it (swaps, mostly) sit on the edge and are labelled with their value.
+ * results beyond it (swaps, mostly) sit on the edge, and the note under the chart gives their values.
  */
 public final class CrmControlChart {
     private static final double SPAN_SD = 5;
@@ -32,7 +32,8 @@ public final class CrmControlChart {
     private CrmControlChart() {
     }
 
-    public static XYChart of(SeriesReview s) {
+    /** The chart, its small print (n, certificate limits, thinning) in a strip under it. */
+    public static ChartFigure of(SeriesReview s) {
         CertifiedLimits lim = s.limits();
         List<CrmResult> rs = s.results();
         int n = rs.size();
@@ -49,8 +50,8 @@ public final class CrmControlChart {
                 hi = Math.max(hi, r.point().value().value());
             }
         }
-        // Headroom at the top keeps the note box clear of the data.
-        c.getStyler().setYAxisMin(lo - (hi - lo) * 0.03).setYAxisMax(hi + (hi - lo) * 0.16).setXAxisMin(0.5).setXAxisMax(n + 0.5);
+        c.getStyler().setYAxisMin(lo - (hi - lo) * 0.03).setYAxisMax(hi + (hi - lo) * 0.03).setXAxisMin(0.5)
+                .setXAxisMax(n + 0.5);
         double[] ends = {0.5, n + 0.5};
         line(c, "Certified", ends, lim.certified(),
                 ChartStyle.REFERENCE, ChartStyle.solid(1.6f), true);
@@ -80,18 +81,15 @@ public final class CrmControlChart {
                 ChartMarkers.TRIANGLE_UP, lo, hi);
         c.getStyler().setAnnotationLineColor(new Color(185, 185, 185)).setAnnotationLineStroke(ChartStyle.dotted(0.8f));
         BatchBoundaries.draw(c, n, i -> rs.get(i).point().batchId(), "Result number", "batch date, then position");
-        int offScale = offScaleLabels(c, rs, lo, hi);
         String note = ChartNotes.count(n, shown.length, PointBudget.count(flagged),
                 PointBudget.flaggedAmong(flagged, shown), "warnings, failures and swaps")
-                + (offScale > MAX_LABELS ? String.format(Locale.ROOT, "; first %d of %d off-scale results labelled",
-                MAX_LABELS, offScale) : "")
+                + offScale(rs, lo, hi)
                 + String.format(Locale.ROOT,
                 "; certified %s %s, limits ±2 and ±3 × certificate SD %s %s", Numbers.significant(lim.certified(), 4), unit,
                 Numbers.significant(lim.sd(), 3), unit)
                 + (s.projectLimits().available()
                 ? String.format(Locale.US, "; own ±2 SD from the project's %,d results", s.projectLimits().n()) : "");
-        ChartNote.add(c, note);
-        return c;
+        return ChartFigure.of(c, note);
     }
 
     private static void line(XYChart c, String name, double[] x, double y, Color color,
@@ -135,18 +133,21 @@ public final class CrmControlChart {
         }
     }
 
-    /** Labels the first {@value #MAX_LABELS} results beyond the value axis; returns how many there are. */
-    private static int offScaleLabels(XYChart c, List<CrmResult> rs, double lo, double hi) {
+    /**
+     * The results beyond the value axis (drawn on its edge) with their values, the first {@value #MAX_LABELS}
+     * by number, for the note under the chart: "; off scale, drawn at the edge: no. 12 = 2.47 (MID?)".
+     */
+    private static String offScale(List<CrmResult> rs, double lo, double hi) {
+        List<String> named = new ArrayList<>();
         int count = 0;
         for (int i = 0; i < rs.size(); i++) {
             double v = rs.get(i).point().value().value();
             if ((v < lo || v > hi) && ++count <= MAX_LABELS) {
-                double y = v > hi ? hi - (hi - lo) * 0.045 : lo + (hi - lo) * 0.045;
-                String label = rs.get(i).point().value().display() + " off scale"
-                        + (rs.get(i).isSwap() ? ": " + rs.get(i).swapWith() + "?" : "");
-                c.addAnnotation(new AnnotationText(label, i + 1.0, y, false));
+                named.add("no. " + (i + 1) + " = " + rs.get(i).point().value().display()
+                        + (rs.get(i).isSwap() ? " (" + rs.get(i).swapWith() + "?)" : ""));
             }
         }
-        return count;
+        return named.isEmpty() ? "" : "; off scale, drawn at the edge: " + String.join(", ", named)
+                + (count > named.size() ? " and " + (count - named.size()) + " more" : "");
     }
 }

@@ -5,6 +5,7 @@ import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
 import org.cupel.assay.LimitComparison;
+import org.cupel.charts.ChartFigure;
 import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
@@ -28,7 +29,7 @@ public final class CrmZScoreChart {
     private CrmZScoreChart() {
     }
 
-    public static XYChart of(String analyte, List<SeriesReview> series) {
+    public static ChartFigure of(String analyte, List<SeriesReview> series) {
         LocalDate origin = null;
         boolean dated = true;
         for (SeriesReview s : series) {
@@ -75,8 +76,8 @@ public final class CrmZScoreChart {
             if (idx.length > 0) {
                 XYSeries xs = c.addSeries(s.crm() + " (n = " + judged.size() + ")", x, y);
                 xs.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
-                xs.setMarker(MARKERS[k % MARKERS.length]).setLineStyle(ChartStyle.solid(0.8f));
-                java.awt.Color col = CRM_COLOURS[k % CRM_COLOURS.length];
+                xs.setMarker(ChartMarkers.CATEGORIES[k % ChartMarkers.CATEGORIES.length]).setLineStyle(ChartStyle.solid(0.8f));
+                java.awt.Color col = ChartStyle.CATEGORIES[k % ChartStyle.CATEGORIES.length];
                 xs.setMarkerColor(col).setLineColor(col);
             }
             k++;
@@ -86,16 +87,9 @@ public final class CrmZScoreChart {
         band(c, "±3 SD", 3, ChartStyle.FAILURE);
         XYSeries zero = c.addSeries("z = 0", ends, new double[] {0, 0});
         zero.setMarker(SeriesMarkers.NONE).setLineColor(ChartStyle.REFERENCE).setLineStyle(ChartStyle.solid(1.2f));
-        ChartNote.add(c, ChartNotes.count(total, drawn, flagged, flaggedDrawn, "results with |z| > 2") + "; swaps left out; |z| clipped at 6");
-        return c;
+        return ChartFigure.of(c, ChartNotes.count(total, drawn, flagged, flaggedDrawn, "results with |z| > 2")
+                + "; swaps left out; |z| clipped at 6");
     }
-
-    /** Okabe–Ito colours other than the orange and vermillion that mean warning and failure limits. */
-    static final java.awt.Color[] CRM_COLOURS = {ChartStyle.BLUE, ChartStyle.REDDISH_PURPLE, ChartStyle.BLUISH_GREEN,
-        ChartStyle.SKY_BLUE, ChartStyle.BLACK, ChartStyle.GREY};
-
-    private static final org.knowm.xchart.style.markers.Marker[] MARKERS = {ChartMarkers.CIRCLE,
-        ChartMarkers.SQUARE, ChartMarkers.DIAMOND, ChartMarkers.TRIANGLE_UP, ChartMarkers.TRIANGLE_DOWN};
 
     private static void band(XYChart c, String name, double z, java.awt.Color color) {
         java.awt.BasicStroke stroke = z >= 3 ? ChartStyle.solid(1.6f) : ChartStyle.dashed(1.3f);

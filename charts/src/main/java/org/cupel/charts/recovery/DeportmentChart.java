@@ -1,21 +1,29 @@
 package org.cupel.charts.recovery;
 
+import java.awt.Color;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
+import org.cupel.charts.ChartFigure;
 import org.cupel.charts.ChartStyle;
 import org.cupel.recovery.Deportment;
 import org.cupel.recovery.RecoveryResult;
 import org.knowm.xchart.CategoryChart;
 import org.knowm.xchart.CategoryChartBuilder;
 
-/** Where the metal went: the mean share of each product per condition, stacked to 100%. */
+/**
+ * Where the metal went: the mean share of each product per condition, stacked to 100 %, each share written
+ * on its part of the bar or, where the part is too thin for it, beside the bar (see {@link DeportmentLabels}).
+ */
 public final class DeportmentChart {
+    /** Share of each category's width the bar takes: the rest is room for the labels of thin parts. */
+    static final double BAR_FILL = 0.6;
+
     private DeportmentChart() {
     }
 
-    public static CategoryChart of(RecoveryResult result, String analyte) {
+    public static ChartFigure of(RecoveryResult result, String analyte) {
         List<Deportment> rows = result.deportment().stream().filter(d -> d.analyte().equals(analyte) && d.n() > 0)
                 .toList();
         int smelts = rows.stream().mapToInt(Deportment::n).sum();
@@ -26,18 +34,20 @@ public final class DeportmentChart {
                 .xAxisTitle("Condition").yAxisTitle("Share of " + analyte + " in products (%)").build();
         ChartStyle.apply(chart);
         chart.getStyler().setStacked(true);
+        chart.getStyler().setAvailableSpaceFill(BAR_FILL);
         chart.getStyler().setYAxisMin(0.0).setYAxisMax(100.0);
-        chart.getStyler().setLabelsVisible(true);
-        chart.getStyler().setLabelsFontColorAutomaticEnabled(false);
-        chart.getStyler().setLabelsFontColor(ChartStyle.BLACK);
-        chart.getStyler().setLabelsPosition(0.5);
-        chart.getStyler().setDecimalPattern("0.##");
         List<String> conditions = rows.stream().map(Deportment::condition).toList();
+        List<List<Double>> shares = new ArrayList<>();
+        List<Color> colours = new ArrayList<>();
         for (String p : products) {
             List<Double> share = new ArrayList<>();
             rows.forEach(d -> share.add(d.sharePercent().getOrDefault(p, 0.0)));
-            chart.addSeries(p, conditions, share);
+            Color colour = ChartStyle.SERIES[shares.size() % ChartStyle.SERIES.length];
+            chart.addSeries(p, conditions, share).setFillColor(colour);
+            shares.add(share);
+            colours.add(colour);
         }
-        return chart;
+        return ChartFigure.of(new ChartFigure.Panel("", chart, "")
+                .with(new DeportmentLabels(shares, colours, BAR_FILL)));
     }
 }

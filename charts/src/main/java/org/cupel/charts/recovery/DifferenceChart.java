@@ -1,11 +1,12 @@
 package org.cupel.charts.recovery;
 
 import java.util.List;
+import org.cupel.charts.AxisLabels;
+import org.cupel.charts.ChartFigure;
 import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartStyle;
 import org.cupel.recovery.PairComparison;
 import org.cupel.recovery.RecoveryResult;
-import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
@@ -13,20 +14,22 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
  * Each pair's difference in recovery with its Welch CI, against zero and the equivalence margin: a CI inside
- * the margin lines reads "equivalent", one clear of zero "different".
+ * the margin lines reads "equivalent", one clear of zero "different". The pairs and their verdicts are named
+ * left of the plot, beside their rows.
  */
 public final class DifferenceChart {
     private DifferenceChart() {
     }
 
-    public static XYChart of(RecoveryResult result, String analyte) {
+    /** The chart, each pair of conditions and its verdict named left of its row. */
+    public static ChartFigure of(RecoveryResult result, String analyte) {
         List<PairComparison> pairs = result.comparisons().stream().filter(p -> p.analyte().equals(analyte)).toList();
         double margin = result.settings().equivalenceMargin();
         XYChart chart = new XYChartBuilder().width(ChartStyle.WIDTH).height(Math.max(360, 140 + 60 * pairs.size()))
                 .title(analyte + ": differences between conditions (" + pairs.size() + " pairs)")
-                .xAxisTitle("Difference in recovery, first − second (percentage points)").yAxisTitle("Pair of conditions").build();
+                .xAxisTitle("Difference in recovery, first − second (percentage points)").build();
         ChartStyle.apply(chart);
-        chart.getStyler().setYAxisTicksVisible(false);
+        chart.getStyler().setYAxisTicksVisible(false).setYAxisTitleVisible(false);
         chart.getStyler().setYAxisMin(0.5).setYAxisMax(pairs.size() + 0.6);
         double lo = -margin;
         double hi = margin;
@@ -41,8 +44,8 @@ public final class DifferenceChart {
                 ci.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line).setMarker(SeriesMarkers.NONE)
                         .setLineColor(ChartStyle.DATA).setLineStyle(ChartStyle.solid(2.5f)).setShowInLegend(i == 0);
                 if (i == 0) {
-                    ci.setLabel(Math.round(result.settings().confidence() * 100) + "% CI (Welch, per pair; verdicts "
-                            + "use Holm-adjusted p)");
+                    // The caption says the verdicts use the Holm-adjusted p, not these per-pair intervals.
+                    ci.setLabel(Math.round(result.settings().confidence() * 100) + "% CI (Welch, per pair)");
                 }
             }
             XYSeries d = chart.addSeries("d-" + i, new double[] {p.welch().difference()}, new double[] {y});
@@ -56,14 +59,15 @@ public final class DifferenceChart {
                 .setShowInLegend(false);
         double pad = 0.08 * (hi - lo);
         chart.getStyler().setXAxisMin(lo - pad).setXAxisMax(hi + pad);
+        double[] rows = new double[pairs.size()];
+        List<String> names = new java.util.ArrayList<>();
         for (int i = 0; i < pairs.size(); i++) {
             PairComparison p = pairs.get(i);
-            // Labels are centred on their point; keep them off the plot edges so long names stay whole.
-            double x = Math.max(lo + 0.25 * (hi - lo), Math.min(hi - 0.25 * (hi - lo), p.welch().difference()));
-            chart.addAnnotation(new AnnotationText(p.first() + " − " + p.second() + ": " + p.verdict().label(), x,
-                    pairs.size() - i + 0.3, false));
+            rows[i] = pairs.size() - i;
+            names.add(p.first() + " − " + p.second() + "\n" + p.verdict().label());
         }
-        return chart;
+        return ChartFigure.of(new ChartFigure.Panel("", chart, "")
+                .with(AxisLabels.left(rows, names, ChartFigure.NOTE_FONT)));
     }
 
     private static XYSeries vertical(XYChart chart, String name, double x, int pairs, java.awt.Color colour,

@@ -7,7 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.function.Predicate;
 import java.util.stream.Stream;
-import org.cupel.charts.duplicates.DuplicateCharts;
+import org.cupel.charts.duplicates.DuplicateFigures;
 import org.cupel.duplicates.BatchPrecision;
 import org.cupel.duplicates.BiasResult;
 import org.cupel.duplicates.ControlLineCheck;
@@ -131,25 +131,28 @@ public final class DuplicatesSection {
         if (!report.orphans().isEmpty()) {
             blocks.add(new ReportBlock.Table(orphanTable(report)));
         }
-        for (DuplicateSetResult set : report.sets()) {
-            figures(set, blocks);
+        if (!report.sets().isEmpty()) {
+            figures(report, blocks);
         }
     }
 
-    private static void figures(DuplicateSetResult set, List<ReportBlock> blocks) {
-        String stem = "duplicates-" + set.analyte() + "-" + typeKey(set);
-        String what = set.analyte() + " " + set.type().label() + "s";
-        blocks.add(new ReportBlock.Figure(stem + "-scatter", what + ": original against duplicate, with the 1:1 line "
-                + "and the HARD limit lines" + (set.type() == org.cupel.assay.QcRole.UMPIRE
-                ? " and the reduced major axis" : "") + ".", () -> DuplicateCharts.scatter(set, true)));
-        blocks.add(new ReportBlock.Figure(stem + "-ranked-hard", what + ": ranked HARD against the type's limit.",
-                () -> DuplicateCharts.rankedHard(set)));
-        if (set.model().available()) {
-            blocks.add(new ReportBlock.Figure(stem + "-thompson-howarth", what + ": Thompson–Howarth plot with the "
-                    + "fitted model and its 90 % and 99 % control lines.", () -> DuplicateCharts.thompsonHowarth(set)));
-        }
-        blocks.add(new ReportBlock.Figure(stem + "-relative-difference", what + ": relative difference against pair "
-                + "mean, with the mean bias and its 95 % interval.", () -> DuplicateCharts.relativeDifference(set)));
+    private static void figures(DuplicateReport r, List<ReportBlock> blocks) {
+        String stem = "duplicates-" + r.analyte();
+        String types = DuplicateFigures.typePanels(r);
+        String last = DuplicateFigures.summaryLetter(r);
+        blocks.add(new ReportBlock.Figure(stem + "-pairs", r.analyte() + " duplicates, original against duplicate: "
+                + types + " on log axes, with the 1:1 line, the type's HARD-limit lines and, for umpire checks, the "
+                + "reduced major axis; the pairs beyond the HARD limit are marked. " + last + " Ranked HARD of every "
+                + "type, with a marker where each curve meets its type's limit and the rule's required share.",
+                () -> DuplicateFigures.pairs(r)));
+        blocks.add(new ReportBlock.Figure(stem + "-bias", r.analyte() + " duplicates, relative difference "
+                + "(duplicate − original) / pair mean against pair mean: " + types + ", with the mean and its 95 % "
+                + "interval and the HARD limit; the pairs beyond it are marked. " + last + " Mean relative bias of "
+                + "every type with its 95 % interval.", () -> DuplicateFigures.bias(r)));
+        blocks.add(new ReportBlock.Figure(stem + "-precision", r.analyte() + " duplicates, Thompson–Howarth plots of "
+                + "|original − duplicate| against pair mean: " + types + ", with the group medians, the fitted model "
+                + "and its 90 % and 99 % control lines; the pairs above the 99 % line are marked. " + last
+                + " Precision 2σc/c by grade from each type's model.", () -> DuplicateFigures.precision(r)));
     }
 
     static String settingsText(DuplicateSettings s, Predicate<String> userSet) {

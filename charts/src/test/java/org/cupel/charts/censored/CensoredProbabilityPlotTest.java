@@ -7,6 +7,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import org.cupel.censored.CensoredSample;
 import org.cupel.censored.Ros;
+import org.cupel.charts.ChartFigure;
+import org.cupel.charts.FigureChecks;
 import org.cupel.charts.PngWriter;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -26,7 +28,12 @@ class CensoredProbabilityPlotTest {
 
     @Test
     void drawsDetectsImputedValuesLimitsAndLine(@TempDir Path dir) throws Exception {
-        XYChart chart = CensoredProbabilityPlot.create(Ros.fit(manganese()), "Mn (ppb)", "Censored probability plot");
+        ChartFigure figure = CensoredProbabilityPlot.create(Ros.fit(manganese()), "Mn (ppb)",
+                "Censored probability plot");
+        XYChart chart = (XYChart) figure.charts().get(0);
+        // n and the censored share under the plot, not over its lowest points.
+        assertEquals("n = 25; 6 censored (24 %)", figure.panels().get(0).note());
+        FigureChecks.writingStaysOutOfThePlots("probability plot", figure);
         assertEquals(19, chart.getSeriesMap().get("Detected (19)").getXData().length);
         assertEquals(6, chart.getSeriesMap().get("Below detection (imputed by ROS) (6)").getXData().length);
         assertTrue(chart.getSeriesMap().containsKey("Detection limits 2, 5"));
@@ -42,7 +49,8 @@ class CensoredProbabilityPlotTest {
     @Test
     void notApplicableSaysWhyInsteadOfDrawingPoints(@TempDir Path dir) throws Exception {
         CensoredSample over = CensoredSample.builder().detected(1).detected(2).detected(3).above(10).build();
-        XYChart chart = CensoredProbabilityPlot.create(Ros.fit(over), "Au (g/t)", "Censored probability plot");
+        XYChart chart = (XYChart) CensoredProbabilityPlot.create(Ros.fit(over), "Au (g/t)", "Censored probability plot")
+                .charts().get(0);
         assertEquals(1, chart.getSeriesMap().size());
         Path png = dir.resolve("empty.png");
         PngWriter.write(chart, png, PngWriter.SCREEN_DPI);

@@ -15,11 +15,16 @@ final class BlankFixture {
     }
 
     static BlankReport report() {
+        return report(6);
+    }
+
+    /** {@code batches} batches of 10 blanks; the fourth holds the contaminated one. */
+    static BlankReport report(int batches) {
         Random rnd = new Random(7);
         List<BlankObservation> obs = new ArrayList<>();
         double dl = 0.005;
         int row = 0;
-        for (int b = 0; b < 6; b++) {
+        for (int b = 0; b < batches; b++) {
             for (int k = 0; k < 10; k++) {
                 double grade = Math.exp(rnd.nextGaussian() * 1.5 - 0.5);
                 if (b == 3 && k == 4) {

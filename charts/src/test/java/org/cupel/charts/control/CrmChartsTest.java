@@ -18,6 +18,8 @@ import org.cupel.assay.MethodValue;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
 import org.cupel.assay.SourceLocation;
+import org.cupel.charts.ChartFigure;
+import org.cupel.charts.FigureChecks;
 import org.cupel.charts.PngWriter;
 import org.cupel.config.CupelConfig;
 import org.cupel.control.crm.CrmReview;
@@ -76,21 +78,27 @@ public class CrmChartsTest {
         String out = System.getProperty("cupel.chartDir");
         Path dir = out == null ? tmp : Files.createDirectories(Path.of(out));
         for (SeriesReview s : r.series()) {
-            XYChart c = CrmControlChart.of(s);
+            ChartFigure f = CrmControlChart.of(s);
+            XYChart c = (XYChart) f.charts().get(0);
             assertTrue(c.getSeriesMap().keySet().stream().anyMatch(k -> k.startsWith("Certified")));
-            write(c, dir.resolve("crm-" + s.crm() + ".png"));
+            write(f, dir.resolve("crm-" + s.crm() + ".png"));
         }
-        XYChart z = CrmZScoreChart.of("Au", r.series());
-        assertTrue(z.getSeriesMap().containsKey("MID (n = 24)"));
-        write(z, dir.resolve("crm-z.png"));
-        XYChart b = CrmBiasChart.of(r.analytes().get(0).biasVsGrade(), r.series());
-        assertTrue(b.getSeriesMap().containsKey("Least-squares line"));
-        write(b, dir.resolve("crm-bias.png"));
-        XYChart low = CrmControlChart.of(r.series("LOW", "Au").orElseThrow());
+        ChartFigure zf = CrmZScoreChart.of("Au", r.series());
+        assertTrue(((XYChart) zf.charts().get(0)).getSeriesMap().containsKey("MID (n = 24)"));
+        write(zf, dir.resolve("crm-z.png"));
+        ChartFigure bf = CrmBiasChart.of(r.analytes().get(0).biasVsGrade(), r.series());
+        assertTrue(((XYChart) bf.charts().get(0)).getSeriesMap().containsKey("Least-squares line"));
+        write(bf, dir.resolve("crm-bias.png"));
+        ChartFigure lowFigure = CrmControlChart.of(r.series("LOW", "Au").orElseThrow());
+        XYChart low = (XYChart) lowFigure.charts().get(0);
         assertTrue(low.getSeriesMap().containsKey("Swap 1"));
+        // The swap (2.47 under LOW, MID's grade) is off LOW's scale: drawn at the edge, its value in the note.
+        assertTrue(lowFigure.panels().get(0).note().contains("off scale, drawn at the edge: no. 10 = 2.47 (MID?)"),
+                lowFigure.panels().get(0).note());
     }
 
-    private static void write(XYChart c, Path p) throws IOException {
+    private static void write(ChartFigure c, Path p) throws IOException {
+        FigureChecks.writingStaysOutOfThePlots(p.getFileName().toString(), c);
         PngWriter.write(c, p, PngWriter.SCREEN_DPI);
         assertTrue(Files.size(p) > 1000);
     }

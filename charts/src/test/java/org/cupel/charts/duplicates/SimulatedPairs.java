@@ -34,6 +34,20 @@ public final class SimulatedPairs {
         return out;
     }
 
+    /**
+     * 300 simulated pulp pairs (seed 7) plus O-HI / D-HI = 1.00 / 1.50 (HARD 0.5 / 2.5 = 20 %, above the 10 %
+     * limit) and O-LO / D-LO = 0.01 / 0.09 (mean 0.05, below 10 × the DL of 0.01, so not judged by HARD; |d| =
+     * 0.08, about six times σ_c = 0.01 + 0.05·0.05 there, so above the 99 % line).
+     */
+    public static List<DuplicatePair> withFlaggedPairs() {
+        List<DuplicatePair> out = new ArrayList<>(pairs(300, 0, 7L));
+        out.add(new DuplicatePair("D-HI", "O-HI", "J1", QcRole.PULP_DUPLICATE, AssayValue.detected(1.00, 0.01),
+                AssayValue.detected(1.50, 0.01)));
+        out.add(new DuplicatePair("D-LO", "O-LO", "J1", QcRole.PULP_DUPLICATE, AssayValue.detected(0.01, 0.01),
+                AssayValue.detected(0.09, 0.01)));
+        return out;
+    }
+
     private static AssayValue value(double x) {
         double v = Math.round(x * 100) / 100.0;
         return v < 0.01 ? AssayValue.belowDetection(0.01) : AssayValue.detected(v, 0.01);

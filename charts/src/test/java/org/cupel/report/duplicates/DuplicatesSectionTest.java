@@ -19,8 +19,14 @@ class DuplicatesSectionTest {
         long tables = s.blocks().stream().filter(b -> b instanceof ReportBlock.Table).count();
         long figures = s.blocks().stream().filter(b -> b instanceof ReportBlock.Figure).count();
         assertTrue(tables >= 6, "tables: " + tables);
-        // Pulp: 4 charts; umpire (40 pairs, below the Thompson–Howarth minimum): 3.
-        assertEquals(7, figures);
+        // One figure each of pairs, bias and precision for the analyte, a panel per type in each.
+        assertEquals(3, figures);
+        ReportBlock.Figure precision = s.blocks().stream().filter(b -> b instanceof ReportBlock.Figure)
+                .map(b -> (ReportBlock.Figure) b).filter(f -> f.name().equals("duplicates-Au-precision")).findFirst()
+                .orElseThrow();
+        // Umpire checks: 40 pairs, below the Thompson–Howarth minimum; the panel shows the pairs and says why.
+        org.cupel.charts.ChartFigure figure = (org.cupel.charts.ChartFigure) precision.chart().get();
+        assertTrue(figure.panels().get(1).note().contains("no model"), figure.panels().get(1).note());
         double rms = report.sets().get(0).precision().rmsCv().value();
         assertEquals(Math.round(10000 * rms) / 100.0, s.headlines().get("Au.pulp_duplicate.rmsCvPercent"));
         String settings = ((ReportBlock.Paragraph) s.blocks().get(1)).text();

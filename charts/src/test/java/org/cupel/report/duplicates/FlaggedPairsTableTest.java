@@ -3,12 +3,8 @@ package org.cupel.report.duplicates;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.util.ArrayList;
 import java.util.List;
-import org.cupel.assay.AssayValue;
-import org.cupel.assay.QcRole;
 import org.cupel.duplicates.DuplicateAnalysis;
-import org.cupel.duplicates.DuplicatePair;
 import org.cupel.duplicates.DuplicateReport;
 import org.cupel.duplicates.DuplicateSettings;
 import org.cupel.charts.duplicates.SimulatedPairs;
@@ -26,13 +22,8 @@ import org.junit.jupiter.api.Test;
 class FlaggedPairsTableTest {
 
     private static ReportTable table() {
-        List<DuplicatePair> pairs = new ArrayList<>(SimulatedPairs.pairs(300, 0, 7L));
-        pairs.add(new DuplicatePair("D-HI", "O-HI", "J1", QcRole.PULP_DUPLICATE, AssayValue.detected(1.00, 0.01),
-                AssayValue.detected(1.50, 0.01)));
-        pairs.add(new DuplicatePair("D-LO", "O-LO", "J1", QcRole.PULP_DUPLICATE, AssayValue.detected(0.01, 0.01),
-                AssayValue.detected(0.09, 0.01)));
-        DuplicateReport r = DuplicateAnalysis.run("Au", "g/t", pairs, List.of(), new double[0],
-                DuplicateSettings.DEFAULTS);
+        DuplicateReport r = DuplicateAnalysis.run("Au", "g/t", SimulatedPairs.withFlaggedPairs(), List.of(),
+                new double[0], DuplicateSettings.DEFAULTS);
         return DuplicatesSection.build(List.of(r), k -> false).blocks().stream()
                 .filter(b -> b instanceof ReportBlock.Table).map(b -> ((ReportBlock.Table) b).table())
                 .filter(t -> t.id().equals("duplicates-outliers-Au")).findFirst().orElseThrow();
