@@ -36,6 +36,18 @@ import org.junit.jupiter.api.io.TempDir;
 class DemoAppendixTablesTest {
     private static final String PDFTOTEXT = "/usr/bin/pdftotext";
     private static final String PDFTOPPM = "/usr/bin/pdftoppm";
+    private static final String CHROMIUM = "/usr/bin/chromium";
+    /**
+     * Added to a copy of the page (never to the report): one line per table with its caption, the widths of
+     * the table and of its box, the box's overflow and right edge, and the width of the window's page area.
+     */
+    private static final String MEASURE = "<script>window.addEventListener('load',function(){var out=[];"
+            + "document.querySelectorAll('figure.table').forEach(function(f){var s=f.querySelector('.scroll');"
+            + "var t=s.querySelector('table');out.push([f.querySelector('figcaption').firstChild.textContent.trim(),"
+            + "t.scrollWidth,s.clientWidth,getComputedStyle(s).overflowX,Math.ceil(s.getBoundingClientRect().right),"
+            + "document.documentElement.clientWidth].join('|'));});var pre=document.createElement('pre');"
+            + "pre.id='measure';pre.textContent=out.join(String.fromCharCode(10));document.body.appendChild(pre);});"
+            + "</script>";
     private static final PdfFonts FONTS = PdfFonts.load();
     private static final float AVAILABLE = PageSize.A4.getWidth() - 2 * PdfReport.MARGIN_X;
     private static final Pattern WORD = Pattern.compile(
@@ -47,6 +59,7 @@ class DemoAppendixTablesTest {
     static Path dir;
     static List<ReportTable> tables;
     static Path pdf;
+    static Path html;
 
     @BeforeAll
     static void writeTheDemoAppendix() throws IOException {
@@ -55,6 +68,7 @@ class DemoAppendixTablesTest {
         ReportWriter.write(report, out, new ReportOptions(PdfReport.Paper.A4, PngWriter.SCREEN_DPI, false),
                 ReportProgress.NONE);
         pdf = out.resolve("appendix.pdf");
+        html = out.resolve("index.html");
         tables = new ArrayList<>();
         for (ReportSection s : report.sections()) {
             for (ReportBlock b : s.blocks()) {
@@ -155,6 +169,42 @@ class DemoAppendixTablesTest {
             BufferedImage img = ImageIO.read(p.toFile());
             assertTrue(ExternalTool.inkShare(img) > 0.003, "page has content: " + p.getFileName());
         }
+    }
+
+    /**
+     * The page at 1400 pixels shows every table of the demo whole (a table of many columns may use the window
+     * beyond the text column); at 800 pixels the widest scroll sideways in their own box. At either width no
+     * box runs past the window, so nothing is cut off by the page.
+     */
+    @Test
+    void wideTablesFitTheWindowOrScrollInTheirOwnBox() throws Exception {
+        assumeTrue(ExternalTool.installed(CHROMIUM), "chromium is not installed at " + CHROMIUM
+                + " (Debian package chromium); skipping the page-width test");
+        Path page = html.resolveSibling("measure.html");
+        Files.writeString(page, Files.readString(html).replace("</body>", MEASURE + "</body>"));
+        int scrolled = 0;
+        for (int width : new int[] {1400, 800}) {
+            String dom = ExternalTool.run(ExternalTool.chromium(CHROMIUM, dir, width, "--dump-dom",
+                    page.toUri().toString()), dir, 120);
+            Matcher m = Pattern.compile("<pre id=\"measure\">(.*?)</pre>", Pattern.DOTALL).matcher(dom);
+            assertTrue(m.find(), "the page was measured at " + width + " px");
+            String[] lines = m.group(1).split("\n");
+            assertEquals(tables.size(), lines.length, "one line per table");
+            for (String line : lines) {
+                String[] f = line.split("\\|");
+                int table = Integer.parseInt(f[1]);
+                int box = Integer.parseInt(f[2]);
+                assertEquals("auto", f[3], f[0] + ": its box scrolls sideways");
+                assertTrue(Integer.parseInt(f[4]) <= Integer.parseInt(f[5]), f[0] + " at " + width
+                        + " px: the box ends inside the window (" + line + ")");
+                if (width == 1400) {
+                    assertTrue(table <= box, f[0] + " is shown whole at 1400 px (" + line + ")");
+                } else if (table > box) {
+                    scrolled++;
+                }
+            }
+        }
+        assertTrue(scrolled > 0, "at 800 px some tables are wider than the window and scroll");
     }
 
     private record Box(float x, float top, float bottom, String text) {
