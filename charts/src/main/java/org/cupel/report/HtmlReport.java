@@ -17,9 +17,6 @@ public final class HtmlReport {
             DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'", Locale.ROOT).withZone(ZoneOffset.UTC);
 
     private static final java.util.regex.Pattern DATE = java.util.regex.Pattern.compile("\\d{4}-\\d{2}-\\d{2}");
-    /** A range of two numbers, "−1.48 to +1.29": kept on one line when a cell wraps. */
-    private static final java.util.regex.Pattern RANGE =
-            java.util.regex.Pattern.compile("(?<![\\p{L}\\p{N}.])([-+−]?\\d[\\d.,]*%?) to (?=[-+−]?\\d)");
 
     private final QcReport report;
     private final ReportFiles files;
@@ -104,7 +101,7 @@ public final class HtmlReport {
             out.append("<tr>");
             for (String cell : row) {
                 out.append(TableLimit.isNumeric(cell) ? "<td class=\"n\">"
-                        : keepWhole(cell) ? "<td class=\"d\">" : "<td>").append(e(bindRanges(cell)))
+                        : keepWhole(cell) ? "<td class=\"d\">" : "<td>").append(e(NoBreak.ranges(cell)))
                         .append("</td>");
             }
             out.append("</tr>\n");
@@ -125,11 +122,6 @@ public final class HtmlReport {
         out.append("<figure class=\"chart\">\n<img src=\"").append(e(files.chart(f))).append("\" alt=\"")
                 .append(e(f.caption())).append("\">\n<figcaption>").append(e(f.caption()))
                 .append("</figcaption>\n</figure>\n");
-    }
-
-    /** No-break spaces around the "to" of a range, so that a wrapping cell keeps the range on one line. */
-    static String bindRanges(String cell) {
-        return RANGE.matcher(cell).replaceAll("$1\u00A0to\u00A0");
     }
 
     /** Dates, IDs and file names: short tokens without spaces that read badly when broken at a hyphen. */

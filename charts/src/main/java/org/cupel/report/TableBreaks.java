@@ -32,11 +32,10 @@ enum TableBreaks {
 
     /** The shortest token (characters between spaces) that may break as an identifier. */
     static final int LONG_IDENTIFIER = 16;
-    private static final char NO_BREAK_SPACE = '\u00A0';
 
     /** The cell as printed: a space after "±" becomes a no-break space, keeping the sign with its number. */
     static String typeset(String cell) {
-        return cell.replace("± ", "±" + NO_BREAK_SPACE);
+        return NoBreak.plusMinus(cell);
     }
 
     /**
