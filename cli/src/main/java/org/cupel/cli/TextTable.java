@@ -126,12 +126,15 @@ public final class TextTable {
             w[order[next]] = target[order[next]];
             next++;
         }
-        if (next == order.length) {
-            return room;
-        }
         long lacking = 0;
         for (int i = next; i < order.length; i++) {
             lacking += target[order[i]] - w[order[i]];
+        }
+        if (lacking <= room) {
+            for (int i = next; i < order.length; i++) {
+                w[order[i]] = target[order[i]];
+            }
+            return (int) (room - lacking);
         }
         int[] extra = new int[w.length];
         int given = 0;
@@ -141,8 +144,11 @@ public final class TextTable {
             given += extra[c];
         }
         for (int i = next; i < order.length && given < room; i++) {
-            extra[order[i]]++;
-            given++;
+            int c = order[i];
+            if (w[c] + extra[c] < target[c]) {
+                extra[c]++;
+                given++;
+            }
         }
         for (int c = 0; c < w.length; c++) {
             w[c] += extra[c];

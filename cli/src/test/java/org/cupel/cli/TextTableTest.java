@@ -94,6 +94,24 @@ class TextTableTest {
         assertEquals(expected, print(t, 30));
     }
 
+    /**
+     * Cells of single words under long headers: only the headers can wrap. The cells need no room beyond
+     * their words (this divided by zero once); the room goes to the headers, the one lacking less first.
+     */
+    @Test
+    void onlyTheHeadersWrapWhenTheCellsAreSingleWords() {
+        TextTable t = new TextTable("Alpha beta gamma delta", "Epsilon zeta eta theta").row("1", "2");
+        // Longest words 5 and 7 leave 30 − 14 = 16: the second header (lacking 15) gets 22, the first 5 + 1.
+        String expected = String.join("\n",
+                "Alpha   Epsilon zeta eta theta",
+                "beta",
+                "gamma",
+                "delta",
+                "------  ----------------------",
+                "     1                       2", "");
+        assertEquals(expected, print(t, 30));
+    }
+
     /** Whatever the cells and the width, every line fits and every word is printed whole, in order. */
     @Test
     void everyLineFitsAndNoWordIsBroken() {
