@@ -16,6 +16,7 @@ import org.cupel.report.QcAppendix;
 import org.cupel.report.QcReport;
 import org.cupel.report.ReportSection;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -42,6 +43,9 @@ public final class AnalyseCommand implements Callable<Integer> {
 
     @Option(names = {"--json-summary", "--json"}, description = "Print the summary as JSON.")
     boolean json;
+
+    @Mixin
+    WideOption terminal;
 
     @Spec
     CommandSpec spec;
@@ -80,7 +84,7 @@ public final class AnalyseCommand implements Callable<Integer> {
         if (json) {
             Json.print(out, summary);
         } else {
-            print(out, summary);
+            print(terminal.text(out), summary);
         }
         return CupelCommand.OK;
     }

@@ -26,6 +26,7 @@ import org.cupel.report.CsvTables;
 import org.cupel.report.control.InsertionRateSection;
 import org.cupel.report.control.VerdictSection;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -49,6 +50,9 @@ final class BatchesCommand implements Callable<Integer> {
 
     @Option(names = "--fail-on-qc", description = "Exit with status 1 when any batch fails.")
     boolean failOnQc;
+
+    @Mixin
+    WideOption terminal;
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -78,7 +82,7 @@ final class BatchesCommand implements Callable<Integer> {
             doc.put("resubmit", review.resubmit().entries());
             Json.print(out, doc);
         } else {
-            print(out, project, review);
+            print(terminal.text(out), project, review);
         }
         return failOnQc && review.anyBatchFailed() ? CupelCommand.QC_FAILED : CupelCommand.OK;
     }

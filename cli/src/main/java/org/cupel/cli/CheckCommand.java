@@ -16,6 +16,7 @@ import org.cupel.project.InputException;
 import org.cupel.project.Project;
 import org.cupel.settings.ProjectSettings;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -39,6 +40,9 @@ public final class CheckCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print the result as JSON (docs/check.md) instead of tables.")
     boolean json;
 
+    @Mixin
+    WideOption terminal;
+
     @Spec
     CommandSpec spec;
 
@@ -55,7 +59,7 @@ public final class CheckCommand implements Callable<Integer> {
         if (json) {
             Json.print(out, new CheckReport(s, !p.exceptions().hasFatal(), p.exceptions().all()));
         } else {
-            printTables(out, s, p.exceptions().all());
+            printTables(terminal.text(out), s, p.exceptions().all());
         }
         return p.exceptions().hasFatal() ? CupelCommand.INPUT_ERROR : CupelCommand.OK;
     }

@@ -25,7 +25,8 @@ class RecoveryCommandTest {
 
     @Test
     void printsRecoveriesVerdictsBalanceAndCaution(@TempDir Path charts) throws Exception {
-        String[] r = run("recovery", FIXTURE, "--charts", charts.toString());
+        // --wide: the checks read whole table rows.
+        String[] r = run("recovery", FIXTURE, "--charts", charts.toString(), "--wide");
         assertEquals("0", r[0], r[2]);
         String out = r[1];
         System.out.println(out);
@@ -59,7 +60,7 @@ class RecoveryCommandTest {
         Path project = dir.resolve("demo");
         String[] demo = run("demo", project.toString());
         assertEquals("0", demo[0], demo[2]);
-        String[] r = run("recovery", project.toString());
+        String[] r = run("recovery", project.toString(), "--wide");
         assertEquals("0", r[0], r[2]);
         System.out.println(r[1]);
         String[] lines = r[1].split("\n");
