@@ -93,7 +93,7 @@ public final class DuplicatesCommand implements Callable<Integer> {
         QcRole only = type == null ? null : parseType(type);
         DuplicateSettings settings = DuplicateSettings.DEFAULTS;
         if (dlMultiple != null) {
-            settings = settings.withLimitMultipleOfDetection(dlMultiple);
+            settings = settings.toBuilder().limitMultipleOfDetection(dlMultiple).build();
         }
         List<DuplicateReport> reports = new ArrayList<>();
         List<DataIssue> issues = new ArrayList<>();
@@ -102,7 +102,7 @@ public final class DuplicatesCommand implements Callable<Integer> {
             DuplicateSettings fromConfig = project.config().section("duplicates", DuplicateSettings.class,
                     DuplicateSettings.DEFAULTS);
             if (dlMultiple != null) {
-                fromConfig = fromConfig.withLimitMultipleOfDetection(dlMultiple);
+                fromConfig = fromConfig.toBuilder().limitMultipleOfDetection(dlMultiple).build();
             }
             reports.addAll(PairExtraction.analyse(project, fromConfig, analyte, only));
             if (reports.isEmpty()) {
