@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.cupel.api.Cupel;
 import org.cupel.assay.Numbers;
 import org.cupel.assay.QcRole;
 import org.cupel.charts.PngWriter;
@@ -24,9 +25,7 @@ import org.cupel.duplicates.DuplicateSettings;
 import org.cupel.duplicates.Estimate;
 import org.cupel.duplicates.ModelFit;
 import org.cupel.duplicates.OutlierPair;
-import org.cupel.duplicates.PairExtraction;
 import org.cupel.duplicates.PairsFile;
-import org.cupel.project.Project;
 import org.cupel.duplicates.PrecisionSummary;
 import org.cupel.duplicates.RuleOutcome;
 import org.cupel.project.DataIssue;
@@ -91,20 +90,12 @@ public final class DuplicatesCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         QcRole only = type == null ? null : parseType(type);
-        DuplicateSettings settings = DuplicateSettings.DEFAULTS;
-        if (dlMultiple != null) {
-            settings = settings.toBuilder().limitMultipleOfDetection(dlMultiple).build();
-        }
         List<DuplicateReport> reports = new ArrayList<>();
         List<DataIssue> issues = new ArrayList<>();
         if (Files.isDirectory(input)) {
-            Project project = ProjectFolder.load(input);
-            DuplicateSettings fromConfig = project.config().section("duplicates", DuplicateSettings.class,
-                    DuplicateSettings.DEFAULTS);
-            if (dlMultiple != null) {
-                fromConfig = fromConfig.toBuilder().limitMultipleOfDetection(dlMultiple).build();
-            }
-            reports.addAll(PairExtraction.analyse(project, fromConfig, analyte, only));
+            Cupel project = Cupel.open(input, s -> dlMultiple == null ? s : s.toBuilder()
+                    .duplicates(s.duplicates().toBuilder().limitMultipleOfDetection(dlMultiple).build()).build());
+            reports.addAll(project.duplicates(analyte, only));
             if (reports.isEmpty()) {
                 throw new InputException(input + ": no duplicates found" + (only == null ? "" : " of type " + type)
                         + "; the sample register marks duplicates by role with the original sample ID as reference.");
@@ -117,6 +108,8 @@ public final class DuplicatesCommand implements Callable<Integer> {
                 throw new InputException(input + ": no usable pairs" + (only == null ? "" : " of type " + type)
                         + "; check the values and the type column, or drop --type.");
             }
+            DuplicateSettings settings = dlMultiple == null ? DuplicateSettings.DEFAULTS
+                    : DuplicateSettings.builder().limitMultipleOfDetection(dlMultiple).build();
             reports.add(DuplicateAnalysis.run(analyte == null ? "value" : analyte, unit == null ? "" : unit, pairs,
                     List.of(), new double[0], settings));
         }
