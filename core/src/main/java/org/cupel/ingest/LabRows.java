@@ -2,6 +2,7 @@ package org.cupel.ingest;
 
 import java.util.Arrays;
 import org.cupel.assay.MissingReason;
+import org.cupel.assay.Numbers;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.Qualifier;
 
@@ -28,6 +29,8 @@ public final class LabRows {
     private double[] values;
     private double[] limits;
     private byte[] missing;
+    /** The decimals each value was written with (a byte a cell), or {@link Numbers#UNKNOWN_DECIMALS}. */
+    private byte[] decimals;
 
     /**
      * @param width the number of analyte columns
@@ -46,6 +49,7 @@ public final class LabRows {
         values = new double[rows * width];
         limits = new double[rows * width];
         missing = new byte[rows * width];
+        decimals = new byte[rows * width];
     }
 
     public int size() {
@@ -99,6 +103,11 @@ public final class LabRows {
         return REASONS[missing[row * width + column]];
     }
 
+    /** How many decimals the lab wrote for the value, or {@link Numbers#UNKNOWN_DECIMALS}. */
+    public int decimals(int row, int column) {
+        return decimals[row * width + column];
+    }
+
     /** Clears the cells of the row being read (row {@link #size()}) to no result. */
     void startRow() {
         if (size == ids.length) {
@@ -107,12 +116,14 @@ public final class LabRows {
         Arrays.fill(qualifiers, size * width, (size + 1) * width, NO_RESULT);
     }
 
-    void setResult(int column, Qualifier q, double value, double limit, MissingReason reason) {
+    /** @param written the decimals the value was written with (0 to 127), or {@link Numbers#UNKNOWN_DECIMALS} */
+    void setResult(int column, Qualifier q, double value, double limit, MissingReason reason, int written) {
         int k = size * width + column;
         qualifiers[k] = (byte) q.ordinal();
         values[k] = value;
         limits[k] = limit;
         missing[k] = (byte) reason.ordinal();
+        decimals[k] = (byte) written;
     }
 
     /** Keeps the row being read, with the results set since {@link #startRow()}. */
@@ -145,5 +156,6 @@ public final class LabRows {
         values = Arrays.copyOf(values, cap * width);
         limits = Arrays.copyOf(limits, cap * width);
         missing = Arrays.copyOf(missing, cap * width);
+        decimals = Arrays.copyOf(decimals, cap * width);
     }
 }
