@@ -1,5 +1,6 @@
 package org.cupel.report;
 
+import java.util.List;
 import java.util.Locale;
 import org.cupel.assay.AssayValue;
 import org.cupel.assay.Numbers;
@@ -15,8 +16,8 @@ import org.cupel.assay.Numbers;
  * values with the lab's decimals ({@link AssayValue#display()}). In the CSV a number is written plain: no
  * grouping, no {@code %} (the unit is in the header), no {@code +}.
  */
-public sealed interface Cell permits Cell.Text, Cell.Number, Cell.Interval, Cell.Assay, Cell.NotComputed,
-        Cell.Blank {
+public sealed interface Cell permits Cell.Text, Cell.Number, Cell.Interval, Cell.Assay, Cell.Parts,
+        Cell.NotComputed, Cell.Blank {
 
     /** The text shown in the HTML, PDF and Word tables. */
     String display();
@@ -78,6 +79,24 @@ public sealed interface Cell permits Cell.Text, Cell.Number, Cell.Interval, Cell
         @Override
         public String display() {
             return value.display();
+        }
+    }
+
+    /**
+     * Several numbers read together ({@code 5 (5.0 %)}, {@code 14 (10.4; p = 0.155)}), shown as
+     * {@code display}; one CSV column each ({@link ReportColumn.Kind#PARTS}). A null number is empty in the CSV;
+     * {@code note} (how the numbers were made, when it matters) goes to the column's note.
+     */
+    record Parts(List<Number> numbers, String display, String note) implements Cell {
+        public Parts {
+            numbers = java.util.Collections.unmodifiableList(new java.util.ArrayList<>(numbers));
+            display = display == null ? "" : display;
+            note = note == null ? "" : note;
+        }
+
+        /** Numbers without a note. */
+        public Parts(List<Number> numbers, String display) {
+            this(numbers, display, "");
         }
     }
 

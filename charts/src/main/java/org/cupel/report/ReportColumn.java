@@ -22,8 +22,9 @@ import java.util.Map;
  * @param kind what the column holds
  * @param unit the unit of its numbers as written on the page ("%", "g/t", "pp"), empty when none
  * @param noted whether the CSV has a {@code <key>_note} column for the reason a number is not computable
+ * @param parts for {@link Kind#PARTS}, the numbers of each cell in order; empty otherwise
  */
-public record ReportColumn(String header, String key, Kind kind, String unit, boolean noted) {
+public record ReportColumn(String header, String key, Kind kind, String unit, boolean noted, List<Part> parts) {
 
     /** What a column holds. */
     public enum Kind {
@@ -36,7 +37,26 @@ public record ReportColumn(String header, String key, Kind kind, String unit, bo
         /** An estimate with lower and upper ends. */
         INTERVAL,
         /** A lab value as reported, with its qualifier. */
-        ASSAY
+        ASSAY,
+        /**
+         * Several numbers read together on the page ("5 (5.0 %)": a count and its rate; "14 (10.4; p = 0.155)"),
+         * one CSV column each.
+         */
+        PARTS
+    }
+
+    /**
+     * One number of a {@link Kind#PARTS} column: CSV name {@code <key>[_<suffix>][_<unit>]}.
+     *
+     * @param suffix empty for the first, main number
+     * @param unit its unit as written on the page, empty when none
+     * @param type its CSV type
+     */
+    public record Part(String suffix, String unit, CsvType type) {
+        public Part {
+            suffix = suffix == null ? "" : suffix;
+            unit = unit == null ? "" : unit;
+        }
     }
 
     /** The type of one CSV column, as a data frame would hold it. */
@@ -57,35 +77,43 @@ public record ReportColumn(String header, String key, Kind kind, String unit, bo
         }
         key = key == null || key.isBlank() ? slug(header) : key;
         unit = unit == null ? "" : unit;
+        parts = parts == null ? List.of() : List.copyOf(parts);
+        if ((kind == Kind.PARTS) == parts.isEmpty()) {
+            throw new IllegalArgumentException("column " + header + ": parts are for a PARTS column, which needs them");
+        }
     }
 
     public static ReportColumn text(String header) {
-        return new ReportColumn(header, null, Kind.TEXT, "", false);
+        return new ReportColumn(header, null, Kind.TEXT, "", false, List.of());
     }
 
     public static ReportColumn text(String header, String key) {
-        return new ReportColumn(header, key, Kind.TEXT, "", false);
+        return new ReportColumn(header, key, Kind.TEXT, "", false, List.of());
     }
 
     public static ReportColumn count(String header, String key) {
-        return new ReportColumn(header, key, Kind.INTEGER, "", false);
+        return new ReportColumn(header, key, Kind.INTEGER, "", false, List.of());
     }
 
     public static ReportColumn number(String header, String key, String unit) {
-        return new ReportColumn(header, key, Kind.NUMBER, unit, false);
+        return new ReportColumn(header, key, Kind.NUMBER, unit, false, List.of());
     }
 
     public static ReportColumn interval(String header, String key, String unit) {
-        return new ReportColumn(header, key, Kind.INTERVAL, unit, false);
+        return new ReportColumn(header, key, Kind.INTERVAL, unit, false, List.of());
     }
 
     public static ReportColumn assay(String header, String key, String unit) {
-        return new ReportColumn(header, key, Kind.ASSAY, unit, false);
+        return new ReportColumn(header, key, Kind.ASSAY, unit, false, List.of());
+    }
+
+    public static ReportColumn parts(String header, String key, Part... parts) {
+        return new ReportColumn(header, key, Kind.PARTS, "", false, List.of(parts));
     }
 
     /** The same column with a {@code <key>_note} CSV column for the reason a number is not computable. */
     public ReportColumn withNote() {
-        return new ReportColumn(header, key, kind, unit, true);
+        return new ReportColumn(header, key, kind, unit, true, parts);
     }
 
     /** Whether {@code cell} may stand in this column. */
@@ -98,6 +126,7 @@ public record ReportColumn(String header, String key, Kind kind, String unit, bo
             case INTEGER -> cell instanceof Cell.Number n && n.value() == Math.rint(n.value());
             case INTERVAL -> cell instanceof Cell.Interval || cell instanceof Cell.Number;
             case ASSAY -> cell instanceof Cell.Assay;
+            case PARTS -> cell instanceof Cell.Parts p && p.numbers().size() == parts.size();
             default -> false;
         };
     }
@@ -119,6 +148,8 @@ public record ReportColumn(String header, String key, Kind kind, String unit, bo
                 out.add(new CsvColumn(key + u, CsvType.DOUBLE));
                 out.add(new CsvColumn(key + "_qualifier", CsvType.TEXT));
             }
+            case PARTS -> parts.forEach(p -> out.add(new CsvColumn(key + (p.suffix().isEmpty() ? "" : "_" + p.suffix())
+                    + (p.unit().isEmpty() ? "" : "_" + unitSlug(p.unit())), p.type())));
             default -> throw new IllegalStateException(kind.name());
         }
         if (noted) {
@@ -130,7 +161,7 @@ public record ReportColumn(String header, String key, Kind kind, String unit, bo
     /** The CSV fields of {@code cell} in this column, one per {@link #csvColumns()} entry. */
     public List<CsvField> csvFields(Cell cell) {
         List<CsvField> out = new ArrayList<>(4);
-        String note = cell instanceof Cell.NotComputed nc ? nc.reason() : "";
+        String note = cell instanceof Cell.NotComputed nc ? nc.reason() : cell instanceof Cell.Parts p ? p.note() : "";
         switch (kind) {
             case TEXT -> out.add(new CsvField(cell.display(), false));
             case NUMBER, INTEGER -> out.add(number(cell instanceof Cell.Number n ? n : null));
@@ -148,6 +179,11 @@ public record ReportColumn(String header, String key, Kind kind, String unit, bo
                 } else {
                     out.add(CsvField.EMPTY);
                     out.add(new CsvField("", false));
+                }
+            }
+            case PARTS -> {
+                for (int i = 0; i < parts.size(); i++) {
+                    out.add(number(cell instanceof Cell.Parts p ? p.numbers().get(i) : null));
                 }
             }
             default -> throw new IllegalStateException(kind.name());

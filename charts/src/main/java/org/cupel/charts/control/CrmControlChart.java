@@ -86,8 +86,8 @@ public final class CrmControlChart {
                 + (offScale > MAX_LABELS ? String.format(Locale.ROOT, "; first %d of %d off-scale results labelled",
                 MAX_LABELS, offScale) : "")
                 + String.format(Locale.ROOT,
-                "; certified %s %s, limits ±2 and ±3 × certificate SD %s %s", Numbers.significant(lim.certified(), 4), unit,
-                Numbers.significant(lim.sd(), 3), unit)
+                "; certified %s %s, limits ±2 and ±3 × certificate SD %s %s", lim.certifiedText(), unit,
+                lim.sdText(), unit)
                 + (s.projectLimits().available()
                 ? String.format(Locale.US, "; own ±2 SD from the project's %,d results", s.projectLimits().n()) : "");
         ChartNote.add(c, note);
