@@ -99,10 +99,41 @@ public final class AnalyseCommand implements Callable<Integer> {
         TextTable table = new TextTable("Section", "Headline", "Value");
         for (SectionHeadlines section : s.sections()) {
             for (Map.Entry<String, Object> e : section.headlines().entrySet()) {
-                table.row(section.title(), e.getKey(), String.valueOf(e.getValue()));
+                row(table, section.title(), e.getKey(), e.getValue());
             }
         }
         table.print(out);
         out.flush();
+    }
+
+    /**
+     * One row per headline; a group of headlines (samples by role) is one row per member, "samplesByRole.crm",
+     * never the map's own text.
+     */
+    private static void row(TextTable table, String section, String key, Object value) {
+        if (value instanceof Map<?, ?> group) {
+            group.forEach((k, v) -> row(table, section, key + "." + k, v));
+        } else {
+            table.row(section, key, headlineText(key, value));
+        }
+    }
+
+    /**
+     * A headline value as a reader writes it: a percentage headline (its key says "Percent" or "%") with its
+     * sign and at least one decimal, {@code 5.0 %}; a number not computable as "not computed"; other numbers
+     * in their shortest form.
+     */
+    static String headlineText(String key, Object value) {
+        if (value instanceof Double || value instanceof Float) {
+            double v = ((Number) value).doubleValue();
+            if (!Double.isFinite(v)) {
+                return "not computed";
+            }
+            boolean percent = key.contains("%") || key.toLowerCase(java.util.Locale.ROOT).contains("percent");
+            String text = percent && v == Math.rint(v) ? String.format(java.util.Locale.ROOT, "%.1f", v)
+                    : org.cupel.assay.Numbers.compact(v);
+            return percent ? text + " %" : text;
+        }
+        return String.valueOf(value);
     }
 }

@@ -85,7 +85,7 @@ public final class InsertionRateSection {
     }
 
     /** A rate as a percentage with one decimal: {@code 5.0 %}, not 0.05 (common practice). */
-    static String percent(double fraction) {
+    public static String percent(double fraction) {
         return Numbers.fixed(100 * fraction, 1) + " %";
     }
 
