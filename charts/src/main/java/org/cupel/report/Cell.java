@@ -201,6 +201,15 @@ public sealed interface Cell permits Cell.Text, Cell.Number, Cell.Interval, Cell
         return new Number(percent, s, (s.startsWith("-") || isZero(s) ? "" : "+") + s + " %");
     }
 
+    /**
+     * A signed number with {@code decimals} decimals ({@code +7.14}): a bias under a header that names its
+     * unit ("Mean bias % (95 % CI)"), where a sign on every cell would only crowd the table.
+     */
+    static Number signedFixedNumber(double v, int decimals) {
+        String s = Numbers.fixed(v, decimals);
+        return new Number(v, s, (s.startsWith("-") || isZero(s) ? "" : "+") + s);
+    }
+
     /** A signed number ({@code +0.0266}) with {@code digits} significant digits. */
     static Number signedNumber(double v, int digits) {
         String s = Numbers.significant(v, digits);

@@ -207,17 +207,19 @@ public record ReportColumn(String header, String key, Kind kind, String unit, bo
         };
     }
 
-    private static final Map<String, String> GREEK = Map.of("σ", "sigma", "ρ", "rho", "χ", "chi", "ν", "nu",
-            "λ", "lambda", "μ", "mu", "÷", " per ", "×", " x ", "·", " ");
+    private static final Map<String, String> SYMBOLS = Map.ofEntries(Map.entry("σ", "sigma"), Map.entry("ρ", "rho"),
+            Map.entry("χ", "chi"), Map.entry("ν", "nu"), Map.entry("λ", "lambda"), Map.entry("μ", "mu"),
+            Map.entry("÷", " per "), Map.entry("×", " x "), Map.entry("·", " "), Map.entry("√", " sqrt "),
+            Map.entry("/", " over "));
 
     /**
-     * A CSV name from a page header: {@code %} becomes "percent", Greek letters their names, sub- and
-     * superscripts their digits, anything else not a letter or digit a single {@code _}; lower case.
-     * "RMS CV (95 % CI)" gives {@code rms_cv_95_percent_ci}, "σ₀" {@code sigma0}.
+     * A CSV name from a page header: {@code %} becomes "percent", Greek letters and √ their names, / "over",
+     * sub- and superscripts their digits, anything else not a letter or digit a single {@code _}; lower case.
+     * "RMS CV (95 % CI)" gives {@code rms_cv_95_percent_ci}, "σ₀" {@code sigma0}, "DL/√2" {@code dl_over_sqrt_2}.
      */
     public static String slug(String header) {
         String s = header.replace("%", " percent ");
-        for (Map.Entry<String, String> g : GREEK.entrySet()) {
+        for (Map.Entry<String, String> g : SYMBOLS.entrySet()) {
             s = s.replace(g.getKey(), g.getValue());
         }
         s = Normalizer.normalize(s, Normalizer.Form.NFKD).toLowerCase(Locale.ROOT);
@@ -241,5 +243,10 @@ public record ReportColumn(String header, String key, Kind kind, String unit, bo
     /** A unit as a CSV name part: {@code %} "percent", {@code g/t} "g_per_t", {@code pp} "pp". */
     public static String unitSlug(String unit) {
         return slug(unit.replace("/", " per "));
+    }
+
+    /** The same column under another key (to keep keys unique within a table). */
+    ReportColumn withKey(String newKey) {
+        return new ReportColumn(header, newKey, kind, unit, noted, parts);
     }
 }

@@ -105,7 +105,13 @@ public final class ReportTable {
     public List<ReportColumn.CsvColumn> csvColumns() {
         List<ReportColumn.CsvColumn> out = new ArrayList<>();
         Set<String> seen = new HashSet<>();
-        for (ReportColumn c : typedColumns) {
+        Set<String> keys = new HashSet<>();
+        for (ReportColumn col : typedColumns) {
+            // Two columns with one key (two headers that read alike) keep their CSV columns together: key_2.
+            ReportColumn c = col;
+            for (int n = 2; !keys.add(c.key()); n++) {
+                c = col.withKey(col.key() + "_" + n);
+            }
             for (ReportColumn.CsvColumn x : c.csvColumns()) {
                 String name = x.name();
                 for (int n = 2; !seen.add(name); n++) {

@@ -100,6 +100,8 @@ class CsvTablesTest {
         assertEquals("rms_cv_95_percent_ci", ReportColumn.slug("RMS CV (95 % CI)"));
         assertEquals("sigma0_ppm_95_percent_ci", ReportColumn.slug("σ₀ (ppm, 95 % CI)"));
         assertEquals("percent_within_limit", ReportColumn.slug("% within limit"));
+        assertEquals("substitution_dl_over_2", ReportColumn.slug("Substitution DL/2"));
+        assertEquals("substitution_dl_over_sqrt_2", ReportColumn.slug("Substitution DL/√2"));
         assertEquals("g_per_t", ReportColumn.unitSlug("g/t"));
         assertEquals("percent", ReportColumn.unitSlug("%"));
     }

@@ -43,6 +43,7 @@ public final class CrmSection {
                 + Numbers.compact(r.settings().swapWithinSd()) + " SD of another CRM in the catalog, or at blank "
                 + "level, is reported as a probable swap (after Smee, Bloom, Arne & Heberlein 2024, GEEA 24): a "
                 + "warning without re-assay, left out of the bias and drift statistics."));
+        b.add(new ReportBlock.Table(certificates(r)));
         b.add(new ReportBlock.Table(summary(r)));
         b.add(new ReportBlock.Table(rules(r)));
         List<RuleFinding> findings = new ArrayList<>();
@@ -90,17 +91,38 @@ public final class CrmSection {
     }
 
     /**
-     * Certified value and SD as the certificate writes them; the limits and the mean of the results with the
-     * limits' decimals ({@link CertifiedLimits#limitDecimals()}), an SD of results with three significant digits.
+     * The certificates in use and the limits they set: certified value and SD as the certificate writes them,
+     * the limits with {@link CertifiedLimits#limitDecimals()} decimals.
      */
+    private static ReportTable certificates(CrmReview r) {
+        List<List<Cell>> rows = new ArrayList<>();
+        for (SeriesReview s : r.series()) {
+            CertifiedLimits lim = s.limits();
+            rows.add(List.of(Cell.text(s.crm()), Cell.text(s.analyte().name()), Cell.text(s.analyte().unit().symbol()),
+                    onCertificate(lim.certified(), lim.certifiedText()), onCertificate(lim.sd(), lim.sdText()),
+                    limits(lim, 2), limits(lim, 3)));
+        }
+        ReportColumn.Part low = new ReportColumn.Part("low", "", ReportColumn.CsvType.DOUBLE);
+        ReportColumn.Part high = new ReportColumn.Part("high", "", ReportColumn.CsvType.DOUBLE);
+        return ReportTable.typed("crm-certificates", "Certificates and control limits",
+                List.of(ReportColumn.text("CRM", "crm"), ReportColumn.text("Analyte", "analyte"),
+                        ReportColumn.text("Unit", "unit"), ReportColumn.number("Certified", "certified", ""),
+                        ReportColumn.number("Certificate SD", "certificate_sd", ""),
+                        ReportColumn.parts("Warning limits (± 2 SD)", "warning_limit", low, high),
+                        ReportColumn.parts("Failure limits (± 3 SD)", "failure_limit", low, high)),
+                rows, "Certified value and between-lab SD as the certificate gives them (crm-catalog.csv), in the "
+                        + "unit of the Unit column; limits = certified ± 2 and ± 3 SD, shown with at most one "
+                        + "decimal more than the certified value (the judgement uses them unrounded).");
+    }
+
+    /** Each CRM's results against its certificate; means on the limits' scale, an SD of results to 3 digits. */
     private static ReportTable summary(CrmReview r) {
         List<List<Cell>> rows = new ArrayList<>();
         for (SeriesReview s : r.series()) {
             BiasEstimate bias = s.bias();
             CertifiedLimits lim = s.limits();
-            rows.add(List.of(Cell.text(s.crm()), Cell.text(s.analyte().name()), Cell.text(s.analyte().unit().symbol()),
-                    onCertificate(lim.certified(), lim.certifiedText()), onCertificate(lim.sd(), lim.sdText()),
-                    limits(lim, 2), limits(lim, 3), Cell.count(bias.n()),
+            rows.add(List.of(Cell.text(s.crm()), Cell.text(s.analyte().label()),
+                    onCertificate(lim.certified(), lim.certifiedText()), Cell.count(bias.n()),
                     bias.n() > 0 ? onCertificate(bias.meanResult(), lim.limitText(bias.meanResult())) : Cell.dash("no result"),
                     Cell.significant(bias.sdResult(), 3),
                     biasInterval(bias.meanBiasPct(), bias.meanLowPct(), bias.meanHighPct()),
@@ -109,28 +131,21 @@ public final class CrmSection {
                     s.projectLimits().available() ? projectLimits(lim, s.projectLimits().mean(), s.projectLimits().sd())
                             : Cell.notComputed(s.projectLimits().note())));
         }
-        ReportColumn.Part low = new ReportColumn.Part("low", "", ReportColumn.CsvType.DOUBLE);
-        ReportColumn.Part high = new ReportColumn.Part("high", "", ReportColumn.CsvType.DOUBLE);
         return ReportTable.typed("crm-summary", "CRM results per CRM and analyte",
                 List.of(ReportColumn.text("CRM", "crm"), ReportColumn.text("Analyte", "analyte"),
-                        ReportColumn.text("Unit", "unit"), ReportColumn.number("Certified", "certified", ""),
-                        ReportColumn.number("Certificate SD", "certificate_sd", ""),
-                        ReportColumn.parts("Warning limits (± 2 SD)", "warning_limit", low, high),
-                        ReportColumn.parts("Failure limits (± 3 SD)", "failure_limit", low, high),
-                        ReportColumn.count("n", "n"), ReportColumn.number("Mean", "mean", "").withNote(),
+                        ReportColumn.number("Certified", "certified", ""), ReportColumn.count("n", "n"),
+                        ReportColumn.number("Mean", "mean", "").withNote(),
                         ReportColumn.number("SD of results", "sd_of_results", "").withNote(),
-                        ReportColumn.interval("Mean bias (95 % CI)", "mean_bias", "%"),
-                        ReportColumn.interval("Median bias (95 % CI)", "median_bias", "%"),
+                        ReportColumn.interval("Mean bias % (95 % CI)", "mean_bias", "%").withNote(),
+                        ReportColumn.interval("Median bias % (95 % CI)", "median_bias", "%").withNote(),
                         ReportColumn.text("Certified inside CI", "certified_inside_ci"),
                         ReportColumn.count("Failures", "failures"), ReportColumn.count("Warnings", "warnings"),
                         ReportColumn.count("Swaps", "swaps"),
                         ReportColumn.parts("Project mean ± 2 SD", "project_mean",
                                 new ReportColumn.Part("", "", ReportColumn.CsvType.DOUBLE),
                                 new ReportColumn.Part("two_sd", "", ReportColumn.CsvType.DOUBLE)).withNote()),
-                rows, "Values in the unit of the Unit column. Certified value and SD at the certificate's precision; "
-                        + "limits (certified ± 2 and ± 3 SD) and means with at most one decimal more. n, mean, SD and "
-                        + "bias exclude probable swaps. Mean-bias interval: Student t; median-bias "
-                        + "interval: distribution-free sign-test interval (Conover 1999).");
+                rows, "In the unit of each analyte. n, mean, SD and bias exclude probable swaps. Mean-bias interval: "
+                        + "Student t; median-bias interval: distribution-free sign-test interval (Conover 1999).");
     }
 
     /** A number from the certificate, or on its scale, as {@code text} shows it. */
@@ -157,7 +172,7 @@ public final class CrmSection {
         if (!Double.isFinite(v)) {
             return Cell.dash("not computed");
         }
-        return Cell.interval(Cell.signedPercentNumber(v, 2), lo, hi, x -> Cell.signedPercentNumber(x, 2));
+        return Cell.interval(Cell.signedFixedNumber(v, 2), lo, hi, x -> Cell.signedFixedNumber(x, 2));
     }
 
     private static ReportTable rules(CrmReview r) {
