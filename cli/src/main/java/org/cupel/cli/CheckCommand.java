@@ -56,6 +56,7 @@ public final class CheckCommand implements Callable<Integer> {
             Json.print(out, new CheckReport(s, !p.exceptions().hasFatal(), p.exceptions().all()));
         } else {
             printTables(out, s, p.exceptions().all());
+            printUnits(out, p);
         }
         return p.exceptions().hasFatal() ? CupelCommand.INPUT_ERROR : CupelCommand.OK;
     }
@@ -125,6 +126,14 @@ public final class CheckCommand implements Callable<Integer> {
                     problem, i.fix());
         }
         t.print(out);
+    }
+
+    /** Why each analyte is shown in its unit, where the lab files disagree or cupel.yaml sets it. */
+    private static void printUnits(PrintWriter out, Project p) {
+        p.units().values().stream().filter(u -> u.filesDisagree()
+                        || u.basis() == org.cupel.units.UnitChoice.Basis.CONFIGURED)
+                .forEach(u -> out.println("Units: " + u.sentence()));
+        out.flush();
     }
 
     private static String counts(Map<String, Integer> m) {
