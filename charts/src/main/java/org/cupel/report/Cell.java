@@ -124,8 +124,13 @@ public sealed interface Cell permits Cell.Text, Cell.Number, Cell.Interval, Cell
         }
     }
 
+    /**
+     * A text cell. Tables repeat their words (a duplicate type, a verdict, a batch, a reason) down long
+     * columns, so equal texts share one cell from a small bounded cache: a million-sample project's re-assay
+     * list then costs little more than its strings did.
+     */
     static Cell text(String text) {
-        return new Text(text);
+        return Shared.text(text);
     }
 
     static Cell blank() {
@@ -154,6 +159,9 @@ public sealed interface Cell permits Cell.Text, Cell.Number, Cell.Interval, Cell
 
     /** A count, shown with thousands grouping. */
     static Cell count(long n) {
+        if (n >= 0 && n < Shared.SMALL_COUNTS) {
+            return Shared.COUNTS[(int) n];
+        }
         return new Number(n, Long.toString(n), String.format(Locale.US, "%,d", n));
     }
 
@@ -227,5 +235,42 @@ public sealed interface Cell permits Cell.Text, Cell.Number, Cell.Interval, Cell
             return new Interval(estimate, null, null);
         }
         return new Interval(estimate, format.apply(lower), format.apply(upper));
+    }
+
+    /** Cells shared between tables: counts below 1,000 (positions, pairs) and recently made texts. */
+    final class Shared {
+        static final int SMALL_COUNTS = 1000;
+        static final Number[] COUNTS = new Number[SMALL_COUNTS];
+        private static final int TEXTS = 4096;
+        private static final java.util.concurrent.ConcurrentHashMap<String, Text> RECENT =
+                new java.util.concurrent.ConcurrentHashMap<>();
+        private static final Text EMPTY = new Text("");
+
+        static {
+            for (int i = 0; i < SMALL_COUNTS; i++) {
+                String s = Integer.toString(i);
+                COUNTS[i] = new Number(i, s, s);
+            }
+        }
+
+        private Shared() {
+        }
+
+        static Text text(String text) {
+            if (text == null || text.isEmpty()) {
+                return EMPTY;
+            }
+            Text t = RECENT.get(text);
+            if (t != null) {
+                return t;
+            }
+            if (RECENT.size() >= TEXTS) {
+                // Unique texts (sample IDs) would fill the cache; start again rather than grow.
+                RECENT.clear();
+            }
+            t = new Text(text);
+            RECENT.putIfAbsent(text, t);
+            return t;
+        }
     }
 }

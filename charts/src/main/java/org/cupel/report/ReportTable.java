@@ -1,9 +1,11 @@
 package org.cupel.report;
 
+import java.util.AbstractList;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Objects;
+import java.util.RandomAccess;
 import java.util.Set;
 
 /**
@@ -61,7 +63,40 @@ public final class ReportTable {
             }
         }
         this.columns = typedColumns.stream().map(ReportColumn::header).toList();
-        this.rows = this.cells.stream().map(r -> r.stream().map(Cell::display).toList()).toList();
+        this.rows = new DisplayRows(this.cells);
+    }
+
+    /**
+     * The display text of the cells, read through rather than copied: a long table (the re-assay list of a
+     * million-sample project) would otherwise hold every row twice.
+     */
+    private static final class DisplayRows extends AbstractList<List<String>> implements RandomAccess {
+        private final List<List<Cell>> cells;
+
+        DisplayRows(List<List<Cell>> cells) {
+            this.cells = cells;
+        }
+
+        @Override
+        public List<String> get(int row) {
+            List<Cell> r = cells.get(row);
+            return new AbstractList<>() {
+                @Override
+                public String get(int column) {
+                    return r.get(column).display();
+                }
+
+                @Override
+                public int size() {
+                    return r.size();
+                }
+            };
+        }
+
+        @Override
+        public int size() {
+            return cells.size();
+        }
     }
 
     /** A table of typed cells; each cell must fit its column ({@link ReportColumn.Kind}). */
