@@ -43,7 +43,8 @@ public final class CheckCommand implements Callable<Integer> {
     CommandSpec spec;
 
     /** The JSON document of {@code cupel check --json}. */
-    record CheckReport(ProjectSummary summary, boolean usable, List<DataIssue> exceptions) {
+    record CheckReport(ProjectSummary summary, boolean usable, List<org.cupel.units.UnitChoice> units,
+                       List<DataIssue> exceptions) {
     }
 
     @Override
@@ -53,7 +54,8 @@ public final class CheckCommand implements Callable<Integer> {
         ProjectSummary s = ProjectSummary.of(p);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
-            Json.print(out, new CheckReport(s, !p.exceptions().hasFatal(), p.exceptions().all()));
+            Json.print(out, new CheckReport(s, !p.exceptions().hasFatal(), List.copyOf(p.units().values()),
+                    p.exceptions().all()));
         } else {
             printTables(out, s, p.exceptions().all());
             printUnits(out, p);
