@@ -210,17 +210,11 @@ public sealed interface Cell permits Cell.Text, Cell.Number, Cell.Interval, Cell
     }
 
     /**
-     * A signed number with {@code decimals} decimals ({@code +7.14}): a bias under a header that names its
-     * unit ("Mean bias % (95 % CI)"), where a sign on every cell would only crowd the table.
+     * A signed number with {@code decimals} decimals and no unit sign ({@code +7.14}): a bias under a header
+     * that names its unit ("Mean bias % (95 % CI)"), where a % in every cell would only crowd the table.
      */
     static Number signedFixedNumber(double v, int decimals) {
         String s = Numbers.fixed(v, decimals);
-        return new Number(v, s, (s.startsWith("-") || isZero(s) ? "" : "+") + s);
-    }
-
-    /** A signed number ({@code +0.0266}) with {@code digits} significant digits. */
-    static Number signedNumber(double v, int digits) {
-        String s = Numbers.significant(v, digits);
         return new Number(v, s, (s.startsWith("-") || isZero(s) ? "" : "+") + s);
     }
 
