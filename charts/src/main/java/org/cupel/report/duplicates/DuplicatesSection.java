@@ -191,7 +191,7 @@ public final class DuplicatesSection {
         if (p.rule() == RuleOutcome.NOT_JUDGED) {
             return "not judged: " + p.percentWithinLimit().note();
         }
-        return String.format(Locale.ROOT, "%s of %d pairs within HARD %s (rule: %s%%) — %s; RMS CV %s",
+        return String.format(Locale.ROOT, "%s of %d pairs within HARD %s (rule: %s %%) — %s; RMS CV %s",
                 pct1(p.percentWithinLimit().value() / 100), p.usedRelative(), pct0(p.hardLimit()),
                 compact(p.acceptancePercent()), p.rule() == RuleOutcome.PASS ? "pass" : "fail", estimatePct(p.rmsCv()));
     }

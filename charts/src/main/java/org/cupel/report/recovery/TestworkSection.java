@@ -88,9 +88,9 @@ public final class TestworkSection {
         String tolerance = num(100 * r.settings().balanceTolerance(), 1);
         out.add(open.isEmpty()
                 ? new ReportBlock.Callout(ReportBlock.Level.PASS, "The metal balance closes within ±" + tolerance
-                        + "% for all " + balances + " smelt balances.")
+                        + " % for all " + balances + " smelt balances.")
                 : new ReportBlock.Callout(ReportBlock.Level.WARN, "The metal balance does not close within ±"
-                        + tolerance + "% for " + open.size() + " of " + balances + " smelt balances: "
+                        + tolerance + " % for " + open.size() + " of " + balances + " smelt balances: "
                         + String.join(", ", open) + "; check the weights and assays of these smelts."));
         return out;
     }
@@ -101,7 +101,7 @@ public final class TestworkSection {
         for (ConditionRecovery c : r.conditions()) {
             if (c.analyte().equals(analyte)) {
                 RecoveryInterval t = c.tInterval();
-                conditions.add(c.condition() + " " + num(c.mean(), 2) + "%" + (t.computed()
+                conditions.add(c.condition() + " " + num(c.mean(), 2) + " %" + (t.computed()
                         ? " (" + num(t.lower(), 2) + " to " + num(t.upper(), 2) + ")" : ""));
             }
         }
@@ -111,7 +111,7 @@ public final class TestworkSection {
         long cannotTell = mine.stream().filter(p -> p.verdict() == ComparisonVerdict.CANNOT_TELL).count();
         long equivalent = mine.stream().filter(p -> p.verdict() == ComparisonVerdict.EQUIVALENT).count();
         StringBuilder sb = new StringBuilder(analyte + " recovery (" + r.settings().recoveryDefinition().label()
-                + ", mean with " + conf + "% t-interval): " + String.join("; ", conditions) + ". ");
+                + ", mean with " + conf + " % t-interval): " + String.join("; ", conditions) + ". ");
         sb.append(differ.isEmpty() ? "No pair of conditions is shown to differ" : "Different: "
                 + String.join("; ", differ));
         sb.append(". ").append(cannotTell).append(" of ").append(mine.size()).append(" pairs cannot be told apart "
