@@ -46,6 +46,11 @@ record PdfTableLayout(float size, float padding, TableBreaks breaks, List<Part> 
     static final float SLACK = 1f;
     static final float LONGEST_PIECE_SHARE = 0.4f;
     static final int MAX_KEY_COLUMNS = 3;
+    /**
+     * Cells no wider than this (points, at the type size) are short values, counts and rates such as
+     * "125 (5.0 %)": when the page has room they are never wrapped, so that only long text and headers wrap.
+     */
+    static final float SHORT_CELLS = 60f;
 
     /**
      * One part of a table.
@@ -153,6 +158,14 @@ record PdfTableLayout(float size, float padding, TableBreaks breaks, List<Part> 
             min[i] = allMin[columns[i]];
             full[i] = m.full(columns[i], s);
         }
+        float[] unbroken = new float[columns.length];
+        for (int i = 0; i < columns.length; i++) {
+            float cells = m.cellFull(columns[i], s);
+            unbroken[i] = cells <= SHORT_CELLS ? Math.max(min[i], cells) : min[i];
+        }
+        if (sum(unbroken) <= available) {
+            min = unbroken;
+        }
         return new Part(columns, PdfTableWidths.of(min, full, available), keys);
     }
 
@@ -201,26 +214,28 @@ record PdfTableLayout(float size, float padding, TableBreaks breaks, List<Part> 
      * Printed widths of each column at a type size of 1 pt (widths scale with the size): its widest
      * unbreakable piece in each mode, and its widest unwrapped line. Headers are bold, cells regular.
      */
-    private record ColumnMeasures(float[] headerPiece, float[][] cellPiece, float[] full) {
+    private record ColumnMeasures(float[] headerPiece, float[][] cellPiece, float[] full, float[] cellFull) {
         static ColumnMeasures of(ReportTable t, BaseFont bold, BaseFont regular) {
             int n = t.columns().size();
             int shown = Math.min(t.rows().size(), TableLimit.SHOWN);
             float[] header = new float[n];
             float[][] cell = new float[TableBreaks.values().length][n];
             float[] full = new float[n];
+            float[] cellFull = new float[n];
             for (int c = 0; c < n; c++) {
                 String h = t.columns().get(c);
                 header[c] = widest(TableBreaks.WORDS.pieces(h), bold);
                 full[c] = bold.getWidthPoint(h, 1f);
                 for (int r = 0; r < shown; r++) {
                     String v = TableBreaks.typeset(t.rows().get(r).get(c));
-                    full[c] = Math.max(full[c], regular.getWidthPoint(v, 1f));
+                    cellFull[c] = Math.max(cellFull[c], regular.getWidthPoint(v, 1f));
+                    full[c] = Math.max(full[c], cellFull[c]);
                     for (TableBreaks b : TableBreaks.values()) {
                         cell[b.ordinal()][c] = Math.max(cell[b.ordinal()][c], widest(b.pieces(v), regular));
                     }
                 }
             }
-            return new ColumnMeasures(header, cell, full);
+            return new ColumnMeasures(header, cell, full, cellFull);
         }
 
         private static float widest(List<String> pieces, BaseFont font) {
@@ -244,6 +259,11 @@ record PdfTableLayout(float size, float padding, TableBreaks breaks, List<Part> 
 
         float full(int column, Setting s) {
             return full[column] * s.size() + 2 * s.padding() + SLACK;
+        }
+
+        /** The column's widest cell unwrapped, header left out. */
+        float cellFull(int column, Setting s) {
+            return cellFull[column] * s.size() + 2 * s.padding() + SLACK;
         }
     }
 }

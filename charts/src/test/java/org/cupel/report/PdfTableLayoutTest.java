@@ -84,6 +84,33 @@ class PdfTableLayoutTest {
         assertWordsFit(t, layout);
     }
 
+    /**
+     * The insertion-rate table, whose totals row "125 (5.0 %)" was wrapped to "125 (5.0 / %)" while a long
+     * header had room to wrap instead: short values (counts and rates) stay on one line when the page allows.
+     */
+    @Test
+    void shortValuesAreNotWrappedWhenTheHeadersCanWrapInstead() {
+        List<String> header = List.of("Batch", "Samples", "Routine", "CRM", "Blank", "Field dup.", "Coarse dup.",
+                "Pulp dup.", "Lab repeat", "Umpire", "Below target");
+        List<List<String>> rows = new ArrayList<>();
+        for (int b = 1; b <= 25; b++) {
+            rows.add(List.of(String.format("OAL-%05d", b), "130", "100", "5 (5.0 %)", "5 (5.0 %)", "5 (5.0 %)",
+                    "5 (5.0 %)", "5 (5.0 %)", "5 (5.0 %)", "0 (0.0 %)", ""));
+        }
+        rows.add(List.of("all batches", "3,374", "2,499", "125 (5.0 %)", "125 (5.0 %)", "125 (5.0 %)",
+                "125 (5.0 %)", "125 (5.0 %)", "125 (5.0 %)", "125 (5.0 %)", ""));
+        ReportTable t = new ReportTable("insertion-rates", "Insertion rates per batch and overall", header, rows, "");
+        PdfTableLayout layout = PdfTableLayout.of(t, FONTS.bold(), FONTS.regular(), AVAILABLE);
+        assertFalse(layout.split());
+        float[] widths = layout.parts().get(0).widths();
+        float total = FONTS.regular().getWidthPoint("125 (5.0 %)", layout.size()) + 2 * layout.padding();
+        for (int c = 3; c <= 9; c++) {
+            assertTrue(widths[c] >= total, header.get(c) + ": " + widths[c] + " pt < " + total + " pt");
+        }
+        assertTrue(PdfTableLayout.sum(widths) <= AVAILABLE + 0.01f);
+        assertWordsFit(t, layout);
+    }
+
     @Test
     void aTableTooWideForThePageIsPrintedInEvenPartsRepeatingTheKeyColumns() {
         ReportTable t = tooWide();

@@ -189,7 +189,7 @@ final class BatchesCommand implements Callable<Integer> {
             List<String> low = new ArrayList<>();
             for (int i = 0; i < b.rates().size(); i++) {
                 InsertionRate r = b.rates().get(i);
-                cells.add(r.count() + " (" + (Double.isNaN(r.rate()) ? "-" : percent(r.rate())) + ")");
+                cells.add(r.count() + " (" + (Double.isNaN(r.rate()) ? "-" : InsertionRateSection.percent(r.rate())) + ")");
                 if (r.belowTarget()) {
                     low.add(SHORT.get(i));
                 }
@@ -200,10 +200,6 @@ final class BatchesCommand implements Callable<Integer> {
         out.println("Insertion rates: count (per routine sample); targets "
                 + InsertionRateSection.targets(review.insertion()));
         t.print(out);
-    }
-
-    private static String percent(double f) {
-        return org.cupel.assay.Numbers.significant(100 * f, 2) + "%";
     }
 
     private static String label(Verdict v) {

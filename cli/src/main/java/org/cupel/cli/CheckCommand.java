@@ -45,7 +45,8 @@ public final class CheckCommand implements Callable<Integer> {
     CommandSpec spec;
 
     /** The JSON document of {@code cupel check --json}. */
-    record CheckReport(ProjectSummary summary, boolean usable, List<DataIssue> exceptions) {
+    record CheckReport(ProjectSummary summary, boolean usable, List<org.cupel.units.UnitChoice> units,
+                       List<DataIssue> exceptions) {
     }
 
     @Override
@@ -56,9 +57,11 @@ public final class CheckCommand implements Callable<Integer> {
         ProjectSummary s = ProjectSummary.of(p);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
-            Json.print(out, new CheckReport(s, !exceptions.hasFatal(), exceptions.issues()));
+            Json.print(out, new CheckReport(s, !exceptions.hasFatal(), List.copyOf(p.units().values()),
+                    exceptions.issues()));
         } else {
             printTables(terminal.text(out), s, exceptions.issues());
+            printUnits(terminal.text(out), p);
         }
         return exceptions.hasFatal() ? CupelCommand.INPUT_ERROR : CupelCommand.OK;
     }
@@ -97,6 +100,14 @@ public final class CheckCommand implements Callable<Integer> {
                     problem, i.fix());
         }
         t.print(out);
+    }
+
+    /** Why each analyte is shown in its unit, where the lab files disagree or cupel.yaml sets it. */
+    private static void printUnits(PrintWriter out, Project p) {
+        p.units().values().stream().filter(u -> u.filesDisagree()
+                        || u.basis() == org.cupel.units.UnitChoice.Basis.CONFIGURED)
+                .forEach(u -> out.println("Units: " + u.sentence()));
+        out.flush();
     }
 
     private static String counts(Map<String, Integer> m) {

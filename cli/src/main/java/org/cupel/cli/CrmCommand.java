@@ -131,8 +131,9 @@ public final class CrmCommand implements Callable<Integer> {
                 "Warn", "Swap", "Drift");
         for (SeriesReview s : r.series()) {
             var b = s.bias();
-            t.row(s.crm(), s.analyte().label(), s.n(), sig(s.limits().certified()), sig(s.limits().sd()),
-                    sig(b.meanResult()), pct(b.meanBiasPct()),
+            // Certified value and SD as the certificate writes them; the mean on the limits' scale.
+            t.row(s.crm(), s.analyte().label(), s.n(), s.limits().certifiedText(), s.limits().sdText(),
+                    b.n() > 0 ? s.limits().limitText(b.meanResult()) : "–", pct(b.meanBiasPct()),
                     Double.isFinite(b.meanLowPct()) ? pct(b.meanLowPct()) + " to " + pct(b.meanHighPct()) : "–",
                     s.failures(), s.warnings(), s.swaps(), s.drift().drifting() ? "yes" : "no");
         }

@@ -52,7 +52,7 @@ public final class BiasAnalysis {
         return Estimate.of(mean, mean - half, mean + half, n, how);
     }
 
-    /** "umpire reads 3.1% ± 1.2% higher than primary (95 % interval; n = 48)". */
+    /** "umpire reads 3.1 % ± 1.2 % higher than primary (95 % interval; n = 48)". */
     static String verdict(QcRole type, Estimate relBias, boolean significant) {
         String second = type == QcRole.UMPIRE ? "umpire lab" : "duplicate";
         String first = type == QcRole.UMPIRE ? "primary lab" : "original";
@@ -62,7 +62,7 @@ public final class BiasAnalysis {
         double pct = 100 * relBias.value();
         double half = 100 * (relBias.ciHigh() - relBias.ciLow()) / 2;
         String dir = pct >= 0 ? "higher" : "lower";
-        String core = String.format(Locale.ROOT, "%s reads %.1f%% ± %.1f%% %s than %s (95 %% interval; n = %d)",
+        String core = String.format(Locale.ROOT, "%s reads %.1f %% ± %.1f %% %s than %s (95 %% interval; n = %d)",
                 second, Math.abs(pct), half, dir, first, relBias.n());
         return significant ? core : core + "; the interval includes zero, so no bias is shown";
     }

@@ -57,7 +57,7 @@ class BiasReferenceTest {
         close(ref, "ciLow", bias.meanRelativeBias().ciLow());
         close(ref, "ciHigh", bias.meanRelativeBias().ciHigh());
         // The interval includes zero here, so the verdict must not claim a bias.
-        assertTrue(bias.verdict().startsWith("umpire lab reads 2.7% ± 3.7% higher than primary lab"), bias.verdict());
+        assertTrue(bias.verdict().startsWith("umpire lab reads 2.7 % ± 3.7 % higher than primary lab"), bias.verdict());
         assertTrue(bias.verdict().contains("no bias is shown"), bias.verdict());
     }
 

@@ -43,7 +43,7 @@ class TestworkSectionTest {
         for (int i = 0; i < r.analytes().size(); i++) {
             String a = r.analytes().get(i);
             String text = findings.get(i).text();
-            assertTrue(text.startsWith(a + " recovery (by loss, mean with 95% t-interval): "), text);
+            assertTrue(text.startsWith(a + " recovery (by loss, mean with 95 % t-interval): "), text);
             for (org.cupel.recovery.ConditionRecovery c : r.conditions()) {
                 if (c.analyte().equals(a)) {
                     assertTrue(text.contains(c.condition() + " " + String.format(java.util.Locale.ROOT, "%.2f%%",
