@@ -109,7 +109,7 @@ public final class DuplicatesCommand implements Callable<Integer> {
                         + "; check the values and the type column, or drop --type.");
             }
             DuplicateSettings settings = dlMultiple == null ? DuplicateSettings.DEFAULTS
-                    : DuplicateSettings.builder().limitMultipleOfDetection(dlMultiple).build();
+                    : DuplicateSettings.withDefaults().limitMultipleOfDetection(dlMultiple).build();
             reports.add(DuplicateAnalysis.run(analyte == null ? "value" : analyte, unit == null ? "" : unit, pairs,
                     List.of(), new double[0], settings));
         }

@@ -49,8 +49,8 @@ public record CensoredSettings(KaplanMeier.LowestMass kmLowestMass, KaplanMeier.
         return new KaplanMeier.Options(kmLowestMass, kmSdDivisor);
     }
 
-    /** A builder holding {@link #DEFAULTS}: {@code CensoredSettings.builder().someSetting(value).build()}. */
-    public static Builder builder() {
+    /** A builder holding {@link #DEFAULTS}: {@code CensoredSettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
         return DEFAULTS.toBuilder();
     }
 

@@ -77,8 +77,8 @@ public record BlankSettings(double failMultiple, double warnMultiple, double hig
                 org.cupel.assay.Numbers.compact(warnMultiple) + "×DL"));
     }
 
-    /** A builder holding {@link #DEFAULTS}: {@code BlankSettings.builder().someSetting(value).build()}. */
-    public static Builder builder() {
+    /** A builder holding {@link #DEFAULTS}: {@code BlankSettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
         return DEFAULTS.toBuilder();
     }
 

@@ -45,8 +45,8 @@ public record InsertionSettings(double crm, double blank, double fieldDuplicate,
         }
     }
 
-    /** A builder holding {@link #DEFAULTS}: {@code InsertionSettings.builder().someSetting(value).build()}. */
-    public static Builder builder() {
+    /** A builder holding {@link #DEFAULTS}: {@code InsertionSettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
         return DEFAULTS.toBuilder();
     }
 

@@ -51,8 +51,8 @@ public record ReassaySettings(Scope scope, CrmBracket crmBracket, int blankFollo
         PASSING_CONTROL
     }
 
-    /** A builder holding {@link #DEFAULTS}: {@code ReassaySettings.builder().someSetting(value).build()}. */
-    public static Builder builder() {
+    /** A builder holding {@link #DEFAULTS}: {@code ReassaySettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
         return DEFAULTS.toBuilder();
     }
 

@@ -121,8 +121,8 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
         }
     }
 
-    /** A builder holding {@link #DEFAULTS}: {@code DuplicateSettings.builder().someSetting(value).build()}. */
-    public static Builder builder() {
+    /** A builder holding {@link #DEFAULTS}: {@code DuplicateSettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
         return DEFAULTS.toBuilder();
     }
 

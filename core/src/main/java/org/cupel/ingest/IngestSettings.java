@@ -78,8 +78,8 @@ public record IngestSettings(boolean decimalComma, boolean negativeMeansBelowDet
                 Map.of(), Map.of(), Map.of(), "", "ISO", false);
     }
 
-    /** A builder holding {@link #DEFAULTS}: {@code IngestSettings.builder().someSetting(value).build()}. */
-    public static Builder builder() {
+    /** A builder holding {@link #DEFAULTS}: {@code IngestSettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
         return DEFAULTS.toBuilder();
     }
 

@@ -107,8 +107,8 @@ public record RecoverySettings(String definition, double confidence, double alph
         return rsd * gradeGpt;
     }
 
-    /** A builder holding {@link #DEFAULTS}: {@code RecoverySettings.builder().someSetting(value).build()}. */
-    public static Builder builder() {
+    /** A builder holding {@link #DEFAULTS}: {@code RecoverySettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
         return DEFAULTS.toBuilder();
     }
 

@@ -18,7 +18,7 @@ import org.apache.commons.math3.distribution.NormalDistribution;
  * integral uses composite Gauss–Legendre quadrature over z ∈ [−8.5, 8.5], where φ is above 1e-16; the
  * outer one {@link ChiScaleExpectation}. Checked against R's {@code ptukey} and {@code qtukey}.
  */
-public final class StudentizedRange {
+final class StudentizedRange {
     private static final NormalDistribution STANDARD_NORMAL = new NormalDistribution(null, 0, 1);
     private static final int PANELS = 16;
     private static final int POINTS = 16;

@@ -117,8 +117,8 @@ public record ProjectSettings(IngestSettings ingest, CensoredSettings censored, 
         return out;
     }
 
-    /** A builder holding {@link #DEFAULTS}: {@code ProjectSettings.builder().duplicates(...).build()}. */
-    public static Builder builder() {
+    /** A builder holding {@link #DEFAULTS}: {@code ProjectSettings.withDefaults().duplicates(...).build()}. */
+    public static Builder withDefaults() {
         return DEFAULTS.toBuilder();
     }
 

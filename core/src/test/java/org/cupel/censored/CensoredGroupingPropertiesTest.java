@@ -107,7 +107,7 @@ class CensoredGroupingPropertiesTest {
         SeededTries.forAll(200, r -> new Shuffled(OBSERVATIONS.next(r), r.nextLong()), in -> {
             List<Obs> shuffled = new ArrayList<>(in.obs());
             Collections.shuffle(shuffled, new Random(in.seed()));
-            CensoredSettings settings = CensoredSettings.builder().bootstrapReplicates(0)
+            CensoredSettings settings = CensoredSettings.withDefaults().bootstrapReplicates(0)
                     .bootstrapSeed(1).bootstrapMaxN(0).build();
             CensoredAnalysis a = CensoredAnalysis.of(sample(in.obs()), settings);
             CensoredAnalysis b = CensoredAnalysis.of(sample(shuffled), settings);

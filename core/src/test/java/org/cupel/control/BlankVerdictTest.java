@@ -44,7 +44,7 @@ class BlankVerdictTest {
 
     @Test
     void censoredBlankWithLimitAboveTheThresholdCannotBeJudged() {
-        BlankSettings s = BlankSettings.builder()
+        BlankSettings s = BlankSettings.withDefaults()
                 .absolute(Map.of("Au", new BlankSettings.AbsoluteLimits(0.02, 0.015))).build();
         BlankThreshold t = s.thresholdFor("Au", 0.05).orElseThrow();
         assertEquals(Verdict.CANNOT_JUDGE, BlankVerdict.judge(AssayValue.belowDetection(0.05), t, "g/t").verdict());
@@ -54,7 +54,7 @@ class BlankVerdictTest {
 
     @Test
     void absoluteThresholdReplacesTheMultiples() {
-        BlankSettings s = BlankSettings.builder()
+        BlankSettings s = BlankSettings.withDefaults()
                 .absolute(Map.of("Au", new BlankSettings.AbsoluteLimits(0.02, null))).build();
         BlankThreshold t = s.thresholdFor("Au", DL).orElseThrow();
         assertEquals(0.02, t.fail(), 0);
@@ -76,7 +76,7 @@ class BlankVerdictTest {
     @Test
     void tenTimesRuleIsASetting() {
         // Some practitioners fail blanks above 10× DL (common practice); the multiple is configurable.
-        BlankThreshold ten = BlankSettings.builder().failMultiple(10).build().thresholdFor("Au", DL)
+        BlankThreshold ten = BlankSettings.withDefaults().failMultiple(10).build().thresholdFor("Au", DL)
                 .orElseThrow();
         assertEquals(Verdict.WARN, BlankVerdict.judge(AssayValue.detected(0.08, DL), ten, "g/t").verdict());
         assertEquals(Verdict.FAIL, BlankVerdict.judge(AssayValue.detected(0.11, DL), ten, "g/t").verdict());

@@ -65,7 +65,7 @@ class PrecisionMeasuresTest {
             pairs.add(new DuplicatePair("D" + i, "S" + i, "B1", QcRole.PULP_DUPLICATE,
                     AssayValue.detected(A[i], 0.01), AssayValue.detected(B[i], 0.01)));
         }
-        DuplicateSettings tight = DuplicateSettings.builder().pulpHardLimitPercent(5).bootstrapResamples(200)
+        DuplicateSettings tight = DuplicateSettings.withDefaults().pulpHardLimitPercent(5).bootstrapResamples(200)
                 .bootstrapSeed(7L).build();
         PrecisionSummary s = PrecisionMeasures.summarise(QcRole.PULP_DUPLICATE,
                 PairScreen.screen(pairs, tight), tight);

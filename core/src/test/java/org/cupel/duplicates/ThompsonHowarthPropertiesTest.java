@@ -9,7 +9,7 @@ import org.cupel.testing.SeededTries;
 import org.junit.jupiter.api.Test;
 
 class ThompsonHowarthPropertiesTest {
-    private static final DuplicateSettings SETTINGS = DuplicateSettings.builder().bootstrapResamples(100)
+    private static final DuplicateSettings SETTINGS = DuplicateSettings.withDefaults().bootstrapResamples(100)
             .bootstrapSeed(5L).build();
 
     /** Thompson–Howarth sorts pairs by mean, so the order the pairs arrive in must not matter. */

@@ -16,7 +16,7 @@ class ThompsonHowarthTest {
     private static final double[] MEANS = {10, 20, 30, 40, 50};
     /** |d| as multiples of the group median: the sixth of eleven is 1. */
     private static final double[] SPREAD = {0.2, 0.4, 0.6, 0.8, 0.9, 1.0, 1.1, 1.5, 2.0, 3.0, 4.0};
-    private static final DuplicateSettings SETTINGS = DuplicateSettings.builder().bootstrapResamples(200)
+    private static final DuplicateSettings SETTINGS = DuplicateSettings.withDefaults().bootstrapResamples(200)
             .bootstrapSeed(11L).build();
 
     /**
@@ -116,7 +116,7 @@ class ThompsonHowarthTest {
             a[i] = c + sd * random.nextGaussian();
             b[i] = c + sd * random.nextGaussian();
         }
-        DuplicateSettings settings = DuplicateSettings.builder().bootstrapResamples(500).bootstrapSeed(99L)
+        DuplicateSettings settings = DuplicateSettings.withDefaults().bootstrapResamples(500).bootstrapSeed(99L)
                 .build();
         PrecisionModelResult r = ThompsonHowarth.fit(a, b, new double[] {1.0}, settings);
         for (ModelFit fit : List.of(r.thompsonHowarth(), r.rmsRegression())) {

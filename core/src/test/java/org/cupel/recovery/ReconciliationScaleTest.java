@@ -153,7 +153,7 @@ class ReconciliationScaleTest {
     }
 
     private static RecoverySettings settings(double f) {
-        return RecoverySettings.builder()
+        return RecoverySettings.withDefaults()
                 .balanceResolutionGrams(RecoverySettings.DEFAULTS.balanceResolutionGrams() * f).build();
     }
 }

@@ -66,7 +66,7 @@ class RecoveryAnalysisTest {
     @Test
     void comparisonsGiveVerdictsAndPlans() {
         RecoveryResult r = RecoveryAnalysis.run(lowRecovery(),
-                RecoverySettings.builder().equivalenceMargin(0.5).build());
+                RecoverySettings.withDefaults().equivalenceMargin(0.5).build());
         PairComparison ab = r.comparisons().get(0);
         assertEquals("A", ab.first());
         assertTrue(ab.welch().difference() > 0);

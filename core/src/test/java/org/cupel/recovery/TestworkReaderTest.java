@@ -70,7 +70,7 @@ class TestworkReaderTest {
         Files.writeString(dir.resolve("testwork/heads.csv"), HEADS);
         Files.writeString(dir.resolve("testwork/smelts.csv"), "test_id,condition,feed,charge_g,button_g,button_Au_g/t,"
                 + "speiss_g,speiss_Au_g/t\nT1,A,F1,100,40,2000,5,600\n");
-        RecoverySettings settings = RecoverySettings.builder()
+        RecoverySettings settings = RecoverySettings.withDefaults()
                 .productRoles(java.util.Map.of("speiss", "collected")).build();
         Testwork t = TestworkReader.read(dir, settings, ValueConventions.DEFAULTS);
         assertEquals(ProductRole.COLLECTED, t.smelts().get(0).products().get(1).role());

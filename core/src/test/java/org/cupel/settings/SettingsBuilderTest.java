@@ -161,7 +161,7 @@ class SettingsBuilderTest {
             assertEquals(changed, builder.getClass().getMethod("build").invoke(builder), s.name());
         }
         assertEquals(CHANGED, CHANGED.toBuilder().build());
-        assertEquals(ProjectSettings.DEFAULTS, ProjectSettings.builder().build());
+        assertEquals(ProjectSettings.DEFAULTS, ProjectSettings.withDefaults().build());
     }
 
     /**
@@ -170,11 +170,11 @@ class SettingsBuilderTest {
      */
     @Test
     void theOrderOfTheCallsDoesNotMatter() {
-        BlankSettings warnFirst = BlankSettings.builder().warnMultiple(8).failMultiple(10).build();
-        BlankSettings failFirst = BlankSettings.builder().failMultiple(10).warnMultiple(8).build();
+        BlankSettings warnFirst = BlankSettings.withDefaults().warnMultiple(8).failMultiple(10).build();
+        BlankSettings failFirst = BlankSettings.withDefaults().failMultiple(10).warnMultiple(8).build();
         assertEquals(warnFirst, failFirst);
         assertEquals(8, warnFirst.warnMultiple());
-        assertThrows(IllegalArgumentException.class, () -> BlankSettings.builder().warnMultiple(8).build(),
+        assertThrows(IllegalArgumentException.class, () -> BlankSettings.withDefaults().warnMultiple(8).build(),
                 "warn 8 above the default fail 5 is refused when built");
     }
 
@@ -182,7 +182,7 @@ class SettingsBuilderTest {
     @Test
     void buildRefusesAValueAsTheConfigDoes() {
         SettingException e = assertThrows(SettingException.class,
-                () -> DuplicateSettings.builder().pulpHardLimitPercent(0).build());
+                () -> DuplicateSettings.withDefaults().pulpHardLimitPercent(0).build());
         assertEquals(List.of("pulpHardLimitPercent"), e.key());
         assertTrue(e.getMessage().contains("is not a HARD limit"), e.getMessage());
     }
@@ -215,15 +215,15 @@ class SettingsBuilderTest {
      */
     @Test
     void aMapThatLeavesAKeyOutIsRefused() {
-        CrmSettings onlyOneRule = CrmSettings.builder().rules(Map.of("1-3s", RuleAction.FAIL)).build();
-        ProjectSettings settings = ProjectSettings.builder().crm(onlyOneRule).build();
+        CrmSettings onlyOneRule = CrmSettings.withDefaults().rules(Map.of("1-3s", RuleAction.FAIL)).build();
+        ProjectSettings settings = ProjectSettings.withDefaults().crm(onlyOneRule).build();
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> settings.applyTo(CupelConfig.defaults()));
         assertTrue(e.getMessage().contains("crm settings cannot be set as given"), e.getMessage());
         Map<String, RuleAction> rules = new java.util.LinkedHashMap<>(CrmSettings.DEFAULTS.rules());
         rules.put("1-2s", RuleAction.OFF);
-        CrmSettings quiet = CrmSettings.builder().rules(rules).build();
-        CupelConfig applied = ProjectSettings.builder().crm(quiet).build().applyTo(CupelConfig.defaults());
+        CrmSettings quiet = CrmSettings.withDefaults().rules(rules).build();
+        CupelConfig applied = ProjectSettings.withDefaults().crm(quiet).build().applyTo(CupelConfig.defaults());
         assertEquals(RuleAction.OFF, ProjectSettings.of(applied).crm().rules().get("1-2s"));
     }
 

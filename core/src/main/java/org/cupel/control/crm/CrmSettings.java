@@ -84,8 +84,8 @@ public record CrmSettings(Map<String, RuleAction> rules, double ewmaLambda, doub
         return m;
     }
 
-    /** A builder holding {@link #DEFAULTS}: {@code CrmSettings.builder().someSetting(value).build()}. */
-    public static Builder builder() {
+    /** A builder holding {@link #DEFAULTS}: {@code CrmSettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
         return DEFAULTS.toBuilder();
     }
 
