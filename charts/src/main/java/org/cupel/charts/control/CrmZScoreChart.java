@@ -4,7 +4,6 @@ import java.time.LocalDate;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
-import org.cupel.assay.LimitComparison;
 import org.cupel.charts.ChartFigure;
 import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
@@ -12,6 +11,7 @@ import org.cupel.charts.ChartStyle;
 import org.cupel.charts.PointBudget;
 import org.cupel.control.crm.CrmResult;
 import org.cupel.control.crm.SeriesReview;
+import org.cupel.control.crm.ZBand;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
@@ -21,9 +21,14 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * Every CRM of one analyte on one normalised chart, z = (x − certified)/SD against time, to show drift
  * that affects the whole lab rather than one material. Time is days since the first dated batch when
  * every result is dated, else the batch number. Swaps are left out (their z is not a measure of the lab);
- * z is clipped to ±6 so one wild result does not flatten the rest.
+ * z is clipped to ±6 so one wild result does not flatten the rest. Results that the review put outside the
+ * satisfactory band ({@link CrmResult#band()}: questionable or unsatisfactory, ISO 13528) are marked in the
+ * warning and failure colours; nothing is judged here (a result exactly on 2 SD is satisfactory, as
+ * {@link ZBand} decides).
  */
 public final class CrmZScoreChart {
+    static final String QUESTIONABLE = "Questionable: 2 < |z| < 3";
+    static final String UNSATISFACTORY = "Unsatisfactory: |z| ≥ 3";
     private static final double CLIP = 6;
 
     private CrmZScoreChart() {
@@ -54,11 +59,13 @@ public final class CrmZScoreChart {
         long flagged = 0;
         long flaggedDrawn = 0;
         int k = 0;
+        List<double[]> questionable = new ArrayList<>();
+        List<double[]> unsatisfactory = new ArrayList<>();
         for (SeriesReview s : series) {
             List<CrmResult> judged = s.results().stream().filter(r -> !r.isSwap()).toList();
             boolean[] beyond = new boolean[judged.size()];
             for (int i = 0; i < beyond.length; i++) {
-                beyond[i] = LimitComparison.beyond(judged.get(i).z(), 2);
+                beyond[i] = judged.get(i).band() != ZBand.SATISFACTORY;
             }
             int[] idx = PointBudget.thinned(beyond, PointBudget.DEFAULT / Math.max(1, series.size()));
             flagged += PointBudget.count(beyond);
@@ -70,6 +77,9 @@ public final class CrmZScoreChart {
                 x[i] = dated ? ChronoUnit.DAYS.between(origin, r.point().date()) : r.point().batchOrder() + 1;
                 y[i] = Math.max(-CLIP, Math.min(CLIP, r.z()));
                 maxX = Math.max(maxX, x[i]);
+                if (r.band() != ZBand.SATISFACTORY) {
+                    (r.band() == ZBand.QUESTIONABLE ? questionable : unsatisfactory).add(new double[] {x[i], y[i]});
+                }
             }
             total += judged.size();
             drawn += idx.length;
@@ -87,8 +97,22 @@ public final class CrmZScoreChart {
         band(c, "±3 SD", 3, ChartStyle.FAILURE);
         XYSeries zero = c.addSeries("z = 0", ends, new double[] {0, 0});
         zero.setMarker(SeriesMarkers.NONE).setLineColor(ChartStyle.REFERENCE).setLineStyle(ChartStyle.solid(1.2f));
-        return ChartFigure.of(c, ChartNotes.count(total, drawn, flagged, flaggedDrawn, "results with |z| > 2")
-                + "; swaps left out; |z| clipped at 6");
+        marked(c, QUESTIONABLE, questionable, ChartStyle.WARNING, ChartMarkers.DIAMOND);
+        marked(c, UNSATISFACTORY, unsatisfactory, ChartStyle.FAILURE, ChartMarkers.SQUARE);
+        return ChartFigure.of(c, ChartNotes.count(total, drawn, flagged, flaggedDrawn,
+                "results outside the satisfactory band") + "; swaps left out; |z| clipped at 6");
+    }
+
+    /** The results of one band, drawn over their CRM's markers; no series when there are none. */
+    private static void marked(XYChart c, String name, List<double[]> points, java.awt.Color colour,
+                               org.knowm.xchart.style.markers.Marker marker) {
+        if (points.isEmpty()) {
+            return;
+        }
+        XYSeries s = c.addSeries(name + " (" + points.size() + ")", points.stream().mapToDouble(p -> p[0]).toArray(),
+                points.stream().mapToDouble(p -> p[1]).toArray());
+        s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+        s.setMarker(marker).setMarkerColor(colour);
     }
 
     private static void band(XYChart c, String name, double z, java.awt.Color color) {
