@@ -9,7 +9,10 @@ import java.util.List;
 import java.util.regex.Pattern;
 
 /**
- * Writes report tables as CSV files that open safely in a spreadsheet.
+ * Writes report tables as CSV files that open safely in a spreadsheet: the header is the table's
+ * {@link ReportTable#csvColumns()} (lower-case names with the unit last, see {@link ReportColumn}), and each
+ * number is its own cell, written plain (no grouping, no {@code %}, no {@code +}); an empty cell is a number
+ * that does not apply or could not be computed (the reason, where the column has one, in its {@code _note}).
  *
  * <p>Format: RFC 4180 (Shafranovich, 2005, "Common Format and MIME Type for Comma-Separated Values (CSV)
  * Files"): comma separated, CRLF line ends, a header row, fields holding a comma, double quote, CR or
@@ -18,7 +21,8 @@ import java.util.regex.Pattern;
  * <p>Spreadsheet safety, after OWASP Foundation, "CSV Injection" (owasp.org/www-community/attacks/
  * CSV_Injection): a spreadsheet runs a cell that begins with {@code =}, {@code +}, {@code -}, {@code @},
  * tab or carriage return as a formula, so such a cell is prefixed with a single quote, which makes the
- * spreadsheet show it as text. The one exception is a plain negative number ({@code -0.12},
+ * spreadsheet show it as text. Only text cells are neutralised: a number cell is written as the number it is.
+ * Among text cells the one exception is a plain negative number ({@code -0.12},
  * {@code -1,234.5}, {@code -3.4e-2}, {@code -12%}): a single numeric literal cannot call a function or
  * reference another cell, and quoting it would turn a measured value into text. A cell such as
  * {@code -2+3} or {@code -1;SUM(A1)} is not a plain number and is neutralised.
@@ -33,8 +37,8 @@ public final class CsvTables {
     /** Writes {@code table} (header row, then the rows) to {@code file}. */
     public static void write(ReportTable table, Path file) throws IOException {
         try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
-            writeRow(w, table.columns());
-            for (List<String> row : table.rows()) {
+            writeRow(w, table.csvColumns().stream().map(c -> new ReportColumn.CsvField(c.name(), false)).toList());
+            for (List<ReportColumn.CsvField> row : table.csvRows()) {
                 writeRow(w, row);
             }
         }
@@ -42,9 +46,7 @@ public final class CsvTables {
 
     /** One cell made spreadsheet-safe, then quoted per RFC 4180 when needed. */
     public static String field(String cell) {
-        String s = neutralise(cell == null ? "" : cell);
-        boolean quote = s.indexOf(',') >= 0 || s.indexOf('"') >= 0 || s.indexOf('\n') >= 0 || s.indexOf('\r') >= 0;
-        return quote ? '"' + s.replace("\"", "\"\"") + '"' : s;
+        return quoted(neutralise(cell == null ? "" : cell));
     }
 
     /** {@code cell} with a leading single quote when a spreadsheet would read it as a formula. */
@@ -60,12 +62,19 @@ public final class CsvTables {
         return "'" + cell;
     }
 
-    private static void writeRow(Writer w, List<String> cells) throws IOException {
+    private static String quoted(String s) {
+        boolean quote = s.indexOf(',') >= 0 || s.indexOf('"') >= 0 || s.indexOf('\n') >= 0 || s.indexOf('\r') >= 0;
+        return quote ? '"' + s.replace("\"", "\"\"") + '"' : s;
+    }
+
+    private static void writeRow(Writer w, List<ReportColumn.CsvField> cells) throws IOException {
         for (int i = 0; i < cells.size(); i++) {
             if (i > 0) {
                 w.write(',');
             }
-            w.write(field(cells.get(i)));
+            ReportColumn.CsvField f = cells.get(i);
+            // A number field is a plain decimal (Cell.Number checks it): nothing to neutralise or quote.
+            w.write(f.numeric() ? f.text() : field(f.text()));
         }
         w.write("\r\n");
     }

@@ -53,25 +53,32 @@ public final class DataExceptionsSection {
     }
 
     private static ReportTable accounts(List<FileAccount> files) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (FileAccount f : files) {
-            rows.add(List.of(f.file(), f.kind(), count(f.rowsRead()), count(f.rowsAnalysed()), count(f.rowsExcluded()),
-                    f.balances() ? "yes" : "NO"));
+            rows.add(List.of(Cell.text(f.file()), Cell.text(f.kind()), Cell.count(f.rowsRead()),
+                    Cell.count(f.rowsAnalysed()), Cell.count(f.rowsExcluded()), Cell.text(f.balances() ? "yes" : "NO")));
         }
-        return new ReportTable("file-row-accounts", "Rows read, analysed and excluded, per input file",
-                List.of("File", "Kind", "Rows read", "Analysed", "Excluded", "Balances"), rows,
+        return ReportTable.typed("file-row-accounts", "Rows read, analysed and excluded, per input file",
+                List.of(ReportColumn.text("File", "file"), ReportColumn.text("Kind", "kind"),
+                        ReportColumn.count("Rows read", "rows_read"), ReportColumn.count("Analysed", "rows_analysed"),
+                        ReportColumn.count("Excluded", "rows_excluded"), ReportColumn.text("Balances", "balances")), rows,
                 "Header lines are not counted. Rows read = analysed + excluded for every file that balances.");
     }
 
     private static ReportTable issues(List<DataIssue> all) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (DataIssue i : all) {
-            rows.add(List.of(severity(i.severity()), i.where().file(), i.where().line() > 0 ? count(i.where().line())
-                    : "", i.where().column() > 0 ? count(i.where().column()) : "", i.sampleId(), i.found(), i.problem(),
-                    i.expected(), i.fix()));
+            rows.add(List.of(Cell.text(severity(i.severity())), Cell.text(i.where().file()),
+                    i.where().line() > 0 ? plain(i.where().line()) : Cell.blank(),
+                    i.where().column() > 0 ? plain(i.where().column()) : Cell.blank(), Cell.text(i.sampleId()),
+                    Cell.text(i.found()), Cell.text(i.problem()), Cell.text(i.expected()), Cell.text(i.fix())));
         }
-        return new ReportTable("data-exceptions", "Exceptions register",
-                List.of("Severity", "File", "Line", "Column", "Sample", "Found", "Problem", "Expected", "Fix"), rows,
+        return ReportTable.typed("data-exceptions", "Exceptions register",
+                List.of(ReportColumn.text("Severity", "severity"), ReportColumn.text("File", "file"),
+                        ReportColumn.count("Line", "line"), ReportColumn.count("Column", "column"),
+                        ReportColumn.text("Sample", "sample"), ReportColumn.text("Found", "found"),
+                        ReportColumn.text("Problem", "problem"), ReportColumn.text("Expected", "expected"),
+                        ReportColumn.text("Fix", "fix")), rows,
                 "In the order found. Excluded: left out of the analyses. Warning: analysed, but check. "
                         + "Fatal: the file was not used.");
     }
@@ -84,7 +91,8 @@ public final class DataExceptionsSection {
         }
     }
 
-    private static String count(long n) {
-        return String.format(Locale.US, "%d", n);
+    /** A line or column number: a whole number shown without grouping, as an editor shows it. */
+    private static Cell plain(long n) {
+        return new Cell.Number(n, Long.toString(n), Long.toString(n));
     }
 }

@@ -47,8 +47,6 @@ public final class DocxReport {
     private static final int MARGIN = 1440;
     /** A chart takes at most this share of the text height, so that its caption fits on the same page. */
     private static final double FIGURE_HEIGHT_SHARE = 0.6;
-    private static final double TABLE_POINTS = 8;
-    private static final double WIDE_TABLE_POINTS = 7;
     private static final BaseFont HELVETICA = standardFont(BaseFont.HELVETICA);
     private static final BaseFont HELVETICA_BOLD = standardFont(BaseFont.HELVETICA_BOLD);
 
@@ -195,9 +193,10 @@ public final class DocxReport {
         int columns = t.columns().size();
         List<List<String>> rows = t.rows();
         int shown = Math.min(rows.size(), TableLimit.SHOWN);
-        double points = columns >= PdfReport.WIDE_TABLE_COLUMNS ? WIDE_TABLE_POINTS : TABLE_POINTS;
+        PdfTableLayout set = PdfTableLayout.of(t, HELVETICA_BOLD, HELVETICA, textWidth() / 20f);
+        double points = set.size();
         XWPFTable table = doc.createTable(1 + shown, columns);
-        layout(table, columnWidths(t, points));
+        layout(table, columnWidths(set, columns));
         XWPFTableRow head = table.getRow(0);
         head.setRepeatHeader(true);
         head.setCantSplitRow(true);
@@ -224,15 +223,23 @@ public final class DocxReport {
     }
 
     /**
-     * Column widths in twips, laid out as the PDF lays out its tables ({@link PdfTableWidths}), measured in
+     * Column widths in twips, laid out as the PDF lays out its tables ({@link PdfTableLayout}), measured in
      * Helvetica, whose advance widths Arial shares (the metrics are built into OpenPDF, so the widths do not
-     * depend on the fonts installed). The document's text is set in Arial.
+     * depend on the fonts installed). The document's text is set in Arial. A table the PDF prints in parts
+     * is one Word table here (an editor can re-flow it): each column keeps the width of its first part, and
+     * the widths are scaled to the text width.
      */
-    private int[] columnWidths(ReportTable t, double points) {
-        float[] w = PdfTableWidths.of(t, HELVETICA_BOLD, HELVETICA, (float) points, textWidth() / 20f);
-        int[] twips = new int[w.length];
-        for (int c = 0; c < w.length; c++) {
-            twips[c] = (int) Math.floor(w[c] * 20);
+    private int[] columnWidths(PdfTableLayout set, int columns) {
+        float[] w = new float[columns];
+        for (PdfTableLayout.Part part : set.parts()) {
+            for (int i = part.keys(); i < part.columns().length; i++) {
+                w[part.columns()[i]] = part.widths()[i];
+            }
+        }
+        float scale = set.split() ? (textWidth() / 20f) / PdfTableLayout.sum(w) : 1f;
+        int[] twips = new int[columns];
+        for (int c = 0; c < columns; c++) {
+            twips[c] = (int) Math.floor(w[c] * scale * 20);
         }
         return twips;
     }

@@ -91,7 +91,8 @@ public final class HtmlReport {
     private void table(ReportTable t) {
         out.append("<figure class=\"table\">\n<figcaption>").append(e(t.title()))
                 .append(" <a class=\"csv\" href=\"").append(e(files.table(t))).append("\">CSV</a></figcaption>\n")
-                .append("<div class=\"scroll\"><table>\n<thead><tr>");
+                .append(t.columns().size() >= PdfTableLayout.WIDE_TABLE_COLUMNS ? "<div class=\"scroll wide\">"
+                        : "<div class=\"scroll\">").append("<table>\n<thead><tr>");
         for (String c : t.columns()) {
             out.append("<th scope=\"col\">").append(e(c)).append("</th>");
         }
@@ -100,7 +101,7 @@ public final class HtmlReport {
             out.append("<tr>");
             for (String cell : row) {
                 out.append(TableLimit.isNumeric(cell) ? "<td class=\"n\">"
-                        : keepWhole(cell) ? "<td class=\"d\">" : "<td>").append(e(cell))
+                        : keepWhole(cell) ? "<td class=\"d\">" : "<td>").append(e(NoBreak.ranges(cell)))
                         .append("</td>");
             }
             out.append("</tr>\n");

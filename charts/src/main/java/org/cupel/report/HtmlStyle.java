@@ -3,7 +3,8 @@ package org.cupel.report;
 /**
  * The report's stylesheet: a single readable column, a contents list, quiet tables with right-aligned
  * numbers, callouts marked by a word as well as a colour (Okabe–Ito hues, so colour-blind readers lose
- * nothing), and print rules: A4/Letter margins, each section on a new page, table headers repeated.
+ * nothing), wide tables that scroll sideways in their own box (never cut off by the page), and print rules:
+ * A4/Letter margins, each section on a new page, table headers repeated.
  */
 final class HtmlStyle {
     static final String CSS = String.join("\n",
@@ -31,11 +32,22 @@ final class HtmlStyle {
             "figcaption{font-weight:bold;margin-bottom:.35rem}",
             "figure.chart figcaption{font-weight:normal;color:var(--muted);font-size:.9rem;margin-top:.3rem}",
             "figure.chart img{display:block;width:100%;max-width:52rem;height:auto;border:1px solid var(--rule)}",
-            ".scroll{overflow-x:auto}",
+            // A table of few columns keeps to the text column and wraps its text; a table of many columns
+            // (class wide) may use the window out to its right margin. What is wider still scrolls sideways in
+            // its own box, never cut off by the page, with the first column (what names the row) kept in view.
+            ".scroll{overflow-x:auto;width:fit-content;min-width:100%;"
+                    + "max-width:calc(100vw - 3rem - max(0px, (100vw - 68rem) / 2))}",
+            ".scroll.wide{width:max-content}",
+            ".wide table{font-size:.8rem}",
+            ".wide th,.wide td{padding:.28rem .45rem}",
+            ".wide th:first-child,.wide td:first-child{box-shadow:inset -1px 0 0 var(--rule)}",
             "table{border-collapse:collapse;font-size:.86rem;min-width:50%}",
             "th,td{padding:.28rem .6rem;border-bottom:1px solid var(--rule);text-align:left;vertical-align:top}",
-            "th{background:var(--band);border-bottom:2px solid #9aa1ab;white-space:nowrap}",
-            "tbody tr:nth-child(even){background:#fafbfc}",
+            // Headers wrap between words, never inside one (no overflow-wrap, no automatic hyphens).
+            "th{background:var(--band);border-bottom:2px solid #9aa1ab;overflow-wrap:normal;hyphens:manual}",
+            "th:first-child,td:first-child{position:sticky;left:0;z-index:1;background:#fff}",
+            "th:first-child{background:var(--band)}",
+            "tbody tr:nth-child(even),tbody tr:nth-child(even) td:first-child{background:#fafbfc}",
             "td.n{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}",
             "td.d{white-space:nowrap}",
             "td.empty{color:var(--muted);font-style:italic}",
@@ -59,11 +71,15 @@ final class HtmlStyle {
             "  section{break-before:page;border-top:none}",
             "  a{color:inherit;text-decoration:none}",
             "  a.csv{display:none}",
-            "  .scroll{overflow:visible}",
+            // On paper nothing scrolls: a table takes the text width, and wide tables print smaller.
+            "  .scroll,.scroll.wide{overflow:visible;width:auto;max-width:none}",
+            "  th:first-child,td:first-child{position:static}",
+            "  table{font-size:8pt}",
+            "  .wide table{font-size:7pt}",
             "  thead{display:table-header-group}",
             "  tr,figure.chart,.callout{break-inside:avoid}",
-            "  h2{break-after:avoid}",
-            "  tbody tr:nth-child(even){background:none}",
+            "  h2,figure.table figcaption{break-after:avoid}",
+            "  tbody tr:nth-child(even),tbody tr:nth-child(even) td:first-child{background:none}",
             "}",
             "");
 

@@ -6,7 +6,6 @@ import com.lowagie.text.Document;
 import com.lowagie.text.DocumentException;
 import com.lowagie.text.Element;
 import com.lowagie.text.ExceptionConverter;
-import com.lowagie.text.Font;
 import com.lowagie.text.Image;
 import com.lowagie.text.PageSize;
 import com.lowagie.text.Paragraph;
@@ -34,8 +33,8 @@ import java.util.function.Function;
 /**
  * Renders a {@link QcReport} as a paginated PDF with OpenPDF: a title page, one chapter per section (each
  * a PDF bookmark, starting on a new page), a running header (project, "QC appendix") and "page n of m"
- * footer, tables whose caption and header row repeat on every page they run over and whose rows are not split
- * mid-line, and charts from print-resolution PNGs scaled to the text width.
+ * footer, tables set by {@link PdfTableBlock} (no word broken, caption and header row repeated on every page
+ * they run over, rows not split mid-line), and charts from print-resolution PNGs scaled to the text width.
  */
 public final class PdfReport {
 
@@ -53,10 +52,6 @@ public final class PdfReport {
     static final float MARGIN_X = 54f;
     static final float MARGIN_TOP = 66f;
     static final float MARGIN_BOTTOM = 58f;
-    static final float TABLE_FONT = 7.8f;
-    /** Tables of many columns print smaller, so that their cells wrap less on a portrait page. */
-    static final float WIDE_TABLE_FONT = 6.6f;
-    static final int WIDE_TABLE_COLUMNS = 8;
     /** Height to width beyond which a figure is a page of panels rather than a chart. */
     static final float TALL_FIGURE = 0.75f;
 
@@ -206,63 +201,9 @@ public final class PdfReport {
     }
 
     private void addTable(Chapter ch, ReportTable t) {
-        PdfPTable table = new PdfMeasuredTable(t.columns().size());
         float available = doc.getPageSize().getWidth() - 2 * MARGIN_X;
-        float size = t.columns().size() >= WIDE_TABLE_COLUMNS ? WIDE_TABLE_FONT : TABLE_FONT;
-        float[] widths = PdfTableWidths.of(t, fonts.bold(), fonts.regular(), size, available);
-        float sum = 0;
-        for (float w : widths) {
-            sum += w;
-        }
-        // Narrow tables keep their natural width (left-aligned) rather than stretching across the page.
-        table.setTotalWidth(sum > available ? scaled(widths, available / sum) : widths);
-        table.setLockedWidth(true);
-        table.setHorizontalAlignment(Element.ALIGN_LEFT);
-        // The caption is a header row too: it never strands at a page foot and repeats over each page.
-        table.setHeaderRows(2);
-        // A row that does not fit moves whole to the next page; only a row taller than a page is split.
-        table.setSplitLate(true);
-        table.setSplitRows(true);
-        table.setSpacingBefore(10f);
-        PdfPCell caption = new PdfPCell(new Phrase(t.title(), fonts.bodyBold()));
-        caption.setColspan(t.columns().size());
-        caption.setBorder(Rectangle.NO_BORDER);
-        caption.setPaddingLeft(0f);
-        caption.setPaddingBottom(4f);
-        table.addCell(caption);
-        for (String c : t.columns()) {
-            PdfPCell cell = new PdfPCell(new Phrase(c, fonts.tableHead(size)));
-            cell.setBackgroundColor(new Color(234, 236, 240));
-            cell.setBorder(Rectangle.BOTTOM);
-            cell.setBorderWidthBottom(1f);
-            cell.setPadding(3f);
-            table.addCell(cell);
-        }
-        List<List<String>> rows = t.rows();
-        int shown = Math.min(rows.size(), TableLimit.SHOWN);
-        for (int r = 0; r < shown; r++) {
-            for (String v : rows.get(r)) {
-                PdfPCell cell = new PdfPCell(new Phrase(v, fonts.tableBody(size)));
-                cell.setBorder(Rectangle.BOTTOM);
-                cell.setBorderColor(new Color(205, 209, 215));
-                cell.setBorderWidthBottom(0.5f);
-                cell.setPadding(3f);
-                cell.setHorizontalAlignment(TableLimit.isNumeric(v) ? Element.ALIGN_RIGHT : Element.ALIGN_LEFT);
-                table.addCell(cell);
-            }
-        }
-        if (rows.isEmpty()) {
-            PdfPCell cell = new PdfPCell(new Phrase("No rows.", fonts.muted()));
-            cell.setColspan(t.columns().size());
-            cell.setBorder(Rectangle.NO_BORDER);
-            table.addCell(cell);
-        }
-        ch.add(table);
-        String note = TableLimit.note(t, files.table(t));
-        if (!note.isEmpty()) {
-            Paragraph p = new Paragraph(note, fonts.muted());
-            p.setSpacingAfter(6f);
-            ch.add(p);
+        for (Element e : PdfTableBlock.elements(t, fonts, available, TableLimit.note(t, files.table(t)))) {
+            ch.add(e);
         }
     }
 
@@ -290,14 +231,6 @@ public final class PdfReport {
         caption.setPaddingTop(3f);
         holder.addCell(caption);
         ch.add(holder);
-    }
-
-    private static float[] scaled(float[] w, float factor) {
-        float[] out = new float[w.length];
-        for (int i = 0; i < w.length; i++) {
-            out[i] = w[i] * factor;
-        }
-        return out;
     }
 
     private static Color levelColour(ReportBlock.Level level) {

@@ -1,53 +1,31 @@
 package org.cupel.report;
 
-import com.lowagie.text.pdf.BaseFont;
-
 /**
- * Column widths in points from the printed width of the text: never narrower than the longest word of
- * the header or a cell up to a cap (so IDs and headers do not break mid-word), otherwise as wide as the longest cell up to a cap; when
- * the total exceeds the text width, the room above each column's minimum is shrunk in proportion.
+ * Column widths in points, given each column's narrowest width (its widest unbreakable piece, from
+ * {@link PdfTableLayout}) and its full width (its widest line unwrapped). A column wants its full width up
+ * to a cap of {@value #CAP} pt, so that one long text column does not starve the others; when the wanted
+ * widths exceed the text width, the room above each column's minimum is shrunk in proportion, and never
+ * below it; when they leave room, it goes to the capped (long-text) columns, so that they wrap less.
  */
 final class PdfTableWidths {
-    private static final float PADDING = 8f;
     private static final float CAP = 170f;
-    /** Unbreakable tokens (IDs, file names) longer than this may wrap. */
-    private static final float WORD_CAP = 62f;
 
     private PdfTableWidths() {
     }
 
-    static float[] of(ReportTable t, BaseFont bold, BaseFont regular, float size, float available) {
-        int n = t.columns().size();
-        float[] min = new float[n];
+    /** The widths; their sum is at most {@code available} whenever the minimums fit in it. */
+    static float[] of(float[] min, float[] full, float available) {
+        int n = min.length;
         float[] want = new float[n];
-        float[] full = new float[n];
-        int rows = Math.min(t.rows().size(), TableLimit.SHOWN);
+        float[] whole = new float[n];
         for (int c = 0; c < n; c++) {
-            String header = t.columns().get(c);
-            for (String word : header.split("\\s+")) {
-                min[c] = Math.max(min[c], bold.getWidthPoint(word, size) + PADDING);
-            }
-            float longest = bold.getWidthPoint(header, size) + PADDING;
-            float word = 0;
-            for (int r = 0; r < rows; r++) {
-                String cell = t.rows().get(r).get(c);
-                longest = Math.max(longest, regular.getWidthPoint(cell, size) + PADDING);
-                for (String w : cell.split("\\s+")) {
-                    word = Math.max(word, regular.getWidthPoint(w, size));
-                }
-            }
-            min[c] = Math.max(min[c], Math.min(word, WORD_CAP) + PADDING);
-            full[c] = Math.max(min[c], longest);
-            want[c] = Math.max(min[c], Math.min(longest, CAP));
+            whole[c] = Math.max(min[c], full[c]);
+            want[c] = Math.max(min[c], Math.min(whole[c], CAP));
         }
-        float total = 0;
-        float minTotal = 0;
-        for (int c = 0; c < n; c++) {
-            total += want[c];
-            minTotal += min[c];
-        }
+        float total = PdfTableLayout.sum(want);
+        float minTotal = PdfTableLayout.sum(min);
         if (total <= available) {
-            return widenCapped(want, full, available - total);
+            return widenCapped(want, whole, available - total);
         }
         if (total <= minTotal) {
             return want;

@@ -21,6 +21,10 @@ public final class ScopeSection {
     public static ReportSection build(ProjectSummary s, String selection) {
         List<ReportBlock> blocks = new ArrayList<>();
         blocks.add(new ReportBlock.Paragraph(overview(s, selection)));
+        String units = unitsText(s);
+        if (!units.isEmpty()) {
+            blocks.add(new ReportBlock.Paragraph(units));
+        }
         blocks.add(new ReportBlock.Table(roles(s)));
         blocks.add(new ReportBlock.Table(batches(s)));
         blocks.add(new ReportBlock.Table(batchRoles(s)));
@@ -51,24 +55,42 @@ public final class ScopeSection {
                         .collect(Collectors.joining(", ")));
     }
 
-    private static ReportTable roles(ProjectSummary s) {
-        List<List<String>> rows = new ArrayList<>();
-        for (QcRole r : QcRole.values()) {
-            rows.add(List.of(r.label(), count(s.samplesByRole().get(r))));
+    /**
+     * The unit of each analyte and why, when any analyte's files disagree or a unit was set: values are
+     * shown in the unit word of the lab files (g/t when they say g/t), so a reader must learn where that
+     * does not hold for every file.
+     */
+    static String unitsText(ProjectSummary s) {
+        boolean explain = s.units().stream().anyMatch(u -> u.filesDisagree()
+                || u.basis() == org.cupel.units.UnitChoice.Basis.CONFIGURED);
+        if (!explain) {
+            return s.units().isEmpty() ? "" : "Units: every analyte is reported in the unit its lab files use.";
         }
-        rows.add(List.of("all samples", count(s.samples())));
-        return new ReportTable("scope-samples-by-role", "Samples by QC role", List.of("QC role", "Samples"), rows,
+        return "Units: " + s.units().stream().map(org.cupel.units.UnitChoice::sentence)
+                .collect(Collectors.joining(" "));
+    }
+
+    private static ReportTable roles(ProjectSummary s) {
+        List<List<Cell>> rows = new ArrayList<>();
+        for (QcRole r : QcRole.values()) {
+            rows.add(List.of(Cell.text(r.label()), Cell.count(s.samplesByRole().get(r))));
+        }
+        rows.add(List.of(Cell.text("all samples"), Cell.count(s.samples())));
+        return ReportTable.typed("scope-samples-by-role", "Samples by QC role", List.of(ReportColumn.text("QC role",
+                        "qc_role"), ReportColumn.count("Samples", "samples")), rows,
                 "Roles as given in the sample register; insertion rates against targets follow in their own table.");
     }
 
     private static ReportTable batches(ProjectSummary s) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (ProjectSummary.BatchCount b : s.batches()) {
-            rows.add(List.of(b.batch().id(), b.batch().lab(),
-                    b.batch().reported() == null ? "unknown" : b.batch().reported().toString(), b.batch().file(),
-                    count(b.samples())));
+            rows.add(List.of(Cell.text(b.batch().id()), Cell.text(b.batch().lab()),
+                    Cell.text(b.batch().reported() == null ? "unknown" : b.batch().reported().toString()),
+                    Cell.text(b.batch().file()), Cell.count(b.samples())));
         }
-        return new ReportTable("scope-batches", "Batches", List.of("Batch", "Lab", "Reported", "File", "Samples"),
+        return ReportTable.typed("scope-batches", "Batches", List.of(ReportColumn.text("Batch", "batch"),
+                        ReportColumn.text("Lab", "lab"), ReportColumn.text("Reported", "reported"),
+                        ReportColumn.text("File", "file"), ReportColumn.count("Samples", "samples")),
                 rows, "In the order the batches were read.");
     }
 
@@ -79,43 +101,46 @@ public final class ScopeSection {
                 shown.add(r);
             }
         }
-        List<String> cols = new ArrayList<>(List.of("Batch", "File"));
-        shown.forEach(r -> cols.add(capitalise(r.label())));
-        List<List<String>> rows = new ArrayList<>();
+        List<ReportColumn> cols = new ArrayList<>(List.of(ReportColumn.text("Batch", "batch"),
+                ReportColumn.text("File", "file")));
+        shown.forEach(r -> cols.add(ReportColumn.count(capitalise(r.label()), r.name().toLowerCase(java.util.Locale.ROOT))));
+        List<List<Cell>> rows = new ArrayList<>();
         for (ProjectSummary.BatchCount b : s.batches()) {
-            List<String> row = new ArrayList<>(List.of(b.batch().id(), b.batch().file()));
-            shown.forEach(r -> row.add(count(b.samplesByRole().get(r))));
+            List<Cell> row = new ArrayList<>(List.of(Cell.text(b.batch().id()), Cell.text(b.batch().file())));
+            shown.forEach(r -> row.add(Cell.count(b.samplesByRole().get(r))));
             rows.add(row);
         }
-        return new ReportTable("scope-batch-roles", "Samples per batch by QC role", cols, rows,
+        return ReportTable.typed("scope-batch-roles", "Samples per batch by QC role", cols, rows,
                 "Roles that occur in the project; a batch is one lab job as read from one file.");
     }
 
     private static ReportTable analytes(ProjectSummary s) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (ProjectSummary.AnalyteSummary a : s.analytes()) {
             if (a.reportedByMethod().isEmpty()) {
-                rows.add(List.of(a.name(), a.unit(), "none", "0", "", count(a.belowDetection()), count(a.missing())));
+                rows.add(List.of(Cell.text(a.name()), Cell.text(a.unit()), Cell.text("none"), Cell.count(0),
+                        Cell.text(""), Cell.count(a.belowDetection()), Cell.count(a.missing())));
             }
             boolean first = true;
             for (Map.Entry<String, Integer> m : a.reportedByMethod().entrySet()) {
                 List<Double> dl = a.detectionLimitsByMethod().getOrDefault(m.getKey(), List.of());
-                rows.add(List.of(a.name(), a.unit(), m.getKey().isEmpty() ? "not named" : m.getKey(),
-                        count(m.getValue()), dl.isEmpty() ? "not given"
-                                : dl.stream().map(Numbers::compact).collect(Collectors.joining(", ")),
-                        first ? count(a.belowDetection()) : "", first ? count(a.missing()) : ""));
+                rows.add(List.of(Cell.text(a.name()), Cell.text(a.unit()),
+                        Cell.text(m.getKey().isEmpty() ? "not named" : m.getKey()), Cell.count(m.getValue()),
+                        Cell.text(dl.isEmpty() ? "not given"
+                                : dl.stream().map(Numbers::compact).collect(Collectors.joining(", "))),
+                        first ? Cell.count(a.belowDetection()) : Cell.blank(),
+                        first ? Cell.count(a.missing()) : Cell.blank()));
                 first = false;
             }
         }
-        return new ReportTable("scope-analytes", "Analytes, methods and detection limits",
-                List.of("Analyte", "Unit", "Method", "Reported values", "Detection limits", "Below detection",
-                        "No value"),
+        return ReportTable.typed("scope-analytes", "Analytes, methods and detection limits",
+                List.of(ReportColumn.text("Analyte", "analyte"), ReportColumn.text("Unit", "unit"),
+                        ReportColumn.text("Method", "method"), ReportColumn.count("Reported values", "reported_values"),
+                        ReportColumn.text("Detection limits", "detection_limits"),
+                        ReportColumn.count("Below detection", "below_detection"),
+                        ReportColumn.count("No value", "no_value")),
                 rows, "Detection limits as reported by the lab with each value, in the analyte's unit. "
                         + "Below detection and no-value counts are per analyte, on its first line.");
-    }
-
-    private static String count(int n) {
-        return String.format(java.util.Locale.US, "%,d", n);
     }
 
     private static String capitalise(String s) {

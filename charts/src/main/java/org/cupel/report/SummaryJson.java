@@ -15,7 +15,7 @@ import java.util.TreeMap;
  * Writes {@code summary.json}: every section's headline figures, keyed by section ID, with keys sorted at
  * every level so that the same report gives the same bytes. The generation time is left out on purpose:
  * the file depends on the inputs only. JSON has no NaN or infinity, so a non-finite number is written as
- * the text {@code "not computed"} (the section's own text says why).
+ * {@code null}, as in every JSON Cupel writes ({@link JsonNumbers}); the section's own text says why.
  */
 public final class SummaryJson {
     /** Format version of summary.json; raised when a key changes meaning. */
@@ -25,6 +25,7 @@ public final class SummaryJson {
             .enable(SerializationFeature.INDENT_OUTPUT)
             .enable(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS)
             .enable(MapperFeature.SORT_PROPERTIES_ALPHABETICALLY)
+            .addModule(JsonNumbers.module())
             .build();
 
     private SummaryJson() {
@@ -40,7 +41,7 @@ public final class SummaryJson {
             Map<String, Object> sec = new TreeMap<>();
             sec.put("title", s.title());
             Map<String, Object> h = new TreeMap<>();
-            s.headlines().forEach((k, v) -> h.put(k, finite(v)));
+            h.putAll(s.headlines());
             sec.put("headlines", h);
             sections.put(s.id(), sec);
         }
@@ -50,12 +51,5 @@ public final class SummaryJson {
         root.put("selection", report.selection());
         root.put("sections", sections);
         return MAPPER.writeValueAsString(root);
-    }
-
-    private static Object finite(Object v) {
-        if (v instanceof Double d && !Double.isFinite(d) || v instanceof Float f && !Float.isFinite(f)) {
-            return "not computed";
-        }
-        return v;
     }
 }

@@ -16,6 +16,17 @@ final class ExternalTool {
         return Files.isExecutable(Path.of(path));
     }
 
+    /**
+     * A headless Chromium command line with a fresh profile under {@code dir}: {@code mode} is
+     * {@code --dump-dom} or {@code --screenshot=FILE}, the window {@code width} by 2000 pixels.
+     */
+    static List<String> chromium(String chromium, Path dir, int width, String mode, String url) throws IOException {
+        Path profile = Files.createTempDirectory(dir, "chromium-profile");
+        return List.of(chromium, "--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
+                "--disable-background-networking", "--disable-component-update", "--disable-sync",
+                "--user-data-dir=" + profile, "--window-size=" + width + ",2000", mode, url);
+    }
+
     static String run(List<String> command, Path workDir, long timeoutSeconds) throws IOException, InterruptedException {
         Path log = Files.createTempFile(workDir, "tool", ".out");
         Process p = new ProcessBuilder(command).directory(workDir.toFile()).redirectErrorStream(false)

@@ -146,9 +146,6 @@ class RenderedReportTest {
     }
 
     private List<String> chromium(String mode, String url) throws IOException {
-        Path profile = Files.createTempDirectory(dir, "chromium-profile");
-        return List.of(CHROMIUM, "--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
-                "--disable-background-networking", "--disable-component-update", "--disable-sync",
-                "--user-data-dir=" + profile, "--window-size=1280,2000", mode, url);
+        return ExternalTool.chromium(CHROMIUM, dir, 1280, mode, url);
     }
 }

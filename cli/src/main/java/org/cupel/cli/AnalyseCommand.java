@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import java.util.concurrent.Callable;
+import java.util.stream.Collectors;
 import org.cupel.project.InputException;
 import org.cupel.report.AppendixAnalyses;
 import org.cupel.report.GenerationTime;
@@ -16,6 +17,7 @@ import org.cupel.report.QcAppendix;
 import org.cupel.report.QcReport;
 import org.cupel.report.ReportSection;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -42,6 +44,9 @@ public final class AnalyseCommand implements Callable<Integer> {
 
     @Option(names = {"--json-summary", "--json"}, description = "Print the summary as JSON.")
     boolean json;
+
+    @Mixin
+    WideOption terminal;
 
     @Spec
     CommandSpec spec;
@@ -80,7 +85,7 @@ public final class AnalyseCommand implements Callable<Integer> {
         if (json) {
             Json.print(out, summary);
         } else {
-            print(out, summary);
+            print(terminal.text(out), summary);
         }
         return CupelCommand.OK;
     }
@@ -99,10 +104,56 @@ public final class AnalyseCommand implements Callable<Integer> {
         TextTable table = new TextTable("Section", "Headline", "Value");
         for (SectionHeadlines section : s.sections()) {
             for (Map.Entry<String, Object> e : section.headlines().entrySet()) {
-                table.row(section.title(), e.getKey(), String.valueOf(e.getValue()));
+                row(table, section.title(), e.getKey(), e.getValue());
             }
         }
         table.print(out);
         out.flush();
+    }
+
+    /**
+     * One row per headline; a group of headlines (samples by role) is one row per member, "samplesByRole.crm",
+     * and a list of entries (samples to re-submit) one row per entry, "resubmit.1"; never a map's own text.
+     */
+    private static void row(TextTable table, String section, String key, Object value) {
+        if (value instanceof Map<?, ?> group) {
+            group.forEach((k, v) -> row(table, section, key + "." + k, v));
+        } else if (value instanceof List<?> list && list.stream().anyMatch(Map.class::isInstance)) {
+            for (int i = 0; i < list.size(); i++) {
+                table.row(section, key + "." + (i + 1), entryText(list.get(i)));
+            }
+        } else {
+            table.row(section, key, headlineText(key, value));
+        }
+    }
+
+    /** An entry's members in their order, "VH0000502; OAL-00005; Au, Ag; IS; insufficient sample". */
+    private static String entryText(Object entry) {
+        if (!(entry instanceof Map<?, ?> members)) {
+            return String.valueOf(entry);
+        }
+        return members.values().stream()
+                .map(v -> v instanceof List<?> l ? l.stream().map(String::valueOf).collect(Collectors.joining(", "))
+                        : headlineText("", v))
+                .collect(Collectors.joining("; "));
+    }
+
+    /**
+     * A headline value as a reader writes it: a percentage headline (its key says "Percent" or "%") with its
+     * sign and at least one decimal, {@code 5.0 %}; a number not computable as "not computed"; other numbers
+     * in their shortest form.
+     */
+    static String headlineText(String key, Object value) {
+        if (value instanceof Double || value instanceof Float) {
+            double v = ((Number) value).doubleValue();
+            if (!Double.isFinite(v)) {
+                return "not computed";
+            }
+            boolean percent = key.contains("%") || key.toLowerCase(java.util.Locale.ROOT).contains("percent");
+            String text = percent && v == Math.rint(v) ? String.format(java.util.Locale.ROOT, "%.1f", v)
+                    : org.cupel.assay.Numbers.compact(v);
+            return percent ? text + " %" : text;
+        }
+        return String.valueOf(value);
     }
 }

@@ -26,6 +26,7 @@ import org.cupel.report.CsvTables;
 import org.cupel.report.control.InsertionRateSection;
 import org.cupel.report.control.VerdictSection;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -49,6 +50,9 @@ final class BatchesCommand implements Callable<Integer> {
 
     @Option(names = "--fail-on-qc", description = "Exit with status 1 when any batch fails.")
     boolean failOnQc;
+
+    @Mixin
+    WideOption terminal;
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -78,7 +82,7 @@ final class BatchesCommand implements Callable<Integer> {
             doc.put("resubmit", review.resubmit().entries());
             Json.print(out, doc);
         } else {
-            print(out, project, review);
+            print(terminal.text(out), project, review);
         }
         return failOnQc && review.anyBatchFailed() ? CupelCommand.QC_FAILED : CupelCommand.OK;
     }
@@ -184,7 +188,7 @@ final class BatchesCommand implements Callable<Integer> {
             List<String> low = new ArrayList<>();
             for (int i = 0; i < b.rates().size(); i++) {
                 InsertionRate r = b.rates().get(i);
-                cells.add(r.count() + " (" + (Double.isNaN(r.rate()) ? "-" : percent(r.rate())) + ")");
+                cells.add(r.count() + " (" + (Double.isNaN(r.rate()) ? "-" : InsertionRateSection.percent(r.rate())) + ")");
                 if (r.belowTarget()) {
                     low.add(SHORT.get(i));
                 }
@@ -195,10 +199,6 @@ final class BatchesCommand implements Callable<Integer> {
         out.println("Insertion rates: count (per routine sample); targets "
                 + InsertionRateSection.targets(review.insertion()));
         t.print(out);
-    }
-
-    private static String percent(double f) {
-        return org.cupel.assay.Numbers.significant(100 * f, 2) + "%";
     }
 
     private static String label(Verdict v) {

@@ -12,6 +12,7 @@ import org.cupel.control.BlankSettings;
 import org.cupel.control.Verdict;
 import org.cupel.project.DataIssue;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -42,6 +43,9 @@ final class BlanksCommand implements Callable<Integer> {
     @Option(names = "--fail-on-qc", description = "Exit with status 1 when any blank fails.")
     boolean failOnQc;
 
+    @Mixin
+    WideOption terminal;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -69,7 +73,7 @@ final class BlanksCommand implements Callable<Integer> {
             doc.put("issues", blanks.issues());
             Json.print(out, doc);
         } else {
-            BlankTables.print(out, report);
+            BlankTables.print(terminal.text(out), report);
         }
         boolean failed = report.results().stream().anyMatch(r -> r.verdict().verdict() == Verdict.FAIL);
         return failOnQc && failed ? CupelCommand.QC_FAILED : CupelCommand.OK;

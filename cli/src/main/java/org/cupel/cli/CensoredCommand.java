@@ -16,6 +16,7 @@ import org.cupel.charts.PngWriter;
 import org.cupel.charts.censored.CensoredProbabilityPlot;
 import org.cupel.project.DataIssue;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -49,6 +50,9 @@ public final class CensoredCommand implements Callable<Integer> {
                     + "limit (default, as USEPA 2009) or at the lowest detect.")
     KmLowest kmLowest;
 
+    @Mixin
+    WideOption terminal;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -68,6 +72,7 @@ public final class CensoredCommand implements Callable<Integer> {
             Json.print(out, CensoredJson.analysis(col.file(), col.header(), kmLowest.name(), a));
             return CupelCommand.OK;
         }
+        out = terminal.text(out);
         printHeader(out, col, a.sample());
         TextTable t = new TextTable("Method", "n", "Censored", "Mean", "SE", "95% CI", "SD", "Median", "P10", "P90");
         for (CensoredSummary s : a.summaries()) {

@@ -16,6 +16,7 @@ import org.cupel.project.InputException;
 import org.cupel.project.Project;
 import org.cupel.settings.ProjectSettings;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -39,11 +40,15 @@ public final class CheckCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print the result as JSON (docs/check.md) instead of tables.")
     boolean json;
 
+    @Mixin
+    WideOption terminal;
+
     @Spec
     CommandSpec spec;
 
     /** The JSON document of {@code cupel check --json}. */
-    record CheckReport(ProjectSummary summary, boolean usable, List<DataIssue> exceptions) {
+    record CheckReport(ProjectSummary summary, boolean usable, List<org.cupel.units.UnitChoice> units,
+                       List<DataIssue> exceptions) {
     }
 
     @Override
@@ -53,9 +58,11 @@ public final class CheckCommand implements Callable<Integer> {
         ProjectSummary s = ProjectSummary.of(p);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
-            Json.print(out, new CheckReport(s, !p.exceptions().hasFatal(), p.exceptions().all()));
+            Json.print(out, new CheckReport(s, !p.exceptions().hasFatal(), List.copyOf(p.units().values()),
+                    p.exceptions().all()));
         } else {
-            printTables(out, s, p.exceptions().all());
+            printTables(terminal.text(out), s, p.exceptions().all());
+            printUnits(terminal.text(out), p);
         }
         return p.exceptions().hasFatal() ? CupelCommand.INPUT_ERROR : CupelCommand.OK;
     }
@@ -125,6 +132,14 @@ public final class CheckCommand implements Callable<Integer> {
                     problem, i.fix());
         }
         t.print(out);
+    }
+
+    /** Why each analyte is shown in its unit, where the lab files disagree or cupel.yaml sets it. */
+    private static void printUnits(PrintWriter out, Project p) {
+        p.units().values().stream().filter(u -> u.filesDisagree()
+                        || u.basis() == org.cupel.units.UnitChoice.Basis.CONFIGURED)
+                .forEach(u -> out.println("Units: " + u.sentence()));
+        out.flush();
     }
 
     private static String counts(Map<String, Integer> m) {

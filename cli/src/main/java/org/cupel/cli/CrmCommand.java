@@ -23,6 +23,7 @@ import org.cupel.ingest.CatalogReader;
 import org.cupel.project.InputException;
 import org.cupel.project.Project;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -58,6 +59,9 @@ public final class CrmCommand implements Callable<Integer> {
     @Option(names = "--fail-on-qc", description = "Exit with code 1 when any CRM result fails.")
     boolean failOnQc;
 
+    @Mixin
+    WideOption terminal;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -72,7 +76,7 @@ public final class CrmCommand implements Callable<Integer> {
         if (json) {
             Json.print(out, CrmJson.of(p.name(), review));
         } else {
-            print(out, p, review);
+            print(terminal.text(out), p, review);
         }
         return failOnQc && review.failures() > 0 ? CupelCommand.QC_FAILED : CupelCommand.OK;
     }
@@ -125,8 +129,9 @@ public final class CrmCommand implements Callable<Integer> {
                 "Warn", "Swap", "Drift");
         for (SeriesReview s : r.series()) {
             var b = s.bias();
-            t.row(s.crm(), s.analyte().label(), s.n(), sig(s.limits().certified()), sig(s.limits().sd()),
-                    sig(b.meanResult()), pct(b.meanBiasPct()),
+            // Certified value and SD as the certificate writes them; the mean on the limits' scale.
+            t.row(s.crm(), s.analyte().label(), s.n(), s.limits().certifiedText(), s.limits().sdText(),
+                    b.n() > 0 ? s.limits().limitText(b.meanResult()) : "–", pct(b.meanBiasPct()),
                     Double.isFinite(b.meanLowPct()) ? pct(b.meanLowPct()) + " to " + pct(b.meanHighPct()) : "–",
                     s.failures(), s.warnings(), s.swaps(), s.drift().drifting() ? "yes" : "no");
         }

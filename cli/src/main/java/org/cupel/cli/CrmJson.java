@@ -65,6 +65,11 @@ final class CrmJson {
         m.put("unit", s.analyte().unit().symbol());
         m.put("certified", num(s.limits().certified()));
         m.put("sd", num(s.limits().sd()));
+        // The decimals the catalog writes them with (1.236: 3), null when not known, and the limits as shown.
+        m.put("certifiedDecimals", s.limits().valueDecimals() < 0 ? null : s.limits().valueDecimals());
+        m.put("sdDecimals", s.limits().sdDecimals() < 0 ? null : s.limits().sdDecimals());
+        m.put("certifiedText", s.limits().certifiedText());
+        m.put("sdText", s.limits().sdText());
         m.put("n", s.n());
         m.put("failures", s.failures());
         m.put("warnings", s.warnings());

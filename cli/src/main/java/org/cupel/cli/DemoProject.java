@@ -31,7 +31,7 @@ final class DemoProject {
             Project p = in.project();
             // The generated folder has a temporary name; the demo's own name is the better title.
             return new ReportInputs(new Project(p.config().projectName(DemoGenerator.PROJECT), null, p.config(),
-                    p.samples(), p.analytes(), p.catalog(), p.exceptions(), p.files()), in.testwork());
+                    p.samples(), p.analytes(), p.catalog(), p.exceptions(), p.files(), p.units()), in.testwork());
         } finally {
             try (Stream<Path> walk = Files.walk(tmp)) {
                 for (Path p : (Iterable<Path>) walk.sorted(Comparator.reverseOrder())::iterator) {

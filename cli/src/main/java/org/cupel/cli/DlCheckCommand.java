@@ -5,6 +5,7 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.cupel.censored.BlankLimits;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -27,6 +28,9 @@ public final class DlCheckCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print JSON (see docs/json-censored.md) instead of a table.")
     boolean json;
 
+    @Mixin
+    WideOption terminal;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -39,6 +43,7 @@ public final class DlCheckCommand implements Callable<Integer> {
             Json.print(out, CensoredJson.blanks(col.file(), col.header(), b));
             return CupelCommand.OK;
         }
+        out = terminal.text(out);
         out.printf(Locale.US, "%s, column %s: %s%n", col.file(), col.header(), b.accounting());
         if (!b.sd().isAvailable()) {
             out.println("No SD: " + b.sd().note());

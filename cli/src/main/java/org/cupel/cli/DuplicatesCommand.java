@@ -32,6 +32,7 @@ import org.cupel.duplicates.RuleOutcome;
 import org.cupel.project.DataIssue;
 import org.cupel.project.InputException;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -78,6 +79,9 @@ public final class DuplicatesCommand implements Callable<Integer> {
 
     @Option(names = "--fail-on-qc", description = "Exit with code 1 when a set or a batch fails the acceptance rule.")
     boolean failOnQc;
+
+    @Mixin
+    WideOption terminal;
 
     @Spec
     CommandSpec spec;
@@ -127,8 +131,9 @@ public final class DuplicatesCommand implements Callable<Integer> {
             doc.put("inputIssues", issues.stream().map(DataIssue::message).toList());
             Json.print(out, doc);
         } else {
+            PrintWriter text = terminal.text(out);
             for (DuplicateReport r : reports) {
-                print(out, r);
+                print(text, r);
             }
         }
         if (chartDir != null) {

@@ -24,6 +24,7 @@ import org.cupel.report.ReportTable;
 import org.cupel.report.recovery.TestworkSection;
 import org.cupel.settings.ProjectSettings;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -55,6 +56,9 @@ public final class RecoveryCommand implements Callable<Integer> {
             + "replicate plan should detect (default: recovery.powerDifference, else 1.0).")
     Double powerDelta;
 
+    @Mixin
+    WideOption terminal;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -82,7 +86,7 @@ public final class RecoveryCommand implements Callable<Integer> {
         if (json) {
             Json.print(out, jsonView(result));
         } else {
-            printText(out, result);
+            printText(terminal.text(out), result);
         }
         return CupelCommand.OK;
     }

@@ -70,7 +70,8 @@ class BatchesCommandTest {
         // The drifting CRM of the demo fails late batches too: their samples are listed as well.
         assertTrue(entries.size() > byBlank);
         List<String> lines = Files.readAllLines(csv);
-        assertEquals("Sample ID,Batch,Position,Analyte,Triggered by,Reason", lines.get(0));
+        assertEquals("sample_id,batch,position,analyte,triggered_by,reason", lines.get(0),
+                "the report's CSV header style (docs/report.md, CSV tables)");
         assertEquals(entries.size() + 1, lines.size());
     }
 

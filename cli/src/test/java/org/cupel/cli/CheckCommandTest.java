@@ -47,6 +47,25 @@ class CheckCommandTest {
         assertFalse(first.get("fix").asText().isEmpty());
     }
 
+    /**
+     * The fixture's cupel.yaml sets Au: g/t. Hand-counted cells with a value or a code: batch-A writes Au in
+     * ppm, 14 FA-AAS cells (MX1001-1005, 1007, 1008, 1011-1015, MX1003 R, MX2001; the blank cell, the two
+     * unreadable ones and the rows left out do not count) and 1 FA-GRAV cell (MX1004): 15; batch-B writes g/t
+     * for MX1016, MX1019 (N/A), MX1005 and MX1001: 4. Ag is ppm in both files.
+     */
+    @Test
+    void saysWhichUnitEachAnalyteIsShownInAndWhy() throws IOException {
+        // --wide: the sentence is matched whole, unwrapped
+        Run text = run("check", MESSY.toString(), "--wide");
+        assertTrue(text.out.contains("Units: Au is reported in g/t (ingest.units in cupel.yaml): the lab files write "
+                + "1 file (15 results) ppm, 1 file (4 results) g/t"), text.out);
+        assertFalse(text.out.contains("Units: Ag"), "Ag: one unit, nothing to explain");
+        JsonNode units = new ObjectMapper().readTree(run("check", MESSY.toString(), "--json").out).get("units");
+        assertEquals("CONFIGURED", units.get(0).get("basis").asText());
+        assertEquals(4, units.get(0).get("results").get("G_PER_T").asInt());
+        assertEquals("ONLY_UNIT", units.get(1).get("basis").asText());
+    }
+
     @Test
     void aFileThatCannotBeUsedGivesExitCode2AndIsListed() throws IOException {
         Files.createDirectories(dir.resolve("lab"));

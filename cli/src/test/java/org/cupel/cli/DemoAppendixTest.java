@@ -147,4 +147,64 @@ class DemoAppendixTest {
         assertEquals(planted.length + 1, table("resubmit-list.csv").size(), "header and the five planted samples");
         assertTrue(json().contains("\"summary\" : {"), "summary.json has the summary's headlines");
     }
+
+    // Numbers as the trade writes them (issue 17).
+
+    /**
+     * The demo catalog certifies VHC-23 Au at 1.236 g/t with SD 0.047 (crm-catalog.csv); hand-worked limits:
+     * 1.236 ± 2 × 0.047 = 1.142 to 1.330, ± 3 × 0.047 = 1.095 to 1.377, all exact at three decimals. Au is
+     * reported in ppm (most demo files say ppm), equal to g/t.
+     */
+    @Test
+    void certifiedValuesAndLimitsAreAtTheCertificatesPrecision() throws IOException {
+        assertEquals("crm,analyte,unit,certified,certificate_sd,warning_limit_low,warning_limit_high,"
+                + "failure_limit_low,failure_limit_high", table("crm-certificates.csv").get(0));
+        assertEquals(List.of("VHC-23,Au,ppm,1.236,0.047,1.142,1.330,1.095,1.377"), rows("crm-certificates.csv",
+                "VHC-23,Au,"));
+        // Ag of VHC-23: 11.4 ± 0.6, one decimal throughout.
+        assertEquals(List.of("VHC-23,Ag,ppm,11.4,0.6,10.2,12.6,9.6,13.2"), rows("crm-certificates.csv",
+                "VHC-23,Ag,"));
+        assertTrue(rows("crm-summary.csv", "VHC-23,Au (ppm),1.236,31,").size() == 1,
+                String.join("\n", table("crm-summary.csv")));
+    }
+
+    /** lab/OAL-00008.csv holds "VH0000979,0.070,3.3": the flagged pair shows 0.070, not 0.07. */
+    @Test
+    void labValuesKeepTheDecimalsTheLabWrote() throws IOException {
+        List<String> pair = rows("duplicates-outliers-Au.csv", ",VH0000979,VH0000980,");
+        assertEquals(1, pair.size(), String.join("\n", table("duplicates-outliers-Au.csv")));
+        assertTrue(pair.get(0).contains(",0.070,,0.317,"), pair.get(0));
+    }
+
+    @Test
+    void csvTablesHoldOneNumberPerCell() throws IOException {
+        String header = table("duplicates-precision-Au.csv").get(0);
+        assertTrue(header.contains(",rms_cv_percent,rms_cv_lower_percent,rms_cv_upper_percent,rms_cv_note,"), header);
+        // Pulp duplicates' RMS CV, shown as 9.24 % (6.79 % to 11.72 %) on the page.
+        List<String> pulp = rows("duplicates-precision-Au.csv", "pulp duplicate,");
+        assertTrue(pulp.get(0).contains(",9.24,6.79,11.72,"), pulp.get(0));
+        for (String name : List.of("crm-summary.csv", "duplicates-bias-Au.csv", "recovery-comparisons.csv")) {
+            for (String line : table(name)) {
+                assertTrue(!line.contains("'-") && !line.contains("%,") && !line.endsWith("%"),
+                        name + ": a number written as text: " + line);
+            }
+        }
+    }
+
+    @Test
+    void summaryJsonHasPercentagesAndNoMapText() throws IOException {
+        String json = json();
+        // 125 CRMs per 2,499 routine samples = 5.0 %.
+        assertTrue(json.contains("\"insertionRatePercent.crm\" : 5.0"), json);
+        assertTrue(!JsonOutputsTest.MAP_TEXT.matcher(json).find(), "a map's text in summary.json");
+        assertTrue(!json.contains("NaN") && !json.contains("Infinity"));
+    }
+
+    @Test
+    void theScopeSaysWhichUnitEachAnalyteIsShownIn() throws IOException {
+        String html = Files.readString(qc.resolve("index.html"));
+        assertTrue(html.contains("Units: Au is reported in ppm, the unit most results are written in"), html.length()
+                + " characters");
+        assertTrue(html.contains("10 files (775 results) g/t"));
+    }
 }

@@ -46,7 +46,8 @@ class DuplicatesCommandTest {
 
     @Test
     void printsTheReadableTablesForAPairsFile() throws Exception {
-        Run r = run("duplicates", pairsCsv().toString(), "--analyte", "Au", "--unit", "g/t");
+        // --wide: the checks read whole lines.
+        Run r = run("duplicates", pairsCsv().toString(), "--analyte", "Au", "--unit", "g/t", "--wide");
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("Au (g/t): duplicate precision"), r.out());
         assertTrue(r.out().contains("pulp duplicate"), r.out());
@@ -100,7 +101,7 @@ class DuplicatesCommandTest {
     void runsOnTheDemoProjectAndFlagsThePoorPulpBatch() throws Exception {
         Path demo = dir.resolve("demo");
         assertEquals(0, run("demo", demo.toString()).code());
-        Run r = run("duplicates", demo.toString(), "--analyte", "Au", "--type", "pulp");
+        Run r = run("duplicates", demo.toString(), "--analyte", "Au", "--type", "pulp", "--wide");
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("less precise than the set"), r.out());
         assertEquals(2, run("duplicates", demo.toString(), "--analyte", "Zn").code());

@@ -43,10 +43,17 @@ class DuplicatesFlaggedPairsCommandTest {
         assertFalse(out.contains("VH0001934 / VH0001936 [OAL-00016]: 0.005 vs 0.063, HARD"), out);
         assertTrue(out.contains("VH0000231 / VH0000232 [OAL-00002]: 0.027 vs 0.063, |d| 0.036"), out);
         assertTrue(out.contains("below the relative-measure threshold (mean < 10× DL, not judged by HARD)"), out);
+        // OAL-00008.csv reports "VH0000979,0.070": as the lab wrote it (before issue 17: "0.07 vs 0.317").
+        assertTrue(out.contains("VH0000979 / VH0000980 [OAL-00008]: 0.070 vs 0.317"), out);
 
         JsonNode doc = new ObjectMapper().readTree(run("duplicates", demo.toString(), "--analyte", "Au", "--json")[0]);
         JsonNode field = doc.get("analytes").get(0).get("sets").get(0);
         assertEquals("FIELD_DUPLICATE", field.get("type").asText());
+        boolean asWritten = false;
+        for (JsonNode o : field.get("outliers")) {
+            asWritten |= o.get("originalId").asText().equals("VH0000979") && o.get("original").asText().equals("0.070");
+        }
+        assertTrue(asWritten, "the JSON text of the value as the lab wrote it");
         for (JsonNode o : field.get("outliers")) {
             assertFalse(o.get("id").asText().equals("VH0001936"), "ranked by HARD: " + o);
         }

@@ -21,7 +21,7 @@ class ConfigMistakesCliTest {
 
     /** Every command that reads a project folder, by its arguments after the folder. */
     private static final Map<String, List<String>> COMMANDS = Map.of(
-            "check", List.of(), "analyse", List.of(), "crm", List.of(), "batches", List.of(),
+            "check", List.of("--wide"), "analyse", List.of(), "crm", List.of(), "batches", List.of(),
             "duplicates", List.of(), "recovery", List.of(), "report", List.of("--out", "QC", "--quiet"));
 
     private static Cli run(String command, Path project) {

@@ -94,7 +94,7 @@ class InputReadingCliTest {
     @Test
     void aPlainTableListsARaggedRow() throws IOException {
         Path f = write("assays.csv", "Sample ID,Au_ppm\nS1,0.5\nS2,1,234\nS3,0.7\nS4,<0.01\n");
-        Run r = run("censored", f.toString(), "--column", "Au_ppm");
+        Run r = run("censored", f.toString(), "--column", "Au_ppm", "--wide");
         assertEquals(CupelCommand.OK, r.code, r.err);
         assertTrue(r.out.contains("assays.csv:3: the row has 3 cells, more than the 2 columns"), r.out);
     }
@@ -232,7 +232,8 @@ class InputReadingCliTest {
         Path system = Files.writeString(outside.resolve("passwd"), "root:x:0:0:root:/root:/bin/bash\n");
         Files.createSymbolicLink(dir.resolve("lab/gone.csv"), dir.resolve("lab/missing.csv"));
         Files.createSymbolicLink(dir.resolve("lab/system.csv"), system);
-        Run check = run("check", dir.toString());
+        // --wide: the register's columns take the width of the (temporary) paths it shows.
+        Run check = run("check", dir.toString(), "--wide");
         assertEquals(CupelCommand.INPUT_ERROR, check.code);
         assertTrue(check.out.contains("lab/gone.csv") && check.out.contains("a link to a file that does not exist"),
                 check.out);

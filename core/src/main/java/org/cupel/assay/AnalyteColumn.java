@@ -25,6 +25,8 @@ public final class AnalyteColumn {
     private final double[] values;
     private final double[] limits;
     private final byte[] missing;
+    /** The decimals each reported value was written with, a byte a row ({@link Numbers#UNKNOWN_DECIMALS}: not known). */
+    private final byte[] decimals;
     private final short[] methodIndex;
     private final List<String> methods;
     private final Map<Integer, List<MethodValue>> candidatesByRow;
@@ -33,13 +35,15 @@ public final class AnalyteColumn {
     private final Map<Integer, String> missingCodes;
 
     private AnalyteColumn(Analyte analyte, int size, List<String> methods, byte[] qualifiers, double[] values,
-                          double[] limits, byte[] missing, short[] methodIndex, Map<Integer, String> missingCodes) {
+                          double[] limits, byte[] missing, byte[] decimals, short[] methodIndex,
+                          Map<Integer, String> missingCodes) {
         this.analyte = analyte;
         this.size = size;
         this.qualifiers = qualifiers;
         this.values = values;
         this.limits = limits;
         this.missing = missing;
+        this.decimals = decimals;
         this.methodIndex = methodIndex;
         this.methods = methods;
         this.candidatesByRow = new HashMap<>();
@@ -56,12 +60,19 @@ public final class AnalyteColumn {
     }
 
     public AssayValue value(int row) {
-        return new AssayValue(QUALIFIERS[qualifiers[row]], values[row], limits[row], REASONS[missing[row]]);
+        return new AssayValue(QUALIFIERS[qualifiers[row]], values[row], limits[row], REASONS[missing[row]],
+                decimals[row]);
     }
 
     /** {@link #value(int)} with {@code limit} as its limit, made without the intermediate value. */
     public AssayValue valueWithLimit(int row, double limit) {
-        return new AssayValue(QUALIFIERS[qualifiers[row]], values[row], limit, REASONS[missing[row]]);
+        return new AssayValue(QUALIFIERS[qualifiers[row]], values[row], limit, REASONS[missing[row]],
+                decimals[row]);
+    }
+
+    /** How many decimals the lab wrote for the reported value, or {@link Numbers#UNKNOWN_DECIMALS}. */
+    public int decimals(int row) {
+        return decimals[row];
     }
 
     public Qualifier qualifier(int row) {
@@ -146,7 +157,7 @@ public final class AnalyteColumn {
     public static final class Builder {
         private static final byte ABSENT = -1;
         private static final int NO_SOURCE = -1;
-        private final Analyte analyte;
+        private Analyte analyte;
         private final List<String> methods = new ArrayList<>();
         private final Map<String, Short> methodIdx = new HashMap<>();
         private final Map<Integer, List<MethodValue>> several = new HashMap<>();
@@ -154,6 +165,7 @@ public final class AnalyteColumn {
         private double[] values = new double[0];
         private double[] limits = new double[0];
         private byte[] missing = new byte[0];
+        private byte[] decimals = new byte[0];
         private short[] methodOf = new short[0];
         /** Source of each first result as a file number and line; a column other than 0 is rare and kept apart. */
         private int[] sourceFile = new int[0];
@@ -183,19 +195,26 @@ public final class AnalyteColumn {
         public void add(int row, MethodValue result) {
             AssayValue v = result.value();
             SourceLocation where = result.source();
-            add(row, v.qualifier(), v.value(), v.limit(), v.missingReason(), result.method(),
+            add(row, v.qualifier(), v.value(), v.limit(), v.missingReason(), v.decimals(), result.method(),
                     where == null ? null : where.file(), where == null ? 0 : where.line(),
                     where == null ? 0 : where.column());
+        }
+
+        /** {@link #add(int, Qualifier, double, double, MissingReason, int, String, String, long, int)} with the written decimals not known. */
+        public void add(int row, Qualifier qualifier, double value, double limit, MissingReason reason, String method,
+                        String file, long line, int column) {
+            add(row, qualifier, value, limit, reason, Numbers.UNKNOWN_DECIMALS, method, file, line, column);
         }
 
         /**
          * {@link #add(int, MethodValue)} from the parts of the value and its source, without objects for a
          * row's first result.
          *
+         * @param written the decimals the lab wrote the value with (0 to 127), or {@link Numbers#UNKNOWN_DECIMALS}
          * @param file the source file, or null when the result has no source
          */
-        public void add(int row, Qualifier qualifier, double value, double limit, MissingReason reason, String method,
-                        String file, long line, int column) {
+        public void add(int row, Qualifier qualifier, double value, double limit, MissingReason reason, int written,
+                        String method, String file, long line, int column) {
             if (built) {
                 throw new IllegalStateException("the column of " + analyte.name() + " has already been built");
             }
@@ -205,6 +224,7 @@ public final class AnalyteColumn {
                 values[row] = value;
                 limits[row] = limit;
                 missing[row] = (byte) reason.ordinal();
+                decimals[row] = asByte(written);
                 methodOf[row] = methodIndex(method == null ? "" : method);
                 if (file == null) {
                     sourceFile[row] = NO_SOURCE;
@@ -224,7 +244,7 @@ public final class AnalyteColumn {
                 all.add(first(row));
                 several.put(row, all);
             }
-            all.add(new MethodValue(method, new AssayValue(qualifier, value, limit, reason),
+            all.add(new MethodValue(method, new AssayValue(qualifier, value, limit, reason, written),
                     file == null ? null : new SourceLocation(file, line, column)));
         }
 
@@ -236,6 +256,37 @@ public final class AnalyteColumn {
             if (!several.containsKey(row) && qualifiers[row] == (byte) Qualifier.MISSING.ordinal()) {
                 missingCodes.put(row, code);
             }
+        }
+
+        /**
+         * Expresses every result collected so far in {@code target} instead of the builder's unit: values and
+         * limits are multiplied by the conversion factor and the written decimals move with it (see
+         * {@link Numbers#decimalsAfterScaling}). Between units of equal factor (ppm, g/t) only the label changes.
+         */
+        public void convertTo(org.cupel.units.GradeUnit target) {
+            if (built) {
+                throw new IllegalStateException("the column of " + analyte.name() + " has already been built");
+            }
+            double factor = analyte.unit().convert(1.0, target);
+            analyte = new Analyte(analyte.name(), target);
+            if (factor == 1.0) {
+                return;
+            }
+            byte missingQualifier = (byte) Qualifier.MISSING.ordinal();
+            for (int row = 0; row < qualifiers.length; row++) {
+                if (qualifiers[row] != ABSENT && qualifiers[row] != missingQualifier) {
+                    values[row] *= factor;
+                    limits[row] *= factor;
+                    decimals[row] = asByte(Numbers.decimalsAfterScaling(decimals[row], factor));
+                }
+            }
+            several.replaceAll((row, all) -> all.stream().map(m -> new MethodValue(m.method(),
+                    m.value().scaled(factor), m.source())).collect(java.util.stream.Collectors.toList()));
+        }
+
+        /** Written decimals beyond a byte are no lab's precision: kept as not known. */
+        private static byte asByte(int written) {
+            return written > Byte.MAX_VALUE ? Numbers.UNKNOWN_DECIMALS : (byte) written;
         }
 
         /** Methods are numbered as first results bring them; one column's results mostly share one. */
@@ -266,7 +317,7 @@ public final class AnalyteColumn {
             SourceLocation where = sourceFile[row] == NO_SOURCE ? null : new SourceLocation(files.get(sourceFile[row]),
                     sourceLine[row], sourceColumn.getOrDefault(row, 0));
             return new MethodValue(methods.get(methodOf[row]), new AssayValue(QUALIFIERS[qualifiers[row]],
-                    values[row], limits[row], REASONS[missing[row]]), where);
+                    values[row], limits[row], REASONS[missing[row]], decimals[row]), where);
         }
 
         private void ensureCapacity(int size) {
@@ -280,6 +331,7 @@ public final class AnalyteColumn {
             values = Arrays.copyOf(values, capacity);
             limits = Arrays.copyOf(limits, capacity);
             missing = Arrays.copyOf(missing, capacity);
+            decimals = Arrays.copyOf(decimals, capacity);
             methodOf = Arrays.copyOf(methodOf, capacity);
             sourceFile = Arrays.copyOf(sourceFile, capacity);
             sourceLine = Arrays.copyOf(sourceLine, capacity);
@@ -304,12 +356,13 @@ public final class AnalyteColumn {
                     values[row] = Double.NaN;
                     limits[row] = Double.NaN;
                     missing[row] = notAnalysed;
+                    decimals[row] = Numbers.UNKNOWN_DECIMALS;
                     methodOf[row] = 0;
                 }
             }
             missingCodes.keySet().removeIf(row -> row >= rowCount);
             AnalyteColumn col = new AnalyteColumn(analyte, rowCount, methods, qualifiers, values, limits, missing,
-                    methodOf, missingCodes);
+                    decimals, methodOf, missingCodes);
             int[] rows = several.keySet().stream().mapToInt(Integer::intValue).filter(r -> r < rowCount).sorted()
                     .toArray();
             for (int row : rows) {
@@ -341,6 +394,7 @@ public final class AnalyteColumn {
             col.values[row] = v.value();
             col.limits[row] = v.limit();
             col.missing[row] = (byte) v.missingReason().ordinal();
+            col.decimals[row] = asByte(v.decimals());
             col.methodIndex[row] = methodIdx.computeIfAbsent(chosen.method(), k -> {
                 methods.add(k);
                 return (short) (methods.size() - 1);

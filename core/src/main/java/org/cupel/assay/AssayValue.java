@@ -10,8 +10,12 @@ package org.cupel.assay;
  * @param limit the detection limit (for detected and below-detection values) or the upper limit (for
  *     above-limit values) when known, else {@code NaN}
  * @param missingReason why there is no value; {@link MissingReason#NONE} unless missing
+ * @param decimals how many decimals the lab wrote for {@code value} ({@code 0.070}: 3), so that the value
+ *     is shown as written; {@link Numbers#UNKNOWN_DECIMALS} when not known (a computed value, a code, a
+ *     number in exponent notation, a conversion by a factor other than a power of ten)
  */
-public record AssayValue(Qualifier qualifier, double value, double limit, MissingReason missingReason) {
+public record AssayValue(Qualifier qualifier, double value, double limit, MissingReason missingReason,
+                         int decimals) {
 
     public AssayValue {
         if (qualifier == null || missingReason == null) {
@@ -19,13 +23,27 @@ public record AssayValue(Qualifier qualifier, double value, double limit, Missin
         }
         if (qualifier == Qualifier.MISSING) {
             value = Double.NaN;
+            decimals = Numbers.UNKNOWN_DECIMALS;
         } else if (!Double.isFinite(value)) {
             throw new IllegalArgumentException("a non-missing assay value must be finite: " + value);
         }
+        if (decimals < Numbers.UNKNOWN_DECIMALS) {
+            throw new IllegalArgumentException("decimals must be 0 or more, or unknown (-1): " + decimals);
+        }
+    }
+
+    /** A value whose written decimals are not known. */
+    public AssayValue(Qualifier qualifier, double value, double limit, MissingReason missingReason) {
+        this(qualifier, value, limit, missingReason, Numbers.UNKNOWN_DECIMALS);
     }
 
     public static AssayValue detected(double value, double detectionLimit) {
         return new AssayValue(Qualifier.DETECTED, value, detectionLimit, MissingReason.NONE);
+    }
+
+    /** The same value as written with {@code decimals} decimals. */
+    public AssayValue withDecimals(int decimals) {
+        return decimals == this.decimals ? this : new AssayValue(qualifier, value, limit, missingReason, decimals);
     }
 
     public static AssayValue detected(double value) {
@@ -56,21 +74,33 @@ public record AssayValue(Qualifier qualifier, double value, double limit, Missin
         return qualifier == Qualifier.MISSING;
     }
 
-    /** The same value expressed after multiplying value and limit by {@code factor} (unit change). */
+    /**
+     * The same value expressed after multiplying value and limit by {@code factor} (unit change); the
+     * written decimals move with a power of ten and become unknown with any other factor.
+     */
     public AssayValue scaled(double factor) {
         if (isMissing()) {
             return this;
         }
-        return new AssayValue(qualifier, value * factor, limit * factor, missingReason);
+        return new AssayValue(qualifier, value * factor, limit * factor, missingReason,
+                Numbers.decimalsAfterScaling(decimals, factor));
     }
 
-    /** The value as a lab would print it: {@code 1.23}, {@code <0.005}, {@code >10}, or the reason. */
+    /**
+     * The value as the lab wrote it: {@code 0.070} (with the lab's decimals when known, else the shortest
+     * form {@code 0.07}), {@code <0.005}, {@code >10}, or the reason.
+     */
     public String display() {
         switch (qualifier) {
-            case DETECTED: return Numbers.compact(value);
-            case BELOW_DETECTION: return "<" + Numbers.compact(value);
-            case ABOVE_UPPER_LIMIT: return ">" + Numbers.compact(value);
+            case DETECTED: return number();
+            case BELOW_DETECTION: return "<" + number();
+            case ABOVE_UPPER_LIMIT: return ">" + number();
             default: return missingReason.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ');
         }
+    }
+
+    /** The number alone (value, or the censoring limit) as the lab wrote it; empty when missing. */
+    public String number() {
+        return isMissing() ? "" : Numbers.fixed(value, decimals);
     }
 }

@@ -170,7 +170,7 @@ public final class DuplicateAnalysis {
     private static OutlierPair outlier(DuplicatePair p, List<OutlierPair.Test> tests) {
         double a = p.original().value();
         double b = p.duplicate().value();
-        return new OutlierPair(p.id(), p.originalId(), p.batch(), p.original().display(), p.duplicate().display(),
+        return OutlierPair.of(p.id(), p.originalId(), p.batch(), p.original(), p.duplicate(),
                 PairMeasures.hard(a, b), PairMeasures.absDifference(a, b), tests);
     }
 }

@@ -1,5 +1,8 @@
 package org.cupel.duplicates;
 
+import com.fasterxml.jackson.annotation.JsonIgnore;
+import org.cupel.assay.AssayValue;
+
 /**
  * A pair flagged for a look: its IDs, batch, values and the test that flagged it. Read it original first:
  * {@code originalId} with {@code original}, then {@code id} with {@code duplicate}.
@@ -13,12 +16,24 @@ package org.cupel.duplicates;
  *     reference only: such pairs are neither judged nor ranked by HARD)
  * @param absDifference |original − duplicate| in the analyte's unit
  * @param tests which tests flagged it
+ * @param originalValue the original's value, for tables that keep the number apart from its text (the JSON
+ *     has {@code original}, the value as the lab wrote it)
+ * @param duplicateValue the duplicate's value, likewise
  */
 public record OutlierPair(String id, String originalId, String batch, String original, String duplicate,
-                          double hard, double absDifference, java.util.List<Test> tests) {
+                          double hard, double absDifference, java.util.List<Test> tests,
+                          @JsonIgnore AssayValue originalValue, @JsonIgnore AssayValue duplicateValue) {
 
     public OutlierPair {
         tests = java.util.List.copyOf(tests);
+    }
+
+    /** A flagged pair of the two values, each written as the lab wrote it. */
+    public static OutlierPair of(String id, String originalId, String batch, AssayValue original,
+                                 AssayValue duplicate, double hard, double absDifference,
+                                 java.util.List<Test> tests) {
+        return new OutlierPair(id, originalId, batch, original.display(), duplicate.display(), hard, absDifference,
+                tests, original, duplicate);
     }
 
     /** "original ID / duplicate ID", the order in which the values are given; the duplicate ID alone without one. */

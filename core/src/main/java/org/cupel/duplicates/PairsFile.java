@@ -92,7 +92,7 @@ public final class PairsFile {
         if (Double.isNaN(limit) || !Double.isNaN(v.limit()) || v.isMissing()) {
             return v;
         }
-        return new AssayValue(v.qualifier(), v.value(), limit, v.missingReason());
+        return new AssayValue(v.qualifier(), v.value(), limit, v.missingReason(), v.decimals());
     }
 
     private static boolean hasColumn(List<String> cells, String[] aliases) {

@@ -52,7 +52,7 @@ final class CatalogConflicts {
 
     private static String describe(Row r) {
         CrmCertificate c = r.certificate();
-        return Numbers.compact(c.certifiedValue()) + " " + c.unit().symbol() + " (SD " + Numbers.compact(c.sd())
+        return c.valueText() + " " + c.unit().symbol() + " (SD " + c.sdText()
                 + (c.method().isEmpty() ? "" : ", " + c.method()) + ")";
     }
 

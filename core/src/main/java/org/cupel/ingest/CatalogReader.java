@@ -6,6 +6,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.cupel.assay.AssayValue;
 import org.cupel.assay.SourceLocation;
 import org.cupel.project.CrmCatalog;
 import org.cupel.project.CrmCertificate;
@@ -61,8 +62,10 @@ public final class CatalogReader {
             String analyte = row.cell(cols[1]);
             Optional<GradeUnit> unit = GradeUnit.parse(row.cell(cols[2]));
             GradeUnit u = unit.orElse(null);
-            double value = number(parser, t, row, cols[3], u);
-            double sd = number(parser, t, row, cols[4], u);
+            AssayValue valueRead = number(parser, t, row, cols[3], u);
+            AssayValue sdRead = number(parser, t, row, cols[4], u);
+            double value = valueRead == null ? Double.NaN : valueRead.value();
+            double sd = sdRead == null ? Double.NaN : sdRead.value();
             String problem = null;
             int at = 0;
             if (code.isEmpty() || analyte.isEmpty()) {
@@ -88,9 +91,9 @@ public final class CatalogReader {
                 continue;
             }
             CrmCertificate c = new CrmCertificate(code, analyte, unit.get(), value, sd,
-                    lo >= 0 ? number(parser, t, row, lo, u) : Double.NaN,
-                    hi >= 0 ? number(parser, t, row, hi, u) : Double.NaN,
-                    method >= 0 ? row.cell(method) : "");
+                    lo >= 0 ? plain(number(parser, t, row, lo, u)) : Double.NaN,
+                    hi >= 0 ? plain(number(parser, t, row, hi, u)) : Double.NaN,
+                    method >= 0 ? row.cell(method) : "", valueRead.decimals(), sdRead.decimals());
             CatalogConflicts.Row here = new CatalogConflicts.Row(t.at(row), c);
             CatalogConflicts.Row first = seen.putIfAbsent(code + "\u0000" + analyte, here);
             if (first != null) {
@@ -116,13 +119,20 @@ public final class CatalogReader {
         return false;
     }
 
-    /** The cell as a plain number at most 100 % in {@code unit}, else NaN (the row is then left out). */
-    private static double number(ValueParser parser, RawTable t, RawRow row, int column, GradeUnit unit) {
+    /**
+     * The cell as a plain number at most 100 % in {@code unit}, with the decimals it is written with; null
+     * when it is none (the row is then left out).
+     */
+    private static AssayValue number(ValueParser parser, RawTable t, RawRow row, int column, GradeUnit unit) {
         String text = row.cell(column);
         if (text.isEmpty()) {
-            return Double.NaN;
+            return null;
         }
         ParsedValue p = parser.parse(text, Double.NaN, t.at(row, column), unit);
-        return p.usable() && p.value().isDetected() ? p.value().value() : Double.NaN;
+        return p.usable() && p.value().isDetected() ? p.value() : null;
+    }
+
+    private static double plain(AssayValue v) {
+        return v == null ? Double.NaN : v.value();
     }
 }

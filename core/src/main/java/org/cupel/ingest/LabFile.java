@@ -43,7 +43,7 @@ public record LabFile(String file, List<Batch> batches, List<LabColumn> columns,
                 if (table.hasResult(r, c)) {
                     AnalyteHeader a = columns.get(c).analyte();
                     AssayValue v = new AssayValue(table.qualifier(r, c), table.value(r, c), table.limit(r, c),
-                            table.missingReason(r, c));
+                            table.missingReason(r, c), table.decimals(r, c));
                     results.add(new LabRow.Result(a.analyte(), a.unit(), new MethodValue(a.method(), v, at)));
                 }
             }

@@ -288,7 +288,7 @@ public final class LabFileReader {
                 double v = values.plainNumber(text, row.start(k), row.end(k));
                 if (v <= ceilings[c]) {
                     kept.setResult(c, Qualifier.DETECTED, v, ValueParser.validLimit(col.detectionLimit()),
-                            MissingReason.NONE);
+                            MissingReason.NONE, values.plainDecimals());
                     any = true;
                     continue;
                 }
@@ -304,7 +304,7 @@ public final class LabFileReader {
                 }
                 if (p.usable() && p.value().missingReason() != MissingReason.BLANK_CELL) {
                     AssayValue a = p.value();
-                    kept.setResult(c, a.qualifier(), a.value(), a.limit(), a.missingReason());
+                    kept.setResult(c, a.qualifier(), a.value(), a.limit(), a.missingReason(), a.decimals());
                     if (a.isMissing()) {
                         kept.setCode(c, row.cell(k).strip());
                     }

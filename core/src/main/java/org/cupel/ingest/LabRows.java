@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.HashMap;
 import java.util.Map;
 import org.cupel.assay.MissingReason;
+import org.cupel.assay.Numbers;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.Qualifier;
 
@@ -32,6 +33,8 @@ public final class LabRows {
     private byte[] missing;
     /** The lab's code of a missing result ("IS", "NR"), by cell; few cells have one. */
     private final Map<Integer, String> codes = new HashMap<>();
+    /** The decimals each value was written with (a byte a cell), or {@link Numbers#UNKNOWN_DECIMALS}. */
+    private byte[] decimals;
 
     /**
      * @param width the number of analyte columns
@@ -50,6 +53,7 @@ public final class LabRows {
         values = new double[rows * width];
         limits = new double[rows * width];
         missing = new byte[rows * width];
+        decimals = new byte[rows * width];
     }
 
     public int size() {
@@ -108,6 +112,11 @@ public final class LabRows {
         return codes.isEmpty() ? "" : codes.getOrDefault(row * width + column, "");
     }
 
+    /** How many decimals the lab wrote for the value, or {@link Numbers#UNKNOWN_DECIMALS}. */
+    public int decimals(int row, int column) {
+        return decimals[row * width + column];
+    }
+
     /** Clears the cells of the row being read (row {@link #size()}) to no result. */
     void startRow() {
         if (size == ids.length) {
@@ -124,12 +133,14 @@ public final class LabRows {
         codes.put(size * width + column, code);
     }
 
-    void setResult(int column, Qualifier q, double value, double limit, MissingReason reason) {
+    /** @param written the decimals the value was written with (0 to 127), or {@link Numbers#UNKNOWN_DECIMALS} */
+    void setResult(int column, Qualifier q, double value, double limit, MissingReason reason, int written) {
         int k = size * width + column;
         qualifiers[k] = (byte) q.ordinal();
         values[k] = value;
         limits[k] = limit;
         missing[k] = (byte) reason.ordinal();
+        decimals[k] = (byte) written;
     }
 
     /** Keeps the row being read, with the results set since {@link #startRow()}. */
@@ -162,5 +173,6 @@ public final class LabRows {
         values = Arrays.copyOf(values, cap * width);
         limits = Arrays.copyOf(limits, cap * width);
         missing = Arrays.copyOf(missing, cap * width);
+        decimals = Arrays.copyOf(decimals, cap * width);
     }
 }

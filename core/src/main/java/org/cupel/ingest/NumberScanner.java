@@ -1,5 +1,7 @@
 package org.cupel.ingest;
 
+import org.cupel.assay.Numbers;
+
 /**
  * Reads a decimal number as labs write it, by scanning characters once: optional sign, digits with
  * optional thousands grouping (groups of three after a first group of one to three digits, the first
@@ -31,6 +33,8 @@ final class NumberScanner {
     private final boolean grouping;
     /** Set when a scan refused a well-formed number for its range; read by {@link #outOfRange}. */
     private boolean outOfRange;
+    /** The decimals written in the last well-formed number scanned; see {@link #decimals()}. */
+    private int decimals = Numbers.UNKNOWN_DECIMALS;
 
     NumberScanner(boolean decimalComma, boolean thousandsSeparator) {
         this.decimalMark = decimalComma ? ',' : '.';
@@ -123,6 +127,8 @@ final class NumberScanner {
         if (i != to) {
             return Double.NaN;
         }
+        // A byte per value keeps the written precision; more decimals than that are not a lab's.
+        decimals = exponent || fracDigits > Byte.MAX_VALUE ? Numbers.UNKNOWN_DECIMALS : fracDigits;
         // 18 significant digits cannot overflow a long; the bound 2^53 keeps the digits an exact double.
         if (!exponent && significant <= 18 && digits <= MAX_EXACT && fracDigits < POWERS_OF_TEN.length) {
             double v = digits / POWERS_OF_TEN[fracDigits];
@@ -149,6 +155,15 @@ final class NumberScanner {
         outOfRange = false;
         scan(s, 0, s.length());
         return outOfRange;
+    }
+
+    /**
+     * How many decimals the last well-formed number {@link #scan} read was written with ({@code 0.070}: 3,
+     * {@code 12}: 0); {@link Numbers#UNKNOWN_DECIMALS} for exponent notation ({@code 7e-2}), whose written
+     * precision is not a count of decimals. Valid right after a scan that returned a number.
+     */
+    int decimals() {
+        return decimals;
     }
 
     /** The character that groups thousands: ',' with a decimal point, '.' with a decimal comma. */

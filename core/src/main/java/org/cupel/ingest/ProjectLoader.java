@@ -25,6 +25,7 @@ import org.cupel.project.InputException;
 import org.cupel.project.MessageText;
 import org.cupel.project.Project;
 import org.cupel.units.GradeUnit;
+import org.cupel.units.UnitChoice;
 
 /**
  * Loads a project folder (docs/input-formats.md): {@code cupel.yaml} if present, {@code register.csv},
@@ -203,7 +204,8 @@ public final class ProjectLoader {
 
         Project run() {
             requireFolder(folder);
-            Map<String, GradeUnit> units = configuredUnits();
+            Map<String, GradeUnit> configured = configuredUnits();
+            Map<String, GradeUnit> units = new LinkedHashMap<>(configured);
             SampleRegister register = readRegister();
             SampleJoin join = new SampleJoin(register, units, exceptions);
             // One lab file in memory at a time: each is joined as soon as it is read.
@@ -214,6 +216,8 @@ public final class ProjectLoader {
                 join.add(file);
             });
             join.finishRegister();
+            Map<String, UnitChoice> unitChoices = join.unitChoices(configured);
+            unitChoices.forEach((analyte, choice) -> units.put(analyte, choice.unit()));
             CatalogReader.Result catalog = readCatalog(units);
             SampleTable table = join.buildSamples();
             CrmCatalog crms = catalog == null ? CrmCatalog.empty() : catalog.catalog();
@@ -231,10 +235,10 @@ public final class ProjectLoader {
             }
             accounts.addAll(failed);
             Map<String, AnalyteColumn> columns = join.buildColumns(table.size(),
-                    new MethodPriority(settings.methodPriority()));
+                    new MethodPriority(settings.methodPriority()), unitChoices);
             String name = config.projectName(folder.toAbsolutePath().normalize().getFileName() == null
                     ? "project" : folder.toAbsolutePath().normalize().getFileName().toString());
-            return new Project(name, folder, config, table, columns, crms, exceptions, accounts);
+            return new Project(name, folder, config, table, columns, crms, exceptions, accounts, unitChoices);
         }
 
         /** Reads the lab files that may be read, in name order; each entry that may not is a fatal problem. */

@@ -11,6 +11,7 @@ import org.cupel.assay.Batch;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.MethodSelector;
 import org.cupel.assay.MissingReason;
+import org.cupel.assay.Numbers;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.Qualifier;
 import org.cupel.assay.SampleTable;
@@ -20,6 +21,7 @@ import org.cupel.project.DataIssue;
 import org.cupel.project.ExceptionRegister;
 import org.cupel.project.FileAccount;
 import org.cupel.units.GradeUnit;
+import org.cupel.units.UnitChoice;
 
 /**
  * Joins the lab rows of every file with the register into one {@link SampleTable} and one
@@ -33,6 +35,9 @@ final class SampleJoin {
     private final ExceptionRegister exceptions;
     private final SampleTable.Builder samples;
     private final Map<String, AnalyteColumn.Builder> columns = new LinkedHashMap<>();
+    /** Per analyte, how many files and results were written in each unit word, in the order first read. */
+    private final Map<String, Map<GradeUnit, Integer>> unitFiles = new LinkedHashMap<>();
+    private final Map<String, Map<GradeUnit, Long>> unitResults = new LinkedHashMap<>();
     private final List<FileAccount> accounts = new ArrayList<>();
     private final Set<String> excludedLabIds = new HashSet<>();
     /** Register IDs that could not be used, or null when there are none (most projects: no look-up per row). */
@@ -86,6 +91,7 @@ final class SampleJoin {
                 }
             }
         }
+        cols.countUnits();
         accounts.add(new FileAccount(file.file(), "lab results", file.rowsRead(), file.rowsRead() - excluded,
                 excluded));
     }
@@ -95,11 +101,13 @@ final class SampleJoin {
         private final List<LabColumn> columns;
         private final AnalyteColumn.Builder[] builders;
         private final double[] factors;
+        private final long[] results;
 
         FileColumns(List<LabColumn> columns) {
             this.columns = columns;
             this.builders = new AnalyteColumn.Builder[columns.size()];
             this.factors = new double[columns.size()];
+            this.results = new long[columns.size()];
             for (int c = 0; c < columns.size(); c++) {
                 AnalyteHeader a = columns.get(c).analyte();
                 factors[c] = a.unit().convert(1.0, units.get(a.analyte()));
@@ -108,6 +116,18 @@ final class SampleJoin {
 
         int size() {
             return columns.size();
+        }
+
+        /** Adds this file's results to the count of each analyte's unit words; a file counts once per word. */
+        void countUnits() {
+            java.util.Set<String> seen = new HashSet<>();
+            for (int c = 0; c < columns.size(); c++) {
+                AnalyteHeader a = columns.get(c).analyte();
+                unitResults.computeIfAbsent(a.analyte(), k -> new LinkedHashMap<>()).merge(a.unit(), results[c], Long::sum);
+                if (seen.add(a.analyte() + "\u0000" + a.unit().name())) {
+                    unitFiles.computeIfAbsent(a.analyte(), k -> new LinkedHashMap<>()).merge(a.unit(), 1, Integer::sum);
+                }
+            }
         }
 
         /** Adds the result of {@code row}, column {@code c}, to sample row {@code r}, in the reporting unit. */
@@ -122,14 +142,18 @@ final class SampleJoin {
             double value = rows.value(row, c);
             double limit = rows.limit(row, c);
             double factor = factors[c];
+            int decimals = rows.decimals(row, c);
+            results[c]++;
             if (factor != 1.0 && q != Qualifier.MISSING) {
                 value *= factor;
                 limit *= factor;
+                decimals = Numbers.decimalsAfterScaling(decimals, factor);
                 if (!Double.isFinite(value)) {
                     throw new IllegalArgumentException("a non-missing assay value must be finite: " + value);
                 }
             }
-            builders[c].add(r, q, value, limit, rows.missingReason(row, c), a.method(), file, rows.line(row), 0);
+            builders[c].add(r, q, value, limit, rows.missingReason(row, c), decimals, a.method(), file,
+                    rows.line(row), 0);
             String code = rows.code(row, c);
             if (!code.isEmpty()) {
                 builders[c].missingCode(r, code);
@@ -215,9 +239,27 @@ final class SampleJoin {
         return samples.build();
     }
 
-    Map<String, AnalyteColumn> buildColumns(int rows, MethodSelector selector) {
+    /**
+     * The reporting unit of every analyte read: {@code configured} ({@code ingest.units}) where set, else the
+     * unit word of most results (see {@link UnitChoice}).
+     */
+    Map<String, UnitChoice> unitChoices(Map<String, GradeUnit> configured) {
+        Map<String, UnitChoice> out = new LinkedHashMap<>();
+        unitResults.forEach((analyte, counts) -> out.put(analyte, UnitChoice.of(analyte, configured.get(analyte),
+                unitFiles.getOrDefault(analyte, Map.of()), counts)));
+        return out;
+    }
+
+    /** The analyte columns, each in the unit {@code choices} gives it (values read in another unit converted). */
+    Map<String, AnalyteColumn> buildColumns(int rows, MethodSelector selector, Map<String, UnitChoice> choices) {
         Map<String, AnalyteColumn> out = new LinkedHashMap<>();
-        columns.forEach((name, b) -> out.put(name, b.build(rows, selector)));
+        columns.forEach((name, b) -> {
+            UnitChoice choice = choices.get(name);
+            if (choice != null) {
+                b.convertTo(choice.unit());
+            }
+            out.put(name, b.build(rows, selector));
+        });
         return out;
     }
 

@@ -121,7 +121,7 @@ public final class ValueParser {
         if (v > ceiling(unit)) {
             return aboveCeiling(t, where, unit);
         }
-        return ok(AssayValue.detected(v, validLimit(statedLimit)));
+        return ok(AssayValue.detected(v, validLimit(statedLimit)).withDecimals(numbers.decimals()));
     }
 
     /**
@@ -133,6 +133,14 @@ public final class ValueParser {
      */
     double plainNumber(char[] s, int from, int to) {
         return to > from && s[from] >= '0' && s[from] <= '9' ? numbers.scan(s, from, to, false) : Double.NaN;
+    }
+
+    /**
+     * The decimals the number {@link #plainNumber} just read was written with ({@code 0.070}: 3), or
+     * {@link org.cupel.assay.Numbers#UNKNOWN_DECIMALS} for exponent notation.
+     */
+    int plainDecimals() {
+        return numbers.decimals();
     }
 
     /**
@@ -222,10 +230,13 @@ public final class ValueParser {
         if (limit > ceiling(unit)) {
             return aboveCeiling(t, where, unit);
         }
-        return ok(sign == '<' ? AssayValue.belowDetection(limit) : AssayValue.aboveUpperLimit(limit));
+        int decimals = numbers.decimals();
+        return ok((sign == '<' ? AssayValue.belowDetection(limit) : AssayValue.aboveUpperLimit(limit))
+                .withDecimals(decimals));
     }
 
     private ParsedValue parseNegative(String t, double magnitude, SourceLocation where, GradeUnit unit) {
+        int decimals = numbers.decimals();
         if (!conventions.negativeMeansBelowDetection()) {
             return excluded(where, t, "the value is negative",
                     "a value of 0 or more (ingest.negativeMeansBelowDetection is false)",
@@ -239,7 +250,7 @@ public final class ValueParser {
         if (magnitude > ceiling(unit)) {
             return aboveCeiling(t, where, unit);
         }
-        return ok(AssayValue.belowDetection(magnitude));
+        return ok(AssayValue.belowDetection(magnitude).withDecimals(decimals));
     }
 
     private ParsedValue notANumber(String t, SourceLocation where) {

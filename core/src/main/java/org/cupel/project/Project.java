@@ -9,6 +9,7 @@ import java.util.Optional;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.SampleTable;
 import org.cupel.config.CupelConfig;
+import org.cupel.units.UnitChoice;
 
 /**
  * Everything a QC review reads, parsed and typed: the samples and their roles, the reported values
@@ -22,14 +23,23 @@ import org.cupel.config.CupelConfig;
  * @param catalog the CRM catalog
  * @param exceptions every input problem, including rows left out
  * @param files row accounting per input file
+ * @param units per analyte, the reporting unit and why it was chosen; empty for a project built in memory
  */
 public record Project(String name, Path root, CupelConfig config, SampleTable samples,
                      Map<String, AnalyteColumn> analytes, CrmCatalog catalog, ExceptionRegister exceptions,
-                     List<FileAccount> files) {
+                     List<FileAccount> files, Map<String, UnitChoice> units) {
 
     public Project {
         analytes = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(analytes));
         files = List.copyOf(files);
+        units = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(units));
+    }
+
+    /** A project whose units were not read from files (built in memory): each analyte's own unit stands. */
+    public Project(String name, Path root, CupelConfig config, SampleTable samples,
+                   Map<String, AnalyteColumn> analytes, CrmCatalog catalog, ExceptionRegister exceptions,
+                   List<FileAccount> files) {
+        this(name, root, config, samples, analytes, catalog, exceptions, files, Map.of());
     }
 
     public Optional<AnalyteColumn> analyte(String name) {

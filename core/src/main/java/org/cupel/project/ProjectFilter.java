@@ -54,7 +54,7 @@ public final class ProjectFilter {
             }
         }
         return new Project(project.name(), project.root(), project.config(), b.build(), columns, project.catalog(),
-                issues, project.files());
+                issues, project.files(), project.units());
     }
 
     private static AnalyteColumn copyRows(AnalyteColumn col, int[] newRowOf, int newSize) {

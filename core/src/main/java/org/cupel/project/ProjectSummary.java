@@ -15,6 +15,7 @@ import org.cupel.assay.Batch;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.Qualifier;
 import org.cupel.assay.SampleTable;
+import org.cupel.units.UnitChoice;
 
 /**
  * What a project holds, counted once for the scope of a report: the period covered, the batches and
@@ -29,12 +30,15 @@ import org.cupel.assay.SampleTable;
  * @param samplesByRole sample count for every QC role (zero included), in {@link QcRole} order
  * @param samples total number of samples
  * @param undatedBatches batches without a report date
+ * @param units each analyte's reporting unit and why it was chosen (empty for a project built in memory)
  */
 public record ProjectSummary(String name, Optional<LocalDate> firstReported, Optional<LocalDate> lastReported,
                              List<BatchCount> batches, List<String> labs, List<AnalyteSummary> analytes,
-                             Map<QcRole, Integer> samplesByRole, int samples, int undatedBatches) {
+                             Map<QcRole, Integer> samplesByRole, int samples, int undatedBatches,
+                             List<UnitChoice> units) {
 
     public ProjectSummary {
+        units = List.copyOf(units);
         batches = List.copyOf(batches);
         labs = List.copyOf(labs);
         analytes = List.copyOf(analytes);
@@ -117,7 +121,8 @@ public record ProjectSummary(String name, Optional<LocalDate> firstReported, Opt
             analytes.add(summarise(c));
         }
         return new ProjectSummary(project.name(), Optional.ofNullable(first), Optional.ofNullable(last), batches,
-                new ArrayList<>(labs), analytes, roleMap(totals), t.size(), undated);
+                new ArrayList<>(labs), analytes, roleMap(totals), t.size(), undated,
+                List.copyOf(project.units().values()));
     }
 
     private static Map<QcRole, Integer> roleMap(int[] counts) {

@@ -37,6 +37,29 @@ class NumberScannerProperties {
                 Double.doubleToRawLongBits(POINT.scan(s, 0, s.length())), s));
     }
 
+    /**
+     * A well-formed number without exponent reports as its decimals the count of digits after its decimal
+     * mark (the count the lab wrote, so that 0.070 is shown as 0.070), whatever path read it.
+     */
+    @Test
+    void decimalsAreTheDigitsAfterTheMark() {
+        List<Gen<String>> edges = List.of(Gen.constant("0.070"), Gen.constant("7."), Gen.constant("12"),
+                Gen.constant("9".repeat(24) + "." + "9".repeat(24)));
+        SeededTries.forAll(3000, edges, DECIMALS, s -> {
+            double v = POINT.scan(s, 0, s.length());
+            SeededTries.assume(!Double.isNaN(v));
+            int mark = s.indexOf('.');
+            int expected = mark < 0 ? 0 : s.length() - mark - 1;
+            assertEquals(expected, POINT.decimals(), s);
+        });
+    }
+
+    @Test
+    void exponentNotationHasNoCountOfDecimals() {
+        assertEquals(7e-2, POINT.scan("7.0e-2", 0, 6), 0.0);
+        assertEquals(-1, POINT.decimals(), "7.0e-2 is not written with a count of decimals");
+    }
+
     /** Digits (weighted), both marks, signs, exponents, spaces (ordinary and no-break) and a stray letter. */
     private static final Gen<String> TEXTS = Gen.strings("0123456789012345678901234567890.,.,+-eE \u00a0x", 0, 30);
 

@@ -18,11 +18,13 @@ import org.cupel.assay.MissingReason;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.Qualifier;
 import org.cupel.assay.SampleTable;
+import org.cupel.project.CrmCertificate;
 import org.cupel.project.DataIssue;
 import org.cupel.project.FileAccount;
 import org.cupel.project.InputException;
 import org.cupel.project.Project;
 import org.cupel.units.GradeUnit;
+import org.cupel.units.UnitChoice;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -107,16 +109,56 @@ class ProjectLoaderTest {
         AnalyteColumn ag = project.analyte("Ag").orElseThrow();
         assertEquals(GradeUnit.G_PER_T, au.analyte().unit());
         assertEquals(GradeUnit.PPM, ag.analyte().unit());
-        assertEquals(AssayValue.belowDetection(0.005), au.value(row("MX1002")));
-        assertEquals(AssayValue.belowDetection(0.005), au.value(row("MX1003")), "-0.005 means <0.005");
-        assertEquals(AssayValue.belowDetection(0.5), ag.value(row("MX1003")), "BDL at the detection-limit row");
-        assertEquals(AssayValue.belowDetection(0.5), ag.value(row("MX1002")));
+        assertEquals(AssayValue.belowDetection(0.005).withDecimals(3), au.value(row("MX1002")));
+        assertEquals(AssayValue.belowDetection(0.005).withDecimals(3), au.value(row("MX1003")), "-0.005 means <0.005");
+        assertEquals(AssayValue.belowDetection(0.5), ag.value(row("MX1003")),
+                "BDL at the detection-limit row (a code: its decimals are not written)");
+        assertEquals(AssayValue.belowDetection(0.5).withDecimals(1), ag.value(row("MX1002")));
         assertEquals(MissingReason.NOT_RECEIVED, au.value(row("MX1007")).missingReason());
         assertEquals(MissingReason.INSUFFICIENT_SAMPLE, ag.value(row("MX1008")).missingReason());
         assertTrue(au.value(row("MX1006")).isMissing(), "blank cell");
         assertTrue(au.value(row("MX1009")).isMissing(), "unreadable cell left out");
         assertEquals(4.4, ag.number(row("MX1009")), 0.0, "the rest of the row is kept");
         assertEquals(0.005, au.limit(row("MX1013")), 0.0, "the column's stated limit");
+    }
+
+    @Test
+    void valuesKeepTheDecimalsTheLabWrote() {
+        AnalyteColumn au = project.analyte("Au").orElseThrow();
+        AnalyteColumn ag = project.analyte("Ag").orElseThrow();
+        assertEquals("1.498", au.value(row("MX1011")).display());
+        assertEquals("0.49", au.value(row("MX1001")).display(), "the FA-GRAV result the priority picks");
+        assertEquals("0.71", au.value(row("MX1013")).display());
+        assertEquals("0.4", au.value(row("MX1015")).display());
+        assertEquals("0.006", au.value(row("MX1012")).display());
+        assertEquals("<0.005", au.value(row("MX1002")).display(), "-0.005 is shown as the limit it means");
+        assertEquals("3", ag.value(row("MX1015")).display());
+        assertEquals(0, ag.decimals(row("MX1015")));
+        assertEquals(1, ag.decimals(row("MX1013")));
+        assertEquals("14.37", au.value(row("MX1004")).display(), "the FA-GRAV re-assay, as written");
+    }
+
+    @Test
+    void certificatesKeepTheirPrecisionThroughAUnitChange() {
+        // KRM-14 Au is certified as 1520 ppb (SD 45 ppb); Au is reported in g/t (ingest.units), so the
+        // factor is 1e-3 and the three decimals move with it: 1.520 g/t, SD 0.045 g/t.
+        CrmCertificate krm14 = project.catalog().find("KRM-14", "Au").orElseThrow();
+        assertEquals("1.520", krm14.valueText());
+        assertEquals("0.045", krm14.sdText());
+        CrmCertificate ag = project.catalog().find("KRM-14", "Ag").orElseThrow();
+        assertEquals("12.4", ag.valueText());
+        assertEquals("0.6", ag.sdText());
+    }
+
+    @Test
+    void theReportingUnitAndWhyAreKept() {
+        UnitChoice au = project.units().get("Au");
+        assertEquals(GradeUnit.G_PER_T, au.unit());
+        assertEquals(UnitChoice.Basis.CONFIGURED, au.basis());
+        assertEquals(Map.of(GradeUnit.PPM, 1, GradeUnit.G_PER_T, 1), au.files());
+        UnitChoice ag = project.units().get("Ag");
+        assertEquals(GradeUnit.PPM, ag.unit());
+        assertEquals(UnitChoice.Basis.ONLY_UNIT, ag.basis());
     }
 
     @Test

@@ -35,6 +35,29 @@ class ValueParserTest {
         assertNull(p.issue());
     }
 
+    /**
+     * The decimals the lab wrote are kept, so that {@code 0.070} is shown as written and not as 0.07
+     * (issue 17: a value is shown at the lab's precision). Exponent notation and codes have no count of
+     * decimals. Hand-checked: the count is the number of digits after the decimal mark.
+     */
+    @ParameterizedTest(name = "''{0}'' is shown as ''{2}'' ({1} decimals)")
+    @CsvSource(delimiter = '|', value = {
+        "0.070|3|0.070", "0.100|3|0.100", "1.0|1|1.0", "12|0|12", "7.|0|7", ".5|1|0.5", "1,234.50|2|1234.50",
+        "<0.0050|4|<0.0050", "< 0.5|1|<0.5", "-0.010|3|<0.010", ">10.0|1|>10.0", "1.2E-3|-1|0.0012",
+        "0.00000000000000000000001000|26|0.00000000000000000000001000"})
+    void theDecimalsAsWrittenAreKept(String cell, int decimals, String shown) {
+        AssayValue v = defaults.parse(cell, Double.NaN, AT).value();
+        assertEquals(decimals, v.decimals(), cell);
+        assertEquals(shown, v.display(), cell);
+    }
+
+    @Test
+    void aCodeHasNoWrittenDecimals() {
+        AssayValue v = defaults.parse("BDL", 0.010, AT).value();
+        assertEquals(-1, v.decimals());
+        assertEquals("<0.01", v.display(), "the configured limit, shortest form");
+    }
+
     @ParameterizedTest(name = "''{0}'' is below detection at {1}")
     @CsvSource(delimiter = '|', value = {"<0.005|0.005", "< 0.005|0.005", "<=0.01|0.01", "-0.005|0.005", "-2|2"})
     void belowDetectionWithLimitInTheCell(String cell, double limit) {

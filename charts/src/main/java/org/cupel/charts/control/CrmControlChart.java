@@ -85,8 +85,8 @@ public final class CrmControlChart {
                 PointBudget.flaggedAmong(flagged, shown), "warnings, failures and swaps")
                 + offScale(rs, lo, hi)
                 + String.format(Locale.ROOT,
-                "; certified %s %s, limits ±2 and ±3 × certificate SD %s %s", Numbers.significant(lim.certified(), 4), unit,
-                Numbers.significant(lim.sd(), 3), unit)
+                "; certified %s %s, limits ±2 and ±3 × certificate SD %s %s", lim.certifiedText(), unit,
+                lim.sdText(), unit)
                 + (s.projectLimits().available()
                 ? String.format(Locale.US, "; own ±2 SD from the project's %,d results", s.projectLimits().n()) : "");
         return ChartFigure.of(c, note);

@@ -14,7 +14,9 @@ import org.cupel.censored.Estimate;
 import org.cupel.censored.Quantile;
 import org.cupel.censored.Recommendation;
 import org.cupel.charts.censored.CensoredProbabilityPlot;
+import org.cupel.report.Cell;
 import org.cupel.report.ReportBlock;
+import org.cupel.report.ReportColumn;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
 
@@ -79,22 +81,30 @@ public final class DetectionLimitSection {
     }
 
     static ReportTable limitsTable(List<AnalyteCensoring> analytes) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (AnalyteCensoring a : analytes) {
-            rows.add(List.of(a.analyteLabel(), list(a.detectionLimits()), list(a.upperLimits()),
-                    Integer.toString(a.values()), count(a.below(), a.values()), count(a.above(), a.values()),
-                    Integer.toString(a.missing()), methods(a.methodCounts())));
+            rows.add(List.of(Cell.text(a.analyteLabel()), Cell.text(list(a.detectionLimits())),
+                    Cell.text(list(a.upperLimits())), Cell.count(a.values()), countAndShare(a.below(), a.values()),
+                    countAndShare(a.above(), a.values()), Cell.count(a.missing()), Cell.text(methods(a.methodCounts()))));
         }
-        return new ReportTable("detection-limits", "Detection limits seen and censored values, all samples",
-                List.of("Analyte", "Detection limits", "Upper limits", "Values", "Below detection", "Above range",
-                        "Missing", "Reported values by method"), rows,
+        return ReportTable.typed("detection-limits", "Detection limits seen and censored values, all samples",
+                List.of(ReportColumn.text("Analyte", "analyte"), ReportColumn.text("Detection limits", "detection_limits"),
+                        ReportColumn.text("Upper limits", "upper_limits"), ReportColumn.count("Values", "values"),
+                        shareColumn("Below detection", "below_detection"), shareColumn("Above range", "above_range"),
+                        ReportColumn.count("Missing", "missing"),
+                        ReportColumn.text("Reported values by method", "reported_values_by_method")), rows,
                 "Limits as stated by the laboratory on each value; the method of each reported value as selected by "
                         + "the configured method priority, every other result kept in the data.");
     }
 
+    private static ReportColumn shareColumn(String header, String key) {
+        return ReportColumn.parts(header, key, new ReportColumn.Part("", "", ReportColumn.CsvType.LONG),
+                new ReportColumn.Part("share", "%", ReportColumn.CsvType.DOUBLE));
+    }
+
     /** Detection limits estimated from the project's blanks, each labelled with its definition in the note. */
     static ReportTable blankLimitsTable(List<AnalyteCensoring> analytes) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (AnalyteCensoring a : analytes) {
             BlankLimits b = a.blanks();
             if (b.n() == 0) {
@@ -103,15 +113,27 @@ public final class DetectionLimitSection {
             List<String> notes = new ArrayList<>();
             b.limits().stream().filter(l -> !l.value().note().isEmpty()).map(l -> l.name() + ": " + l.value().note())
                     .distinct().forEach(notes::add);
-            rows.add(List.of(a.analyteLabel(), b.n() + " (" + b.detected() + " with a number, " + b.below()
-                            + " below detection)", list(a.detectionLimits()), limit(b, "EPA MDL_b"), limit(b, "3·s"),
+            rows.add(List.of(Cell.text(a.analyteLabel()), new Cell.Parts(List.of(Cell.fixedNumber(b.n(), 0),
+                            Cell.fixedNumber(b.detected(), 0), Cell.fixedNumber(b.below(), 0)), b.n() + " ("
+                            + b.detected() + " with a number, " + b.below() + " below detection)"),
+                    Cell.text(list(a.detectionLimits())), limit(b, "EPA MDL_b"), limit(b, "3·s"),
                     limit(b, "Currie L_C (t)"), limit(b, "Currie L_D (t)"), limit(b, "EPA MDL_s"),
-                    b.sd().isAvailable() ? String.join("; ", notes) : b.sd().note()));
+                    Cell.text(b.sd().isAvailable() ? String.join("; ", notes) : b.sd().note())));
         }
-        return new ReportTable("blank-detection-limits", "Detection limits estimated from the project's blanks",
-                List.of("Analyte", "Blanks", "Stated detection limits", "EPA MDL_b", "3·s", "Currie L_C (t)",
-                        "Currie L_D (t)", "EPA MDL_s", "Notes"), rows,
-                "EPA MDL_b (US EPA, 40 CFR 136 App. B Rev. 2): the blank mean + t(n − 1, 0.99)·s when every blank has "
+        return ReportTable.typed("blank-detection-limits", "Detection limits estimated from the project's blanks",
+                List.of(ReportColumn.text("Analyte", "analyte"), ReportColumn.parts("Blanks", "blanks",
+                                new ReportColumn.Part("", "", ReportColumn.CsvType.LONG),
+                                new ReportColumn.Part("with_number", "", ReportColumn.CsvType.LONG),
+                                new ReportColumn.Part("below_detection", "", ReportColumn.CsvType.LONG)),
+                        ReportColumn.text("Stated detection limits", "stated_detection_limits"),
+                        ReportColumn.number("EPA MDL_b", "epa_mdl_b", "").withNote(),
+                        ReportColumn.number("3·s", "three_s", "").withNote(),
+                        ReportColumn.number("Currie L_C (t)", "currie_l_c", "").withNote(),
+                        ReportColumn.number("Currie L_D (t)", "currie_l_d", "").withNote(),
+                        ReportColumn.number("EPA MDL_s", "epa_mdl_s", "").withNote(),
+                        ReportColumn.text("Notes", "notes")), rows,
+                "In the unit of each analyte. "
+                        + "EPA MDL_b (US EPA, 40 CFR 136 App. B Rev. 2): the blank mean + t(n − 1, 0.99)·s when every blank has "
                         + "a number; the highest numerical blank (n < 100) or the blank of rank round(0.99·n) when some "
                         + "are below detection; not applicable when none has a number. It includes the blank mean. "
                         + "EPA MDL_s = t(n − 1, 0.99)·s is the spiked-sample formula, shown for comparison: applied to "
@@ -123,31 +145,39 @@ public final class DetectionLimitSection {
                         + "estimated (see notes).");
     }
 
-    private static String limit(BlankLimits b, String name) {
-        return value(b.limit(name).value());
+    private static Cell limit(BlankLimits b, String name) {
+        return valueCell(b.limit(name).value());
     }
 
+    /**
+     * Rows are statistics, columns the methods compared; every cell is a number in the analyte's unit (n and
+     * the censored count are counts), the 95 % interval of the mean on two rows so that each cell holds one.
+     */
     static ReportTable summaryTable(AnalyteCensoring a) {
         List<CensoredSummary> s = a.routine().summaries();
-        List<String> columns = new ArrayList<>();
-        columns.add("Statistic");
-        s.forEach(x -> columns.add(x.method()));
-        List<List<String>> rows = new ArrayList<>();
-        rows.add(row("n", s, x -> Integer.toString(x.n())));
-        rows.add(row("Censored", s, x -> Integer.toString(x.nCensored())));
-        rows.add(row("Mean", s, x -> value(x.mean())));
-        rows.add(row("SE of mean", s, x -> se(x.mean())));
-        rows.add(row("95 % CI of mean", s, x -> ci(x.mean())));
-        rows.add(row("SD", s, x -> value(x.sd())));
-        rows.add(row("Median", s, x -> value(x.median())));
+        List<ReportColumn> columns = new ArrayList<>();
+        columns.add(ReportColumn.text("Statistic", "statistic"));
+        s.forEach(x -> columns.add(ReportColumn.number(x.method(), null, "").withNote()));
+        List<List<Cell>> rows = new ArrayList<>();
+        rows.add(row("n", s, x -> Cell.count(x.n())));
+        rows.add(row("Censored", s, x -> Cell.count(x.nCensored())));
+        rows.add(row("Mean", s, x -> valueCell(x.mean())));
+        rows.add(row("SE of mean", s, x -> x.mean().isAvailable() && !Double.isNaN(x.mean().standardError())
+                ? Cell.significantNumber(x.mean().standardError(), DIGITS) : Cell.dash("not estimated")));
+        rows.add(row("95 % CI of mean, lower", s, x -> x.mean().hasInterval()
+                ? Cell.significantNumber(x.mean().lower(), DIGITS) : Cell.dash("not estimated")));
+        rows.add(row("95 % CI of mean, upper", s, x -> x.mean().hasInterval()
+                ? Cell.significantNumber(x.mean().upper(), DIGITS) : Cell.dash("not estimated")));
+        rows.add(row("SD", s, x -> valueCell(x.sd())));
+        rows.add(row("Median", s, x -> valueCell(x.median())));
         for (int i = 0; i < CensoredSummary.PROBABILITIES.length; i++) {
             int k = i;
             rows.add(row("P" + Math.round(100 * CensoredSummary.PROBABILITIES[i]), s,
-                    x -> value(percentile(x.percentiles(), k))));
+                    x -> valueCell(percentile(x.percentiles(), k))));
         }
         String notes = s.stream().filter(x -> !x.notes().isEmpty())
                 .map(x -> x.method() + ": " + String.join("; ", x.notes())).collect(Collectors.joining(". "));
-        return new ReportTable("censored-summary-" + a.analyteLabel(),
+        return ReportTable.typed("censored-summary-" + a.analyteLabel(),
                 "Censored summary of " + a.analyteLabel() + ", routine samples", columns, rows,
                 "Substitution columns are a comparison only. — = not estimated (see notes). " + notes);
     }
@@ -156,33 +186,30 @@ public final class DetectionLimitSection {
         return qs.get(k).estimate();
     }
 
-    private static List<String> row(String label, List<CensoredSummary> s, Function<CensoredSummary, String> cell) {
-        List<String> r = new ArrayList<>();
-        r.add(label);
+    private static List<Cell> row(String label, List<CensoredSummary> s, Function<CensoredSummary, Cell> cell) {
+        List<Cell> r = new ArrayList<>();
+        r.add(Cell.text(label));
         s.forEach(x -> r.add(cell.apply(x)));
         return r;
     }
 
-    static String value(Estimate e) {
-        return e.isAvailable() ? Numbers.significant(e.value(), DIGITS) : "—";
+    /** The estimate with {@value #DIGITS} significant digits, or a dash with the reason in the CSV note. */
+    static Cell valueCell(Estimate e) {
+        return e.isAvailable() ? Cell.significantNumber(e.value(), DIGITS)
+                : new Cell.NotComputed(e.note().isEmpty() ? "not estimated" : e.note(), "—");
     }
 
-    private static String se(Estimate e) {
-        return e.isAvailable() && !Double.isNaN(e.standardError()) ? Numbers.significant(e.standardError(), DIGITS)
-                : "—";
-    }
-
-    private static String ci(Estimate e) {
-        return e.hasInterval() ? Numbers.significant(e.lower(), DIGITS) + " – " + Numbers.significant(e.upper(), DIGITS)
-                : "—";
+    private static Cell countAndShare(int k, int n) {
+        Cell.Number count = Cell.fixedNumber(k, 0);
+        if (n == 0) {
+            return new Cell.Parts(java.util.Arrays.asList(count, null), "0");
+        }
+        Cell.Number share = Cell.fixedNumber(100.0 * k / n, 1);
+        return new Cell.Parts(List.of(count, share), k + " (" + share.display() + " %)");
     }
 
     private static String list(List<Double> xs) {
         return xs.isEmpty() ? "none" : xs.stream().map(Numbers::compact).collect(Collectors.joining(", "));
-    }
-
-    private static String count(int k, int n) {
-        return n == 0 ? "0" : k + " (" + Numbers.compact(Math.round(1000.0 * k / n) / 10.0) + " %)";
     }
 
     private static String methods(Map<String, Integer> counts) {

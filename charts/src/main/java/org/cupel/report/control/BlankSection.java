@@ -10,12 +10,13 @@ import org.cupel.charts.control.BlankChart;
 import org.cupel.charts.control.CarryOverChart;
 import org.cupel.control.BlankReport;
 import org.cupel.control.BlankResult;
-import org.cupel.control.BlankReview;
 import org.cupel.control.BlankSettings;
 import org.cupel.control.BlankSummary;
 import org.cupel.control.CarryOverRelation;
 import org.cupel.control.Verdict;
+import org.cupel.report.Cell;
 import org.cupel.report.ReportBlock;
+import org.cupel.report.ReportColumn;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
 
@@ -75,42 +76,82 @@ public final class BlankSection {
     }
 
     static ReportTable summaryTable(BlankReport report) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (BlankSummary s : report.summaries()) {
             CarryOverRelation r = s.relation();
-            rows.add(List.of(s.analyte(), Integer.toString(s.n()), Integer.toString(s.pass()), Integer.toString(s.warn()),
-                    Integer.toString(s.fail()), Integer.toString(s.cannotJudge()), Integer.toString(s.missing()),
-                    Integer.toString(s.carryOver()), num(r.spearmanRho(), 3) + " (n = " + r.nRank() + ")",
-                    pValue(r.spearmanP()), slope(r), pValue(r.slopeP())));
+            rows.add(List.of(Cell.text(s.analyte()), Cell.count(s.n()), Cell.count(s.pass()), Cell.count(s.warn()),
+                    Cell.count(s.fail()), Cell.count(s.cannotJudge()), Cell.count(s.missing()), Cell.count(s.carryOver()),
+                    withN(Double.isNaN(r.spearmanRho()) ? null : Cell.significantNumber(r.spearmanRho(), 3),
+                            num(r.spearmanRho(), 3), r.nRank()),
+                    pCell(r.spearmanP()), slopeCell(r), pCell(r.slopeP())));
         }
         String notes = String.join(" ", report.summaries().stream().filter(s -> !s.relation().note().isEmpty())
                 .map(s -> s.analyte() + ": " + s.relation().note() + ".").toList());
-        return new ReportTable("blank-summary", "Blank results per analyte",
-                List.of("Analyte", "n", "Pass", "Warn", "Fail", "Cannot judge", "Missing", "Carry-over",
-                        "Spearman ρ", "p (ρ)", "Slope ± SE", "p (slope)"), rows,
+        ReportColumn.Part n = new ReportColumn.Part("n", "", ReportColumn.CsvType.LONG);
+        ReportColumn.Part value = new ReportColumn.Part("", "", ReportColumn.CsvType.DOUBLE);
+        return ReportTable.typed("blank-summary", "Blank results per analyte",
+                List.of(ReportColumn.text("Analyte", "analyte"), ReportColumn.count("n", "n"),
+                        ReportColumn.count("Pass", "pass"), ReportColumn.count("Warn", "warn"),
+                        ReportColumn.count("Fail", "fail"), ReportColumn.count("Cannot judge", "cannot_judge"),
+                        ReportColumn.count("Missing", "missing"), ReportColumn.count("Carry-over", "carry_over"),
+                        ReportColumn.parts("Spearman ρ", "spearman_rho", value, n),
+                        ReportColumn.number("p (ρ)", "p_spearman_rho", "").withNote(),
+                        ReportColumn.parts("Slope ± SE", "slope", value,
+                                new ReportColumn.Part("se", "", ReportColumn.CsvType.DOUBLE), n),
+                        ReportColumn.number("p (slope)", "p_slope", "").withNote()), rows,
                 "Slope: least squares of blank on the preceding sample's grade, detected pairs only. " + notes);
     }
 
+    /** "0.152 (n = 125)"; "– (n = 2)" when the statistic could not be computed. */
+    private static Cell withN(Cell.Number v, String shown, int n) {
+        return new Cell.Parts(java.util.Arrays.asList(v, Cell.fixedNumber(n, 0)), shown + " (n = " + n + ")");
+    }
+
+    private static Cell slopeCell(CarryOverRelation r) {
+        boolean none = Double.isNaN(r.slope());
+        return new Cell.Parts(java.util.Arrays.asList(none ? null : Cell.significantNumber(r.slope(), 3),
+                none ? null : Cell.significantNumber(r.slopeStdErr(), 2), Cell.fixedNumber(r.nRegression(), 0)),
+                slope(r));
+    }
+
+    private static Cell pCell(double p) {
+        return Double.isNaN(p) ? Cell.dash("not computed") : new Cell.Number(p, Numbers.significant(p, 2), pValue(p));
+    }
+
     static ReportTable findingsTable(BlankReport report) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (BlankResult r : report.results()) {
             if (r.verdict().verdict() == Verdict.PASS) {
                 continue;
             }
             var o = r.observation();
-            rows.add(List.of(o.sampleId(), o.batch(), Integer.toString(o.position()), o.analyte(), BlankReview.describe(r),
-                    r.threshold() == null ? "none" : Numbers.compact(r.threshold().fail()) + " " + o.unit(),
-                    VerdictSection.label(r.verdict().verdict()), r.verdict().rule(),
-                    o.precedingId().isEmpty() ? "(first in batch)" : o.precedingId(),
-                    o.precedingGrade().isMissing() ? "" : o.precedingGrade().display() + " " + o.unit(),
-                    Double.isNaN(r.contaminationRatio()) ? r.ratioNote()
-                            : Numbers.significant(100 * r.contaminationRatio(), 2) + " %",
-                    r.carryOver() ? "yes" : "no"));
+            boolean perDl = o.detectionLimit() > 0 && o.value().isDetected();
+            rows.add(List.of(Cell.text(o.sampleId()), Cell.text(o.batch()), Cell.count(o.position()),
+                    Cell.text(o.analyte()), Cell.text(o.unit()), Cell.assay(o.value()),
+                    perDl ? Cell.significant(o.value().value() / o.detectionLimit(), 3) : Cell.blank(),
+                    r.threshold() == null ? Cell.notComputed("none") : Cell.fixed(r.threshold().fail(), -1),
+                    Cell.text(VerdictSection.label(r.verdict().verdict())), Cell.text(r.verdict().rule()),
+                    Cell.text(o.precedingId().isEmpty() ? "(first in batch)" : o.precedingId()),
+                    o.precedingGrade().isMissing() ? Cell.blank() : Cell.assay(o.precedingGrade()),
+                    Double.isNaN(r.contaminationRatio()) ? Cell.notComputed(r.ratioNote())
+                            : new Cell.Number(100 * r.contaminationRatio(),
+                            Numbers.significant(100 * r.contaminationRatio(), 2),
+                            Numbers.significant(100 * r.contaminationRatio(), 2) + " %"),
+                    Cell.text(r.carryOver() ? "yes" : "no")));
         }
-        return new ReportTable("blank-findings", "Blanks that did not pass",
-                List.of("Blank", "Batch", "Position", "Analyte", "Result", "Fail above", "Verdict", "Rule",
-                        "Preceding sample", "Its grade", "Blank ÷ grade", "Carry-over"), rows,
-                rows.isEmpty() ? "Every blank passed." : "");
+        return ReportTable.typed("blank-findings", "Blanks that did not pass",
+                List.of(ReportColumn.text("Blank", "blank"), ReportColumn.text("Batch", "batch"),
+                        ReportColumn.count("Position", "position"), ReportColumn.text("Analyte", "analyte"),
+                        ReportColumn.text("Unit", "unit"), ReportColumn.assay("Result", "result", ""),
+                        ReportColumn.number("Result ÷ DL", "result_per_detection_limit", ""),
+                        ReportColumn.number("Fail above", "fail_above", "").withNote(),
+                        ReportColumn.text("Verdict", "verdict"), ReportColumn.text("Rule", "rule"),
+                        ReportColumn.text("Preceding sample", "preceding_sample"),
+                        ReportColumn.assay("Its grade", "preceding_grade", ""),
+                        ReportColumn.number("Blank ÷ grade", "blank_per_grade", "%").withNote(),
+                        ReportColumn.text("Carry-over", "carry_over")), rows,
+                rows.isEmpty() ? "Every blank passed." : "Values as the lab reported them, in the unit of the Unit "
+                        + "column.");
     }
 
     /** " (user setting blanks.x; default 5×)" or " (default)". */

@@ -18,7 +18,11 @@ import org.cupel.control.crm.CrmRule;
 import org.cupel.control.crm.RuleAction;
 import org.cupel.control.crm.RuleFinding;
 import org.cupel.control.crm.SeriesReview;
+import org.cupel.control.crm.CertifiedLimits;
+import org.cupel.control.crm.LinearFit;
+import org.cupel.report.Cell;
 import org.cupel.report.ReportBlock;
+import org.cupel.report.ReportColumn;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
 
@@ -39,6 +43,7 @@ public final class CrmSection {
                 + Numbers.compact(r.settings().swapWithinSd()) + " SD of another CRM in the catalog, or at blank "
                 + "level, is reported as a probable swap (after Smee, Bloom, Arne & Heberlein 2024, GEEA 24): a "
                 + "warning without re-assay, left out of the bias and drift statistics."));
+        b.add(new ReportBlock.Table(certificates(r)));
         b.add(new ReportBlock.Table(summary(r)));
         b.add(new ReportBlock.Table(rules(r)));
         List<RuleFinding> findings = new ArrayList<>();
@@ -51,6 +56,9 @@ public final class CrmSection {
             b.add(new ReportBlock.Table(swaps(r)));
         }
         b.add(new ReportBlock.Table(drift(r)));
+        if (r.analytes().stream().anyMatch(a -> a.biasVsGrade().fit().estimated())) {
+            b.add(new ReportBlock.Table(biasVsGrade(r)));
+        }
         if (!r.exceptions().isEmpty()) {
             b.add(new ReportBlock.Table(exceptions(r.exceptions())));
         }
@@ -82,24 +90,89 @@ public final class CrmSection {
         return new ReportBlock.Callout(level, text);
     }
 
+    /**
+     * The certificates in use and the limits they set: certified value and SD as the certificate writes them,
+     * the limits with {@link CertifiedLimits#limitDecimals()} decimals.
+     */
+    private static ReportTable certificates(CrmReview r) {
+        List<List<Cell>> rows = new ArrayList<>();
+        for (SeriesReview s : r.series()) {
+            CertifiedLimits lim = s.limits();
+            rows.add(List.of(Cell.text(s.crm()), Cell.text(s.analyte().name()), Cell.text(s.analyte().unit().symbol()),
+                    onCertificate(lim.certified(), lim.certifiedText()), onCertificate(lim.sd(), lim.sdText()),
+                    limits(lim, 2), limits(lim, 3)));
+        }
+        ReportColumn.Part low = new ReportColumn.Part("low", "", ReportColumn.CsvType.DOUBLE);
+        ReportColumn.Part high = new ReportColumn.Part("high", "", ReportColumn.CsvType.DOUBLE);
+        return ReportTable.typed("crm-certificates", "Certificates and control limits",
+                List.of(ReportColumn.text("CRM", "crm"), ReportColumn.text("Analyte", "analyte"),
+                        ReportColumn.text("Unit", "unit"), ReportColumn.number("Certified", "certified", ""),
+                        ReportColumn.number("Certificate SD", "certificate_sd", ""),
+                        ReportColumn.parts("Warning limits (± 2 SD)", "warning_limit", low, high),
+                        ReportColumn.parts("Failure limits (± 3 SD)", "failure_limit", low, high)),
+                rows, "Certified value and between-lab SD as the certificate gives them (crm-catalog.csv), in the "
+                        + "unit of the Unit column; limits = certified ± 2 and ± 3 SD, shown with at most one "
+                        + "decimal more than the certified value (the judgement uses them unrounded).");
+    }
+
+    /** Each CRM's results against its certificate; means on the limits' scale, an SD of results to 3 digits. */
     private static ReportTable summary(CrmReview r) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (SeriesReview s : r.series()) {
             BiasEstimate bias = s.bias();
-            rows.add(List.of(s.crm(), s.analyte().name(), s.analyte().unit().symbol(), num(s.limits().certified()),
-                    num(s.limits().sd()), Integer.toString(bias.n()), num(bias.meanResult()), num(bias.sdResult()),
-                    pct(bias.meanBiasPct()) + interval(bias.meanLowPct(), bias.meanHighPct()),
-                    pct(bias.median().median()) + interval(bias.median().low(), bias.median().high()),
-                    inside(bias), Long.toString(s.failures()), Long.toString(s.warnings()), Long.toString(s.swaps()),
-                    s.projectLimits().available() ? num(s.projectLimits().mean()) + " ± " + num(2 * s.projectLimits().sd())
-                            : s.projectLimits().note()));
+            CertifiedLimits lim = s.limits();
+            rows.add(List.of(Cell.text(s.crm()), Cell.text(s.analyte().label()),
+                    onCertificate(lim.certified(), lim.certifiedText()), Cell.count(bias.n()),
+                    bias.n() > 0 ? onCertificate(bias.meanResult(), lim.limitText(bias.meanResult())) : Cell.dash("no result"),
+                    Cell.significant(bias.sdResult(), 3),
+                    biasInterval(bias.meanBiasPct(), bias.meanLowPct(), bias.meanHighPct()),
+                    biasInterval(bias.median().median(), bias.median().low(), bias.median().high()),
+                    Cell.text(inside(bias)), Cell.count(s.failures()), Cell.count(s.warnings()), Cell.count(s.swaps()),
+                    s.projectLimits().available() ? projectLimits(lim, s.projectLimits().mean(), s.projectLimits().sd())
+                            : Cell.notComputed(s.projectLimits().note())));
         }
-        return new ReportTable("crm-summary", "CRM results per CRM and analyte",
-                List.of("CRM", "Analyte", "Unit", "Certified", "Certificate SD", "n", "Mean", "SD of results",
-                        "Mean bias % (95 % CI)", "Median bias % (95 % CI)", "Certified inside CI", "Failures",
-                        "Warnings", "Swaps", "Project mean ± 2 SD"),
-                rows, "n, mean, SD and bias exclude probable swaps. Mean-bias interval: Student t; median-bias "
-                        + "interval: distribution-free sign-test interval (Conover 1999).");
+        return ReportTable.typed("crm-summary", "CRM results per CRM and analyte",
+                List.of(ReportColumn.text("CRM", "crm"), ReportColumn.text("Analyte", "analyte"),
+                        ReportColumn.number("Certified", "certified", ""), ReportColumn.count("n", "n"),
+                        ReportColumn.number("Mean", "mean", "").withNote(),
+                        ReportColumn.number("SD of results", "sd_of_results", "").withNote(),
+                        ReportColumn.interval("Mean bias % (95 % CI)", "mean_bias", "%").withNote(),
+                        ReportColumn.interval("Median bias % (95 % CI)", "median_bias", "%").withNote(),
+                        ReportColumn.text("Certified inside CI", "certified_inside_ci"),
+                        ReportColumn.count("Failures", "failures"), ReportColumn.count("Warnings", "warnings"),
+                        ReportColumn.count("Swaps", "swaps"),
+                        ReportColumn.parts("Project mean ± 2 SD", "project_mean",
+                                new ReportColumn.Part("", "", ReportColumn.CsvType.DOUBLE),
+                                new ReportColumn.Part("two_sd", "", ReportColumn.CsvType.DOUBLE)).withNote()),
+                rows, "In the unit of each analyte. n, mean, SD and bias exclude probable swaps. Mean-bias interval: "
+                        + "Student t; median-bias interval: distribution-free sign-test interval (Conover 1999).");
+    }
+
+    /** A number from the certificate, or on its scale, as {@code text} shows it. */
+    private static Cell onCertificate(double v, String text) {
+        return Double.isFinite(v) ? new Cell.Number(v, text, text) : Cell.dash("not computed");
+    }
+
+    private static Cell limits(CertifiedLimits lim, int k) {
+        double lo = lim.certified() - k * lim.sd();
+        double hi = lim.certified() + k * lim.sd();
+        Cell.Number low = new Cell.Number(lo, lim.limitText(lo), lim.limitText(lo));
+        Cell.Number high = new Cell.Number(hi, lim.limitText(hi), lim.limitText(hi));
+        return new Cell.Parts(List.of(low, high), low.display() + " to " + high.display());
+    }
+
+    private static Cell projectLimits(CertifiedLimits lim, double mean, double sd) {
+        Cell.Number m = new Cell.Number(mean, lim.limitText(mean), lim.limitText(mean));
+        Cell.Number twoSd = Cell.significantNumber(2 * sd, 3);
+        return new Cell.Parts(List.of(m, twoSd), m.display() + " ± " + twoSd.display());
+    }
+
+    /** A bias in percent with its interval; the sign is the finding. */
+    private static Cell biasInterval(double v, double lo, double hi) {
+        if (!Double.isFinite(v)) {
+            return Cell.dash("not computed");
+        }
+        return Cell.interval(Cell.signedFixedNumber(v, 2), lo, hi, x -> Cell.signedFixedNumber(x, 2));
     }
 
     private static ReportTable rules(CrmReview r) {
@@ -127,37 +200,37 @@ public final class CrmSection {
     }
 
     private static ReportTable swaps(CrmReview r) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (SeriesReview s : r.series()) {
             for (CrmResult x : s.results()) {
                 if (x.isSwap()) {
-                    rows.add(List.of(x.point().sampleId(), x.point().batchId(), s.crm(), s.analyte().name(),
-                            x.point().value().display(), x.swapWith(), x.reason()));
+                    rows.add(List.of(Cell.text(x.point().sampleId()), Cell.text(x.point().batchId()), Cell.text(s.crm()),
+                            Cell.text(s.analyte().name()), Cell.assay(x.point().value()),
+                            Cell.text(s.analyte().unit().symbol()), Cell.text(x.swapWith()), Cell.text(x.reason())));
                 }
             }
         }
-        return new ReportTable("crm-swaps", "Probable swapped or mislabelled CRMs",
-                List.of("Sample", "Batch", "Labelled as", "Analyte", "Result", "Matches", "Reason"), rows,
-                "Not counted as lab failures and not sent for re-assay; check the insertion record.");
+        return ReportTable.typed("crm-swaps", "Probable swapped or mislabelled CRMs",
+                List.of(ReportColumn.text("Sample", "sample"), ReportColumn.text("Batch", "batch"),
+                        ReportColumn.text("Labelled as", "labelled_as"), ReportColumn.text("Analyte", "analyte"),
+                        ReportColumn.assay("Result", "result", ""), ReportColumn.text("Unit", "unit"),
+                        ReportColumn.text("Matches", "matches"), ReportColumn.text("Reason", "reason")), rows,
+                "Results as the lab reported them. Not counted as lab failures and not sent for re-assay; check the "
+                        + "insertion record.");
     }
 
     private static ReportTable drift(CrmReview r) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (SeriesReview s : r.series()) {
             rows.add(driftRow(s.crm(), s.analyte().name(), s.drift()));
         }
         for (AnalyteReview a : r.analytes()) {
             rows.add(driftRow("all CRMs", a.analyte(), a.drift()));
-            if (a.biasVsGrade().fit().estimated()) {
-                var f = a.biasVsGrade().fit();
-                rows.add(List.of("bias vs grade", a.analyte(), "CRMs", String.format(Locale.ROOT,
-                        "slope %s %% per unit grade (95 %% CI %s to %s, %s, n = %d CRMs)", num(f.slope()),
-                        num(f.slopeLow()), num(f.slopeHigh()), f.pText(), f.n()),
-                        f.pValue() < r.settings().driftAlpha() ? "bias changes with grade" : "no grade dependence shown"));
-            }
         }
-        return new ReportTable("crm-drift", "Drift: trend of z on time, EWMA and tabular CUSUM",
-                List.of("Series", "Analyte", "Time axis", "Trend of z", "Findings"), rows, String.format(Locale.ROOT,
+        return ReportTable.typed("crm-drift", "Drift: trend of z on time, EWMA and tabular CUSUM",
+                List.of(ReportColumn.text("Series", "series"), ReportColumn.text("Analyte", "analyte"),
+                        ReportColumn.text("Time axis", "time_axis"), trendColumn("Trend of z (SD per time unit)",
+                                "trend_z"), ReportColumn.text("Findings", "findings")), rows, String.format(Locale.ROOT,
                         "EWMA λ = %s, L = %s (NIST/SEMATECH e-Handbook 6.3.2.4); CUSUM k = %s, h = %s (Montgomery, "
                                 + "Introduction to Statistical Quality Control); trend reported when p < %s. A result "
                                 + "beyond 3 SD whose neighbours in its series are not beyond 2 SD on its side is an "
@@ -167,13 +240,47 @@ public final class CrmSection {
                         Numbers.compact(r.settings().driftAlpha())));
     }
 
-    private static List<String> driftRow(String series, String analyte, org.cupel.control.crm.SeriesDrift d) {
-        String trend = d.trend().estimated() ? String.format(Locale.ROOT, "%s (95 %% CI %s to %s, %s, n = %d)",
-                num(d.trend().slope()), num(d.trend().slopeLow()), num(d.trend().slopeHigh()), d.trend().pText(),
-                d.trend().n()) : d.trend().note();
+    /** Bias against grade across the CRMs of each analyte, where it could be fitted. */
+    private static ReportTable biasVsGrade(CrmReview r) {
+        List<List<Cell>> rows = new ArrayList<>();
+        for (AnalyteReview a : r.analytes()) {
+            var f = a.biasVsGrade().fit();
+            rows.add(List.of(Cell.text(a.analyte()), trend(f), Cell.text(!f.estimated() ? ""
+                    : f.pValue() < r.settings().driftAlpha() ? "bias changes with grade" : "no grade dependence shown")));
+        }
+        return ReportTable.typed("crm-bias-vs-grade", "Mean bias against certified grade, across the CRMs",
+                List.of(ReportColumn.text("Analyte", "analyte"), trendColumn("Slope (% bias per unit grade)", "slope"),
+                        ReportColumn.text("Finding", "finding")), rows,
+                "Least-squares line of each CRM's mean bias (%) on its certified value; n counts CRMs.");
+    }
+
+    private static ReportColumn trendColumn(String header, String key) {
+        return ReportColumn.parts(header, key, new ReportColumn.Part("", "", ReportColumn.CsvType.DOUBLE),
+                new ReportColumn.Part("lower", "", ReportColumn.CsvType.DOUBLE),
+                new ReportColumn.Part("upper", "", ReportColumn.CsvType.DOUBLE),
+                new ReportColumn.Part("p", "", ReportColumn.CsvType.DOUBLE),
+                new ReportColumn.Part("n", "", ReportColumn.CsvType.LONG)).withNote();
+    }
+
+    /** "0.0266 (95 % CI 0.0216 to 0.0317, p < 0.0001, n = 31)", one CSV column per number. */
+    private static Cell trend(LinearFit f) {
+        if (!f.estimated()) {
+            return Cell.notComputed(f.note());
+        }
+        Cell.Number slope = Cell.significantNumber(f.slope(), 3);
+        Cell.Number lo = Cell.significantNumber(f.slopeLow(), 3);
+        Cell.Number hi = Cell.significantNumber(f.slopeHigh(), 3);
+        Cell.Number p = Double.isFinite(f.pValue()) ? Cell.significantNumber(f.pValue(), 2) : null;
+        return new Cell.Parts(java.util.Arrays.asList(slope, lo, hi, p, Cell.fixedNumber(f.n(), 0)),
+                String.format(Locale.ROOT, "%s (95 %% CI %s to %s, %s, n = %d)", slope.display(), lo.display(),
+                        hi.display(), f.pText(), f.n()));
+    }
+
+    private static List<Cell> driftRow(String series, String analyte, org.cupel.control.crm.SeriesDrift d) {
         List<String> found = new ArrayList<>(d.findings());
         d.outliers().forEach(o -> found.add("outlier, not drift: " + o.finding()));
-        return List.of(series, analyte, d.timeAxis(), trend, found.isEmpty() ? "none" : String.join("; ", found));
+        return List.of(Cell.text(series), Cell.text(analyte), Cell.text(d.timeAxis()), trend(d.trend()),
+                Cell.text(found.isEmpty() ? "none" : String.join("; ", found)));
     }
 
     private static ReportTable exceptions(List<CrmException> xs) {

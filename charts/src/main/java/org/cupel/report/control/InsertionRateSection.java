@@ -3,12 +3,15 @@ package org.cupel.report.control;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import org.cupel.assay.Numbers;
 import org.cupel.control.BatchInsertion;
 import org.cupel.control.InsertionRate;
 import org.cupel.control.InsertionRates;
+import org.cupel.report.Cell;
 import org.cupel.report.ReportBlock;
+import org.cupel.report.ReportColumn;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
 
@@ -26,8 +29,14 @@ public final class InsertionRateSection {
         blocks.add(new ReportBlock.Table(table(rates)));
         Map<String, Object> headlines = new LinkedHashMap<>();
         headlines.put("batchesBelowInsertionTarget", below);
-        for (InsertionRate r : rates.overall().rates()) {
-            headlines.put("insertionRate " + r.role(), r.rate());
+        List<InsertionRate> overall = rates.overall().rates();
+        for (int i = 0; i < overall.size(); i++) {
+            InsertionRate r = overall.get(i);
+            if (!Double.isNaN(r.rate())) {
+                // A rate is a percentage of the routine samples, at the precision of the table.
+                headlines.put("insertionRatePercent." + InsertionRates.ROLES.get(i).name().toLowerCase(Locale.ROOT),
+                        Math.round(1000 * r.rate()) / 10.0);
+            }
         }
         return new ReportSection("insertion-rates", "Insertion rates", blocks, headlines);
     }
@@ -37,38 +46,47 @@ public final class InsertionRateSection {
             "Lab repeat", "Umpire");
 
     static ReportTable table(InsertionRates rates) {
-        List<String> columns = new ArrayList<>(List.of("Batch", "Samples", "Routine"));
-        columns.addAll(SHORT_NAMES);
-        columns.add("Below target");
-        List<List<String>> rows = new ArrayList<>();
+        List<ReportColumn> columns = new ArrayList<>(List.of(ReportColumn.text("Batch", "batch"),
+                ReportColumn.count("Samples", "samples"), ReportColumn.count("Routine", "routine")));
+        for (int i = 0; i < SHORT_NAMES.size(); i++) {
+            columns.add(ReportColumn.parts(SHORT_NAMES.get(i), InsertionRates.ROLES.get(i).name().toLowerCase(Locale.ROOT),
+                    new ReportColumn.Part("", "", ReportColumn.CsvType.LONG),
+                    new ReportColumn.Part("rate", "%", ReportColumn.CsvType.DOUBLE)));
+        }
+        columns.add(ReportColumn.text("Below target", "below_target"));
+        List<List<Cell>> rows = new ArrayList<>();
         for (BatchInsertion b : rates.batches()) {
             rows.add(row(b));
         }
         rows.add(row(rates.overall()));
-        return new ReportTable("insertion-rates", "Insertion rates per batch and overall", columns, rows,
-                "Count (rate): rate = samples of the type ÷ routine samples of the batch (1 in 20 = 5 %). Targets: "
+        return ReportTable.typed("insertion-rates", "Insertion rates per batch and overall", columns, rows,
+                "Count (rate): rate = samples of the type ÷ routine samples of the batch (1 in 20 = 5.0 %). Targets: "
                         + targets(rates) + "; about 1 in 20 each is common practice; "
                         + "Abzalov (2008, Exploration and Mining Geology 17) gives field duplicates 5–10 %, pulp "
                         + "duplicates 3–5 %, standards 3–5 % and about 5 % to an umpire lab.");
     }
 
-    private static List<String> row(BatchInsertion b) {
-        List<String> row = new ArrayList<>(List.of(b.batch(), Integer.toString(b.nSamples()),
-                Integer.toString(b.nRoutine())));
+    private static List<Cell> row(BatchInsertion b) {
+        List<Cell> row = new ArrayList<>(List.of(Cell.text(b.batch()), Cell.count(b.nSamples()),
+                Cell.count(b.nRoutine())));
         List<String> low = new ArrayList<>();
         for (int i = 0; i < b.rates().size(); i++) {
             InsertionRate r = b.rates().get(i);
-            row.add(Double.isNaN(r.rate()) ? Integer.toString(r.count()) : r.count() + " (" + percent(r.rate()) + ")");
+            Cell.Number count = Cell.fixedNumber(r.count(), 0);
+            row.add(Double.isNaN(r.rate()) ? new Cell.Parts(java.util.Arrays.asList(count, null), count.display())
+                    : new Cell.Parts(List.of(count, Cell.fixedNumber(100 * r.rate(), 1)),
+                    r.count() + " (" + percent(r.rate()) + ")"));
             if (r.belowTarget()) {
                 low.add(SHORT_NAMES.get(i));
             }
         }
-        row.add(low.isEmpty() ? "" : String.join(", ", low));
+        row.add(Cell.text(low.isEmpty() ? "" : String.join(", ", low)));
         return row;
     }
 
-    static String percent(double fraction) {
-        return Numbers.significant(100 * fraction, 2) + "%";
+    /** A rate as a percentage with one decimal: {@code 5.0 %}, not 0.05 (common practice). */
+    public static String percent(double fraction) {
+        return Numbers.fixed(100 * fraction, 1) + " %";
     }
 
     /** "CRM 5 %, Blank 5 %, ..." for the roles with a target. */

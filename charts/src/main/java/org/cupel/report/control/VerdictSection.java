@@ -20,7 +20,9 @@ import org.cupel.control.UmpireLab;
 import org.cupel.control.Verdict;
 import org.cupel.control.VerdictReason;
 import org.cupel.report.BatchRanges;
+import org.cupel.report.Cell;
 import org.cupel.report.ReportBlock;
+import org.cupel.report.ReportColumn;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
 
@@ -147,7 +149,7 @@ public final class VerdictSection {
     }
 
     static ReportTable verdictTable(List<BatchVerdict> verdicts) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (BatchVerdict v : verdicts) {
             List<String> per = new ArrayList<>();
             for (AnalyteVerdict a : v.analytes()) {
@@ -157,11 +159,15 @@ public final class VerdictSection {
             for (VerdictReason r : v.reasons()) {
                 reasons.add(reason(r));
             }
-            rows.add(List.of(v.batch(), v.lab(), Integer.toString(v.nSamples()), label(v.verdict()),
-                    String.join("; ", per), String.join("; ", reasons)));
+            rows.add(List.of(Cell.text(v.batch()), Cell.text(v.lab()), Cell.count(v.nSamples()),
+                    Cell.text(label(v.verdict())), Cell.text(String.join("; ", per)),
+                    Cell.text(String.join("; ", reasons))));
         }
-        return new ReportTable("batch-verdicts", "Verdict per batch",
-                List.of("Batch", "Lab", "Samples", "Verdict", "Per analyte (control results)", "Reasons"), rows,
+        return ReportTable.typed("batch-verdicts", "Verdict per batch",
+                List.of(ReportColumn.text("Batch", "batch"), ReportColumn.text("Lab", "lab"),
+                        ReportColumn.count("Samples", "samples"), ReportColumn.text("Verdict", "verdict"),
+                        ReportColumn.text("Per analyte (control results)", "per_analyte"),
+                        ReportColumn.text("Reasons", "reasons")), rows,
                 "Reasons list every control result that did not pass, with the rule that decided it.");
     }
 
@@ -198,25 +204,34 @@ public final class VerdictSection {
 
     /** The re-assay list as a table; also written by {@code cupel batches --reassay-csv}. */
     public static ReportTable reassayTable(ReassayList reassay) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (ReassayEntry e : reassay.entries()) {
-            rows.add(List.of(e.sampleId(), e.batch(), Integer.toString(e.position()), e.analyte(),
-                    String.join(", ", e.triggeredBy()), e.reason()));
+            rows.add(List.of(Cell.text(e.sampleId()), Cell.text(e.batch()), Cell.count(e.position()),
+                    Cell.text(e.analyte()), Cell.text(String.join(", ", e.triggeredBy())), Cell.text(e.reason())));
         }
-        return new ReportTable("reassay-list", "Re-assay list",
-                List.of("Sample ID", "Batch", "Position", "Analyte", "Triggered by", "Reason"), rows,
+        return ReportTable.typed("reassay-list", "Re-assay list",
+                List.of(ReportColumn.text("Sample ID", "sample_id"), ReportColumn.text("Batch", "batch"),
+                        ReportColumn.count("Position", "position"), ReportColumn.text("Analyte", "analyte"),
+                        ReportColumn.text("Triggered by", "triggered_by"), ReportColumn.text("Reason", "reason")), rows,
                 rows.isEmpty() ? "No control failure calls for re-assay." : "");
     }
 
     static ReportTable bracketTable(ReassayList reassay) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (ReassayBracket b : reassay.brackets()) {
-            rows.add(List.of(b.controlId(), b.role(), b.batch(), b.analyte(), b.rule(),
-                    b.nSamples() == 0 ? "none" : b.fromPosition() + "–" + b.toPosition(), Integer.toString(b.nSamples()),
-                    b.note()));
+            rows.add(List.of(Cell.text(b.controlId()), Cell.text(b.role()), Cell.text(b.batch()), Cell.text(b.analyte()),
+                    Cell.text(b.rule()), b.nSamples() == 0 ? new Cell.Parts(java.util.Arrays.asList(null, null), "none")
+                            : new Cell.Parts(List.of(Cell.fixedNumber(b.fromPosition(), 0),
+                            Cell.fixedNumber(b.toPosition(), 0)), b.fromPosition() + "–" + b.toPosition()),
+                    Cell.count(b.nSamples()), Cell.text(b.note())));
         }
-        return new ReportTable("reassay-brackets", "Re-assay brackets per failed control",
-                List.of("Failed control", "Role", "Batch", "Analyte", "Rule", "Positions", "Samples", "Bounded by"),
+        return ReportTable.typed("reassay-brackets", "Re-assay brackets per failed control",
+                List.of(ReportColumn.text("Failed control", "failed_control"), ReportColumn.text("Role", "role"),
+                        ReportColumn.text("Batch", "batch"), ReportColumn.text("Analyte", "analyte"),
+                        ReportColumn.text("Rule", "rule"), ReportColumn.parts("Positions", "position",
+                                new ReportColumn.Part("from", "", ReportColumn.CsvType.LONG),
+                                new ReportColumn.Part("to", "", ReportColumn.CsvType.LONG)),
+                        ReportColumn.count("Samples", "samples"), ReportColumn.text("Bounded by", "bounded_by")),
                 rows, "");
     }
 

@@ -26,7 +26,9 @@ import org.cupel.duplicates.RmaFit;
 import org.cupel.duplicates.RuleOutcome;
 import org.cupel.duplicates.TestResult;
 import org.cupel.report.Bibliography;
+import org.cupel.report.Cell;
 import org.cupel.report.Reference;
+import org.cupel.report.ReportColumn;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
@@ -195,41 +197,58 @@ public final class DuplicatesSection {
     }
 
     private static ReportTable precisionTable(DuplicateReport r) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (DuplicateSetResult s : r.sets()) {
             PrecisionSummary p = s.precision();
-            rows.add(List.of(s.type().label(), Integer.toString(p.pairs()), Integer.toString(p.usedRelative()),
-                    exclusions(p.excludedRelative()), pct0(p.hardLimit()), value(p.percentWithinLimit(), 1, ""),
-                    p.rule().name().toLowerCase(Locale.ROOT).replace('_', ' '), estimatePct(p.rmsCv()),
-                    p.meanCv().available() ? pct2(p.meanCv().value()) : p.meanCv().note(),
-                    value(p.repeatabilitySd(), 4, ""), value(p.repeatabilityLimit(), 4, "")));
+            rows.add(List.of(Cell.text(s.type().label()), Cell.count(p.pairs()), Cell.count(p.usedRelative()),
+                    Cell.text(exclusions(p.excludedRelative())), Cell.percent(100 * p.hardLimit(), 0),
+                    percentCell(p.percentWithinLimit(), 1), Cell.text(ruleWord(p.rule())),
+                    percentInterval(p.rmsCv()), p.meanCv().available() ? Cell.percent(100 * p.meanCv().value(), 2)
+                            : Cell.notComputed(p.meanCv().note()),
+                    significantCell(p.repeatabilitySd(), 4), significantCell(p.repeatabilityLimit(), 4)));
         }
-        return new ReportTable("duplicates-precision-" + r.analyte(), r.analyte() + ": precision by duplicate type",
-                List.of("Type", "Pairs", "Used (relative)", "Excluded (reason: n)", "HARD limit", "% within limit",
-                        "Rule", "RMS CV (95 % CI)", "Mean CV (biased low)", "s_r (" + r.unit() + ")",
-                        "r = 2.8·s_r (" + r.unit() + ")"), rows,
+        return ReportTable.typed("duplicates-precision-" + r.analyte(), r.analyte() + ": precision by duplicate type",
+                List.of(ReportColumn.text("Type", "type"), ReportColumn.count("Pairs", "pairs"),
+                        ReportColumn.count("Used (relative)", "pairs_used_relative"),
+                        ReportColumn.text("Excluded (reason: n)", "excluded"),
+                        ReportColumn.number("HARD limit", "hard_limit", "%"),
+                        ReportColumn.number("% within limit", "within_limit", "%").withNote(),
+                        ReportColumn.text("Rule", "rule"),
+                        ReportColumn.interval("RMS CV (95 % CI)", "rms_cv", "%").withNote(),
+                        ReportColumn.number("Mean CV (biased low)", "mean_cv", "%").withNote(),
+                        ReportColumn.number("s_r (" + r.unit() + ")", "s_r", r.unit()).withNote(),
+                        ReportColumn.number("r = 2.8·s_r (" + r.unit() + ")", "r", r.unit()).withNote()), rows,
                 "RMS CV after Stanley & Lawie (2007); the arithmetic mean CV is shown only for comparison, it is "
                         + "biased low. s_r and r over pairs with two detected values (ISO 5725-2, -6).");
     }
 
     private static ReportTable batchTable(DuplicateReport r) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (DuplicateSetResult s : r.sets()) {
             for (BatchPrecision b : s.batches()) {
                 PrecisionSummary p = b.precision();
-                rows.add(List.of(b.batch().isEmpty() ? "(no batch)" : b.batch(), s.type().label(),
-                        Integer.toString(p.pairs()), Integer.toString(p.usedRelative()),
-                        value(p.percentWithinLimit(), 1, ""), p.rule().name().toLowerCase(Locale.ROOT).replace('_', ' '),
-                        b.rule().n() > 0 ? p(b.rule().pValue()) : b.rule().note(),
-                        p.rmsCv().available() ? pct2(p.rmsCv().value()) : p.rmsCv().note(),
-                        b.dispersion().available() ? fmt(b.dispersion().ratio(), 3) : "",
-                        b.dispersion().available() ? p(b.dispersion().pValue()) : b.dispersion().note(),
-                        b.lessPrecise() ? "less precise than the set" : ""));
+                rows.add(List.of(Cell.text(b.batch().isEmpty() ? "(no batch)" : b.batch()), Cell.text(s.type().label()),
+                        Cell.count(p.pairs()), Cell.count(p.usedRelative()), percentCell(p.percentWithinLimit(), 1),
+                        Cell.text(ruleWord(p.rule())),
+                        b.rule().n() > 0 ? Cell.pValue(b.rule().pValue()) : Cell.notComputed(b.rule().note()),
+                        p.rmsCv().available() ? Cell.percent(100 * p.rmsCv().value(), 2)
+                                : Cell.notComputed(p.rmsCv().note()),
+                        b.dispersion().available() ? Cell.significant(b.dispersion().ratio(), 3) : Cell.blank(),
+                        b.dispersion().available() ? Cell.pValue(b.dispersion().pValue())
+                                : Cell.notComputed(b.dispersion().note()),
+                        Cell.text(b.lessPrecise() ? "less precise than the set" : "")));
             }
         }
-        return new ReportTable("duplicates-batches-" + r.analyte(), r.analyte() + ": precision by batch",
-                List.of("Batch", "Type", "Pairs", "Used (relative)", "% within limit", "Rule", "p (binomial)",
-                        "RMS CV", "RMS CV / set's", "p (chi-square)", "Flag"), rows,
+        return ReportTable.typed("duplicates-batches-" + r.analyte(), r.analyte() + ": precision by batch",
+                List.of(ReportColumn.text("Batch", "batch"), ReportColumn.text("Type", "type"),
+                        ReportColumn.count("Pairs", "pairs"), ReportColumn.count("Used (relative)", "pairs_used_relative"),
+                        ReportColumn.number("% within limit", "within_limit", "%").withNote(),
+                        ReportColumn.text("Rule", "rule"),
+                        ReportColumn.number("p (binomial)", "p_binomial", "").withNote(),
+                        ReportColumn.number("RMS CV", "rms_cv", "%").withNote(),
+                        ReportColumn.number("RMS CV / set's", "rms_cv_ratio_to_set", ""),
+                        ReportColumn.number("p (chi-square)", "p_chi_square", "").withNote(),
+                        ReportColumn.text("Flag", "flag")), rows,
                 "A batch has few pairs, and one wide pair moves its share by tens of points, so it fails the rule "
                         + "only when the one-sided exact binomial test rejects \"share within the HARD limit ≥ the "
                         + "required share\" (p below duplicates.batchRuleAlpha, default 0.05); a share below the rule "
@@ -240,26 +259,35 @@ public final class DuplicatesSection {
     }
 
     private static ReportTable modelTable(DuplicateReport r) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (DuplicateSetResult s : r.sets()) {
             PrecisionModelResult m = s.model();
             if (!m.available()) {
-                rows.add(List.of(s.type().label(), "—", m.note(), "", "", "", "", "", "", ""));
+                rows.add(List.of(Cell.text(s.type().label()), Cell.text("—"), Cell.notComputed(m.note()), Cell.blank(),
+                        Cell.blank(), Cell.blank(), Cell.blank(), Cell.blank(), Cell.blank(), Cell.text("")));
                 continue;
             }
             for (ModelFit f : List.of(m.thompsonHowarth(), m.rmsRegression())) {
                 boolean th = f == m.thompsonHowarth();
                 String notes = String.join("; ", java.util.stream.Stream.of(f.constraint(), th ? m.fitNote() : "")
                         .filter(x -> !x.isEmpty()).toList());
-                rows.add(List.of(s.type().label(), f.method(), estimate(f.sigma0(), 4), estimate(f.k(), 4),
-                        fmt(f.rSquared(), 3), Integer.toString(m.groups().groups()),
-                        Integer.toString(m.groups().dropped()), th ? line(m.line90()) : "",
-                        th ? line(m.line99()) : "", notes));
+                rows.add(List.of(Cell.text(s.type().label()), Cell.text(f.method()), significantInterval(f.sigma0(), 4),
+                        significantInterval(f.k(), 4), Cell.significant(f.rSquared(), 3),
+                        Cell.count(m.groups().groups()), Cell.count(m.groups().dropped()),
+                        th ? line(m.line90()) : Cell.blank(), th ? line(m.line99()) : Cell.blank(), Cell.text(notes)));
             }
         }
-        return new ReportTable("duplicates-model-" + r.analyte(), r.analyte() + ": precision model σ_c = σ₀ + k·c",
-                List.of("Type", "Method", "σ₀ (" + r.unit() + ", 95 % CI)", "k (95 % CI)", "R²", "Groups",
-                        "Pairs dropped", "Above 90 % line (expected; p)", "Above 99 % line (expected; p)", "Notes"),
+        ReportColumn.Part count = new ReportColumn.Part("", "", ReportColumn.CsvType.LONG);
+        ReportColumn.Part expected = new ReportColumn.Part("expected", "", ReportColumn.CsvType.DOUBLE);
+        ReportColumn.Part p = new ReportColumn.Part("p", "", ReportColumn.CsvType.DOUBLE);
+        return ReportTable.typed("duplicates-model-" + r.analyte(), r.analyte() + ": precision model σ_c = σ₀ + k·c",
+                List.of(ReportColumn.text("Type", "type"), ReportColumn.text("Method", "method"),
+                        ReportColumn.interval("σ₀ (" + r.unit() + ", 95 % CI)", "sigma0", r.unit()).withNote(),
+                        ReportColumn.interval("k (95 % CI)", "k", "").withNote(), ReportColumn.number("R²", "r_squared", ""),
+                        ReportColumn.count("Groups", "groups"), ReportColumn.count("Pairs dropped", "pairs_dropped"),
+                        ReportColumn.parts("Above 90 % line (expected; p)", "above_90_line", count, expected, p),
+                        ReportColumn.parts("Above 99 % line (expected; p)", "above_99_line", count, expected, p),
+                        ReportColumn.text("Notes", "notes")),
                 rows,
                 "Thompson–Howarth (1978): pairs sorted by mean (runs of equal means in a fixed pseudo-random order), "
                         + "groups of 11 from the lowest, median |d| regressed on group mean by least squares with "
@@ -270,48 +298,60 @@ public final class DuplicatesSection {
     }
 
     private static ReportTable gradeTable(DuplicateReport r) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (DuplicateSetResult s : r.sets()) {
             for (GradePrecision g : s.model().atGrades()) {
-                rows.add(List.of(s.type().label(), compact(g.grade()), estimatePct(g.thompsonHowarth()),
-                        estimatePct(g.rmsRegression())));
+                rows.add(List.of(Cell.text(s.type().label()), new Cell.Number(g.grade(), compact(g.grade()),
+                        compact(g.grade())), percentInterval(g.thompsonHowarth()), percentInterval(g.rmsRegression())));
             }
         }
-        return new ReportTable("duplicates-grades-" + r.analyte(), r.analyte() + ": precision P_c = 2σ_c/c at chosen grades",
-                List.of("Type", "Grade (" + r.unit() + ")", "Thompson–Howarth (95 % CI)", "RMS SD regression (95 % CI)"),
+        return ReportTable.typed("duplicates-grades-" + r.analyte(),
+                r.analyte() + ": precision P_c = 2σ_c/c at chosen grades",
+                List.of(ReportColumn.text("Type", "type"), ReportColumn.number("Grade (" + r.unit() + ")", "grade", r.unit()),
+                        ReportColumn.interval("Thompson–Howarth (95 % CI)", "precision_thompson_howarth", "%").withNote(),
+                        ReportColumn.interval("RMS SD regression (95 % CI)", "precision_rms_sd_regression", "%").withNote()),
                 rows, "Grades: the project's CRM grades unless set in duplicates.precisionGrades.");
     }
 
     private static ReportTable biasTable(DuplicateReport r) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (DuplicateSetResult s : r.sets()) {
             BiasResult b = s.bias();
             RmaFit rma = b.rma();
-            rows.add(List.of(s.type().label(), Integer.toString(b.n()),
-                    rma.available() ? fmt(rma.slope(), 4) + " (" + fmt(rma.slopeCi95()[0], 4) + " to "
-                            + fmt(rma.slopeCi95()[1], 4) + ")" : rma.note(),
-                    rma.available() ? fmt(rma.intercept(), 4) + " (" + fmt(rma.interceptCi95()[0], 4) + " to "
-                            + fmt(rma.interceptCi95()[1], 4) + ")" : "",
-                    estimatePct(b.meanRelativeBias()), test(b.pairedT()), test(b.wilcoxon())));
+            rows.add(List.of(Cell.text(s.type().label()), Cell.count(b.n()),
+                    rma.available() ? Cell.interval(Cell.significantNumber(rma.slope(), 4), rma.slopeCi95()[0],
+                            rma.slopeCi95()[1], x -> Cell.significantNumber(x, 4)) : Cell.notComputed(rma.note()),
+                    rma.available() ? Cell.interval(Cell.significantNumber(rma.intercept(), 4), rma.interceptCi95()[0],
+                            rma.interceptCi95()[1], x -> Cell.significantNumber(x, 4)) : Cell.blank(),
+                    signedPercentInterval(b.meanRelativeBias()), test(b.pairedT()), test(b.wilcoxon())));
         }
-        return new ReportTable("duplicates-bias-" + r.analyte(), r.analyte() + ": bias of duplicate against original",
-                List.of("Type", "Pairs", "RMA slope (95 % CI)", "RMA intercept (" + r.unit() + ", 95 % CI)",
-                        "Mean relative bias (95 % CI)", "Paired t p", "Wilcoxon p"), rows,
+        return ReportTable.typed("duplicates-bias-" + r.analyte(), r.analyte() + ": bias of duplicate against original",
+                List.of(ReportColumn.text("Type", "type"), ReportColumn.count("Pairs", "pairs"),
+                        ReportColumn.interval("RMA slope (95 % CI)", "rma_slope", "").withNote(),
+                        ReportColumn.interval("RMA intercept (" + r.unit() + ", 95 % CI)", "rma_intercept", r.unit()),
+                        ReportColumn.interval("Mean relative bias (95 % CI)", "mean_relative_bias", "%").withNote(),
+                        ReportColumn.number("Paired t p", "p_paired_t", "").withNote(),
+                        ReportColumn.number("Wilcoxon p", "p_wilcoxon", "").withNote()), rows,
                 "Reduced major axis after Miller & Kahn (1962); relative bias = mean of (duplicate − original)/pair "
                         + "mean with a Student-t interval. For umpire checks the duplicate is the second lab.");
     }
 
     private static ReportTable outlierTable(DuplicateReport r) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         int more = 0;
         for (DuplicateSetResult s : r.sets()) {
-            more += outlierRows(s, s.outliers(), o -> pct1(o.hard()), rows);
+            more += outlierRows(s, s.outliers(), o -> Cell.percent(100 * o.hard(), 1), rows);
             String notJudged = "not used: mean < " + compact(s.precision().limitMultiple()) + "× DL";
-            more += outlierRows(s, s.outliersBelowRelativeThreshold(), o -> notJudged, rows);
+            more += outlierRows(s, s.outliersBelowRelativeThreshold(), o -> Cell.notComputed(notJudged), rows);
         }
-        return new ReportTable("duplicates-outliers-" + r.analyte(), r.analyte() + ": pairs flagged",
-                List.of("Type", "Original ID", "Duplicate ID", "Batch", "Original", "Duplicate", "HARD", "Flagged by"),
-                rows, "Per type, the pairs used in relative measures come first, largest HARD first; then the pairs "
+        return ReportTable.typed("duplicates-outliers-" + r.analyte(), r.analyte() + ": pairs flagged",
+                List.of(ReportColumn.text("Type", "type"), ReportColumn.text("Original ID", "original_id"),
+                        ReportColumn.text("Duplicate ID", "duplicate_id"), ReportColumn.text("Batch", "batch"),
+                        ReportColumn.assay("Original (" + r.unit() + ")", "original", r.unit()),
+                        ReportColumn.assay("Duplicate (" + r.unit() + ")", "duplicate", r.unit()),
+                        ReportColumn.number("HARD", "hard", "%").withNote(), ReportColumn.text("Flagged by", "flagged_by")),
+                rows, "Values as the lab reported them. Per type, the pairs used in relative measures come first, "
+                        + "largest HARD first; then the pairs "
                         + "whose mean is below the detection-limit multiple, which are not judged or ranked by HARD and "
                         + "are flagged only by the Thompson–Howarth 99 % line, largest |d| first."
                         + (more > 0 ? " " + more + " further flagged pairs not listed (the first " + OUTLIERS_LISTED
@@ -320,10 +360,11 @@ public final class DuplicatesSection {
 
     /** Adds up to {@link #OUTLIERS_LISTED} rows of {@code list}, original first; returns how many were left out. */
     private static int outlierRows(DuplicateSetResult s, List<OutlierPair> list,
-                                   java.util.function.Function<OutlierPair, String> hard, List<List<String>> rows) {
+                                   java.util.function.Function<OutlierPair, Cell> hard, List<List<Cell>> rows) {
         for (OutlierPair o : list.subList(0, Math.min(OUTLIERS_LISTED, list.size()))) {
-            rows.add(List.of(s.type().label(), o.originalId(), o.id(), o.batch(), o.original(), o.duplicate(),
-                    hard.apply(o), o.testLabels()));
+            rows.add(List.of(Cell.text(s.type().label()), Cell.text(o.originalId()), Cell.text(o.id()),
+                    Cell.text(o.batch()), Cell.assay(o.originalValue()), Cell.assay(o.duplicateValue()), hard.apply(o),
+                    Cell.text(o.testLabels())));
         }
         return Math.max(0, list.size() - OUTLIERS_LISTED);
     }
@@ -352,36 +393,63 @@ public final class DuplicatesSection {
         return sb.toString();
     }
 
-    private static String line(ControlLineCheck c) {
-        return String.format(Locale.ROOT, "%d (%.1f; p = %s)", c.exceedances(), c.expected(), p(c.pValue()));
+    private static Cell line(ControlLineCheck c) {
+        Cell.Number count = Cell.fixedNumber(c.exceedances(), 0);
+        Cell.Number expected = Cell.fixedNumber(c.expected(), 1);
+        Cell.Number p = (Cell.Number) (Double.isFinite(c.pValue()) ? Cell.pValue(c.pValue()) : null);
+        return new Cell.Parts(java.util.Arrays.asList(count, expected, p), String.format(Locale.ROOT,
+                "%d (%.1f; p = %s)", c.exceedances(), c.expected(), p(c.pValue())));
     }
 
-    private static String test(TestResult t) {
-        return t.available() ? p(t.pValue()) : t.note();
+    private static Cell test(TestResult t) {
+        return t.available() ? Cell.pValue(t.pValue()) : Cell.notComputed(t.note());
     }
 
     private static String p(double p) {
         return p < 0.001 ? "< 0.001" : String.format(Locale.ROOT, "%.3f", p);
     }
 
+    private static String ruleWord(RuleOutcome r) {
+        return r.name().toLowerCase(Locale.ROOT).replace('_', ' ');
+    }
+
+    /** A share in percent ({@code 95.2 %}), or why it is not computable. */
+    private static Cell percentCell(Estimate e, int decimals) {
+        return e.available() ? Cell.percent(e.value(), decimals) : Cell.notComputed(e.note());
+    }
+
+    private static Cell significantCell(Estimate e, int digits) {
+        return e.available() ? Cell.significant(e.value(), digits) : Cell.notComputed(e.note());
+    }
+
+    /** A fraction as a percentage with two decimals and its interval, or why it is not computable. */
+    private static Cell percentInterval(Estimate e) {
+        if (!e.available()) {
+            return Cell.notComputed(e.note());
+        }
+        return Cell.interval(Cell.percentNumber(100 * e.value(), 2), 100 * e.ciLow(), 100 * e.ciHigh(),
+                x -> Cell.percentNumber(x, 2));
+    }
+
+    /** A signed fraction (a bias) as a percentage with its interval: the sign is the finding. */
+    private static Cell signedPercentInterval(Estimate e) {
+        if (!e.available()) {
+            return Cell.notComputed(e.note());
+        }
+        return Cell.interval(Cell.signedPercentNumber(100 * e.value(), 2), 100 * e.ciLow(), 100 * e.ciHigh(),
+                x -> Cell.signedPercentNumber(x, 2));
+    }
+
+    private static Cell significantInterval(Estimate e, int digits) {
+        if (!e.available()) {
+            return Cell.notComputed(e.note());
+        }
+        return Cell.interval(Cell.significantNumber(e.value(), digits), e.ciLow(), e.ciHigh(),
+                x -> Cell.significantNumber(x, digits));
+    }
+
     private static String estimatePct(Estimate e) {
-        if (!e.available()) {
-            return e.note();
-        }
-        return e.hasInterval() ? pct2(e.value()) + " (" + pct2(e.ciLow()) + " to " + pct2(e.ciHigh()) + ")"
-                : pct2(e.value());
-    }
-
-    private static String estimate(Estimate e, int digits) {
-        if (!e.available()) {
-            return e.note();
-        }
-        return e.hasInterval() ? fmt(e.value(), digits) + " (" + fmt(e.ciLow(), digits) + " to "
-                + fmt(e.ciHigh(), digits) + ")" : fmt(e.value(), digits);
-    }
-
-    private static String value(Estimate e, int digits, String suffix) {
-        return e.available() ? fmt(e.value(), digits) + suffix : e.note();
+        return percentInterval(e).display();
     }
 
     private static String typeKey(DuplicateSetResult s) {

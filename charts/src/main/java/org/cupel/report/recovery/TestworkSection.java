@@ -18,7 +18,9 @@ import org.cupel.recovery.RecoveryInterval;
 import org.cupel.recovery.RecoveryResult;
 import org.cupel.recovery.SmeltBalance;
 import org.cupel.recovery.SmeltRecovery;
+import org.cupel.report.Cell;
 import org.cupel.report.ReportBlock;
+import org.cupel.report.ReportColumn;
 import org.cupel.report.ReportSection;
 import org.cupel.report.ReportTable;
 
@@ -141,7 +143,7 @@ public final class TestworkSection {
 
     public static ReportTable recoveries(RecoveryResult r) {
         int conf = (int) Math.round(100 * r.settings().confidence());
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (int i = 0; i < r.conditions().size(); i++) {
             ConditionRecovery c = r.conditions().get(i);
             ConditionRecovery z = r.conditionsCensoredAtZero().get(i);
@@ -152,38 +154,59 @@ public final class TestworkSection {
                 }
             }
             notes.addAll(c.excluded());
-            rows.add(List.of(c.analyte(), c.condition(), Integer.toString(c.n()), num(c.mean(), 2), num(c.sd(), 2),
-                    interval(c.tInterval()), interval(c.gum()), num(c.gum().df(), 1), interval(c.fieller()),
-                    bounds(c), r.anyCensoredLoss() ? num(z.mean(), 2) : DASH, String.join("; ", notes)));
+            rows.add(List.of(Cell.text(c.analyte()), Cell.text(c.condition()), Cell.count(c.n()), number(c.mean(), 2),
+                    number(c.sd(), 2), interval(c.tInterval()), interval(c.gum()), number(c.gum().df(), 1),
+                    interval(c.fieller()), bounds(c), r.anyCensoredLoss() ? number(z.mean(), 2) : dash(""),
+                    Cell.text(String.join("; ", notes))));
         }
-        return new ReportTable("recovery-by-condition", "Recovery per condition (" + r.settings().recoveryDefinition()
-                .label() + ")", List.of("Analyte", "Condition", "n", "Mean (%)", "SD (pp)", conf + "% CI, t (%)",
-                conf + "% CI, GUM (%)", "ν_eff", conf + "% CI, Fieller (%)", "Bounds, censored loss (%)",
-                "Mean, censored = 0 (%)", "Notes"), rows, "Intervals marked † are computed on the log of the loss and "
+        return ReportTable.typed("recovery-by-condition", "Recovery per condition (" + r.settings().recoveryDefinition()
+                .label() + ")", List.of(ReportColumn.text("Analyte", "analyte"), ReportColumn.text("Condition", "condition"),
+                ReportColumn.count("n", "n"), ReportColumn.number("Mean (%)", "mean", "%").withNote(),
+                ReportColumn.number("SD (pp)", "sd", "pp").withNote(), range(conf + "% CI, t (%)", "ci_t", "%"),
+                range(conf + "% CI, GUM (%)", "ci_gum", "%"), ReportColumn.number("ν_eff", "nu_eff", "").withNote(),
+                range(conf + "% CI, Fieller (%)", "ci_fieller", "%"),
+                range("Bounds, censored loss (%)", "bounds_censored_loss", "%"),
+                ReportColumn.number("Mean, censored = 0 (%)", "mean_censored_zero", "%").withNote(),
+                ReportColumn.text("Notes", "notes")), rows, "Intervals marked † are computed on the log of the loss and "
                 + "cannot pass 100%. Censored loss assays are counted at their detection limit unless stated. "
                 + RecoveryAnalysis.bootstrapNote(r.conditions()));
+    }
+
+    /** Two numbers, lower to upper; the CSV note says when they were computed on the log of the loss. */
+    private static ReportColumn range(String header, String key, String unit) {
+        return ReportColumn.parts(header, key, new ReportColumn.Part("lower", unit, ReportColumn.CsvType.DOUBLE),
+                new ReportColumn.Part("upper", unit, ReportColumn.CsvType.DOUBLE)).withNote();
     }
 
     public static ReportTable comparisons(RecoveryResult r) {
         int conf = (int) Math.round(100 * r.settings().confidence());
         String delta = num(r.settings().powerDifference(), 2);
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (PairComparison p : r.comparisons()) {
             boolean cannotTell = p.verdict() == ComparisonVerdict.CANNOT_TELL;
-            String plan = cannotTell ? (p.plan().note().isEmpty() ? p.plan().perCondition() + " per condition"
-                    : p.plan().note()) : DASH;
-            rows.add(List.of(p.analyte(), p.first() + " − " + p.second(), num(p.welch().difference(), 2),
-                    p.welch().computed() ? num(p.welch().lower(), 2) + " to " + num(p.welch().upper(), 2) : DASH,
-                    pValue(p.welch().p()), pValue(p.holmP()), pValue(p.gamesHowell().p()), pValue(p.tost().p()),
-                    p.verdict().label(), r.anyCensoredLoss() ? p.verdictCensoredAtZero().label()
-                            + (p.conclusionDependsOnCensoring() ? " (changes)" : "") : DASH, plan,
-                    String.join("; ", java.util.stream.Stream.of(holmReason(r, p), p.welch().note())
-                            .filter(x -> !x.isEmpty()).toList())));
+            Cell plan = !cannotTell ? dash("") : p.plan().note().isEmpty()
+                    ? new Cell.Number(p.plan().perCondition(), Integer.toString(p.plan().perCondition()),
+                    p.plan().perCondition() + " per condition") : Cell.notComputed(p.plan().note());
+            rows.add(List.of(Cell.text(p.analyte()), Cell.text(p.first() + " − " + p.second()),
+                    number(p.welch().difference(), 2),
+                    p.welch().computed() ? range(p.welch().lower(), p.welch().upper(), "") : dash(""),
+                    pCell(p.welch().p()), pCell(p.holmP()), pCell(p.gamesHowell().p()), pCell(p.tost().p()),
+                    Cell.text(p.verdict().label()), Cell.text(r.anyCensoredLoss() ? p.verdictCensoredAtZero().label()
+                            + (p.conclusionDependsOnCensoring() ? " (changes)" : "") : DASH), plan,
+                    Cell.text(String.join("; ", java.util.stream.Stream.of(holmReason(r, p), p.welch().note())
+                            .filter(x -> !x.isEmpty()).toList()))));
         }
-        return new ReportTable("recovery-comparisons", "Pairwise comparison of conditions", List.of("Analyte", "Pair",
-                "Difference (pp)", conf + "% CI (pp)", "Welch p", "Holm p", "Games–Howell p", "TOST p (±"
-                        + num(r.settings().equivalenceMargin(), 2) + " pp)", "Verdict", "Verdict, censored = 0",
-                "Smelts needed to detect " + delta + " pp", "Notes"), rows,
+        return ReportTable.typed("recovery-comparisons", "Pairwise comparison of conditions", List.of(
+                ReportColumn.text("Analyte", "analyte"), ReportColumn.text("Pair", "pair"),
+                ReportColumn.number("Difference (pp)", "difference", "pp").withNote(),
+                range(conf + "% CI (pp)", "ci", "pp"), ReportColumn.number("Welch p", "p_welch", "").withNote(),
+                ReportColumn.number("Holm p", "p_holm", "").withNote(),
+                ReportColumn.number("Games–Howell p", "p_games_howell", "").withNote(),
+                ReportColumn.number("TOST p (±" + num(r.settings().equivalenceMargin(), 2) + " pp)", "p_tost", "")
+                        .withNote(), ReportColumn.text("Verdict", "verdict"),
+                ReportColumn.text("Verdict, censored = 0", "verdict_censored_zero"),
+                ReportColumn.number("Smelts needed to detect " + delta + " pp", "smelts_needed_per_condition", "")
+                        .withNote(), ReportColumn.text("Notes", "notes")), rows,
                 "Equivalent: TOST p < α. Different: Holm-adjusted Welch p < α. Otherwise cannot tell; the replicate "
                         + "count is for " + Math.round(100 * r.settings().power()) + "% power at α = "
                         + num(r.settings().alpha(), 3) + " with the pooled replicate SD (noncentral t).");
@@ -202,24 +225,33 @@ public final class TestworkSection {
     }
 
     public static ReportTable balance(RecoveryResult r) {
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Cell>> rows = new ArrayList<>();
         for (int i = 0; i < r.smelts().size(); i++) {
             SmeltRecovery s = r.smelts().get(i);
             SmeltBalance b = r.balances().get(i);
             if (!s.usable()) {
-                rows.add(List.of(s.smelt().testId(), s.smelt().condition(), s.analyte(), DASH, DASH, DASH, DASH,
-                        DASH, DASH, DASH, DASH, s.note()));
+                Cell none = dash(s.note());
+                rows.add(List.of(Cell.text(s.smelt().testId()), Cell.text(s.smelt().condition()), Cell.text(s.analyte()),
+                        none, none, none, Cell.text(DASH), none, none, none, none, Cell.text(s.note())));
                 continue;
             }
-            rows.add(List.of(s.smelt().testId(), s.smelt().condition(), s.analyte(), num(1000 * s.metalInCharge(), 4),
-                    num(s.calculatedHeadGpt(), 3), num(s.accountability(), 4), s.balanceCloses() ? "yes" : "NO",
-                    b.reconciliation() == null ? DASH : pValue(b.reconciliation().p()), num(b.reconciledRecovery(), 2),
-                    num(s.byLoss(), 2), num(s.direct(), 2), b.note()));
+            rows.add(List.of(Cell.text(s.smelt().testId()), Cell.text(s.smelt().condition()), Cell.text(s.analyte()),
+                    number(1000 * s.metalInCharge(), 4), number(s.calculatedHeadGpt(), 3), number(s.accountability(), 4),
+                    Cell.text(s.balanceCloses() ? "yes" : "NO"),
+                    b.reconciliation() == null ? dash("") : pCell(b.reconciliation().p()),
+                    number(b.reconciledRecovery(), 2), number(s.byLoss(), 2), number(s.direct(), 2), Cell.text(b.note())));
         }
-        return new ReportTable("recovery-balance", "Metal balance per smelt", List.of("Test", "Condition", "Analyte",
-                "Metal in charge (mg)", "Calculated head (g/t)", "Accountability", "Closes (±"
-                        + num(100 * r.settings().balanceTolerance(), 1) + "%)", "χ² closure p",
-                "Reconciled recovery (%)", "Recovery by loss (%)", "Direct recovery (%)", "Notes"), rows,
+        return ReportTable.typed("recovery-balance", "Metal balance per smelt", List.of(ReportColumn.text("Test", "test"),
+                ReportColumn.text("Condition", "condition"), ReportColumn.text("Analyte", "analyte"),
+                ReportColumn.number("Metal in charge (mg)", "metal_in_charge", "mg").withNote(),
+                ReportColumn.number("Calculated head (g/t)", "calculated_head", "g/t").withNote(),
+                ReportColumn.number("Accountability", "accountability", "").withNote(),
+                ReportColumn.text("Closes (±" + num(100 * r.settings().balanceTolerance(), 1) + "%)", "closes"),
+                ReportColumn.number("χ² closure p", "p_chi_square_closure", "").withNote(),
+                ReportColumn.number("Reconciled recovery (%)", "reconciled_recovery", "%").withNote(),
+                ReportColumn.number("Recovery by loss (%)", "recovery_by_loss", "%").withNote(),
+                ReportColumn.number("Direct recovery (%)", "direct_recovery", "%").withNote(),
+                ReportColumn.text("Notes", "notes")), rows,
                 "Accountability = calculated head ÷ assayed head. Reconciliation: weighted least squares under "
                         + "metal in charge = Σ products (Kuehn & Davidson 1961; Hodouin & Everell 1980), weights from "
                         + "the balance resolution (" + num(r.settings().balanceResolutionGrams(), 4) + " g) and "
@@ -235,28 +267,72 @@ public final class TestworkSection {
                 + " relative SD";
     }
 
+    /** One column per product (every product met, in first-seen order): the mean share of the metal, in %. */
     public static ReportTable deportment(RecoveryResult r) {
-        List<List<String>> rows = new ArrayList<>();
+        List<String> products = r.deportment().stream().flatMap(d -> d.sharePercent().keySet().stream()).distinct()
+                .toList();
+        List<List<Cell>> rows = new ArrayList<>();
         for (Deportment d : r.deportment()) {
-            rows.add(List.of(d.analyte(), d.condition(), Integer.toString(d.n()), d.sharePercent().entrySet().stream()
-                    .map(e -> e.getKey() + " " + num(e.getValue(), 2) + "%").collect(Collectors.joining(", "))));
+            List<Cell> row = new ArrayList<>(List.of(Cell.text(d.analyte()), Cell.text(d.condition()), Cell.count(d.n())));
+            for (String p : products) {
+                Double share = d.sharePercent().get(p);
+                row.add(share == null ? Cell.blank() : number(share, 2));
+            }
+            rows.add(row);
         }
-        return new ReportTable("recovery-deportment", "Deportment: share of the metal in each product",
-                List.of("Analyte", "Condition", "n", "Mean share of metal in products"), rows, "");
+        List<ReportColumn> columns = new ArrayList<>(List.of(ReportColumn.text("Analyte", "analyte"),
+                ReportColumn.text("Condition", "condition"), ReportColumn.count("n", "n")));
+        products.forEach(p -> columns.add(ReportColumn.number(capitalise(p) + " (%)", "share_" + ReportColumn.slug(p),
+                "%").withNote()));
+        return ReportTable.typed("recovery-deportment", "Deportment: mean share of the metal in each product",
+                columns, rows, "");
     }
 
-    static String interval(RecoveryInterval iv) {
+    private static String capitalise(String s) {
+        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
+    }
+
+    /** {@code v} with {@code decimals} decimals; a dash when not a number, ∞ (empty in the CSV) when infinite. */
+    private static Cell number(double v, int decimals) {
+        if (Double.isNaN(v)) {
+            return dash("not computed");
+        }
+        if (Double.isInfinite(v)) {
+            return new Cell.NotComputed(v > 0 ? "infinite" : "minus infinity", v > 0 ? "∞" : "−∞");
+        }
+        return Cell.fixed(v, decimals);
+    }
+
+    private static Cell dash(String reason) {
+        return new Cell.NotComputed(reason, DASH);
+    }
+
+    private static Cell pCell(double p) {
+        return Double.isNaN(p) ? dash("not computed") : new Cell.Number(p, org.cupel.assay.Numbers.significant(p, 3),
+                pValue(p));
+    }
+
+    private static Cell range(double lower, double upper, String note) {
+        return new Cell.Parts(java.util.Arrays.asList(finite(lower), finite(upper)),
+                num(lower, 2) + " to " + num(upper, 2) + (note.isEmpty() ? "" : " †"), note);
+    }
+
+    private static Cell.Number finite(double v) {
+        return Double.isFinite(v) ? Cell.fixedNumber(v, 2) : null;
+    }
+
+    static Cell interval(RecoveryInterval iv) {
         if (!iv.computed()) {
-            return DASH;
+            return dash(iv.note());
         }
-        return num(iv.lower(), 2) + " to " + num(iv.upper(), 2) + (iv.scale().equals("log loss") ? " †" : "");
+        return range(iv.lower(), iv.upper(), iv.scale().equals("log loss") ? "computed on the log of the loss" : "");
     }
 
-    private static String bounds(ConditionRecovery c) {
+    private static Cell bounds(ConditionRecovery c) {
         if (c.lowerBound() == c.upperBound() || Double.isNaN(c.lowerBound())) {
-            return DASH;
+            return dash("");
         }
-        return num(c.lowerBound(), 2) + " to " + num(c.upperBound(), 2);
+        return range(c.lowerBound(), c.upperBound(), "");
     }
 
     static String num(double v, int decimals) {

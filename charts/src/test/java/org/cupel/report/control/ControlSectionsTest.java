@@ -112,8 +112,10 @@ class ControlSectionsTest {
         BlankReport rep = BlankReview.review(List.of(o), BlankSettings.DEFAULTS);
         ReportSection s = BlankSection.build(rep);
         List<String> row = table(s, "blank-findings").rows().get(0);
-        assertEquals(List.of("S6", "0.3 g/t (60×DL)", "fail", "S5", "25 g/t", "1.2 %", "yes"),
-                List.of(row.get(0), row.get(4), row.get(6), row.get(8), row.get(9), row.get(10), row.get(11)));
+        // 0.3 / 0.005 = 60 × DL; 0.3 / 25 = 1.2 %; the unit has its own column, each number its own cell.
+        assertEquals(List.of("S6", "g/t", "0.3", "60", "fail", "S5", "25", "1.2 %", "yes"),
+                List.of(row.get(0), row.get(4), row.get(5), row.get(6), row.get(8), row.get(10), row.get(11),
+                        row.get(12), row.get(13)));
         assertTrue(table(s, "blank-summary").note().contains("at least 3"));
         assertEquals(2, s.blocks().stream().filter(b -> b instanceof ReportBlock.Figure).count());
         String rules = ((ReportBlock.Paragraph) s.blocks().get(1)).text();
@@ -137,9 +139,9 @@ class ControlSectionsTest {
         InsertionRates r = InsertionRates.compute(table(), InsertionSettings.DEFAULTS);
         ReportTable tab = table(InsertionRateSection.build(r), "insertion-rates");
         // 1 CRM per 8 routine samples: 12.5 %; no duplicates: below target.
-        assertEquals("1 (13%)", tab.rows().get(0).get(3));
+        assertEquals("1 (12.5 %)", tab.rows().get(0).get(3), "a rate as a percentage with one decimal");
         assertEquals("Field dup., Coarse dup., Pulp dup.", tab.rows().get(0).get(10));
-        assertTrue(tab.note().contains("Targets: CRM 5%, Blank 5%, Field dup. 5%"), tab.note());
+        assertTrue(tab.note().contains("Targets: CRM 5.0 %, Blank 5.0 %, Field dup. 5.0 %"), tab.note());
         assertEquals("all batches", tab.rows().get(1).get(0));
     }
 }

@@ -24,7 +24,7 @@ class CrmSectionTest {
         assertEquals(3, summary.rows().size());
         ReportTable swaps = tables.stream().filter(t -> t.id().equals("crm-swaps")).findFirst().orElseThrow();
         assertEquals("J109-LOW", swaps.rows().get(0).get(0));
-        assertEquals("MID", swaps.rows().get(0).get(5));
+        assertEquals("MID", swaps.rows().get(0).get(6));
         long figures = s.blocks().stream().filter(b -> b instanceof ReportBlock.Figure).count();
         assertEquals(3 + 2, figures);
         assertEquals(1L, s.headlines().get("crmSwaps"));

@@ -41,7 +41,7 @@ class FlaggedPairsTableTest {
     @Test
     void originalIdSitsBesideTheOriginalValue() {
         ReportTable t = table();
-        assertEquals(List.of("Type", "Original ID", "Duplicate ID", "Batch", "Original", "Duplicate", "HARD",
+        assertEquals(List.of("Type", "Original ID", "Duplicate ID", "Batch", "Original (g/t)", "Duplicate (g/t)", "HARD",
                 "Flagged by"), t.columns());
         List<String> hi = t.rows().get(rowOf(t.rows(), "O-HI"));
         assertEquals(List.of("O-HI", "D-HI", "1", "1.5", "20.0 %"), List.of(hi.get(1), hi.get(2), hi.get(4),

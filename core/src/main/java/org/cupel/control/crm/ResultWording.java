@@ -32,6 +32,6 @@ public record ResultWording(String crm, String analyte, String unit, double cert
         double zi = r.z();
         return p.sampleId() + ' ' + crm + ' ' + analyte + ' ' + p.value().display() + ' ' + unit + " is "
                 + Numbers.significant(Math.abs(zi), 2) + " SD " + (zi >= 0 ? "above" : "below") + " certified "
-                + Numbers.significant(certified, 4);
+                + certified;
     }
 }
