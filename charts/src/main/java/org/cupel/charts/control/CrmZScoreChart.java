@@ -8,7 +8,9 @@ import org.cupel.charts.ChartFigure;
 import org.cupel.charts.ChartMarkers;
 import org.cupel.charts.ChartNotes;
 import org.cupel.charts.ChartStyle;
+import org.cupel.charts.KeyEntry;
 import org.cupel.charts.PointBudget;
+import org.cupel.charts.RingMarker;
 import org.cupel.control.crm.CrmResult;
 import org.cupel.control.crm.SeriesReview;
 import org.cupel.control.crm.ZBand;
@@ -22,14 +24,17 @@ import org.knowm.xchart.style.markers.SeriesMarkers;
  * that affects the whole lab rather than one material. Time is days since the first dated batch when
  * every result is dated, else the batch number. Swaps are left out (their z is not a measure of the lab);
  * z is clipped to ±6 so one wild result does not flatten the rest. Results that the review put outside the
- * satisfactory band ({@link CrmResult#band()}: questionable or unsatisfactory, ISO 13528) are marked in the
+ * satisfactory band ({@link CrmResult#band()}: questionable or unsatisfactory, ISO 13528) are ringed in the
  * warning and failure colours; nothing is judged here (a result exactly on 2 SD is satisfactory, as
- * {@link ZBand} decides).
+ * {@link ZBand} decides). The key is the figure's, under the chart, wrapping over as many rows as the CRMs
+ * need.
  */
 public final class CrmZScoreChart {
     static final String QUESTIONABLE = "Questionable: 2 < |z| < 3";
     static final String UNSATISFACTORY = "Unsatisfactory: |z| ≥ 3";
     private static final double CLIP = 6;
+    private static final java.awt.BasicStroke CRM_LINE = ChartStyle.solid(0.8f);
+    private static final java.awt.BasicStroke ZERO_LINE = ChartStyle.solid(1.2f);
 
     private CrmZScoreChart() {
     }
@@ -52,7 +57,8 @@ public final class CrmZScoreChart {
                 .xAxisTitle(dated ? "Days since " + origin : "Batch number (some batches undated)")
                 .yAxisTitle("z = (result − certified) / certificate SD").build();
         ChartStyle.apply(c);
-        c.getStyler().setYAxisMin(-CLIP).setYAxisMax(CLIP);
+        c.getStyler().setYAxisMin(-CLIP).setYAxisMax(CLIP).setLegendVisible(false);
+        List<KeyEntry> key = new ArrayList<>();
         double maxX = 1;
         long total = 0;
         long drawn = 0;
@@ -84,38 +90,44 @@ public final class CrmZScoreChart {
             total += judged.size();
             drawn += idx.length;
             if (idx.length > 0) {
-                XYSeries xs = c.addSeries(s.crm() + " (n = " + judged.size() + ")", x, y);
+                String name = s.crm() + " (n = " + judged.size() + ")";
+                XYSeries xs = c.addSeries(name, x, y);
                 xs.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
-                xs.setMarker(ChartMarkers.CATEGORIES[k % ChartMarkers.CATEGORIES.length]).setLineStyle(ChartStyle.solid(0.8f));
+                org.knowm.xchart.style.markers.Marker marker = ChartMarkers.CATEGORIES[k % ChartMarkers.CATEGORIES.length];
                 java.awt.Color col = ChartStyle.CATEGORIES[k % ChartStyle.CATEGORIES.length];
+                xs.setMarker(marker).setLineStyle(CRM_LINE);
                 xs.setMarkerColor(col).setLineColor(col);
+                key.add(new KeyEntry(name, col, CRM_LINE, marker));
             }
             k++;
         }
         double[] ends = {0, maxX};
-        band(c, "±2 SD", 2, ChartStyle.WARNING);
-        band(c, "±3 SD", 3, ChartStyle.FAILURE);
+        key.add(band(c, "±2 SD", 2, ChartStyle.WARNING));
+        key.add(band(c, "±3 SD", 3, ChartStyle.FAILURE));
         XYSeries zero = c.addSeries("z = 0", ends, new double[] {0, 0});
-        zero.setMarker(SeriesMarkers.NONE).setLineColor(ChartStyle.REFERENCE).setLineStyle(ChartStyle.solid(1.2f));
-        marked(c, QUESTIONABLE, questionable, ChartStyle.WARNING, ChartMarkers.DIAMOND);
-        marked(c, UNSATISFACTORY, unsatisfactory, ChartStyle.FAILURE, ChartMarkers.SQUARE);
-        return ChartFigure.of(c, ChartNotes.count(total, drawn, flagged, flaggedDrawn,
-                "results outside the satisfactory band") + "; swaps left out; |z| clipped at 6");
+        zero.setMarker(SeriesMarkers.NONE).setLineColor(ChartStyle.REFERENCE).setLineStyle(ZERO_LINE);
+        key.add(KeyEntry.line("z = 0", ChartStyle.REFERENCE, ZERO_LINE));
+        marked(c, key, QUESTIONABLE, questionable, ChartStyle.WARNING);
+        marked(c, key, UNSATISFACTORY, unsatisfactory, ChartStyle.FAILURE);
+        return ChartFigure.of(new ChartFigure.Panel("", c, ChartNotes.count(total, drawn, flagged, flaggedDrawn,
+                "results outside the satisfactory band") + "; swaps left out; |z| clipped at 6").withKey(key));
     }
 
-    /** The results of one band, drawn over their CRM's markers; no series when there are none. */
-    private static void marked(XYChart c, String name, List<double[]> points, java.awt.Color colour,
-                               org.knowm.xchart.style.markers.Marker marker) {
+    /** The results of one band, ringed over their CRM's markers; no series (and no key entry) when there are none. */
+    private static void marked(XYChart c, List<KeyEntry> key, String name, List<double[]> points,
+                               java.awt.Color colour) {
         if (points.isEmpty()) {
             return;
         }
-        XYSeries s = c.addSeries(name + " (" + points.size() + ")", points.stream().mapToDouble(p -> p[0]).toArray(),
+        String label = name + " (" + points.size() + ")";
+        XYSeries s = c.addSeries(label, points.stream().mapToDouble(p -> p[0]).toArray(),
                 points.stream().mapToDouble(p -> p[1]).toArray());
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
-        s.setMarker(marker).setMarkerColor(colour);
+        s.setMarker(RingMarker.RING).setMarkerColor(colour);
+        key.add(KeyEntry.points(label, colour, RingMarker.RING));
     }
 
-    private static void band(XYChart c, String name, double z, java.awt.Color color) {
+    private static KeyEntry band(XYChart c, String name, double z, java.awt.Color color) {
         java.awt.BasicStroke stroke = z >= 3 ? ChartStyle.solid(1.6f) : ChartStyle.dashed(1.3f);
         double[] ends = {c.getStyler().getXAxisMin() == null ? 0 : c.getStyler().getXAxisMin(), maxX(c)};
         XYSeries up = c.addSeries(name, ends, new double[] {z, z});
@@ -123,6 +135,7 @@ public final class CrmZScoreChart {
         XYSeries down = c.addSeries(name + " low", ends, new double[] {-z, -z});
         down.setMarker(SeriesMarkers.NONE).setLineColor(color).setLineStyle(stroke)
                 .setShowInLegend(false);
+        return KeyEntry.line(name, color, stroke);
     }
 
     private static double maxX(XYChart c) {
