@@ -65,8 +65,9 @@ public final class Ros {
      * keeps its relative accuracy down to p = 1e-300. Against 50-digit mpmath values at 4,954 probabilities
      * (testdata/reference/special-functions/normal_quantile.csv, ROS plotting positions of n = 10⁶ included)
      * it is at most 3 ulps off; Wichura's AS 241 (PPND16), which Cupel carried by hand before, was at most
-     * 4 ulps off. It costs about 35 ns a call against AS 241's 15–30 ns (JMH, docs/performance.md, "Kept
-     * libraries"): 20–30 ms more for the million quantiles of a plain ROS fit at n = 10⁶.
+     * 4 ulps off. It costs about 15–20 ns more a call: the plain fit at n = 10⁶ (a million quantiles) took
+     * 63–66 ms of CPU against 45–50 ms with AS 241 (bench {@code KernelCpuTime}, docs/performance.md, "Kept
+     * libraries"), small beside reading and grouping a million results, so the library's is used.
      */
     static double quantile(double p) {
         return STANDARD_NORMAL.inverseCumulativeProbability(p);

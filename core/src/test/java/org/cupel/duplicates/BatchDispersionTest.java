@@ -28,7 +28,8 @@ class BatchDispersionTest {
      * P(χ²(df) &gt; x) against 50-digit mpmath values, df 1–400, x up to 1,000, tails down to 1.8e-219
      * (testdata/reference/special-functions/chi2_upper.csv). Tolerance 1e-13 relative: the upper regularized
      * gamma function of Commons Numbers is documented to a few hundred ulps at worst (Boost's accuracy
-     * tables); measured 4.9e-14, at the far end (1.8e-219 at df 1, x 1,000). The 1 − P(df/2, x/2) computed here before was 0 where the true tail is 5.4e-17 (df 10, x 100).
+     * tables); measured 4.9e-14, at the far end (1.8e-219 at df 1, x 1,000). The 1 − P(df/2, x/2) computed here
+     * before was 0 where the true tail is 5.4e-17 (df 10, x 100).
      */
     @Test
     void upperTailMatchesMpmathDeepInTheTail() {
