@@ -85,4 +85,16 @@ public class DuplicateKernelsBench {
     public Estimate rmsCvLargeSample() {
         return PrecisionMeasures.rmsCvLargeSample(a, b, DuplicateSettings.DEFAULTS.bootstrapMaxPairs());
     }
+
+    /** Wilcoxon's signed-rank test of the n differences (mid-ranks of the rounded magnitudes). */
+    @Benchmark
+    public TestResult wilcoxon() {
+        return PairedTests.wilcoxon(a, b);
+    }
+
+    /** The acceptance rule's binomial test of a batch of 20 pairs, 15 within the limit. */
+    @Benchmark
+    public BatchRuleTest batchRule() {
+        return BatchRuleTest.of(15, 20, 90, 0.05);
+    }
 }

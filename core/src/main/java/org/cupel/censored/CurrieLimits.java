@@ -2,6 +2,7 @@ package org.cupel.censored;
 
 import java.util.List;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.statistics.distribution.NormalDistribution;
 import org.cupel.assay.Numbers;
 import org.cupel.recovery.NoncentralT;
 
@@ -46,7 +47,7 @@ final class CurrieLimits {
         double s0 = s * Math.sqrt(1 + 1.0 / n);
         double t = BlankLimits.tQuantile(df, 1 - ALPHA);
         double delta = noncentrality(df, t, BETA);
-        double z = NormalQuantile.of(1 - ALPHA);
+        double z = NormalDistribution.of(0, 1).inverseSurvivalProbability(ALPHA);
         return List.of(
                 new BlankLimits.LimitEstimate("Currie L_C (t)", Estimate.of(t * s0, sd.note()), "critical level t(ν, 0.95)·s₀, "
                         + tRule + "; t = " + three(t), SOURCE_T),

@@ -1,6 +1,6 @@
 package org.cupel.duplicates;
 
-import org.apache.commons.math3.special.Gamma;
+import org.apache.commons.statistics.distribution.ChiSquaredDistribution;
 
 /**
  * Whether one batch's pairs are less precise than the set they belong to: the chi-square test for a
@@ -38,12 +38,15 @@ public record BatchDispersion(double ratio, double statistic, int df, double pVa
     }
 
     /**
-     * P(χ²(df) &gt; t) = 1 − P(df/2, t/2), P the regularized lower incomplete gamma function: the same evaluation
-     * as Commons Math's {@code ChiSquaredDistribution}, without building one per batch (each builds a gamma
-     * distribution with its own random generator, which dominated the cost of thousands of batch tests).
+     * P(χ²(df) &gt; t): the survival function of Commons Statistics' {@link ChiSquaredDistribution} (the upper
+     * regularized incomplete gamma function Q(df/2, t/2) of Commons Numbers, Boost's algorithm). Against 50-digit
+     * mpmath values (testdata/reference/special-functions/chi2_upper.csv) it is within 1.5e-14 relative down to
+     * 1e-100 and 4.9e-14 down to 1.8e-219. The
+     * 1 − P(df/2, t/2) of Commons Math 3 that Cupel computed here before lost every digit below about 1e-16
+     * (it returned 0 for a true 5.4e-17 at df = 10, t = 100; scipy.stats.chi2.sf(100, 10) = 5.45e-17).
      */
     static double upperTail(int df, double t) {
-        return 1.0 - (t <= 0 ? 0.0 : Gamma.regularizedGammaP(df / 2.0, t / 2.0));
+        return ChiSquaredDistribution.of(df).survivalProbability(t);
     }
 
     public boolean available() {

@@ -1,7 +1,7 @@
 package org.cupel.duplicates;
 
 import java.util.Locale;
-import org.apache.commons.math3.distribution.BinomialDistribution;
+import org.apache.commons.statistics.distribution.BinomialDistribution;
 import org.cupel.assay.LimitComparison;
 
 /**
@@ -54,19 +54,15 @@ public record BatchRuleTest(int within, int n, double acceptancePercent, double 
     }
 
     /**
-     * P(X ≤ k) for X ~ Binomial(n, p) as the sum of the point probabilities, each by Loader's saddle-point
-     * method (Loader 2000, "Fast and accurate computation of binomial probabilities", as Commons Math's
-     * {@link BinomialDistribution#probability} implements it), smallest k first. Commons Math's own
-     * cumulative probability goes through a continued fraction of the incomplete beta function that is off
-     * by up to 5e-9 relative in the far lower tail (0.1⁸ came out 1.0000000050e-8); a sum of positive terms
-     * each accurate to a few ulps is not.
+     * P(X ≤ k) for X ~ Binomial(n, p): Commons Statistics' {@link BinomialDistribution}, which takes it from
+     * Commons Numbers' regularized incomplete beta function (Boost's algorithm) and (1 − p)ⁿ at k = 0.
+     * Against exact sums in 50-digit mpmath (testdata/reference/special-functions/binomial_tails.csv, n up to
+     * 1,000) it is within 4.4e-14 relative wherever the tail is above 1e-280 (closer to the bottom of the
+     * double range it loses digits: 6.5e-10 relative at 1.6e-298). Commons Math 3's cumulative probability was
+     * off by up to 5e-9 relative in the far lower tail (0.1⁸ came out 1.0000000050e-8), which is why Cupel
+     * summed Commons Math's point probabilities by hand before (within 1.0e-13 on the same values).
      */
     static double lowerTail(int k, int n, double p) {
-        BinomialDistribution b = new BinomialDistribution(null, n, p);
-        double sum = 0;
-        for (int j = 0; j <= k; j++) {
-            sum += b.probability(j);
-        }
-        return Math.min(1.0, sum);
+        return BinomialDistribution.of(n, p).cumulativeProbability(k);
     }
 }

@@ -1,6 +1,7 @@
 package org.cupel.duplicates;
 
 import java.util.List;
+import org.apache.commons.statistics.distribution.BinomialDistribution;
 
 /**
  * Pairs above a percentile line |d| = q·σ_c of the fitted model, and whether that count is more (or fewer)
@@ -35,10 +36,9 @@ public record ControlLineCheck(double percentile, double factor, int n, int exce
     /** The check of {@code count} of {@code n} pairs above the line of {@code percentile} (q = {@code factor}). */
     public static ControlLineCheck of(double percentile, double factor, int n, int count) {
         double pExceed = 1.0 - percentile / 100.0;
-        org.apache.commons.math3.distribution.BinomialDistribution binomial =
-                new org.apache.commons.math3.distribution.BinomialDistribution(null, n, pExceed);
-        double upper = count == 0 ? 1.0 : 1.0 - binomial.cumulativeProbability(count - 1);
-        return new ControlLineCheck(percentile, factor, n, count, n * pExceed, upper,
+        // The survival function, not 1 − F: a small upper p keeps its digits (1 − F loses them below ~1e-16).
+        BinomialDistribution binomial = BinomialDistribution.of(n, pExceed);
+        return new ControlLineCheck(percentile, factor, n, count, n * pExceed, binomial.survivalProbability(count - 1),
                 binomial.cumulativeProbability(count));
     }
 

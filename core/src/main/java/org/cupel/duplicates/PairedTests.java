@@ -6,6 +6,7 @@ import java.util.Arrays;
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.math3.stat.inference.TTest;
 import org.apache.commons.math3.stat.inference.WilcoxonSignedRankTest;
+import org.apache.commons.statistics.ranking.NaturalRanking;
 
 /** Tests of whether duplicates read systematically higher or lower than their originals. */
 final class PairedTests {
@@ -14,6 +15,13 @@ final class PairedTests {
     /** 10^0 … 10^22, every one exact in double precision. */
     private static final double[] POWERS_OF_TEN = new double[23];
     private static final MathContext TWELVE_DIGITS = new MathContext(12);
+    /**
+     * Mid-ranks: ties share the mean of their ranks (Commons Statistics, ties AVERAGE, NaN rejected), the same
+     * ranks the hand-written binary search gave. It costs more at large n (the whole test at 50,000 pairs:
+     * 7.7–7.9 ms of CPU against 3.9–4.4 ms; bench {@code KernelCpuTime}, docs/performance.md, "Kept
+     * libraries"), which is small beside the duplicate analysis' bootstraps, so the library's is used.
+     */
+    private static final NaturalRanking RANKING = new NaturalRanking();
 
     static {
         POWERS_OF_TEN[0] = 1;
@@ -66,17 +74,16 @@ final class PairedTests {
         for (int i = 0; i < n; i++) {
             abs[i] = roundedMagnitude(d[i]);
         }
-        double[] sorted = abs.clone();
-        Arrays.sort(sorted);
+        double[] rank = RANKING.apply(abs);
         double wPlus = 0;
         for (int i = 0; i < n; i++) {
             if (d[i] > 0) {
-                wPlus += midRank(sorted, abs[i]);
+                wPlus += rank[i];
             }
         }
         double total = n * (n + 1) / 2.0;
         double w = Math.min(wPlus, total - wPlus);
-        double tieTerm = tieTerm(sorted);
+        double tieTerm = tieTerm(abs);
         if (n <= EXACT_LIMIT && tieTerm == 0) {
             double p = new WilcoxonSignedRankTest().wilcoxonSignedRankTest(d, new double[n], true);
             return new TestResult(name, w, Double.NaN, Math.min(1.0, p), n, "exact distribution", "");
@@ -99,32 +106,6 @@ final class PairedTests {
             }
         }
         return Arrays.copyOf(d, k);
-    }
-
-    /**
-     * The 1-based rank of {@code v} in {@code sorted}, ties given the mean of their ranks: (first + last)/2 for a
-     * run of equal values at ranks first..last (as Commons Math's {@code NaturalRanking} with
-     * {@code TiesStrategy.AVERAGE} computes it, without sorting boxed pairs).
-     */
-    private static double midRank(double[] sorted, double v) {
-        int first = firstAbove(sorted, v, false);
-        int last = firstAbove(sorted, v, true) - 1;
-        return (first + last + 2) / 2.0;
-    }
-
-    /** The first index whose value is above v (or at least v, when {@code strictly} is false). */
-    private static int firstAbove(double[] sorted, double v, boolean strictly) {
-        int lo = 0;
-        int hi = sorted.length;
-        while (lo < hi) {
-            int mid = (lo + hi) >>> 1;
-            if (strictly ? sorted[mid] <= v : sorted[mid] < v) {
-                lo = mid + 1;
-            } else {
-                hi = mid;
-            }
-        }
-        return lo;
     }
 
     /**
@@ -152,8 +133,10 @@ final class PairedTests {
         return new BigDecimal(v).round(TWELVE_DIGITS).doubleValue();
     }
 
-    /** The tie correction Σ(t³ − t) over runs of equal values in {@code sorted}. */
-    private static double tieTerm(double[] s) {
+    /** The tie correction Σ(t³ − t) over runs of equal values of {@code values}. */
+    private static double tieTerm(double[] values) {
+        double[] s = values.clone();
+        Arrays.sort(s);
         double sum = 0;
         int i = 0;
         while (i < s.length) {

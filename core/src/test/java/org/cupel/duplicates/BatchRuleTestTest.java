@@ -7,8 +7,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Files;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import org.cupel.assay.AssayValue;
 import org.cupel.assay.QcRole;
+import org.cupel.testing.SpecialFunctionReference;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -20,9 +22,8 @@ class BatchRuleTestTest {
     @Test
     void pValuesMatchScipyBinomtest() throws Exception {
         // 2,016 (n, k, p0) cases, n = 1..30, 50, 125, p0 = 0.8, 0.9, 0.95. Tolerance 1e-12 relative (plus 1e-300
-        // absolute): the p-value is a sum of at most 126 positive point probabilities, each accurate to a few ulps
-        // (Loader's saddle point), so its relative error is below ~126 × 1e-15; scipy's value is from Boost's
-        // incomplete beta, to near double precision. Observed worst: 6.2e-14.
+        // absolute): both take the tail from Boost's incomplete beta algorithm (scipy's C++ Boost, Commons
+        // Numbers' Java port), to near double precision.
         List<String> lines = Files.readAllLines(ReferenceData.dir().resolve("batch_rule_binomial.csv"));
         double worst = 0;
         for (String line : lines.subList(1, lines.size())) {
@@ -37,6 +38,32 @@ class BatchRuleTestTest {
             assertEquals(expected, got, 1e-12 * expected + 1e-300, "n " + n + ", k " + k + ", p0 " + p0);
         }
         assertTrue(worst < 1e-12, "worst relative error " + worst);
+    }
+
+    /**
+     * P(X ≤ k) against exact sums in 50-digit mpmath, n = 1–50 every k and n = 100, 250, 1,000 at both ends
+     * and around np, p from 0.01 to 0.99 (testdata/reference/special-functions/binomial_tails.csv). Tolerance
+     * 1e-12 relative wherever the tail is above 1e-280 (measured 4.4e-14); nearer the bottom of the double
+     * range the incomplete beta loses digits (6.5e-10 relative at 1.6e-298), where no p-value is read.
+     */
+    @Test
+    void lowerTailMatchesExactSums() {
+        for (Map<String, Double> r : SpecialFunctionReference.rows("binomial_tails.csv")) {
+            double expected = r.get("lower");
+            if (expected > 1e-280) {
+                int n = r.get("n").intValue();
+                int k = r.get("k").intValue();
+                assertEquals(expected, BatchRuleTest.lowerTail(k, n, r.get("p")), 1e-12 * expected,
+                        () -> "n " + n + ", k " + k + ", p " + r.get("p"));
+            }
+        }
+    }
+
+    /** The case that made Cupel sum point probabilities by hand: Commons Math 3 gave 1.0000000050e-8 for 0.1⁸. */
+    @Test
+    void eightPairsNoneWithin() {
+        // By hand: P(X ≤ 0) = (1 − 0.9)⁸ = 1e-8 (the double 0.9 makes it 1e-8 · (1 − 1.8e-15)).
+        assertEquals(1e-8, BatchRuleTest.lowerTail(0, 8, 0.9), 1e-14 * 1e-8);
     }
 
     @Test

@@ -8,7 +8,6 @@ import java.math.MathContext;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Random;
-import org.apache.commons.math3.distribution.ChiSquaredDistribution;
 import org.apache.commons.math3.stat.ranking.NaNStrategy;
 import org.apache.commons.math3.stat.ranking.NaturalRanking;
 import org.apache.commons.math3.stat.ranking.TiesStrategy;
@@ -150,21 +149,5 @@ class KernelEquivalenceProperties {
         int[] out = new int[n];
         Arrays.setAll(out, i -> i);
         return out;
-    }
-
-    /** Degrees of freedom and a statistic. */
-    record Chi(int df, double t) {
-    }
-
-    @Test
-    void chiSquareTailIsCommonsMaths() {
-        Gen<Integer> df = Gen.ints(1, 400);
-        Gen<Double> t = Gen.doubles(0, 1000);
-        // t = 0 (tail 1) and t = 1000 at the smallest and largest df; t equal to df.
-        List<Gen<Chi>> edges = List.of(Gen.constant(new Chi(1, 0)), Gen.constant(new Chi(400, 0)),
-                Gen.constant(new Chi(1, 1000)), Gen.constant(new Chi(400, 1000)), Gen.constant(new Chi(400, 400)));
-        SeededTries.forAll(2000, edges, r -> new Chi(df.next(r), t.next(r)),
-                in -> assertEquals(1.0 - new ChiSquaredDistribution(null, in.df()).cumulativeProbability(in.t()),
-                        BatchDispersion.upperTail(in.df(), in.t()), 0.0));
     }
 }

@@ -3,8 +3,9 @@ package org.cupel.recovery;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.Map;
-import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.math3.distribution.TDistribution;
+import org.apache.commons.statistics.distribution.NormalDistribution;
+import org.cupel.testing.SpecialFunctionReference;
 import org.junit.jupiter.api.Test;
 
 class DistributionsTest {
@@ -45,7 +46,7 @@ class DistributionsTest {
      */
     @Test
     void twoMeanStudentizedRangeIsAFoldedT() {
-        NormalDistribution z = new NormalDistribution(null, 0, 1);
+        NormalDistribution z = NormalDistribution.of(0, 1);
         for (double df : new double[] {2, 5}) {
             TDistribution t = new TDistribution(null, df);
             for (double q : new double[] {0.3, 1, 2.5, 4, 7, 14}) {
@@ -59,18 +60,32 @@ class DistributionsTest {
     }
 
     /**
-     * R 4.2 {@code pt(t, df, ncp)}, testdata/reference/recovery/noncentral_t.csv. Tolerance 1e-8: R's
-     * algorithm (Lenth 1989, AS 243) is accurate to about 1e-12, ours is quadrature with error below 1e-10.
+     * The Φ inside both integrals (Commons Statistics' normal distribution: ½·erfc(−x/√2), Commons Numbers'
+     * port of Boost's erfc) against 50-digit mpmath values at 2,987 points of [−38, 8.5]
+     * (testdata/reference/special-functions/normal_cdf.csv). The integrals need absolute accuracy: within
+     * 2.2e-16 (one ulp of ½; measured 1.1e-16). Relative accuracy in the lower tail: within 2e-14 for x ≥ −8
+     * (measured 8.9e-15), because rounding x/√2 to a double moves Φ by about x²·2⁻⁵³ relative (7e-15 at
+     * x = −8). Hart's (1968) approximation, carried by hand before, had the same absolute error but was
+     * 8.9e-9 relative off at x = −7.9 and returned 0 below −37.
      */
-    /** Hart (1968) / West (2005) Φ against Commons Math's erf-based Φ. Tolerance 1e-15: both double precision. */
     @Test
-    void fastNormalMatchesCommonsMath() {
-        NormalDistribution z = new NormalDistribution(null, 0, 1);
-        for (double x = -38; x <= 38; x += 0.01) {
-            assertEquals(z.cumulativeProbability(x), FastNormal.cdf(x), 1e-15, "x = " + x);
+    void standardNormalCdfMatchesMpmath() {
+        NormalDistribution phi = NormalDistribution.of(0, 1);
+        for (Map<String, Double> r : SpecialFunctionReference.rows("normal_cdf.csv")) {
+            double x = r.get("x");
+            double expected = r.get("cdf");
+            double got = phi.cumulativeProbability(x);
+            assertEquals(expected, got, 2.2e-16, "x = " + x);
+            if (x >= -8) {
+                assertEquals(expected, got, 2e-14 * expected, "x = " + x);
+            }
         }
     }
 
+    /**
+     * R 4.2 {@code pt(t, df, ncp)}, testdata/reference/recovery/noncentral_t.csv. Tolerance 1e-8: R's
+     * algorithm (Lenth 1989, AS 243) is accurate to about 1e-12, ours is quadrature with error below 1e-10.
+     */
     @Test
     void noncentralTMatchesRPt() throws Exception {
         for (Map<String, String> r : ReferenceCsv.rows("noncentral_t.csv")) {

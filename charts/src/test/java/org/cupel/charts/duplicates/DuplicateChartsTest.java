@@ -6,13 +6,17 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import org.cupel.assay.AssayValue;
+import org.cupel.assay.QcRole;
 import org.cupel.charts.ChartFigure;
 import org.cupel.charts.FigureChecks;
 import org.cupel.charts.PngWriter;
 import org.cupel.charts.PointBudget;
 import org.cupel.duplicates.DuplicateAnalysis;
+import org.cupel.duplicates.DuplicatePair;
 import org.cupel.duplicates.DuplicateReport;
 import org.cupel.duplicates.DuplicateSetResult;
 import org.cupel.duplicates.DuplicateSettings;
@@ -75,6 +79,74 @@ class DuplicateChartsTest {
         assertEquals(count(set.pairs().absoluteFlags().aboveLine99()),
                 th.getSeriesMap().get("flagged pairs").getXData().length);
     }
+
+    /**
+     * A pair exactly on the 10 % pulp HARD limit is not marked, a pair a hair beyond it is, and every panel marks
+     * exactly the pairs core flags. By hand: O-ON / D-ON = 0.90 / 1.10 has HARD 0.20 / 2.00 = 10 % exactly in its
+     * reported decimals, although the double (1.1 − 0.9)/(1.1 + 0.9) is 0.10000000000000003, which a plain
+     * {@code >} would call beyond; {@link org.cupel.assay.LimitComparison} calls it on the limit. O-OUT / D-OUT =
+     * 0.90 / 1.1001 has HARD 0.2001 / 2.0001 = 10.0045 %, beyond. Both means (1.0) are above 10 × DL (0.1), so
+     * both are judged by HARD.
+     */
+    @Test
+    void aPairOnTheHardLimitIsNotMarkedAndEveryMarkIsCoresFlag() {
+        List<DuplicatePair> pairs = new ArrayList<>(SimulatedPairs.withFlaggedPairs());
+        pairs.add(new DuplicatePair("D-ON", "O-ON", "J2", QcRole.PULP_DUPLICATE, AssayValue.detected(0.90, 0.01),
+                AssayValue.detected(1.10, 0.01)));
+        pairs.add(new DuplicatePair("D-OUT", "O-OUT", "J2", QcRole.PULP_DUPLICATE, AssayValue.detected(0.90, 0.01),
+                AssayValue.detected(1.1001, 0.01)));
+        DuplicateSetResult set = DuplicateAnalysis.run("Au", "g/t", pairs, List.of(), new double[0],
+                DuplicateSettings.DEFAULTS).sets().get(0);
+        assertEquals(0.10, set.precision().hardLimit(), 0.0, "the default pulp HARD limit this test is built on");
+        DuplicateSetResult.PairValues v = set.pairs();
+        double[] a = v.absoluteA();
+        double[] b = v.absoluteB();
+        boolean[] hard = v.absoluteFlags().beyondHardLimit();
+
+        XYChart scatter = (XYChart) DuplicateCharts.scatter(set, "(a)", 450, 270).chart();
+        XYSeries flagged = scatter.getSeriesMap().get("flagged pairs");
+        assertFalse(has(flagged, 0.90, 1.10), "on the HARD limit: not beyond it");
+        assertTrue(has(scatter.getSeriesMap().get("pairs"), 0.90, 1.10));
+        assertTrue(has(flagged, 0.90, 1.1001), "a hair beyond the HARD limit");
+        assertEquals(marked(a, b, hard, (x, y) -> new double[] {x, y}), points(flagged));
+
+        double[] ra = v.relativeA();
+        double[] rb = v.relativeB();
+        XYChart relative = (XYChart) DuplicateCharts.relativeDifference(set, "(a)", 450, 270).chart();
+        assertEquals(marked(ra, rb, v.relativeFlags().beyondHardLimit(),
+                (x, y) -> new double[] {(x + y) / 2, 100 * (y - x) / ((x + y) / 2)}),
+                points(relative.getSeriesMap().get("flagged pairs")));
+
+        XYChart th = (XYChart) DuplicateCharts.thompsonHowarth(set, "(a)", 450, 270).chart();
+        assertEquals(marked(a, b, v.absoluteFlags().aboveLine99(), (x, y) -> new double[] {(x + y) / 2,
+            Math.abs(x - y)}), points(th.getSeriesMap().get("flagged pairs")));
+    }
+
+    /** Where a panel places each flagged pair, sorted, to compare with what it drew. */
+    private static List<List<Double>> marked(double[] a, double[] b, boolean[] flags,
+                                             java.util.function.BiFunction<Double, Double, double[]> at) {
+        List<List<Double>> out = new ArrayList<>();
+        for (int i = 0; i < a.length; i++) {
+            if (flags[i]) {
+                double[] p = at.apply(a[i], b[i]);
+                out.add(List.of(p[0], p[1]));
+            }
+        }
+        out.sort(POINT_ORDER);
+        return out;
+    }
+
+    private static List<List<Double>> points(XYSeries s) {
+        List<List<Double>> out = new ArrayList<>();
+        for (int i = 0; i < s.getXData().length; i++) {
+            out.add(List.of(s.getXData()[i], s.getYData()[i]));
+        }
+        out.sort(POINT_ORDER);
+        return out;
+    }
+
+    private static final java.util.Comparator<List<Double>> POINT_ORDER =
+            java.util.Comparator.<List<Double>, Double>comparing(p -> p.get(0)).thenComparing(p -> p.get(1));
 
     @Test
     void manyPairsAreThinnedAndThePanelSaysSo() throws Exception {
