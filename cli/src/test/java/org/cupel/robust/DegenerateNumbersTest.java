@@ -7,8 +7,6 @@ import com.fasterxml.jackson.core.json.JsonReadFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -16,6 +14,7 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 import java.util.regex.Pattern;
+import org.cupel.cli.CliRun;
 import org.cupel.cli.CupelCommand;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -63,12 +62,11 @@ class DegenerateNumbersTest {
                 + "T1,A,F1,50,button,20,95\nT1,A,F1,50,slag,30,1\n");
         runs.put("recovery one", new String[] {"recovery", tw.toString(), "--json"});
         for (Map.Entry<String, String[]> r : runs.entrySet()) {
-            StringWriter out = new StringWriter();
-            StringWriter err = new StringWriter();
-            int code = CupelCommand.run(r.getValue(), new PrintWriter(out, true), new PrintWriter(err, true));
-            assertTrue(code != CupelCommand.INTERNAL_ERROR, r.getKey() + ": " + err);
+            CliRun run = CliRun.run(r.getValue());
+            int code = run.code();
+            assertTrue(code != CupelCommand.INTERNAL_ERROR, r.getKey() + ": " + run.err());
             if (code == CupelCommand.OK || code == CupelCommand.QC_FAILED) {
-                collect(r.getKey(), LENIENT.readTree(out.toString()), false, unexplained);
+                collect(r.getKey(), LENIENT.readTree(run.out()), false, unexplained);
             }
         }
         assertEquals(List.of(), unexplained);
