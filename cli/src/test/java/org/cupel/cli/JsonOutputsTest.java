@@ -10,7 +10,6 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -139,8 +138,7 @@ class JsonOutputsTest {
     /** Paths of every NaN or infinity, as a number token or as text. */
     static void nonFinite(String path, JsonNode node, List<String> out) {
         if (node.isObject()) {
-            for (Iterator<Map.Entry<String, JsonNode>> it = node.fields(); it.hasNext(); ) {
-                Map.Entry<String, JsonNode> e = it.next();
+            for (Map.Entry<String, JsonNode> e : node.properties()) {
                 nonFinite(path + "." + e.getKey(), e.getValue(), out);
             }
         } else if (node.isArray()) {

@@ -10,7 +10,6 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 import java.util.regex.Pattern;
@@ -81,8 +80,7 @@ class DegenerateNumbersTest {
     static void collect(String path, JsonNode node, boolean explained, List<String> out) {
         if (node.isObject()) {
             boolean here = explained || hasExplanation(node);
-            for (Iterator<Map.Entry<String, JsonNode>> it = node.fields(); it.hasNext(); ) {
-                Map.Entry<String, JsonNode> e = it.next();
+            for (Map.Entry<String, JsonNode> e : node.properties()) {
                 collect(path + "." + e.getKey(), e.getValue(), here, out);
             }
         } else if (node.isArray()) {
@@ -111,8 +109,7 @@ class DegenerateNumbersTest {
     }
 
     private static boolean hasExplanation(JsonNode object) {
-        for (Iterator<Map.Entry<String, JsonNode>> it = object.fields(); it.hasNext(); ) {
-            Map.Entry<String, JsonNode> e = it.next();
+        for (Map.Entry<String, JsonNode> e : object.properties()) {
             if (EXPLAINS.matcher(e.getKey()).matches() && !e.getValue().isNull()
                     && !(e.getValue().isTextual() && e.getValue().asText().isBlank())
                     && !(e.getValue().isArray() && e.getValue().isEmpty())) {
