@@ -28,14 +28,7 @@ public final class ProjectDump {
     }
 
     public static String dump(Project p) {
-        StringBuilder sb = new StringBuilder();
-        for (FileAccount a : p.files()) {
-            sb.append("account ").append(a).append('\n');
-        }
-        for (DataIssue i : p.exceptions().all()) {
-            sb.append("issue ").append(i.severity()).append(" [").append(i.sampleId()).append("] ")
-                    .append(i.message()).append('\n');
-        }
+        StringBuilder sb = accountsAndIssues(p);
         SampleTable t = p.samples();
         for (int r = 0; r < t.size(); r++) {
             sb.append("sample ").append(r).append(' ').append(t.sample(r)).append('\n');
@@ -59,6 +52,19 @@ public final class ProjectDump {
         return sb.toString();
     }
 
+    /** Every file account and every exceptions-register entry, one a line. */
+    private static StringBuilder accountsAndIssues(Project p) {
+        StringBuilder sb = new StringBuilder();
+        for (FileAccount a : p.files()) {
+            sb.append("account ").append(a).append('\n');
+        }
+        for (DataIssue i : p.exceptions().all()) {
+            sb.append("issue ").append(i.severity()).append(" [").append(i.sampleId()).append("] ")
+                    .append(i.message()).append('\n');
+        }
+        return sb;
+    }
+
     /**
      * The compact form of {@link #dump} for a large project, one line per kind of thing rather than per row:
      * every file account and exception in full; each batch with its rows and its samples per QC role (and how
@@ -68,14 +74,7 @@ public final class ProjectDump {
      * differs for any two different doubles, so that a change of one value anywhere changes a sum.
      */
     public static String summary(Project p) {
-        StringBuilder sb = new StringBuilder();
-        for (FileAccount a : p.files()) {
-            sb.append("account ").append(a).append('\n');
-        }
-        for (DataIssue i : p.exceptions().all()) {
-            sb.append("issue ").append(i.severity()).append(" [").append(i.sampleId()).append("] ")
-                    .append(i.message()).append('\n');
-        }
+        StringBuilder sb = accountsAndIssues(p);
         SampleTable t = p.samples();
         Map<Batch, BatchRows> batches = new LinkedHashMap<>();
         for (int r = 0; r < t.size(); r++) {
