@@ -49,7 +49,7 @@ public final class SpriteMarker extends Marker {
         long px = Math.round(x * PHASES);
         long py = Math.round(y * PHASES);
         Key key = new Key(g.getColor().getRGB(), markerSize, t.getScaleX(), t.getScaleY(),
-                (int) Math.floorMod(px, PHASES), (int) Math.floorMod(py, PHASES),
+                Math.floorMod(px, PHASES), Math.floorMod(py, PHASES),
                 g.getRenderingHint(RenderingHints.KEY_ANTIALIASING));
         Sprite s = sprites.computeIfAbsent(key, k -> draw(k, g.getColor(), g.getRenderingHints()));
         g.setTransform(new AffineTransform());

@@ -124,12 +124,23 @@ public final class CupelCommand implements Callable<Integer> {
         return INTERNAL_ERROR;
     }
 
-    /** Version from the jar manifest, or "development" when run from classes. */
+    /**
+     * The version the shaded jar's manifest gives ({@code Implementation-Version}, set from the Maven project
+     * version in cli/pom.xml); run from compiled classes (an IDE, the tests) there is no manifest, and the
+     * text says so rather than invent a number.
+     */
     static final class Version implements CommandLine.IVersionProvider {
+        static final String FROM_CLASSES = "development build (run from compiled classes, not from the jar)";
+
         @Override
         public String[] getVersion() {
-            String v = CupelCommand.class.getPackage().getImplementationVersion();
-            return new String[] {"cupel " + (v == null ? "development build" : v)};
+            return new String[] {text(CupelCommand.class)};
+        }
+
+        /** "cupel " and the Implementation-Version of the jar that holds {@code c}. */
+        static String text(Class<?> c) {
+            String v = c.getPackage().getImplementationVersion();
+            return "cupel " + (v == null || v.isBlank() ? FROM_CLASSES : v);
         }
     }
 }

@@ -3,8 +3,6 @@ package org.cupel.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -15,17 +13,12 @@ class AnalyseCommandTest {
     @Test
     void analysesTheDemoProjectWithoutWritingFiles(@TempDir Path dir) throws Exception {
         Path project = dir.resolve("demo");
-        StringWriter err = new StringWriter();
-        assertEquals(0, CupelCommand.run(new String[] {"demo", project.toString()},
-                new PrintWriter(new StringWriter()), new PrintWriter(err)), err.toString());
+        CliRun.ok("demo", project.toString());
         long filesBefore;
         try (var s = java.nio.file.Files.walk(dir)) {
             filesBefore = s.count();
         }
-        StringWriter out = new StringWriter();
-        assertEquals(0, CupelCommand.run(new String[] {"analyse", project.toString(), "--json-summary"},
-                new PrintWriter(out), new PrintWriter(err)), err.toString());
-        String json = out.toString();
+        String json = CliRun.ok("analyse", project.toString(), "--json-summary").out();
         assertTrue(json.contains("\"ingestMillis\"") && json.contains("\"analysisMillis\""), json);
         assertTrue(json.contains("\"stageMillis\"") && json.contains("\"duplicates\"") && json.contains("\"tables\""), json);
         assertTrue(json.contains("\"id\" : \"duplicates\""), json);
@@ -36,10 +29,8 @@ class AnalyseCommandTest {
 
     @Test
     void aMissingFolderIsAnInputError(@TempDir Path dir) {
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(new String[] {"analyse", dir.resolve("nowhere").toString()},
-                new PrintWriter(new StringWriter()), new PrintWriter(err));
-        assertEquals(CupelCommand.INPUT_ERROR, code);
-        assertTrue(err.toString().contains("is not a folder"), err.toString());
+        CliRun r = CliRun.run("analyse", dir.resolve("nowhere").toString());
+        assertEquals(CupelCommand.INPUT_ERROR, r.code());
+        assertTrue(r.err().contains("is not a folder"), r.err());
     }
 }

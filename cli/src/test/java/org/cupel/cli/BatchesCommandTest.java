@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -23,26 +21,19 @@ class BatchesCommandTest {
     static Path dir;
     static Path project;
 
-    private static String[] run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new String[] {Integer.toString(code), out.toString(), err.toString()};
-    }
-
     @BeforeAll
     static void demo() {
         project = dir.resolve("demo");
-        String[] r = run("demo", project.toString());
-        assertEquals("0", r[0], r[2]);
+        CliRun r = CliRun.run("demo", project.toString());
+        assertEquals(0, r.code(), r.err());
     }
 
     @Test
     void jsonNamesTheFailedBatchAndTheReassaySamples() throws Exception {
         Path csv = dir.resolve("reassay.csv");
-        String[] r = run("batches", project.toString(), "--json", "--reassay-csv", csv.toString(), "--fail-on-qc");
-        assertEquals("1", r[0], r[2]);
-        JsonNode doc = new ObjectMapper().readTree(r[1]);
+        CliRun r = CliRun.run("batches", project.toString(), "--json", "--reassay-csv", csv.toString(), "--fail-on-qc");
+        assertEquals(1, r.code(), r.err());
+        JsonNode doc = new ObjectMapper().readTree(r.out());
         assertTrue(doc.get("anyBatchFailed").asBoolean());
         JsonNode carry = null;
         for (JsonNode b : doc.get("blanks").get("results")) {
@@ -77,25 +68,25 @@ class BatchesCommandTest {
 
     @Test
     void tableShowsVerdictsReassayBlanksAndInsertion() {
-        String[] r = run("batches", project.toString());
-        assertEquals("0", r[0], r[2]);
+        CliRun r = CliRun.run("batches", project.toString());
+        assertEquals(0, r.code(), r.err());
         for (String heading : new String[] {"Batch verdicts", "Re-assay list", "Blanks that did not pass",
             "Insertion rates"}) {
-            assertTrue(r[1].contains(heading), heading);
+            assertTrue(r.out().contains(heading), heading);
         }
-        assertTrue(r[1].contains("probable carry-over"));
+        assertTrue(r.out().contains("probable carry-over"));
     }
 
     // The demo generator codes three samples IS and two NR in both analyte columns (docs/demo.md, planted
     // problems; PlantLog), and sends 125 umpire checks to Brisk Fen Analytical in five batches of 25.
     @Test
     void tableListsTheSamplesToResubmitAndTheUmpireLabApart() throws Exception {
-        String[] r = run("batches", project.toString());
-        assertEquals("0", r[0], r[2]);
+        CliRun r = CliRun.run("batches", project.toString());
+        assertEquals(0, r.code(), r.err());
         String[][] planted = {{"VH0000502", "OAL-00005", "IS", "insufficient sample"},
             {"VH0000898", "OAL-00008", "NR", "not received"}, {"VH0001650", "OAL-00014", "IS", "insufficient sample"},
             {"VH0002252", "OAL-00019", "NR", "not received"}, {"VH0002769", "OAL-00023", "IS", "insufficient sample"}};
-        String out = r[1];
+        String out = r.out();
         String resubmit = out.substring(out.indexOf("Samples to re-submit (5,"));
         for (String[] p : planted) {
             assertTrue(resubmit.lines().anyMatch(l -> l.startsWith(p[0]) && l.contains(p[1]) && l.contains("Au, Ag")
@@ -107,7 +98,7 @@ class BatchesCommandTest {
         String table = out.substring(0, out.indexOf("Reasons"));
         assertTrue(table.lines().noneMatch(l -> l.startsWith("BFA-")), "umpire batches are not primary rows");
         assertTrue(!out.contains("cannot judge"), "no primary batch of the demo lacks controls");
-        JsonNode doc = new ObjectMapper().readTree(run("batches", project.toString(), "--json")[1]);
+        JsonNode doc = new ObjectMapper().readTree(CliRun.run("batches", project.toString(), "--json").out());
         assertEquals(5, doc.get("resubmit").size());
         assertEquals("IS", doc.get("resubmit").get(0).get("labCodes").get(0).asText());
         assertEquals(125, doc.get("umpireLabs").get(0).get("checkAssays").asInt());
@@ -115,6 +106,6 @@ class BatchesCommandTest {
 
     @Test
     void missingFolderIsAnInputError() {
-        assertEquals("2", run("batches", dir.resolve("nope").toString())[0]);
+        assertEquals(2, CliRun.run("batches", dir.resolve("nope").toString()).code());
     }
 }

@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 
@@ -15,31 +13,24 @@ class BlanksCommandTest {
     private static final String FILE = Path.of(System.getProperty("cupel.testdata"), "control-blanks",
             "blank-results.csv").toString();
 
-    private static String[] run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new String[] {Integer.toString(code), out.toString(), err.toString()};
-    }
-
     @Test
     void tableNamesTheContaminatedBlankAndItsPrecedingSample() {
-        String[] r = run("blanks", FILE);
-        assertEquals("0", r[0], r[2]);
-        assertTrue(r[1].contains("BLK-003"), r[1]);
-        assertTrue(r[1].matches("(?s).*BLK-003 .*S-044 .*25\\.4 .*yes.*"), r[1]);
-        assertTrue(r[2].contains("blank-results.csv:9:5"), r[2]);
+        CliRun r = CliRun.run("blanks", FILE);
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("BLK-003"), r.out());
+        assertTrue(r.out().matches("(?s).*BLK-003 .*S-044 .*25\\.4 .*yes.*"), r.out());
+        assertTrue(r.err().contains("blank-results.csv:9:5"), r.err());
     }
 
     @Test
     void failOnQcExitsOne() {
-        assertEquals("1", run("blanks", FILE, "--fail-on-qc")[0]);
+        assertEquals(1, CliRun.run("blanks", FILE, "--fail-on-qc").code());
     }
 
     @Test
     void jsonCarriesResultsAndSummaries() throws Exception {
-        String[] r = run("blanks", FILE, "--json");
-        JsonNode doc = new ObjectMapper().readTree(r[1]);
+        CliRun r = CliRun.run("blanks", FILE, "--json");
+        JsonNode doc = new ObjectMapper().readTree(r.out());
         JsonNode sum = doc.get("blanks").get("summaries").get(0);
         assertEquals("Au", sum.get("analyte").asText());
         assertEquals(1, sum.get("carryOver").asInt());
@@ -49,13 +40,13 @@ class BlanksCommandTest {
 
     @Test
     void badMultipleIsAUsageError() {
-        String[] r = run("blanks", FILE, "--warn-multiple", "8");
-        assertEquals("2", r[0]);
-        assertTrue(r[2].contains("warnMultiple"), r[2]);
+        CliRun r = CliRun.run("blanks", FILE, "--warn-multiple", "8");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("warnMultiple"), r.err());
     }
 
     @Test
     void helpHasAnExample() {
-        assertTrue(run("blanks", "--help")[1].contains("Example:"));
+        assertTrue(CliRun.run("blanks", "--help").out().contains("Example:"));
     }
 }

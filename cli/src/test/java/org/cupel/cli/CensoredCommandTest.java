@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
@@ -20,23 +18,13 @@ class CensoredCommandTest {
                     "S17,16.9", "S18,17.9", "S19,21.6", "S20,22.7", "S21,34.5", "S22,45.9", "S23,53.6", "S24,77.2",
                     "S25,106.3", "S26,", "S27,n.a.x") + "\n";
 
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new Run(code, out.toString(), err.toString());
-    }
-
     @Test
     void tableShowsEveryMethodAndTheRecommendation(@TempDir Path dir) throws Exception {
         Path csv = dir.resolve("mn.csv");
         Files.writeString(csv, MANGANESE);
         Path png = dir.resolve("mn.png");
         // --wide: the line that counts the values starts with the (temporary, any length) path.
-        Run r = run("censored", csv.toString(), "--column", "Mn_ppb", "--chart", png.toString(), "--wide");
+        CliRun r = CliRun.run("censored", csv.toString(), "--column", "Mn_ppb", "--chart", png.toString(), "--wide");
         assertEquals(0, r.code(), r.err());
         // USEPA (2009) Example 15-1: KM 19.867, ROS 19.828, lognormal MLE 23.004 (4 significant digits here).
         assertTrue(r.out().contains("Kaplan–Meier"), r.out());
@@ -47,7 +35,7 @@ class CensoredCommandTest {
         assertTrue(r.out().contains("Recommendation: use Kaplan–Meier"), r.out());
         assertTrue(r.out().contains("n = 25, 6 below detection (limits 2, 5)"), r.out());
         assertTrue(Files.size(png) > 1000);
-        String dump = System.getProperty("cupel.cli.out");
+        String dump = System.getProperty("cupel.cli.out()");
         if (dump != null) {
             Files.writeString(Path.of(dump), r.out() + "\n--- stderr\n" + r.err());
             Files.copy(png, Path.of(dump + ".png"), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
@@ -58,7 +46,7 @@ class CensoredCommandTest {
     void jsonCarriesNullsAndNotesInsteadOfNaN(@TempDir Path dir) throws Exception {
         Path csv = dir.resolve("mn.csv");
         Files.writeString(csv, MANGANESE);
-        Run r = run("censored", csv.toString(), "--column", "Mn_ppb", "--json", "--km-lowest", "detect");
+        CliRun r = CliRun.run("censored", csv.toString(), "--column", "Mn_ppb", "--json", "--km-lowest", "detect");
         assertEquals(0, r.code(), r.err());
         JsonNode j = new ObjectMapper().readTree(r.out());
         assertEquals(25, j.get("n").asInt());
@@ -80,13 +68,13 @@ class CensoredCommandTest {
         Files.writeString(csv, "Sample ID,Au_ppm\nS1,<0.005\nS2,0.012\nS3,<0.01\nS4,0.031\nS5,0.007\nS6,0.25\n"
                 + "S7,1.84\nS8,<0.005\nS9,0.066\nS10,0.102\nS11,>10\nS12,0.044\nS13,3.2\nS14,0.009\n");
         Path png = dir.resolve("au.png");
-        Run r = run("censored", csv.toString(), "--column", "Au_ppm", "--chart", png.toString());
+        CliRun r = CliRun.run("censored", csv.toString(), "--column", "Au_ppm", "--chart", png.toString());
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("Recommendation: use MLE lognormal"), r.out());
         assertTrue(r.out().contains("Kaplan–Meier: not applicable"), r.out());
         assertTrue(r.out().contains("No probability plot written: not applicable: ROS handles"), r.out());
         assertTrue(!Files.exists(png));
-        String dump = System.getProperty("cupel.cli.out");
+        String dump = System.getProperty("cupel.cli.out()");
         if (dump != null) {
             Files.writeString(Path.of(dump + ".au.txt"), r.out());
         }
@@ -96,7 +84,7 @@ class CensoredCommandTest {
     void unknownColumnIsAnInputErrorNamingTheColumns(@TempDir Path dir) throws Exception {
         Path csv = dir.resolve("mn.csv");
         Files.writeString(csv, MANGANESE);
-        Run r = run("censored", csv.toString(), "--column", "Au_ppm");
+        CliRun r = CliRun.run("censored", csv.toString(), "--column", "Au_ppm");
         assertEquals(CupelCommand.INPUT_ERROR, r.code());
         assertTrue(r.err().contains("no column named 'Au_ppm'") && r.err().contains("Mn_ppb"), r.err());
     }
@@ -105,7 +93,7 @@ class CensoredCommandTest {
     void dlCheckGivesBothEpaLimitsAndCurrie(@TempDir Path dir) throws Exception {
         Path csv = dir.resolve("blanks.csv");
         Files.writeString(csv, "Sample ID,Au_ppm\nB1,1\nB2,2\nB3,3\nB4,4\nB5,5\nB6,6\nB7,7\n");
-        Run r = run("dl-check", csv.toString(), "--column", "Au_ppm", "--json");
+        CliRun r = CliRun.run("dl-check", csv.toString(), "--column", "Au_ppm", "--json");
         assertEquals(0, r.code(), r.err());
         JsonNode j = new ObjectMapper().readTree(r.out());
         // Replicates 1..7: mean 4, s = √(28/6). 40 CFR 136 App. B table t(6, 0.99) = 3.143 (3 decimals, so
@@ -117,7 +105,7 @@ class CensoredCommandTest {
         j.get("limits").forEach(l -> byName.put(l.get("name").asText(), l.get("value").asDouble()));
         assertEquals(3.143 * s, byName.get("EPA MDL_s"), 5e-4 * s);
         assertEquals(4 + 3.143 * s, byName.get("EPA MDL_b"), 5e-4 * s);
-        Run text = run("dl-check", csv.toString(), "--column", "Au_ppm");
+        CliRun text = CliRun.run("dl-check", csv.toString(), "--column", "Au_ppm");
         assertTrue(text.out().contains("Currie L_D (t)") && text.out().contains("EPA MDL_b")
                 && text.out().contains("includes the blank mean"), text.out());
     }
@@ -136,12 +124,12 @@ class CensoredCommandTest {
         Path file = dir.resolve("blanks.csv");
         Files.writeString(file, csv);
         // --wide: the checks read whole lines.
-        Run text = run("dl-check", file.toString(), "--column", "Au_ppm", "--wide");
+        CliRun text = CliRun.run("dl-check", file.toString(), "--column", "Au_ppm", "--wide");
         assertEquals(0, text.code(), text.err());
         assertTrue(text.out().contains("120 replicates used: 2 with a number, 118 below detection; 1 missing"),
                 text.out());
         assertTrue(text.out().contains("No SD: 118 of 120 values censored"), text.out());
-        JsonNode j = new ObjectMapper().readTree(run("dl-check", file.toString(), "--column", "Au_ppm", "--json").out());
+        JsonNode j = new ObjectMapper().readTree(CliRun.run("dl-check", file.toString(), "--column", "Au_ppm", "--json").out());
         assertEquals(118, j.get("belowDetection").asInt());
         assertTrue(j.get("sd").get("value").isNull());
         JsonNode mdlB = null;
@@ -158,9 +146,9 @@ class CensoredCommandTest {
 
     @Test
     void helpShowsAnExample() {
-        Run r = run("censored", "--help");
+        CliRun r = CliRun.run("censored", "--help");
         assertEquals(0, r.code());
         assertTrue(r.out().contains("cupel censored assays.csv --column Au_ppm"), r.out());
-        assertTrue(run("dl-check", "--help").out().contains("cupel dl-check"));
+        assertTrue(CliRun.run("dl-check", "--help").out().contains("cupel dl-check"));
     }
 }

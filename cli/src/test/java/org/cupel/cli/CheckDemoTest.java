@@ -6,8 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -20,14 +18,8 @@ class CheckDemoTest {
     @Test
     void theDemoProjectChecksCleanly() throws IOException {
         Path demo = dir.resolve("demo");
-        StringWriter err = new StringWriter();
-        assertEquals(CupelCommand.OK, CupelCommand.run(new String[] {"demo", demo.toString(), "--samples", "500"},
-                new PrintWriter(new StringWriter()), new PrintWriter(err)), err.toString());
-        StringWriter out = new StringWriter();
-        int code = CupelCommand.run(new String[] {"check", demo.toString(), "--json"}, new PrintWriter(out),
-                new PrintWriter(err));
-        assertEquals(CupelCommand.OK, code, err.toString());
-        JsonNode root = new ObjectMapper().readTree(out.toString());
+        CliRun.ok("demo", demo.toString(), "--samples", "500");
+        JsonNode root = new ObjectMapper().readTree(CliRun.ok("check", demo.toString(), "--json").out());
         for (JsonNode f : root.get("summary").get("files")) {
             assertEquals(f.get("rowsRead").asLong(), f.get("rowsAnalysed").asLong() + f.get("rowsExcluded").asLong(),
                     f.toString());

@@ -6,8 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
@@ -24,16 +22,6 @@ class CrmCommandTest {
             + "LOW,J4,5,2025-03-24,0.50\nMID,J4,15,2025-03-24,2.49\nHIGH,J4,25,2025-03-24,7.70\n"
             + "LOW,J5,5,2025-03-31,<0.01\nZZ-9,J5,15,2025-03-31,1.10\n";
 
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new Run(code, out.toString(), err.toString());
-    }
-
     private static Path[] files(Path dir) throws IOException {
         Path results = Files.writeString(dir.resolve("crm-results.csv"), RESULTS);
         Path catalog = Files.writeString(dir.resolve("crm-catalog.csv"), CATALOG);
@@ -43,7 +31,7 @@ class CrmCommandTest {
     @Test
     void plainModePrintsTablesWithSwapFailureAndExceptions(@TempDir Path dir) throws IOException {
         Path[] f = files(dir);
-        Run r = run("crm", "--results", f[0].toString(), "--catalog", f[1].toString());
+        CliRun r = CliRun.run("crm", "--results", f[0].toString(), "--catalog", f[1].toString());
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("1 failures, 0 warnings, 1 probable swaps, 2 exceptions"), r.out());
         assertTrue(r.out().contains("probable swap with MID"), r.out());
@@ -58,12 +46,12 @@ class CrmCommandTest {
         Path results = Files.writeString(dir.resolve("crm-results.csv"), RESULTS);
         Path catalog = Files.writeString(dir.resolve("crm-catalog.csv"), CATALOG
                 + "LOW,Ag,ppm,3.8,0.3\nMID,Ag,ppm,11.4,0.6\nOTHER,Cu,%,0.2,0.008\n");
-        Run r = run("crm", "--results", results.toString(), "--catalog", catalog.toString());
+        CliRun r = CliRun.run("crm", "--results", results.toString(), "--catalog", catalog.toString());
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("12 results in 3 series: 1 failures, 0 warnings, 1 probable swaps, 2 exceptions"),
                 r.out());
         assertTrue(!r.out().contains("Ag ("), "no Ag series: " + r.out());
-        Run json = run("crm", "--results", results.toString(), "--catalog", catalog.toString(), "--json");
+        CliRun json = CliRun.run("crm", "--results", results.toString(), "--catalog", catalog.toString(), "--json");
         assertEquals(0, json.code(), json.err());
         assertEquals(3, new ObjectMapper().readTree(json.out()).get("series").size());
     }
@@ -79,11 +67,11 @@ class CrmCommandTest {
         }
         Path results = Files.writeString(dir.resolve("spike.csv"), csv.toString());
         Path catalog = Files.writeString(dir.resolve("crm-catalog.csv"), CATALOG);
-        Run r = run("crm", "--results", results.toString(), "--catalog", catalog.toString());
+        CliRun r = CliRun.run("crm", "--results", results.toString(), "--catalog", catalog.toString());
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("Outlier, LOW Au: line 17 (batch J16, result 16, z = +5"), r.out());
         assertTrue(!r.out().contains("Drift, "), r.out());
-        JsonNode drift = new ObjectMapper().readTree(run("crm", "--results", results.toString(), "--catalog",
+        JsonNode drift = new ObjectMapper().readTree(CliRun.run("crm", "--results", results.toString(), "--catalog",
                 catalog.toString(), "--json").out()).get("series").get(0).get("drift");
         assertEquals(false, drift.get("drifting").asBoolean());
         assertEquals(16, drift.get("outliers").get(0).get("result").asInt());
@@ -92,7 +80,7 @@ class CrmCommandTest {
     @Test
     void jsonModeFollowsDocumentedSchema(@TempDir Path dir) throws IOException {
         Path[] f = files(dir);
-        Run r = run("crm", "--results", f[0].toString(), "--catalog", f[1].toString(), "--json");
+        CliRun r = CliRun.run("crm", "--results", f[0].toString(), "--catalog", f[1].toString(), "--json");
         assertEquals(0, r.code(), r.err());
         JsonNode j = new ObjectMapper().readTree(r.out());
         assertEquals("cupel-crm/1", j.get("schema").asText());
@@ -109,17 +97,17 @@ class CrmCommandTest {
     void failOnQcAndChartsAndInputErrors(@TempDir Path dir) throws IOException {
         Path[] f = files(dir);
         Path charts = dir.resolve("charts");
-        Run r = run("crm", "--results", f[0].toString(), "--catalog", f[1].toString(), "--fail-on-qc",
+        CliRun r = CliRun.run("crm", "--results", f[0].toString(), "--catalog", f[1].toString(), "--fail-on-qc",
                 "--charts", charts.toString());
         assertEquals(CupelCommand.QC_FAILED, r.code(), r.err());
         assertTrue(Files.exists(charts.resolve("crm-LOW-Au.png")));
         assertTrue(Files.exists(charts.resolve("crm-z-Au.png")));
         assertTrue(Files.exists(charts.resolve("crm-bias-Au.png")));
-        Run missing = run("crm", "--results", f[0].toString());
+        CliRun missing = CliRun.run("crm", "--results", f[0].toString());
         assertEquals(CupelCommand.INPUT_ERROR, missing.code());
         assertTrue(missing.err().contains("--catalog"), missing.err());
         Files.writeString(f[0], "crm,batch,date,Au_ppm\nLOW,J1,03/03/2025,0.5\n");
-        Run badDate = run("crm", "--results", f[0].toString(), "--catalog", f[1].toString());
+        CliRun badDate = CliRun.run("crm", "--results", f[0].toString(), "--catalog", f[1].toString());
         assertEquals(CupelCommand.INPUT_ERROR, badDate.code());
         assertTrue(badDate.err().contains(":2:3: date '03/03/2025' is not an ISO date"), badDate.err());
     }
@@ -127,7 +115,7 @@ class CrmCommandTest {
     @Test
     void projectModeReadsAFolder() {
         Path messy = Path.of(System.getProperty("cupel.testdata"), "fixtures", "ingest", "messy-project");
-        Run r = run("crm", messy.toString());
+        CliRun r = CliRun.run("crm", messy.toString());
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("KRM-99"), r.out());
     }

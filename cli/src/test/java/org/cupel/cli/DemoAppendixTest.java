@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -30,11 +28,9 @@ class DemoAppendixTest {
     @BeforeAll
     static void writeTheDemoAppendix() {
         qc = dir.resolve("qc");
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(new String[] {"report", "--demo", "--out", qc.toString(), "--screen", "--quiet"},
-                new PrintWriter(new StringWriter(), true), new PrintWriter(err, true));
-        runErrors = code + " " + err;
-        assertEquals(0, code, runErrors);
+        CliRun r = CliRun.run("report", "--demo", "--out", qc.toString(), "--screen", "--quiet");
+        runErrors = r.code() + " " + r.err();
+        assertEquals(0, r.code(), runErrors);
     }
 
     private static List<String> table(String name) throws IOException {

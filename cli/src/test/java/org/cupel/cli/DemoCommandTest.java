@@ -6,8 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -20,16 +18,6 @@ class DemoCommandTest {
     @TempDir
     Path parent;
 
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args, new PrintWriter(out, true), new PrintWriter(err, true));
-        return new Run(code, out.toString(), err.toString());
-    }
-
     private List<String> siblings() throws IOException {
         try (Stream<Path> s = Files.list(parent)) {
             return s.map(p -> p.getFileName().toString()).sorted().toList();
@@ -39,7 +27,7 @@ class DemoCommandTest {
     @Test
     void writesTheProjectAndSummarisesThePlantedProblems() throws IOException {
         Path target = parent.resolve("demo-project");
-        Run r = run("demo", target.toString());
+        CliRun r = CliRun.run("demo", target.toString());
         assertEquals(CupelCommand.OK, r.code(), r.err());
         assertTrue(r.out().contains("25 lab batches"), r.out());
         assertTrue(r.out().contains("CRM_SWAP"), r.out());
@@ -55,12 +43,12 @@ class DemoCommandTest {
         Path target = parent.resolve("p");
         Files.createDirectories(target);
         Files.writeString(target.resolve("notes.txt"), "mine");
-        Run refused = run("demo", target.toString());
+        CliRun refused = CliRun.run("demo", target.toString());
         assertEquals(CupelCommand.INPUT_ERROR, refused.code());
         assertTrue(refused.err().contains("--force"), refused.err());
         assertTrue(Files.exists(target.resolve("notes.txt")));
 
-        Run forced = run("demo", target.toString(), "--force", "--seed", "5");
+        CliRun forced = CliRun.run("demo", target.toString(), "--force", "--seed", "5");
         assertEquals(CupelCommand.OK, forced.code(), forced.err());
         assertFalse(Files.exists(target.resolve("notes.txt")));
         assertTrue(Files.exists(target.resolve("register.csv")));
@@ -71,14 +59,14 @@ class DemoCommandTest {
     void anEmptyFolderIsFilled() throws IOException {
         Path target = parent.resolve("empty");
         Files.createDirectories(target);
-        assertEquals(CupelCommand.OK, run("demo", target.toString()).code());
+        assertEquals(CupelCommand.OK, CliRun.run("demo", target.toString()).code());
         assertTrue(Files.exists(target.resolve("register.csv")));
     }
 
     @Test
     void sameSeedWritesTheSameBytes() throws IOException {
-        assertEquals(CupelCommand.OK, run("demo", parent.resolve("a").toString(), "--seed", "9").code());
-        assertEquals(CupelCommand.OK, run("demo", parent.resolve("b").toString(), "--seed", "9").code());
+        assertEquals(CupelCommand.OK, CliRun.run("demo", parent.resolve("a").toString(), "--seed", "9").code());
+        assertEquals(CupelCommand.OK, CliRun.run("demo", parent.resolve("b").toString(), "--seed", "9").code());
         assertArrayEquals(Files.readAllBytes(parent.resolve("a/register.csv")),
                 Files.readAllBytes(parent.resolve("b/register.csv")));
         assertArrayEquals(Files.readAllBytes(parent.resolve("a/lab/OAL-00012.csv")),
@@ -89,10 +77,10 @@ class DemoCommandTest {
     void badArgumentsAreInputErrors() throws IOException {
         Path file = parent.resolve("file.txt");
         Files.writeString(file, "x");
-        Run onFile = run("demo", file.toString());
+        CliRun onFile = CliRun.run("demo", file.toString());
         assertEquals(CupelCommand.INPUT_ERROR, onFile.code());
         assertTrue(onFile.err().contains("is a file"), onFile.err());
-        Run tooSmall = run("demo", parent.resolve("q").toString(), "--samples", "10");
+        CliRun tooSmall = CliRun.run("demo", parent.resolve("q").toString(), "--samples", "10");
         assertEquals(CupelCommand.INPUT_ERROR, tooSmall.code());
         assertTrue(tooSmall.err().contains("--samples 10"), tooSmall.err());
         assertFalse(Files.exists(parent.resolve("q")));

@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
@@ -17,16 +15,6 @@ import org.junit.jupiter.api.io.TempDir;
 class DuplicatesCommandTest {
     @TempDir
     Path dir;
-
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new Run(code, out.toString(), err.toString());
-    }
 
     /** Invented pulp duplicates, 10 % relative SD, in two batches; batch J2 twice as noisy as J1. */
     private Path pairsCsv() throws Exception {
@@ -47,7 +35,7 @@ class DuplicatesCommandTest {
     @Test
     void printsTheReadableTablesForAPairsFile() throws Exception {
         // --wide: the checks read whole lines.
-        Run r = run("duplicates", pairsCsv().toString(), "--analyte", "Au", "--unit", "g/t", "--wide");
+        CliRun r = CliRun.run("duplicates", pairsCsv().toString(), "--analyte", "Au", "--unit", "g/t", "--wide");
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("Au (g/t): duplicate precision"), r.out());
         assertTrue(r.out().contains("pulp duplicate"), r.out());
@@ -58,12 +46,12 @@ class DuplicatesCommandTest {
 
     @Test
     void failOnQcExitsOneWhenABatchFails() throws Exception {
-        assertEquals(1, run("duplicates", pairsCsv().toString(), "--fail-on-qc").code());
+        assertEquals(1, CliRun.run("duplicates", pairsCsv().toString(), "--fail-on-qc").code());
     }
 
     @Test
     void jsonCarriesCountsAndExclusions() throws Exception {
-        Run r = run("duplicates", pairsCsv().toString(), "--json", "--dl-multiple", "5");
+        CliRun r = CliRun.run("duplicates", pairsCsv().toString(), "--json", "--dl-multiple", "5");
         assertEquals(0, r.code(), r.err());
         JsonNode doc = new ObjectMapper().readTree(r.out());
         JsonNode set = doc.get("analytes").get(0).get("sets").get(0);
@@ -77,7 +65,7 @@ class DuplicatesCommandTest {
     @Test
     void writesCharts() throws Exception {
         Path charts = dir.resolve("charts");
-        Run r = run("duplicates", pairsCsv().toString(), "--charts", charts.toString());
+        CliRun r = CliRun.run("duplicates", pairsCsv().toString(), "--charts", charts.toString());
         assertEquals(0, r.code(), r.err());
         // One pairs file, one analyte: its three figures (pairs, bias, precision), whatever the number of types.
         try (var files = Files.list(charts)) {
@@ -91,19 +79,19 @@ class DuplicatesCommandTest {
     void badInputGivesExitTwoAndAMessage() throws Exception {
         Path f = dir.resolve("wrong.csv");
         Files.writeString(f, "sample,value\nS1,1\n");
-        Run r = run("duplicates", f.toString());
+        CliRun r = CliRun.run("duplicates", f.toString());
         assertEquals(2, r.code());
         assertTrue(r.err().contains("'original' and 'duplicate'"), r.err());
-        assertEquals(2, run("duplicates", f.toString(), "--type", "crm").code());
+        assertEquals(2, CliRun.run("duplicates", f.toString(), "--type", "crm").code());
     }
 
     @Test
     void runsOnTheDemoProjectAndFlagsThePoorPulpBatch() throws Exception {
         Path demo = dir.resolve("demo");
-        assertEquals(0, run("demo", demo.toString()).code());
-        Run r = run("duplicates", demo.toString(), "--analyte", "Au", "--type", "pulp", "--wide");
+        assertEquals(0, CliRun.run("demo", demo.toString()).code());
+        CliRun r = CliRun.run("duplicates", demo.toString(), "--analyte", "Au", "--type", "pulp", "--wide");
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("less precise than the set"), r.out());
-        assertEquals(2, run("duplicates", demo.toString(), "--analyte", "Zn").code());
+        assertEquals(2, CliRun.run("duplicates", demo.toString(), "--analyte", "Zn").code());
     }
 }

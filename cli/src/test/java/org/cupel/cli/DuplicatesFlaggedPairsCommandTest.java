@@ -6,8 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -23,19 +21,11 @@ class DuplicatesFlaggedPairsCommandTest {
     @TempDir
     Path dir;
 
-    private static String[] run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args, new PrintWriter(out), new PrintWriter(err));
-        assertEquals(0, code, err.toString());
-        return new String[] {out.toString(), err.toString()};
-    }
-
     @Test
     void idsAreInTheOrderOfTheValuesAndLowPairsAreNotRankedByHard() throws Exception {
         Path demo = dir.resolve("demo");
-        run("demo", demo.toString());
-        String out = run("duplicates", demo.toString(), "--analyte", "Au")[0];
+        CliRun.ok("demo", demo.toString());
+        String out = CliRun.ok("duplicates", demo.toString(), "--analyte", "Au").out();
         // Before: "VH0001166-R / VH0001166 [OAL-00010]: 0.783 vs 0.895", the duplicate's ID before the original's value.
         assertTrue(out.contains("VH0001166 / VH0001166-R [OAL-00010]: 0.783 vs 0.895"), out);
         assertFalse(out.contains("VH0001166-R / VH0001166"), out);
@@ -46,7 +36,7 @@ class DuplicatesFlaggedPairsCommandTest {
         // OAL-00008.csv reports "VH0000979,0.070": as the lab wrote it (before issue 17: "0.07 vs 0.317").
         assertTrue(out.contains("VH0000979 / VH0000980 [OAL-00008]: 0.070 vs 0.317"), out);
 
-        JsonNode doc = new ObjectMapper().readTree(run("duplicates", demo.toString(), "--analyte", "Au", "--json")[0]);
+        JsonNode doc = new ObjectMapper().readTree(CliRun.ok("duplicates", demo.toString(), "--analyte", "Au", "--json").out());
         JsonNode field = doc.get("analytes").get(0).get("sets").get(0);
         assertEquals("FIELD_DUPLICATE", field.get("type").asText());
         boolean asWritten = false;

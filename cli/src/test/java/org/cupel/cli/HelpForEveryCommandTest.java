@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -20,17 +18,6 @@ import picocli.CommandLine;
  * command added later is covered without editing this test.
  */
 class HelpForEveryCommandTest {
-
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(List<String> args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args.toArray(String[]::new), new PrintWriter(out, true),
-                new PrintWriter(err, true));
-        return new Run(code, out.toString(), err.toString());
-    }
 
     /** Every command path below {@code cupel}, by each name it answers to (aliases too). */
     static List<List<String>> commandPaths() {
@@ -56,7 +43,7 @@ class HelpForEveryCommandTest {
                 () -> {
                     List<String> args = new ArrayList<>(path);
                     args.add("--help");
-                    Run r = run(args);
+                    CliRun r = CliRun.run(args);
                     assertEquals(CupelCommand.OK, r.code(), "exit code of " + args + "; stderr: " + r.err());
                     // The help command prints its description before the usage line.
                     assertTrue(r.out().contains("Usage: cupel " + canonicalName(path) + " "), r.out());
@@ -68,7 +55,7 @@ class HelpForEveryCommandTest {
     Stream<DynamicTest> helpCommandShowsTheUsageOfEveryCommand() {
         return commandPaths().stream().filter(p -> p.size() == 1 && !p.get(0).equals("help"))
                 .map(path -> DynamicTest.dynamicTest("cupel help " + path.get(0), () -> {
-                    Run r = run(List.of("help", path.get(0)));
+                    CliRun r = CliRun.run(List.of("help", path.get(0)));
                     assertEquals(CupelCommand.OK, r.code(), r.err());
                     assertTrue(r.out().contains("Usage: cupel " + canonicalName(path) + " "), r.out());
                 }));

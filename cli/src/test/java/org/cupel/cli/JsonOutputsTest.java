@@ -7,12 +7,9 @@ import com.fasterxml.jackson.core.json.JsonReadFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -43,9 +40,7 @@ class JsonOutputsTest {
     @BeforeAll
     static void projects() throws IOException {
         demo = dir.resolve("demo");
-        StringWriter err = new StringWriter();
-        assertEquals(0, CupelCommand.run(new String[] {"demo", demo.toString()}, new PrintWriter(new StringWriter()),
-                new PrintWriter(err)), err.toString());
+        CliRun.ok("demo", demo.toString());
         degenerate = dir.resolve("degenerate");
         write(degenerate.resolve("register.csv"), "sample_id,qc_role,reference\nS1,routine,\nS2,routine,\n"
                 + "D1,field duplicate,S1\nD2,field duplicate,S2\nC1,CRM,LOW\nB1,blank,\n");
@@ -91,13 +86,13 @@ class JsonOutputsTest {
     void noJsonHoldsNaNOrInfinity() throws IOException {
         List<String> found = new ArrayList<>();
         for (Map.Entry<String, String[]> r : runs().entrySet()) {
-            StringWriter out = new StringWriter();
-            StringWriter err = new StringWriter();
-            int code = CupelCommand.run(r.getValue(), new PrintWriter(out, true), new PrintWriter(err, true));
-            assertTrue(code == CupelCommand.OK || code == CupelCommand.QC_FAILED, r.getKey() + " exit " + code + ": " + err);
-            nonFinite(r.getKey(), LENIENT.readTree(out.toString()), found);
-            assertTrue(!MAP_TEXT.matcher(out.toString()).find(), r.getKey() + " prints a map's text: "
-                    + firstMatch(out.toString()));
+            CliRun run = CliRun.run(r.getValue());
+            int code = run.code();
+            assertTrue(code == CupelCommand.OK || code == CupelCommand.QC_FAILED,
+                    r.getKey() + " exit " + code + ": " + run.err());
+            nonFinite(r.getKey(), LENIENT.readTree(run.out()), found);
+            assertTrue(!MAP_TEXT.matcher(run.out()).find(), r.getKey() + " prints a map's text: "
+                    + firstMatch(run.out()));
         }
         assertEquals(List.of(), found);
     }
@@ -105,10 +100,8 @@ class JsonOutputsTest {
     @Test
     void summaryJsonOfTheDegenerateProjectHoldsNoNaN() throws IOException {
         Path out = dir.resolve("degenerate-report");
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(new String[] {"report", degenerate.toString(), "--out", out.toString(), "--screen",
-            "--quiet"}, new PrintWriter(new StringWriter(), true), new PrintWriter(err, true));
-        assertTrue(code == CupelCommand.OK || code == CupelCommand.QC_FAILED, code + " " + err);
+        CliRun r = CliRun.run("report", degenerate.toString(), "--out", out.toString(), "--screen", "--quiet");
+        assertTrue(r.code() == CupelCommand.OK || r.code() == CupelCommand.QC_FAILED, r.code() + " " + r.err());
         String json = Files.readString(out.resolve("summary.json"));
         List<String> found = new ArrayList<>();
         nonFinite("summary.json", LENIENT.readTree(json), found);
@@ -119,11 +112,7 @@ class JsonOutputsTest {
     /** The text report of {@code cupel analyse} lists a group of headlines member by member. */
     @Test
     void analyseNamesEachMemberOfAGroup() {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        assertEquals(0, CupelCommand.run(new String[] {"analyse", demo.toString()}, new PrintWriter(out, true),
-                new PrintWriter(err, true)), err.toString());
-        String text = out.toString();
+        String text = CliRun.ok("analyse", demo.toString()).out();
         assertTrue(!MAP_TEXT.matcher(text).find(), firstMatch(text));
         assertTrue(text.lines().anyMatch(l -> l.contains("samplesByRole.crm") && l.strip().endsWith("125")), text);
         // The demo inserts 5 CRMs per 100 routine samples: 125 / 2,499 = 5.0 %.
@@ -149,8 +138,7 @@ class JsonOutputsTest {
     /** Paths of every NaN or infinity, as a number token or as text. */
     static void nonFinite(String path, JsonNode node, List<String> out) {
         if (node.isObject()) {
-            for (Iterator<Map.Entry<String, JsonNode>> it = node.fields(); it.hasNext(); ) {
-                Map.Entry<String, JsonNode> e = it.next();
+            for (Map.Entry<String, JsonNode> e : node.properties()) {
                 nonFinite(path + "." + e.getKey(), e.getValue(), out);
             }
         } else if (node.isArray()) {

@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
@@ -35,13 +33,6 @@ class RecoveryFireAssayChargeTest {
             T6,B,3,F1,29.99,slag,61.3,0.045
             """;
 
-    private static String[] run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new String[] {Integer.toString(code), out.toString(), err.toString()};
-    }
-
     /**
      * Smelt T1 by hand: metal in charge 30.00 g × 5.0025 g/t (mean head) = 150.075 µg; slag 61.2 g × 0.071 g/t =
      * 4.3452 µg; recovery by loss 100·(1 − 4.3452/150.075) = 97.1046 %. The reconciled recovery moves it by
@@ -51,12 +42,12 @@ class RecoveryFireAssayChargeTest {
     void thirtyGramChargesAtFiveGramsPerTonneReconcile(@TempDir Path dir) throws Exception {
         Files.writeString(dir.resolve("heads.csv"), HEADS);
         Files.writeString(dir.resolve("smelts.csv"), SMELTS);
-        String[] table = run("recovery", dir.toString());
-        assertEquals("0", table[0], table[2]);
-        assertTrue(table[1].contains("Metal balance per smelt"), table[1]);
-        String[] json = run("recovery", dir.toString(), "--json");
-        assertEquals("0", json[0], json[2]);
-        JsonNode j = new ObjectMapper().readTree(json[1]);
+        CliRun table = CliRun.run("recovery", dir.toString());
+        assertEquals(0, table.code(), table.err());
+        assertTrue(table.out().contains("Metal balance per smelt"), table.out());
+        CliRun json = CliRun.run("recovery", dir.toString(), "--json");
+        assertEquals(0, json.code(), json.err());
+        JsonNode j = new ObjectMapper().readTree(json.out());
         assertEquals(6, j.get("balances").size());
         JsonNode t1 = j.get("smelts").get(0);
         assertEquals("T1", t1.get("testId").asText());
@@ -75,12 +66,12 @@ class RecoveryFireAssayChargeTest {
     @Test
     void analyseRunsOnAFireAssayProject(@TempDir Path dir) throws Exception {
         Path project = dir.resolve("demo");
-        String[] demo = run("demo", project.toString());
-        assertEquals("0", demo[0], demo[2]);
+        CliRun demo = CliRun.run("demo", project.toString());
+        assertEquals(0, demo.code(), demo.err());
         Files.writeString(project.resolve("testwork").resolve("heads.csv"), HEADS);
         Files.writeString(project.resolve("testwork").resolve("smelts.csv"), SMELTS);
-        String[] r = run("analyse", project.toString(), "--json-summary");
-        assertEquals("0", r[0], r[2]);
-        assertTrue(r[1].contains("\"id\" : \"testwork\""), r[1]);
+        CliRun r = CliRun.run("analyse", project.toString(), "--json-summary");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("\"id\" : \"testwork\""), r.out());
     }
 }

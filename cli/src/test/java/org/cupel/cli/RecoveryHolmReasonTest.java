@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.Arrays;
 import org.junit.jupiter.api.Test;
@@ -19,21 +17,14 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class RecoveryHolmReasonTest {
 
-    private static String[] run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new String[] {Integer.toString(code), out.toString(), err.toString()};
-    }
-
     @Test
     void cannotTellCarriesTheHolmReason(@TempDir Path dir) {
         Path project = dir.resolve("demo");
-        assertEquals("0", run("demo", project.toString())[0]);
+        assertEquals(0, CliRun.run("demo", project.toString()).code());
         // --wide: each table row on one line, as the checks read it.
-        String[] r = run("recovery", project.toString(), "--wide");
-        assertEquals("0", r[0], r[2]);
-        String[] lines = r[1].split("\n");
+        CliRun r = CliRun.run("recovery", project.toString(), "--wide");
+        assertEquals(0, r.code(), r.err());
+        String[] lines = r.out().split("\n");
         String held = Arrays.stream(lines).filter(l -> l.startsWith("Au") && l.contains("LIT90-1050 − LIT60-1050-HALF"))
                 .findFirst().orElseThrow();
         assertTrue(held.contains("cannot tell") && held.contains("CI excludes 0 (Welch p = 0.048)")
@@ -41,6 +32,6 @@ class RecoveryHolmReasonTest {
         String open = Arrays.stream(lines).filter(l -> l.startsWith("Au") && l.contains("LIT60-1050 − LIT60-1100"))
                 .findFirst().orElseThrow();
         assertFalse(open.contains("Holm-adjusted"), open);
-        assertTrue(r[1].contains("with 2 or 3 smelts per condition there are only 3 or 10 distinct resamples"), r[1]);
+        assertTrue(r.out().contains("with 2 or 3 smelts per condition there are only 3 or 10 distinct resamples"), r.out());
     }
 }

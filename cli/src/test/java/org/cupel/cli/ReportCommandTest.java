@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
@@ -15,23 +13,24 @@ class ReportCommandTest {
     private static final Path MESSY = Path.of(System.getProperty("cupel.testdata"), "fixtures", "ingest",
             "messy-project");
 
-    private final StringWriter out = new StringWriter();
-    private final StringWriter err = new StringWriter();
+    /** The last run, whose standard error the checks read. */
+    private CliRun last;
 
     private int run(String... args) {
-        return CupelCommand.run(args, new PrintWriter(out, true), new PrintWriter(err, true));
+        last = CliRun.run(args);
+        return last.code();
     }
 
     @Test
     void writesTheAppendixOfAProjectFolder(@TempDir Path dir) throws Exception {
         Path qc = dir.resolve("qc");
-        assertEquals(0, run("report", MESSY.toString(), "--out", qc.toString(), "--screen", "--quiet"), err.toString());
+        assertEquals(0, run("report", MESSY.toString(), "--out", qc.toString(), "--screen", "--quiet"), last.err());
         for (String f : new String[] {"index.html", "appendix.pdf", "appendix.docx", "summary.json",
             "tables/scope-batches.csv", "tables/data-exceptions.csv"}) {
             assertTrue(Files.size(qc.resolve(f)) > 0, f);
         }
-        assertTrue(out.toString().contains("written to"));
-        assertEquals("", err.toString(), "no progress bar when stderr is not a terminal");
+        assertTrue(last.out().contains("written to"));
+        assertEquals("", last.err(), "no progress bar when stderr is not a terminal");
     }
 
     // Screen resolution keeps these runs cheap; print resolution is covered by ReportWriterTest.
@@ -40,7 +39,7 @@ class ReportCommandTest {
         Path qc = dir.resolve("qc");
         assertEquals(0, run("report", MESSY.toString(), "--out", qc.toString(), "--screen", "--quiet"));
         assertEquals(CupelCommand.INPUT_ERROR, run("report", MESSY.toString(), "--out", qc.toString()));
-        assertTrue(err.toString().contains("--force"), err.toString());
+        assertTrue(last.err().contains("--force"), last.err());
         assertEquals(0, run("report", MESSY.toString(), "--out", qc.toString(), "--force", "--pdf-size", "letter", "--screen"));
     }
 
@@ -61,10 +60,10 @@ class ReportCommandTest {
     void badInputGivesExitCodeTwoAndAMessage(@TempDir Path dir) {
         assertEquals(CupelCommand.INPUT_ERROR,
                 run("report", MESSY.toString(), "--out", dir.resolve("a").toString(), "--since", "14/03/2025"));
-        assertTrue(err.toString().contains("YYYY-MM-DD"), err.toString());
+        assertTrue(last.err().contains("YYYY-MM-DD"), last.err());
         assertEquals(CupelCommand.INPUT_ERROR,
                 run("report", MESSY.toString(), "--out", dir.resolve("b").toString(), "--batch", "NO-SUCH-JOB"));
-        assertTrue(err.toString().contains("no samples"), err.toString());
+        assertTrue(last.err().contains("no samples"), last.err());
         assertEquals(CupelCommand.INPUT_ERROR, run("report", "--out", dir.resolve("c").toString()));
         assertEquals(CupelCommand.INPUT_ERROR,
                 run("report", MESSY.toString(), "--demo", "--out", dir.resolve("d").toString()));
@@ -74,7 +73,7 @@ class ReportCommandTest {
     @Test
     void theDemoProjectIsReportedUnderItsName(@TempDir Path dir) throws Exception {
         Path qc = dir.resolve("qc-appendix");
-        assertEquals(0, run("report", "--demo", "--out", qc.toString(), "--screen", "--quiet"), err.toString());
+        assertEquals(0, run("report", "--demo", "--out", qc.toString(), "--screen", "--quiet"), last.err());
         String json = Files.readString(qc.resolve("summary.json"));
         assertTrue(json.contains("\"project\" : \"Vellmar Hills gold-silver project\""), json);
     }
@@ -82,6 +81,6 @@ class ReportCommandTest {
     @Test
     void helpShowsAnExample() {
         assertEquals(0, run("report", "--help"));
-        assertTrue(out.toString().contains("cupel report --demo --out qc-appendix"));
+        assertTrue(last.out().contains("cupel report --demo --out qc-appendix"));
     }
 }

@@ -8,8 +8,6 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.dataformat.yaml.YAMLMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.lang.reflect.ParameterizedType;
 import java.lang.reflect.RecordComponent;
 import java.lang.reflect.Type;
@@ -149,15 +147,14 @@ class SettingExtremesTest {
             for (String value : VALUES) {
                 String yaml = leaf.yaml(value);
                 Files.writeString(project.resolve("cupel.yaml"), yaml);
-                StringWriter out = new StringWriter();
-                StringWriter err = new StringWriter();
-                int code = CupelCommand.run(new String[] {"analyse", project.toString()}, new PrintWriter(out, true),
-                        new PrintWriter(err, true));
+                CliRun run = CliRun.run("analyse", project.toString());
+                int code = run.code();
+                String err = run.err();
                 boolean clearInputError = code == CupelCommand.INPUT_ERROR
-                        && err.toString().startsWith("cupel: cupel.yaml:") && err.toString().strip().lines().count() == 1;
+                        && err.startsWith("cupel: cupel.yaml:") && err.strip().lines().count() == 1;
                 if (!(code == CupelCommand.OK || clearInputError)) {
                     failures.add(leaf.name() + " = " + value + " -> exit " + code + ": "
-                            + err.toString().strip());
+                            + err.strip());
                 }
             }
         }

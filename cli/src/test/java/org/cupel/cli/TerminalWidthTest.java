@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -32,8 +30,7 @@ class TerminalWidthTest {
     @BeforeAll
     static void writeTheDemoProject() {
         String demo = dir.resolve("demo").toString();
-        assertEquals(0, CupelCommand.run(new String[] {"demo", demo}, new PrintWriter(new StringWriter()),
-                new PrintWriter(new StringWriter())));
+        CliRun.ok("demo", demo);
         String lab = dir.resolve("demo").resolve("lab").resolve("OAL-00001.csv").toString();
         String blanks = Path.of(System.getProperty("cupel.testdata"), "control-blanks", "blank-results.csv")
                 .toString();
@@ -50,11 +47,9 @@ class TerminalWidthTest {
         if (wide) {
             all.add("--wide");
         }
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(all.toArray(String[]::new), new PrintWriter(out, true), new PrintWriter(err, true));
-        assertTrue(code == 0 || code == 1, all + " ran: exit " + code + " " + err);
-        return out.toString();
+        CliRun r = CliRun.run(all);
+        assertTrue(r.code() == 0 || r.code() == 1, all + " ran: exit " + r.code() + " " + r.err());
+        return r.out();
     }
 
     /** The words of the output, less rule lines and the run times that analyse prints. */

@@ -11,6 +11,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import org.cupel.cli.CliRun;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -29,7 +30,7 @@ class CatalogConflictCliTest {
             Files.createDirectories(dir.resolve(e.getKey()).getParent());
             Files.writeString(dir.resolve(e.getKey()), e.getValue());
         }
-        Cli check = Cli.run("check", dir.toString(), "--json");
+        CliRun check = CliRun.run("check", dir.toString(), "--json");
         assertEquals(0, check.code(), check.err());
         List<String> catalogIssues = new ArrayList<>();
         for (JsonNode i : new ObjectMapper().readTree(check.out()).get("exceptions")) {

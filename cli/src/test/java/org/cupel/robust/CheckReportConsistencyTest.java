@@ -12,6 +12,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
+import org.cupel.cli.CliRun;
 import org.cupel.cli.CupelCommand;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -52,8 +53,8 @@ class CheckReportConsistencyTest {
     @Test
     void theWellFormedProjectPassesBoth(@TempDir Path dir) throws IOException {
         write(dir, project());
-        assertEquals(0, Cli.run("check", dir.toString()).code());
-        Cli a = Cli.run("analyse", dir.toString());
+        assertEquals(0, CliRun.run("check", dir.toString()).code());
+        CliRun a = CliRun.run("analyse", dir.toString());
         assertEquals(0, a.code(), a.err());
     }
 
@@ -65,9 +66,9 @@ class CheckReportConsistencyTest {
         files.put("testwork/smelts.csv", "test_id,condition,replicate,feed,charge_g,Au_g/t\n"
                 + "SM-01,A,1,F1,49.97,472.5\n");
         write(dir, files);
-        Cli report = Cli.run("report", dir.toString(), "--out", dir.resolve("qc").toString(), "--quiet");
+        CliRun report = CliRun.run("report", dir.toString(), "--out", dir.resolve("qc").toString(), "--quiet");
         assertEquals(CupelCommand.INPUT_ERROR, report.code(), report.err());
-        Cli check = Cli.run("check", dir.toString());
+        CliRun check = CliRun.run("check", dir.toString());
         assertEquals(CupelCommand.INPUT_ERROR, check.code(), check.out());
         assertTrue(check.out().contains("fatal") && check.out().contains("smelts.csv"), check.out());
     }
@@ -78,9 +79,9 @@ class CheckReportConsistencyTest {
         Map<String, String> files = project();
         files.put("cupel.yaml", "project: P\nduplicates:\n  bootstrapResamples: 5\n");
         write(dir, files);
-        Cli report = Cli.run("report", dir.toString(), "--out", dir.resolve("qc").toString(), "--quiet");
+        CliRun report = CliRun.run("report", dir.toString(), "--out", dir.resolve("qc").toString(), "--quiet");
         assertEquals(CupelCommand.INPUT_ERROR, report.code(), report.err());
-        Cli check = Cli.run("check", dir.toString(), "--json");
+        CliRun check = CliRun.run("check", dir.toString(), "--json");
         assertEquals(CupelCommand.INPUT_ERROR, check.code(), check.out());
         assertTrue(check.out().contains("duplicates.bootstrapResamples: 5 is outside 100 to 100000 resamples"),
                 check.out());
@@ -101,8 +102,8 @@ class CheckReportConsistencyTest {
             files.put(target, damaged);
             Path dir = root.resolve("try-" + i);
             write(dir, files);
-            Cli check = Cli.run("check", dir.toString());
-            Cli report = Cli.run("analyse", dir.toString());
+            CliRun check = CliRun.run("check", dir.toString());
+            CliRun report = CliRun.run("analyse", dir.toString());
             boolean agree = (check.code() == CupelCommand.INPUT_ERROR) == (report.code() == CupelCommand.INPUT_ERROR);
             if (!agree || check.code() == CupelCommand.INTERNAL_ERROR || report.code() == CupelCommand.INTERNAL_ERROR) {
                 failures.add("seed " + SEED + " try " + i + ", " + target + ": check exit " + check.code()

@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import org.cupel.cli.CliRun;
 import org.cupel.cli.CupelCommand;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -24,10 +25,10 @@ class ConfigMistakesCliTest {
             "check", List.of("--wide"), "analyse", List.of(), "crm", List.of(), "batches", List.of(),
             "duplicates", List.of(), "recovery", List.of(), "report", List.of("--out", "QC", "--quiet"));
 
-    private static Cli run(String command, Path project) {
+    private static CliRun run(String command, Path project) {
         List<String> args = new java.util.ArrayList<>(List.of(command, project.toString()));
         COMMANDS.get(command).forEach(a -> args.add(a.equals("QC") ? project.resolve("qc").toString() : a));
-        return Cli.run(args.toArray(String[]::new));
+        return CliRun.run(args.toArray(String[]::new));
     }
 
     private static Path project(Path dir, String yaml) throws IOException {
@@ -44,7 +45,7 @@ class ConfigMistakesCliTest {
     /** Each command exits 2 and gives {@code expected}: on stderr, or (check) as a fatal entry of its register. */
     private static void everyCommandRefuses(Path project, String expected) {
         for (String command : COMMANDS.keySet()) {
-            Cli r = run(command, project);
+            CliRun r = run(command, project);
             assertEquals(CupelCommand.INPUT_ERROR, r.code(), command + ": " + r.out() + r.err());
             if (command.equals("check")) {
                 // The register shows the location and the problem in columns of their own.

@@ -7,15 +7,13 @@ import com.fasterxml.jackson.core.json.JsonReadFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 import java.util.regex.Pattern;
+import org.cupel.cli.CliRun;
 import org.cupel.cli.CupelCommand;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -63,12 +61,11 @@ class DegenerateNumbersTest {
                 + "T1,A,F1,50,button,20,95\nT1,A,F1,50,slag,30,1\n");
         runs.put("recovery one", new String[] {"recovery", tw.toString(), "--json"});
         for (Map.Entry<String, String[]> r : runs.entrySet()) {
-            StringWriter out = new StringWriter();
-            StringWriter err = new StringWriter();
-            int code = CupelCommand.run(r.getValue(), new PrintWriter(out, true), new PrintWriter(err, true));
-            assertTrue(code != CupelCommand.INTERNAL_ERROR, r.getKey() + ": " + err);
+            CliRun run = CliRun.run(r.getValue());
+            int code = run.code();
+            assertTrue(code != CupelCommand.INTERNAL_ERROR, r.getKey() + ": " + run.err());
             if (code == CupelCommand.OK || code == CupelCommand.QC_FAILED) {
-                collect(r.getKey(), LENIENT.readTree(out.toString()), false, unexplained);
+                collect(r.getKey(), LENIENT.readTree(run.out()), false, unexplained);
             }
         }
         assertEquals(List.of(), unexplained);
@@ -83,8 +80,7 @@ class DegenerateNumbersTest {
     static void collect(String path, JsonNode node, boolean explained, List<String> out) {
         if (node.isObject()) {
             boolean here = explained || hasExplanation(node);
-            for (Iterator<Map.Entry<String, JsonNode>> it = node.fields(); it.hasNext(); ) {
-                Map.Entry<String, JsonNode> e = it.next();
+            for (Map.Entry<String, JsonNode> e : node.properties()) {
                 collect(path + "." + e.getKey(), e.getValue(), here, out);
             }
         } else if (node.isArray()) {
@@ -113,8 +109,7 @@ class DegenerateNumbersTest {
     }
 
     private static boolean hasExplanation(JsonNode object) {
-        for (Iterator<Map.Entry<String, JsonNode>> it = object.fields(); it.hasNext(); ) {
-            Map.Entry<String, JsonNode> e = it.next();
+        for (Map.Entry<String, JsonNode> e : object.properties()) {
             if (EXPLAINS.matcher(e.getKey()).matches() && !e.getValue().isNull()
                     && !(e.getValue().isTextual() && e.getValue().asText().isBlank())
                     && !(e.getValue().isArray() && e.getValue().isEmpty())) {

@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.Comparator;
 import java.util.List;
 import java.util.stream.Stream;
+import org.cupel.cli.CliRun;
 import org.cupel.cli.CupelCommand;
 
 /**
@@ -21,7 +22,7 @@ final class FuzzCheck {
         Path dir = Files.createTempDirectory("cupel-fuzz-cli");
         try {
             c.target().write(dir, c.content(), c.registerLayout());
-            FuzzTarget.Outcome o = c.target().run(dir);
+            CliRun o = c.target().run(dir);
             return judge(c.target().blamable(c.registerLayout()), c.target().listsProblemsOnStdout(), o, dir);
         } finally {
             deleteTree(dir);
@@ -35,7 +36,7 @@ final class FuzzCheck {
      * @param names the files a message may name: the damaged file, and the register when it was laid out wrongly
      * @param listsOnStdout whether the command ({@code check}) lists fatal problems on stdout
      */
-    static String judge(List<String> names, boolean listsOnStdout, FuzzTarget.Outcome o, Path dir) {
+    static String judge(List<String> names, boolean listsOnStdout, CliRun o, Path dir) {
         if (o.err().contains("\tat ") || o.err().contains("Exception")) {
             return "stack trace or exception name on stderr: " + o.err();
         }

@@ -1,8 +1,6 @@
 package org.cupel.robust;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -11,6 +9,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.function.Function;
+import org.cupel.cli.CliRun;
 import org.cupel.cli.CupelCommand;
 
 /**
@@ -167,14 +166,8 @@ enum FuzzTarget {
         return seeds().get(damaged).getBytes(StandardCharsets.UTF_8);
     }
 
-    Outcome run(Path dir) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(command.apply(dir), new PrintWriter(out, true), new PrintWriter(err, true));
-        return new Outcome(code, out.toString(), err.toString());
-    }
-
-    record Outcome(int code, String out, String err) {
+    CliRun run(Path dir) {
+        return CliRun.run(command.apply(dir));
     }
 
     private static String[] args(String... a) {

@@ -5,12 +5,11 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import org.cupel.cli.CliRun;
 import org.cupel.cli.CupelCommand;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -30,9 +29,7 @@ class HeapLimitProcessTest {
     @Test
     void aProjectTooLargeForTheHeapEndsWithOneSentenceAndExitThree(@TempDir Path dir) throws Exception {
         Path project = dir.resolve("big");
-        StringWriter err = new StringWriter();
-        assertEquals(0, CupelCommand.run(new String[] {"demo", project.toString(), "--samples", "100000"},
-                new PrintWriter(new StringWriter()), new PrintWriter(err)), err.toString());
+        CliRun.ok("demo", project.toString(), "--samples", "100000");
 
         Process p = analyse(project, "-Xmx16m");
         assertTrue(p.waitFor(5, TimeUnit.MINUTES), "the small-heap run ended");

@@ -6,8 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -20,6 +18,7 @@ import java.util.Map;
 import java.util.TreeMap;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
+import org.cupel.cli.CliRun;
 import org.cupel.cli.CupelCommand;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -51,10 +50,9 @@ class HostileValuesReportTest {
         out = dir.resolve("qc");
         writeProject(project);
         hashesBefore = hashes(project);
-        StringWriter e = new StringWriter();
-        code = CupelCommand.run(new String[] {"report", project.toString(), "--out", out.toString(), "--quiet",
-            "--screen"}, new PrintWriter(new StringWriter(), true), new PrintWriter(e, true));
-        err = e.toString();
+        CliRun r = CliRun.run("report", project.toString(), "--out", out.toString(), "--quiet", "--screen");
+        code = r.code();
+        err = r.err();
     }
 
     /** Routine, duplicate and CRM rows whose IDs are the hostile values (quoted where CSV needs it). */

@@ -9,13 +9,12 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import org.cupel.cli.CliRun;
 import org.cupel.cli.CupelCommand;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -34,20 +33,6 @@ class InputReadingCliTest {
     @TempDir
     Path dir;
 
-    record Run(int code, String out, String err) {
-        /** Exit 2 with exactly one {@code cupel: } line on stderr. */
-        boolean oneLineInputError() {
-            return code == CupelCommand.INPUT_ERROR && err.strip().lines().count() == 1 && err.startsWith("cupel: ");
-        }
-    }
-
-    static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int code = CupelCommand.run(args, new PrintWriter(out, true), new PrintWriter(err, true));
-        return new Run(code, out.toString(), err.toString());
-    }
-
     private Path write(String relative, String text) throws IOException {
         return write(relative, text.getBytes(StandardCharsets.UTF_8));
     }
@@ -59,8 +44,8 @@ class InputReadingCliTest {
     }
 
     private JsonNode checkJson() throws IOException {
-        Run r = run("check", dir.toString(), "--json");
-        return JSON.readTree(r.out);
+        CliRun r = CliRun.run("check", dir.toString(), "--json");
+        return JSON.readTree(r.out());
     }
 
     private static List<JsonNode> exceptionsAt(JsonNode check, String file, long line) {
@@ -80,8 +65,8 @@ class InputReadingCliTest {
     void checkListsARaggedRowInsteadOfReadingItShifted() throws IOException {
         write("lab/a.csv", "Sample ID,Au_ppm,Ag_ppm\nR1,1.2,3.4\nR2,1,234.5,2.0\nR3,0.5,0.7\n");
         write("register.csv", REGISTER);
-        Run text = run("check", dir.toString());
-        assertFalse(text.out.contains("No input problems found"), text.out);
+        CliRun text = CliRun.run("check", dir.toString());
+        assertFalse(text.out().contains("No input problems found"), text.out());
         JsonNode check = checkJson();
         List<JsonNode> r2 = exceptionsAt(check, "lab/a.csv", 3);
         assertEquals(1, r2.size(), check.get("exceptions").toString());
@@ -94,9 +79,9 @@ class InputReadingCliTest {
     @Test
     void aPlainTableListsARaggedRow() throws IOException {
         Path f = write("assays.csv", "Sample ID,Au_ppm\nS1,0.5\nS2,1,234\nS3,0.7\nS4,<0.01\n");
-        Run r = run("censored", f.toString(), "--column", "Au_ppm", "--wide");
-        assertEquals(CupelCommand.OK, r.code, r.err);
-        assertTrue(r.out.contains("assays.csv:3: the row has 3 cells, more than the 2 columns"), r.out);
+        CliRun r = CliRun.run("censored", f.toString(), "--column", "Au_ppm", "--wide");
+        assertEquals(CupelCommand.OK, r.code(), r.err());
+        assertTrue(r.out().contains("assays.csv:3: the row has 3 cells, more than the 2 columns"), r.out());
     }
 
     // Item 3: decimal comma.
@@ -106,22 +91,22 @@ class InputReadingCliTest {
     void aLabFileMixingDecimalMarksStopsTheAnalysesAndNamesTheSetting() throws IOException {
         write("lab/a.csv", "Sample ID;Au_ppm;Ag_ppm;Cu_ppm\nR1;0,512;1,234;0,7\nR2;0.4;2;0.3\n");
         write("register.csv", REGISTER);
-        Run r = run("duplicates", dir.toString());
-        assertTrue(r.oneLineInputError(), r.err);
-        assertTrue(r.err.contains("lab/a.csv: the numbers mix two readings of ','")
-                && r.err.contains("set ingest.decimalComma: true"), r.err);
-        assertEquals(CupelCommand.INPUT_ERROR, run("check", dir.toString()).code);
+        CliRun r = CliRun.run("duplicates", dir.toString());
+        assertTrue(r.oneLineInputError(), r.err());
+        assertTrue(r.err().contains("lab/a.csv: the numbers mix two readings of ','")
+                && r.err().contains("set ingest.decimalComma: true"), r.err());
+        assertEquals(CupelCommand.INPUT_ERROR, CliRun.run("check", dir.toString()).code());
         write("cupel.yaml", "ingest:\n  decimalComma: true\n");
-        Run fixed = run("check", dir.toString(), "--json");
-        assertEquals(CupelCommand.OK, fixed.code, fixed.out);
+        CliRun fixed = CliRun.run("check", dir.toString(), "--json");
+        assertEquals(CupelCommand.OK, fixed.code(), fixed.out());
     }
 
     @Test
     void aPlainTableMixingDecimalMarksIsRefused() throws IOException {
         Path f = write("assays.csv", "Sample ID;Au_ppm\nS1;0,512\nS2;1,234\nS3;0,7\n");
-        Run r = run("censored", f.toString(), "--column", "Au_ppm");
-        assertTrue(r.oneLineInputError(), r.err);
-        assertTrue(r.err.contains("read with decimal points"), r.err);
+        CliRun r = CliRun.run("censored", f.toString(), "--column", "Au_ppm");
+        assertTrue(r.oneLineInputError(), r.err());
+        assertTrue(r.err().contains("read with decimal points"), r.err());
     }
 
     // Item 4: the register, and checks with nothing to judge.
@@ -130,26 +115,26 @@ class InputReadingCliTest {
     void aMisnamedRegisterStopsTheAnalysesNamingTheFile() throws IOException {
         write("lab/a.csv", "Sample ID,Au_ppm\nR1,0.5\nC1,0.41\nB1,<0.005\n");
         write("Register.csv", "sample_id,qc_role,reference\nR1,routine,\nC1,crm,KC-1\nB1,blank,\n");
-        Run r = run("duplicates", dir.toString());
-        assertTrue(r.oneLineInputError(), r.err);
-        assertTrue(r.err.contains("register.csv: not found, but the project folder holds [Register.csv]"), r.err);
-        Run check = run("check", dir.toString());
-        assertEquals(CupelCommand.INPUT_ERROR, check.code, check.out);
-        assertTrue(check.out.contains("Register.csv"), check.out);
+        CliRun r = CliRun.run("duplicates", dir.toString());
+        assertTrue(r.oneLineInputError(), r.err());
+        assertTrue(r.err().contains("register.csv: not found, but the project folder holds [Register.csv]"), r.err());
+        CliRun check = CliRun.run("check", dir.toString());
+        assertEquals(CupelCommand.INPUT_ERROR, check.code(), check.out());
+        assertTrue(check.out().contains("Register.csv"), check.out());
     }
 
     /** Without a register and without controls in the lab files, nothing can be judged; nothing says "pass". */
     @Test
     void aProjectWithoutControlSamplesIsNeverPass() throws IOException {
         write("lab/a.csv", "Sample ID,Au_ppm\nR1,0.5\nR2,0.6\nR3,0.7\n");
-        Run check = run("check", dir.toString());
-        assertTrue(check.out.contains("the project has no sample register"), check.out);
-        Run batches = run("batches", dir.toString());
-        assertEquals(CupelCommand.OK, batches.code, batches.err);
-        assertFalse(batches.out.contains("every control result passed") || batches.out.contains("Every blank passed"),
-                batches.out);
-        assertTrue(batches.out.contains("no batch can be judged") && batches.out.contains("blanks cannot be judged"),
-                batches.out);
+        CliRun check = CliRun.run("check", dir.toString());
+        assertTrue(check.out().contains("the project has no sample register"), check.out());
+        CliRun batches = CliRun.run("batches", dir.toString());
+        assertEquals(CupelCommand.OK, batches.code(), batches.err());
+        assertFalse(batches.out().contains("every control result passed") || batches.out().contains("Every blank passed"),
+                batches.out());
+        assertTrue(batches.out().contains("no batch can be judged") && batches.out().contains("blanks cannot be judged"),
+                batches.out());
         assertNoPassCallout(report());
     }
 
@@ -159,17 +144,17 @@ class InputReadingCliTest {
         write("lab/a.csv", "Sample ID,Au_ppm\n");
         write("register.csv", "sample_id,qc_role,reference\n");
         write("crm-catalog.csv", "crm,analyte,unit,certified_value,sd\n");
-        Run check = run("check", dir.toString());
-        assertTrue(check.out.contains("but no data rows"), check.out);
-        Run batches = run("batches", dir.toString());
-        assertFalse(batches.out.contains("passed"), batches.out);
+        CliRun check = CliRun.run("check", dir.toString());
+        assertTrue(check.out().contains("but no data rows"), check.out());
+        CliRun batches = CliRun.run("batches", dir.toString());
+        assertFalse(batches.out().contains("passed"), batches.out());
         assertNoPassCallout(report());
     }
 
     private String report() throws IOException {
         Path out = dir.resolve("qc-out");
-        Run r = run("report", dir.toString(), "--out", out.toString(), "--quiet");
-        assertEquals(CupelCommand.OK, r.code, r.err);
+        CliRun r = CliRun.run("report", dir.toString(), "--out", out.toString(), "--quiet");
+        assertEquals(CupelCommand.OK, r.code(), r.err());
         return Files.readString(out.resolve("index.html"));
     }
 
@@ -209,16 +194,16 @@ class InputReadingCliTest {
             assertEquals(1, exceptionsAt(check, "lab/a.csv", line).stream()
                     .filter(e -> e.get("where").get("column").asInt() == 2).count(), "line " + line);
         }
-        Run analyse = run("analyse", dir.toString(), "--json");
-        assertEquals(CupelCommand.OK, analyse.code, analyse.err);
+        CliRun analyse = CliRun.run("analyse", dir.toString(), "--json");
+        assertEquals(CupelCommand.OK, analyse.code(), analyse.err());
         List<String> unexplained = new ArrayList<>();
-        DegenerateNumbersTest.collect("analyse", JSON.readTree(analyse.out), false, unexplained);
+        DegenerateNumbersTest.collect("analyse", JSON.readTree(analyse.out()), false, unexplained);
         String html = report();
         assertFalse(html.contains("Infinity"), "no infinite estimate in the report");
         Path plain = write("plain.csv", lab.toString());
-        Run censored = run("censored", plain.toString(), "--column", "Au_ppm", "--json");
-        assertEquals(CupelCommand.OK, censored.code, censored.err);
-        DegenerateNumbersTest.collect("censored", JSON.readTree(censored.out), false, unexplained);
+        CliRun censored = CliRun.run("censored", plain.toString(), "--column", "Au_ppm", "--json");
+        assertEquals(CupelCommand.OK, censored.code(), censored.err());
+        DegenerateNumbersTest.collect("censored", JSON.readTree(censored.out()), false, unexplained);
         assertEquals(List.of(), unexplained);
     }
 
@@ -233,16 +218,16 @@ class InputReadingCliTest {
         Files.createSymbolicLink(dir.resolve("lab/gone.csv"), dir.resolve("lab/missing.csv"));
         Files.createSymbolicLink(dir.resolve("lab/system.csv"), system);
         // --wide: the register's columns take the width of the (temporary) paths it shows.
-        Run check = run("check", dir.toString(), "--wide");
-        assertEquals(CupelCommand.INPUT_ERROR, check.code);
-        assertTrue(check.out.contains("lab/gone.csv") && check.out.contains("a link to a file that does not exist"),
-                check.out);
-        assertTrue(check.out.contains("lab/system.csv") && check.out.contains("leads outside the project folder"),
-                check.out);
-        assertFalse(check.out.contains("/bin/bash"), check.out);
-        Run duplicates = run("duplicates", dir.toString());
-        assertTrue(duplicates.oneLineInputError(), duplicates.err);
-        assertFalse(duplicates.err.contains("/bin/bash"), duplicates.err);
+        CliRun check = CliRun.run("check", dir.toString(), "--wide");
+        assertEquals(CupelCommand.INPUT_ERROR, check.code());
+        assertTrue(check.out().contains("lab/gone.csv") && check.out().contains("a link to a file that does not exist"),
+                check.out());
+        assertTrue(check.out().contains("lab/system.csv") && check.out().contains("leads outside the project folder"),
+                check.out());
+        assertFalse(check.out().contains("/bin/bash"), check.out());
+        CliRun duplicates = CliRun.run("duplicates", dir.toString());
+        assertTrue(duplicates.oneLineInputError(), duplicates.err());
+        assertFalse(duplicates.err().contains("/bin/bash"), duplicates.err());
     }
 
     /**
@@ -254,8 +239,8 @@ class InputReadingCliTest {
         Path catalog = write("cat.csv", "crm,analyte,unit,certified_value,sd\nLOW,Au,g/t,0.50,0.03\n"
                 + "MID,Pd,g/t,2.50,0.10\n");
         Path results = write("crm.csv", "crm,batch,position,Au_ppm\nLOW,J1,5,0.51\nMID,J1,15,2.52\n");
-        Run r = run("crm", "--results", results.toString(), "--catalog", catalog.toString());
-        assertEquals(CupelCommand.OK, r.code, r.err);
+        CliRun r = CliRun.run("crm", "--results", results.toString(), "--catalog", catalog.toString());
+        assertEquals(CupelCommand.OK, r.code(), r.err());
     }
 
     // Item 10: messages.
@@ -270,9 +255,9 @@ class InputReadingCliTest {
                     .getBytes(StandardCharsets.ISO_8859_1));
         }
         write("lab/a.csv", b.toByteArray());
-        Run r = run("duplicates", dir.toString());
-        assertTrue(r.oneLineInputError(), r.err);
-        assertTrue(r.err.startsWith("cupel: lab/a.csv:5000:11: the text is not valid UTF-8 at byte(s) 0xB5"), r.err);
+        CliRun r = CliRun.run("duplicates", dir.toString());
+        assertTrue(r.oneLineInputError(), r.err());
+        assertTrue(r.err().startsWith("cupel: lab/a.csv:5000:11: the text is not valid UTF-8 at byte(s) 0xB5"), r.err());
     }
 
     /** A 10,001-column header gave a 129 KB message. */
@@ -283,9 +268,9 @@ class InputReadingCliTest {
             h.append(",X").append(i);
         }
         write("lab/a.csv", h + "\nS1" + ",".repeat(10_000) + "\n");
-        Run r = run("duplicates", dir.toString());
-        assertTrue(r.oneLineInputError(), r.err);
-        assertTrue(r.err.length() < 700 && r.err.contains("and 9,9"), r.err.length() + ": " + r.err);
+        CliRun r = CliRun.run("duplicates", dir.toString());
+        assertTrue(r.oneLineInputError(), r.err());
+        assertTrue(r.err().length() < 700 && r.err().contains("and 9,9"), r.err().length() + ": " + r.err());
     }
 
     /** A file saved twice with a byte-order mark left an invisible character in its quoted first header. */
@@ -296,8 +281,8 @@ class InputReadingCliTest {
         b.writeBytes("\"Sample ID\",Au_ppm\nR1,0.5\nR2,0.6\n".getBytes(StandardCharsets.UTF_8));
         write("lab/a.csv", b.toByteArray());
         write("register.csv", REGISTER.replace("R3,routine,\n", ""));
-        Run r = run("check", dir.toString(), "--json");
-        assertEquals(CupelCommand.OK, r.code, r.out + r.err);
-        assertEquals(2, JSON.readTree(r.out).get("summary").get("samples").asInt());
+        CliRun r = CliRun.run("check", dir.toString(), "--json");
+        assertEquals(CupelCommand.OK, r.code(), r.out() + r.err());
+        assertEquals(2, JSON.readTree(r.out()).get("summary").get("samples").asInt());
     }
 }

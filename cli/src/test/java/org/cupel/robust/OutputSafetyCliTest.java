@@ -16,6 +16,7 @@ import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Stream;
+import org.cupel.cli.CliRun;
 import org.cupel.cli.CupelCommand;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -90,14 +91,14 @@ class OutputSafetyCliTest {
     @Test
     void aSecondRunOnTheSameOutStopsAtOnce(@TempDir Path dir) throws Exception {
         Path out = dir.resolve("qc");
-        assertEquals(0, Cli.run("report", MESSY.toString(), "--out", out.toString(), "--screen", "--quiet").code());
+        assertEquals(0, CliRun.run("report", MESSY.toString(), "--out", out.toString(), "--screen", "--quiet").code());
         Path lockFile = dir.resolve(".qc.cupel-lock");
         Process holder = new ProcessBuilder(java(), "-cp", System.getProperty("java.class.path"),
                 LockHolder.class.getName(), lockFile.toString()).redirectErrorStream(true).start();
         try (BufferedReader r = new BufferedReader(new InputStreamReader(holder.getInputStream(),
                 StandardCharsets.UTF_8))) {
             assertEquals("locked", r.readLine());
-            Cli second = Cli.run("report", MESSY.toString(), "--out", out.toString(), "--force", "--screen", "--quiet");
+            CliRun second = CliRun.run("report", MESSY.toString(), "--out", out.toString(), "--force", "--screen", "--quiet");
             assertEquals(CupelCommand.INPUT_ERROR, second.code(), second.err());
             assertEquals("cupel: another cupel report run is writing " + out + " right now (it holds " + lockFile
                     + "); wait for it to finish, or choose another --out folder", second.err().strip());
@@ -105,7 +106,7 @@ class OutputSafetyCliTest {
         } finally {
             holder.destroyForcibly().waitFor();
         }
-        assertEquals(0, Cli.run("report", MESSY.toString(), "--out", out.toString(), "--force", "--screen", "--quiet")
+        assertEquals(0, CliRun.run("report", MESSY.toString(), "--out", out.toString(), "--force", "--screen", "--quiet")
                 .code(), "the lock is free once the holder has ended");
     }
 
@@ -117,7 +118,7 @@ class OutputSafetyCliTest {
         p.destroyForcibly().waitFor();
         assumeTrue(writing, "the run ended before it could be killed while writing");
         assertEquals(1, hidden(dir).size(), "the killed run left its temporary folder: " + hidden(dir));
-        Cli next = Cli.run("report", MESSY.toString(), "--out", dir.resolve("next").toString(), "--screen", "--quiet");
+        CliRun next = CliRun.run("report", MESSY.toString(), "--out", dir.resolve("next").toString(), "--screen", "--quiet");
         assertEquals(0, next.code(), next.err());
         assertEquals(List.of(), hidden(dir));
         assertFalse(Files.exists(dir.resolve("killed")));
@@ -127,18 +128,18 @@ class OutputSafetyCliTest {
     @Test
     void anOutputLocationThatCannotBeUsedIsAnInputError(@TempDir Path dir) throws IOException {
         Path readme = Files.writeString(dir.resolve("README.md"), "text\n");
-        Cli throughAFile = Cli.run("report", MESSY.toString(), "--out", readme.resolve("sub").toString(), "--quiet");
+        CliRun throughAFile = CliRun.run("report", MESSY.toString(), "--out", readme.resolve("sub").toString(), "--quiet");
         assertEquals(CupelCommand.INPUT_ERROR, throughAFile.code(), throughAFile.err());
         assertEquals("cupel: cannot write the report to " + readme.resolve("sub") + ": " + readme + " is a file, not "
                 + "a folder; choose an --out path inside a folder", throughAFile.err().strip());
 
-        Cli demo = Cli.run("demo", readme.resolve("sub").toString());
+        CliRun demo = CliRun.run("demo", readme.resolve("sub").toString());
         assertEquals(CupelCommand.INPUT_ERROR, demo.code(), demo.err());
         assertEquals(1, demo.err().strip().lines().count(), demo.err());
         assertTrue(demo.err().startsWith("cupel: " + readme + ": "), demo.err());
 
         assumeTrue(Files.isDirectory(Path.of("/proc/self")), "a Linux /proc");
-        Cli proc = Cli.run("report", MESSY.toString(), "--out", "/proc/x", "--quiet");
+        CliRun proc = CliRun.run("report", MESSY.toString(), "--out", "/proc/x", "--quiet");
         assertEquals(CupelCommand.INPUT_ERROR, proc.code(), proc.err());
         assertEquals(1, proc.err().strip().lines().count(), proc.err());
         assertTrue(proc.err().startsWith("cupel: cannot write the report to /proc/x ("), proc.err());
@@ -153,7 +154,7 @@ class OutputSafetyCliTest {
         for (String value : List.of("1000000000000", "2000000000", "-5")) {
             Files.writeString(project.resolve("cupel.yaml"), "censored:\n  bootstrapReplicates: " + value + "\n",
                     StandardOpenOption.APPEND);
-            Cli r = Cli.run("report", project.toString(), "--out", dir.resolve("qc").toString(), "--quiet");
+            CliRun r = CliRun.run("report", project.toString(), "--out", dir.resolve("qc").toString(), "--quiet");
             assertEquals(CupelCommand.INPUT_ERROR, r.code(), r.err());
             assertEquals(1, r.err().strip().lines().count(), r.err());
             errors.add(r.err().strip());

@@ -250,9 +250,7 @@ public final class CupelConfig {
             return override;
         }
         ObjectNode out = ((ObjectNode) base).deepCopy();
-        Iterator<Map.Entry<String, JsonNode>> it = override.fields();
-        while (it.hasNext()) {
-            Map.Entry<String, JsonNode> e = it.next();
+        for (Map.Entry<String, JsonNode> e : override.properties()) {
             JsonNode prior = out.get(e.getKey());
             out.set(e.getKey(), prior == null ? e.getValue() : merge(prior, e.getValue()));
         }

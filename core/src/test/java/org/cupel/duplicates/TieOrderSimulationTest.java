@@ -91,7 +91,6 @@ class TieOrderSimulationTest {
         double byDiff = sigma0(byMeanThenDiff(m, d, true), byMeanThenDiff(m, d, false));
         String report = "seed " + seed + ": Cupel σ₀ " + cupel + ", random orders [" + lo + ", " + hi + "], |d| order "
                 + byDiff;
-        System.out.println(report);
         double slack = (hi - lo) / 2;
         assertTrue(cupel >= lo - slack && cupel <= hi + slack, report);
         assertEquals(SIGMA0, cupel, 0.001, report);

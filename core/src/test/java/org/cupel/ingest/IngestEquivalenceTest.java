@@ -1,39 +1,39 @@
 package org.cupel.ingest;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import org.cupel.demo.DemoOnDisk;
+import org.cupel.testing.GoldenText;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * The column-wise reader loads exactly what the reader before it did (commit ef122a1): the full
- * {@link ProjectDump} of the messy fixture project, and the digest of the dump of the default demo
- * project, both written by that reader.
+ * The column-wise reader loads what the reader before it did (commit ef122a1), against golden texts under
+ * testdata/golden/: the full {@link ProjectDump} of the messy fixture project (every row and cell), first
+ * written by that reader; and the {@link ProjectDump#summary} of the default demo project (accounts and
+ * exceptions in full, batches by role, cells by class with exact sums), written when the check of the
+ * demo's full dump (1,053,934 characters) by SHA-256 digest was replaced, from an implementation whose dump
+ * still gave the old reader's digest.
+ *
+ * <p>Rewrite after an intended change of ingest with
+ * {@code mvn -B -o -pl core test -Dtest=IngestEquivalenceTest -Dcupel.golden.update=true}, then review
+ * {@code git diff testdata/golden}.
  */
 class IngestEquivalenceTest {
-    private static final Path FIXTURES = Path.of(System.getProperty("cupel.testdata"), "fixtures", "ingest");
-    /** SHA-256 of the old reader's dump of the default demo (1,053,934 characters). */
-    private static final String DEFAULT_DEMO_DIGEST = "f95e24191746db0f75fc4e70443ec721a64c6c218a91cfa0b60e633b09b579aa";
+    private static final Path MESSY = Path.of(System.getProperty("cupel.testdata"), "fixtures", "ingest",
+            "messy-project");
 
     @TempDir
     Path dir;
 
     @Test
-    void messyProjectLoadsAsBefore() throws IOException {
-        String expected = Files.readString(FIXTURES.resolve("messy-project.dump.txt"), StandardCharsets.UTF_8);
-        assertEquals(expected, ProjectDump.dump(ProjectLoader.inspect(FIXTURES.resolve("messy-project"))));
+    void messyProjectLoadsAsBefore() {
+        GoldenText.assertMatches("ingest-messy-project.txt", ProjectDump.dump(ProjectLoader.inspect(MESSY)));
     }
 
     @Test
     void defaultDemoLoadsAsBefore() throws IOException {
         DemoOnDisk.write(dir);
-        String dump = ProjectDump.dump(ProjectLoader.load(dir));
-        assertEquals(1_053_934, dump.length());
-        assertEquals(DEFAULT_DEMO_DIGEST, ProjectDump.digest(dump));
+        GoldenText.assertMatches("ingest-default-demo.txt", ProjectDump.summary(ProjectLoader.load(dir)));
     }
 }

@@ -61,6 +61,7 @@ public interface Gen<T> {
 
     /** One of the values, each equally likely. */
     @SafeVarargs
+    @SuppressWarnings("varargs") // the array is only copied into an immutable list
     static <T> Gen<T> of(T... values) {
         List<T> copy = List.of(values);
         return r -> copy.get(r.nextInt(copy.size()));
@@ -68,6 +69,7 @@ public interface Gen<T> {
 
     /** The value of one of the generators, each equally likely. */
     @SafeVarargs
+    @SuppressWarnings("varargs") // the array is only copied into an immutable list
     static <T> Gen<T> oneOf(Gen<? extends T>... gens) {
         List<Gen<? extends T>> copy = List.of(gens);
         return r -> copy.get(r.nextInt(copy.size())).next(r);
@@ -83,6 +85,7 @@ public interface Gen<T> {
 
     /** The value of one of the generators, chosen with probability proportional to its weight. */
     @SafeVarargs
+    @SuppressWarnings("varargs") // the array is only copied into an immutable list
     static <T> Gen<T> frequency(Weighted<T>... choices) {
         List<Weighted<T>> copy = List.of(choices);
         int total = copy.stream().mapToInt(Weighted::weight).sum();

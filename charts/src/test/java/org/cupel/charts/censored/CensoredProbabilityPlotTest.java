@@ -3,7 +3,6 @@ package org.cupel.charts.censored;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.file.Files;
 import java.nio.file.Path;
 import org.cupel.censored.CensoredSample;
 import org.cupel.censored.Ros;
@@ -37,9 +36,15 @@ class CensoredProbabilityPlotTest {
         assertEquals(19, chart.getSeriesMap().get("Detected (19)").getXData().length);
         assertEquals(6, chart.getSeriesMap().get("Below detection (imputed by ROS) (6)").getXData().length);
         assertTrue(chart.getSeriesMap().containsKey("Detection limits 2, 5"));
-        Path png = dir.resolve("plot.png");
-        PngWriter.write(chart, png, PngWriter.SCREEN_DPI);
-        assertTrue(Files.size(png) > 1000);
+        // Every imputed nondetect lies below the highest detection limit (5 ppb), under the detects' scale.
+        for (double y : chart.getSeriesMap().get("Below detection (imputed by ROS) (6)").getYData()) {
+            assertTrue(y < 5, "imputed " + y + " below the limit 5");
+        }
+        assertTrue(chart.getSeriesMap().keySet().stream().anyMatch(k -> k.startsWith("ROS line: ln x = ")),
+                "the ROS line with its equation: " + chart.getSeriesMap().keySet());
+        assertTrue(chart.getStyler().isYAxisLogarithmic());
+        assertEquals("Censored probability plot", chart.getTitle());
+        PngWriter.write(chart, dir.resolve("plot.png"), PngWriter.SCREEN_DPI);
         String out = System.getProperty("cupel.chart.out");
         if (out != null) {
             PngWriter.write(chart, Path.of(out), PngWriter.SCREEN_DPI);

@@ -18,10 +18,11 @@ import org.cupel.recovery.RecoveryResult;
 import org.cupel.recovery.RecoverySettings;
 import org.cupel.recovery.TestworkReader;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.knowm.xchart.CategoryChart;
 import org.knowm.xchart.XYChart;
 
-/** Builds every recovery chart on the invented fixture testwork and writes it to target/recovery-charts. */
+/** Builds every recovery chart on the invented fixture testwork and writes it as PNG (to a temporary folder). */
 class RecoveryChartsTest {
 
     static RecoveryResult fixture() {
@@ -31,10 +32,11 @@ class RecoveryChartsTest {
     }
 
     @Test
-    void chartsDrawEveryConditionAndPairWithTheirNamesOutsideThePlot() throws Exception {
+    void chartsDrawEveryConditionAndPairWithTheirNamesOutsideThePlot(@TempDir Path tmp) throws Exception {
         RecoveryResult r = fixture();
-        Path out = Path.of("target", "recovery-charts");
-        Files.createDirectories(out);
+        // -Dcupel.chartDir=<folder> keeps the PNGs to look at; by default they go to a temporary folder.
+        String keep = System.getProperty("cupel.chartDir");
+        Path out = keep == null ? tmp : Files.createDirectories(Path.of(keep));
         for (String analyte : r.analytes()) {
             ChartFigure rec = RecoveryByConditionChart.of(r, analyte);
             assertTrue(((XYChart) rec.charts().get(0)).getSeriesMap().containsKey("Smelts"));

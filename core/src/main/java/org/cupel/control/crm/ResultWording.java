@@ -3,16 +3,16 @@ package org.cupel.control.crm;
 import org.cupel.assay.Numbers;
 
 /**
- * How the results of one CRM series are described: "VH0001 VHC-23 Au 1.31 g/t is 1.6 SD above certified
- * 1.236", with the rules that fired, or the swap it matches. Held once per series so that a result's
+ * How the results of one CRM series are described: "VH0001 VHC-23 Au 1.31 g/t is 1.60 SD above certified
+ * 1.236", the certified value as the catalog writes it, with the rules that fired, or the swap it matches. Held once per series so that a result's
  * sentence is written only when a table or JSON reads it.
  */
-public record ResultWording(String crm, String analyte, String unit, double certified, double swapWithinSd,
+public record ResultWording(String crm, String analyte, String unit, String certified, double swapWithinSd,
                             double blankLevelMultiple) {
 
     static ResultWording of(CrmSeries s, CrmSettings settings) {
         return new ResultWording(s.crm(), s.analyte().name(), s.analyte().unit().symbol(),
-                s.certificate().certifiedValue(), settings.swapWithinSd(), settings.blankLevelMultiple());
+                s.certificate().valueText(), settings.swapWithinSd(), settings.blankLevelMultiple());
     }
 
     String reason(CrmResult r) {
@@ -31,7 +31,16 @@ public record ResultWording(String crm, String analyte, String unit, double cert
         CrmPoint p = r.point();
         double zi = r.z();
         return p.sampleId() + ' ' + crm + ' ' + analyte + ' ' + p.value().display() + ' ' + unit + " is "
-                + Numbers.significant(Math.abs(zi), 2) + " SD " + (zi >= 0 ? "above" : "below") + " certified "
+                + sdMultiple(Math.abs(zi)) + " SD " + (zi >= 0 ? "above" : "below") + " certified "
                 + certified;
+    }
+
+    /**
+     * How many SD from the certified value, with two decimals below 10 so that a result just beyond a limit
+     * never reads as on it (3.02, not "3", beside a 1-3s failure; exactly 3.00 passes, a result on a limit is
+     * not beyond it), and three significant digits further out, where the rules are long decided (82, 170).
+     */
+    static String sdMultiple(double absZ) {
+        return absZ < 10 ? String.format(java.util.Locale.ROOT, "%.2f", absZ) : Numbers.significant(absZ, 3);
     }
 }
