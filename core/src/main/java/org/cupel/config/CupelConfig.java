@@ -165,11 +165,12 @@ public final class CupelConfig {
         JsonNode now = YAML.valueToTree(current);
         ObjectNode copy = root.deepCopy();
         ObjectNode section = copy.get(name) instanceof ObjectNode given ? given : copy.putObject(name);
-        YAML.valueToTree(settings).fields().forEachRemaining(e -> {
+        JsonNode wanted = YAML.valueToTree(settings);
+        for (Map.Entry<String, JsonNode> e : wanted.properties()) {
             if (!e.getValue().equals(now.get(e.getKey()))) {
                 section.set(e.getKey(), e.getValue());
             }
-        });
+        }
         CupelConfig out = new CupelConfig(copy, source, places);
         if (!out.section(name, type, defaults).equals(settings)) {
             throw new IllegalArgumentException("the " + name + " settings cannot be set as given: a map of settings "
