@@ -46,7 +46,7 @@ class TestworkSectionTest {
             assertTrue(text.startsWith(a + " recovery (by loss, mean with 95 % t-interval): "), text);
             for (org.cupel.recovery.ConditionRecovery c : r.conditions()) {
                 if (c.analyte().equals(a)) {
-                    assertTrue(text.contains(c.condition() + " " + String.format(java.util.Locale.ROOT, "%.2f%%",
+                    assertTrue(text.contains(c.condition() + " " + String.format(java.util.Locale.ROOT, "%.2f %%",
                             c.mean())), c.condition() + " in " + text);
                 }
             }
