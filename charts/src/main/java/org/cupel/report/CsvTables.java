@@ -2,6 +2,7 @@ package org.cupel.report;
 
 import java.io.IOException;
 import java.io.Writer;
+import java.lang.invoke.MethodHandles;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -74,6 +75,25 @@ public final class CsvTables {
                 w.write("\r\n");
             }
         }
+    }
+
+    /**
+     * Starts initialising Tablesaw on a background thread. Tablesaw's {@link Table} class scans the class path
+     * for Tablesaw's file readers when it is first used (about half a second, docs/performance.md); a command
+     * that will write tables calls this first, so that the scan overlaps reading the project. The thread that
+     * writes the first table waits for the initialisation if it is still running (the JVM initialises a class
+     * once); should it fail, that thread meets the same error and reports it, so this one stays silent.
+     */
+    public static void prepare() {
+        Thread init = new Thread(() -> {
+            try {
+                MethodHandles.lookup().ensureInitialized(Table.class);
+            } catch (IllegalAccessException | LinkageError e) {
+                // Reported by the thread that writes the first table.
+            }
+        }, "cupel-tablesaw-init");
+        init.setDaemon(true);
+        init.start();
     }
 
     /** One cell made spreadsheet-safe, then quoted per RFC 4180 when needed. */

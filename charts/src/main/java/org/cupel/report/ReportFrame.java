@@ -1,5 +1,8 @@
 package org.cupel.report;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.List;
 import tech.tablesaw.api.DoubleColumn;
 import tech.tablesaw.api.LongColumn;
@@ -82,13 +85,23 @@ final class ReportFrame {
 
     /**
      * {@code v} written with {@code decimals} decimals, for a {@code v} read from such a plain decimal of at
-     * most {@link #MAX_DIGITS} significant digits and at most 22 decimals: then {@code v * 10^decimals}
-     * ({@code 10^decimals} exact) is within 0.25 of the integer the digits spell (two roundings of at most
-     * 2^-53 relative each, on a value below 10^15), so rounding it recovers the digits without a BigDecimal
-     * per cell.
+     * most {@link #MAX_DIGITS} significant digits. Two paths, one result:
+     * <ul>
+     * <li>below 10^15 once scaled (nearly every number of a report), {@code v * 10^decimals} ({@code
+     * 10^decimals} exact) is within 0.25 of the integer the digits spell (two roundings of at most 2^-53
+     * relative each), so rounding it recovers the digits without a BigDecimal per cell;</li>
+     * <li>otherwise (2546000000000000000000000, or more than 22 decimals) the exact binary value of {@code v}
+     * rounded to {@link #MAX_DIGITS} significant digits is the written number: a double lies within 2^-53
+     * (relative) of the decimal it was read from, less than half a unit in the 15th digit.</li>
+     * </ul>
      */
     static String plain(double v, int decimals) {
-        long digits = Math.round(v * POWERS[decimals]);
+        double scaled = decimals < POWERS.length ? v * POWERS[decimals] : Double.POSITIVE_INFINITY;
+        if (!(Math.abs(scaled) < 1e15)) {
+            return new BigDecimal(v).round(new MathContext(MAX_DIGITS, RoundingMode.HALF_EVEN))
+                    .setScale(decimals, RoundingMode.UNNECESSARY).toPlainString();
+        }
+        long digits = Math.round(scaled);
         String s = Long.toString(Math.abs(digits));
         StringBuilder out = new StringBuilder(s.length() + decimals + 3);
         if (digits < 0) {
@@ -153,20 +166,24 @@ final class ReportFrame {
 
     /**
      * The decimals of the plain decimal {@code s} ({@link Cell.Number} guarantees the form), refusing one
-     * that a double cannot give back digit for digit: more than {@link #MAX_DIGITS} significant digits or
-     * more than 22 decimals, or a negative zero ({@code -0.00}, whose sign a double keeps but a count of digits does not).
+     * that a double cannot give back digit for digit: more than {@link #MAX_DIGITS} significant digits (from
+     * the first non-zero digit to the last), or a negative zero ({@code -0.00}, whose sign a double keeps but
+     * a decimal does not).
      */
     private static int checkedDecimals(String table, String name, String s) {
         int point = s.indexOf('.');
         int decimals = point < 0 ? 0 : s.length() - point - 1;
-        int significant = 0;
+        int first = -1;
+        int last = -1;
         for (int i = 0; i < s.length(); i++) {
             char ch = s.charAt(i);
-            if (ch >= '1' && ch <= '9' || ch == '0' && significant > 0) {
-                significant++;
+            if (ch >= '1' && ch <= '9') {
+                first = first < 0 ? i : first;
+                last = i;
             }
         }
-        if (significant > MAX_DIGITS || decimals >= POWERS.length || significant == 0 && s.charAt(0) == '-') {
+        int significant = first < 0 ? 0 : last - first + 1 - (first < point && point < last ? 1 : 0);
+        if (significant > MAX_DIGITS || decimals > Byte.MAX_VALUE || significant == 0 && s.charAt(0) == '-') {
             throw new IllegalArgumentException("table " + table + ", column " + name + ": " + s
                     + " cannot be written back exactly from a double");
         }

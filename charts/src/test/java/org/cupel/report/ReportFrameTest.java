@@ -12,7 +12,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import org.cupel.assay.AssayValue;
 import org.cupel.testing.Gen;
 import org.cupel.testing.SeededTries;
 import org.junit.jupiter.api.Test;
@@ -24,20 +23,6 @@ import tech.tablesaw.api.Table;
 
 /** Report tables as Tablesaw tables, and the CSV written from them. */
 class ReportFrameTest {
-
-    private static ReportTable mixed() {
-        return ReportTable.typed("p", "P", List.of(ReportColumn.text("Type"),
-                        ReportColumn.count("Pairs", "pairs"),
-                        ReportColumn.interval("RMS CV (95 % CI)", "rms_cv", "%").withNote(),
-                        ReportColumn.number("Bias", "bias", "%"),
-                        ReportColumn.assay("Original", "original", "g/t")),
-                List.of(List.of(Cell.text("pulp duplicate"), Cell.count(1234),
-                                Cell.interval(Cell.percentNumber(9.24, 2), 6.79, 11.72, x -> Cell.percentNumber(x, 2)),
-                                Cell.signedPercent(-1.5, 2), Cell.assay(AssayValue.detected(0.07).withDecimals(3))),
-                        List.of(Cell.text("-field"), Cell.count(5), Cell.notComputed("needs 2 pairs, has 1"),
-                                Cell.blank(), Cell.assay(AssayValue.belowDetection(0.005).withDecimals(3)))), "");
-    }
-
     /**
      * One typed column per CSV column under the CSV names: text a StringColumn, a count a LongColumn, numbers
      * DoubleColumns (an interval as estimate, lower and upper); a number not computed or not applying is
@@ -45,7 +30,7 @@ class ReportFrameTest {
      */
     @Test
     void aReportTableIsATablesawTableWithTypedColumns() {
-        ReportTable rt = mixed();
+        ReportTable rt = CsvTablesTest.typedTable();
         Table t = rt.toTablesaw();
         assertEquals("p", t.name());
         assertEquals(rt.csvColumns().stream().map(ReportColumn.CsvColumn::name).toList(), t.columnNames());
@@ -69,22 +54,10 @@ class ReportFrameTest {
         assertFalse(t.doubleColumn("original_g_per_t").isMissing(1));
     }
 
-    /** The CSV written from the Tablesaw table keeps each number's written decimals and the formula guard. */
-    @Test
-    void theCsvIsWrittenFromTheTable(@TempDir Path dir) throws IOException {
-        Path f = dir.resolve("p.csv");
-        CsvTables.write(ReportFrame.of(mixed()), f);
-        assertEquals("type,pairs,rms_cv_percent,rms_cv_lower_percent,rms_cv_upper_percent,rms_cv_note,bias_percent,"
-                        + "original_g_per_t,original_qualifier\r\n"
-                        + "pulp duplicate,1234,9.24,6.79,11.72,,-1.50,0.070,\r\n"
-                        + "'-field,5,,,,\"needs 2 pairs, has 1\",,0.005,<\r\n",
-                Files.readString(f, StandardCharsets.UTF_8));
-    }
-
     /** Each call gives a new table: a caller's change does not reach the report or the next caller. */
     @Test
     void eachCallGivesItsOwnTable() {
-        ReportTable rt = mixed();
+        ReportTable rt = CsvTablesTest.typedTable();
         Table a = rt.toTablesaw();
         a.doubleColumn("bias_percent").set(0, 99.0);
         a.removeColumns("type");
@@ -116,40 +89,61 @@ class ReportFrameTest {
     }
 
     /**
-     * The digits come back from the double: for a plain decimal of at most 15 significant digits and 0 to 22
-     * decimals, {@code plain(parse(s), decimals(s))} is {@code s}. Checked against java.math.BigDecimal,
-     * exact decimal arithmetic, which gives the digits of each drawn decimal independently of doubles.
+     * The digits come back from the double: for a plain decimal of at most 15 significant digits,
+     * {@code plain(parse(s), decimals(s))} is {@code s}, whether it has many decimals, none, or trailing
+     * zeros before the point (a lognormal MLE of 2546000000000000000000000 on a one-batch selection).
+     * Checked against java.math.BigDecimal, exact decimal arithmetic, which spells each drawn decimal
+     * independently of doubles.
      */
     @Test
     void aWrittenDecimalComesBackFromItsDouble() {
-        record Written(long unscaled, int decimals) {
+        record Written(long unscaled, int scale) {
             String text() {
-                return BigDecimal.valueOf(unscaled, decimals).toPlainString();
+                return BigDecimal.valueOf(unscaled, scale).toPlainString();
+            }
+
+            int decimals() {
+                return Math.max(scale, 0);
             }
         }
         Gen<Written> gen = r -> {
             int digits = r.nextInt(1, ReportFrame.MAX_DIGITS + 1);
             long bound = BigDecimal.TEN.pow(digits).longValueExact();
             long unscaled = r.nextLong(bound) * (r.nextBoolean() ? 1 : -1);
-            return new Written(unscaled, r.nextInt(0, 23));
+            return new Written(unscaled, r.nextInt(-25, 41));
         };
         List<Gen<Written>> edges = List.of(Gen.constant(new Written(0, 0)), Gen.constant(new Written(0, 3)),
                 Gen.constant(new Written(999_999_999_999_999L, 0)), Gen.constant(new Written(-999_999_999_999_999L, 22)),
-                Gen.constant(new Written(1, 22)), Gen.constant(new Written(70, 3)), Gen.constant(new Written(-5, 1)));
+                Gen.constant(new Written(1, 22)), Gen.constant(new Written(1, 23)), Gen.constant(new Written(70, 3)),
+                Gen.constant(new Written(-5, 1)), Gen.constant(new Written(2546, -21)),
+                Gen.constant(new Written(999_999_999_999_999L, -10)));
         SeededTries.forAll(5000, edges, gen, w -> {
             String s = w.text();
             assertEquals(s, ReportFrame.plain(Double.parseDouble(s), w.decimals()), s);
         });
     }
 
+    /** A huge estimate with trailing zeros before the point is written as the report wrote it. */
+    @Test
+    void aHugeNumberIsWrittenAsWritten(@TempDir Path dir) throws IOException {
+        String plain = "2546000000000000000000000";
+        ReportTable rt = ReportTable.typed("x", "X", List.of(ReportColumn.number("MLE", "mle", "g/t")),
+                List.of(List.of(new Cell.Number(Double.parseDouble(plain), plain, plain))), "");
+        assertEquals(2.546e24, rt.toTablesaw().doubleColumn("mle_g_per_t").getDouble(0));
+        Path f = dir.resolve("x.csv");
+        CsvTables.write(rt, f);
+        assertEquals("mle_g_per_t\r\n" + plain + "\r\n", Files.readString(f, StandardCharsets.UTF_8));
+    }
+
     /**
      * A number a double cannot give back digit for digit is refused, never written differently: 17
      * significant digits (hand-checked: 2^50 < 1.23e15 < 2^51, so the doubles there are 2^-2 apart and
-     * 1234567890123456.7 is stored as 1234567890123456.75) and more than 22 decimals.
+     * 1234567890123456.7 is stored as 1234567890123456.75), and a negative zero (the double keeps the
+     * sign, a decimal does not).
      */
     @Test
-    void aNumberTooLongForADoubleIsRefused() {
-        for (String plain : List.of("1234567890123456.7", "0.00000000000000000000001")) {
+    void aNumberADoubleCannotGiveBackIsRefused() {
+        for (String plain : List.of("1234567890123456.7", "-0.00")) {
             ReportTable rt = ReportTable.typed("x", "X", List.of(ReportColumn.number("N", "n", "")),
                     List.of(List.of(new Cell.Number(Double.parseDouble(plain), plain, plain))), "");
             IllegalArgumentException e = assertThrows(IllegalArgumentException.class, rt::toTablesaw, plain);
