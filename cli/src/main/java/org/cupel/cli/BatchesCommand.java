@@ -60,6 +60,9 @@ final class BatchesCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
+        if (reassayCsv != null) {
+            CsvTables.prepare();
+        }
         Project project = ProjectFolder.load(folder);
         BatchReview review = BatchReview.of(project, CrmReview.of(project).outcomes());
         if (reassayCsv != null) {

@@ -18,6 +18,7 @@ import org.cupel.project.BatchSelection;
 import org.cupel.project.InputException;
 import org.cupel.project.Project;
 import org.cupel.project.ProjectFilter;
+import org.cupel.report.CsvTables;
 import org.cupel.report.GenerationTime;
 import org.cupel.report.PdfReport;
 import org.cupel.report.QcAppendix;
@@ -81,6 +82,7 @@ public final class ReportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
+        CsvTables.prepare();
         BatchSelection selection = new BatchSelection(date("--since", since), date("--until", until),
                 new LinkedHashSet<>(batches));
         QcReport report = appendix(selection);
