@@ -15,6 +15,11 @@ public final class DuplicateAnalysis {
     private static final QcRole[] TYPE_ORDER = {QcRole.FIELD_DUPLICATE, QcRole.COARSE_DUPLICATE,
         QcRole.PULP_DUPLICATE, QcRole.LAB_REPEAT, QcRole.UMPIRE};
 
+    private static final List<OutlierPair.Test> BOTH = List.of(OutlierPair.Test.ABOVE_99_PERCENT_LINE,
+            OutlierPair.Test.OUTSIDE_HARD_LIMIT);
+    private static final List<OutlierPair.Test> LINE_ONLY = List.of(OutlierPair.Test.ABOVE_99_PERCENT_LINE);
+    private static final List<OutlierPair.Test> HARD_ONLY = List.of(OutlierPair.Test.OUTSIDE_HARD_LIMIT);
+
     private DuplicateAnalysis() {
     }
 
@@ -70,8 +75,9 @@ public final class DuplicateAnalysis {
                                                 Estimate setRmsCv, DuplicateSettings settings) {
         Map<String, BatchPairs> byBatch = new LinkedHashMap<>();
         BatchPairs last = null;
-        for (int i = 0; i < pairs.size(); i++) {
-            String batch = pairs.get(i).batch();
+        PairList list = PairList.of(pairs);
+        for (int i = 0; i < list.size(); i++) {
+            String batch = list.batch(i);
             // A batch's pairs mostly come together: the last batch is compared before hashing.
             if (last == null || !last.batch.equals(batch)) {
                 last = byBatch.computeIfAbsent(batch, BatchPairs::new);
@@ -117,9 +123,12 @@ public final class DuplicateAnalysis {
      * in relative measures come in {@code ranked}, largest HARD first. Pairs whose mean is below the
      * detection-limit multiple are not judged by HARD (near the limit a relative difference says little), so
      * when the 99 % line flags one it goes to {@code belowThreshold}, largest |d| first.
+     *
+     * @param tests per pair of the set, the tests it failed as bits ({@link #ABOVE_LINE}, {@link #BEYOND_HARD})
      */
-    private record Flagged(List<OutlierPair> ranked, List<OutlierPair> belowThreshold,
-                           Map<Integer, List<OutlierPair.Test>> byRow) {
+    private record Flagged(List<OutlierPair> ranked, List<OutlierPair> belowThreshold, byte[] tests) {
+        static final byte ABOVE_LINE = 1;
+        static final byte BEYOND_HARD = 2;
 
         /** The flags of {@code members}' pairs, in their order: the charts mark what the tables list. */
         DuplicateSetResult.PairFlags flags(ScreenedPairs.Members members) {
@@ -127,16 +136,15 @@ public final class DuplicateAnalysis {
             boolean[] hard = new boolean[rows.length];
             boolean[] line = new boolean[rows.length];
             for (int i = 0; i < rows.length; i++) {
-                List<OutlierPair.Test> tests = byRow.getOrDefault(rows[i], List.of());
-                hard[i] = tests.contains(OutlierPair.Test.OUTSIDE_HARD_LIMIT);
-                line[i] = tests.contains(OutlierPair.Test.ABOVE_99_PERCENT_LINE);
+                hard[i] = (tests[rows[i]] & BEYOND_HARD) != 0;
+                line[i] = (tests[rows[i]] & ABOVE_LINE) != 0;
             }
             return new DuplicateSetResult.PairFlags(hard, line);
         }
     }
 
     private static Flagged outliers(ScreenedPairs set, PrecisionModelResult model, double hardLimit) {
-        Map<Integer, List<OutlierPair.Test>> flagged = new java.util.TreeMap<>();
+        byte[] tests = new byte[set.pairs().size()];
         ScreenedPairs.Members abs = set.absolute();
         if (model.available()) {
             boolean[] above = ThompsonHowarth.above(NormalDifferenceConstants.P99, model.thompsonHowarth().model(),
@@ -144,7 +152,7 @@ public final class DuplicateAnalysis {
             int[] rows = abs.rows();
             for (int i = 0; i < rows.length; i++) {
                 if (above[i]) {
-                    flagged.computeIfAbsent(rows[i], k -> new ArrayList<>()).add(OutlierPair.Test.ABOVE_99_PERCENT_LINE);
+                    tests[rows[i]] |= Flagged.ABOVE_LINE;
                 }
             }
         }
@@ -152,19 +160,31 @@ public final class DuplicateAnalysis {
         double[] a = rel.a();
         double[] b = rel.b();
         int[] rows = rel.rows();
-        boolean[] relative = new boolean[set.pairs().size()];
+        boolean[] relative = new boolean[tests.length];
         for (int i = 0; i < rows.length; i++) {
             relative[rows[i]] = true;
             if (LimitComparison.above(PairMeasures.hard(a[i], b[i]), hardLimit)) {
-                flagged.computeIfAbsent(rows[i], k -> new ArrayList<>()).add(OutlierPair.Test.OUTSIDE_HARD_LIMIT);
+                tests[rows[i]] |= Flagged.BEYOND_HARD;
             }
         }
         List<OutlierPair> ranked = new ArrayList<>();
         List<OutlierPair> low = new ArrayList<>();
-        flagged.forEach((row, tests) -> (relative[row] ? ranked : low).add(outlier(set.pairs().get(row), tests)));
+        for (int row = 0; row < tests.length; row++) {
+            if (tests[row] != 0) {
+                (relative[row] ? ranked : low).add(outlier(set.pairs().get(row), testsOf(tests[row])));
+            }
+        }
         ranked.sort(Comparator.comparingDouble(OutlierPair::hard).reversed());
         low.sort(Comparator.comparingDouble(OutlierPair::absDifference).reversed());
-        return new Flagged(ranked, low, flagged);
+        return new Flagged(ranked, low, tests);
+    }
+
+    /** The tests in the order they were listed before: the 99 % line first, then the HARD limit. */
+    private static List<OutlierPair.Test> testsOf(byte bits) {
+        if (bits == (Flagged.ABOVE_LINE | Flagged.BEYOND_HARD)) {
+            return BOTH;
+        }
+        return bits == Flagged.ABOVE_LINE ? LINE_ONLY : HARD_ONLY;
     }
 
     private static OutlierPair outlier(DuplicatePair p, List<OutlierPair.Test> tests) {

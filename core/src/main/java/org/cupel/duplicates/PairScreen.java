@@ -1,6 +1,5 @@
 package org.cupel.duplicates;
 
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.List;
@@ -30,19 +29,21 @@ public final class PairScreen {
      * Judges every pair of a set once; the set's screened pairs and those of any subset (a batch) are then
      * assembled from the decisions without reading the pairs' values again.
      */
-    public static Decisions decide(List<DuplicatePair> pairs, DuplicateSettings settings) {
+    public static Decisions decide(List<DuplicatePair> list, DuplicateSettings settings) {
+        PairList pairs = PairList.of(list);
         int n = pairs.size();
         Decisions d = new Decisions(pairs, n);
         for (int i = 0; i < n; i++) {
-            DuplicatePair p = pairs.get(i);
-            ExclusionReason hard = unusable(p.original(), p.duplicate());
+            AssayValue original = pairs.original(i);
+            AssayValue duplicate = pairs.duplicate(i);
+            ExclusionReason hard = unusable(original, duplicate);
             if (hard != null) {
                 d.absReason[i] = (byte) hard.ordinal();
                 d.relReason[i] = (byte) hard.ordinal();
                 continue;
             }
-            boolean censored = p.original().qualifier() == Qualifier.BELOW_DETECTION
-                    || p.duplicate().qualifier() == Qualifier.BELOW_DETECTION;
+            boolean censored = original.qualifier() == Qualifier.BELOW_DETECTION
+                    || duplicate.qualifier() == Qualifier.BELOW_DETECTION;
             if (censored) {
                 d.absReason[i] = (byte) ExclusionReason.BELOW_DETECTION.ordinal();
                 if (!settings.censoredAtHalfLimit()) {
@@ -50,12 +51,12 @@ public final class PairScreen {
                     continue;
                 }
             } else {
-                d.absA[i] = p.original().value();
-                d.absB[i] = p.duplicate().value();
+                d.absA[i] = original.value();
+                d.absB[i] = duplicate.value();
             }
-            double a = ratioValue(p.original());
-            double b = ratioValue(p.duplicate());
-            double limit = pairLimit(p.original(), p.duplicate());
+            double a = ratioValue(original);
+            double b = ratioValue(duplicate);
+            double limit = pairLimit(original, duplicate);
             if (Double.isNaN(limit)) {
                 d.flags[i] |= Decisions.LIMIT_UNKNOWN;
             } else if (PairMeasures.mean(a, b) < settings.limitMultipleOfDetection() * limit) {
@@ -79,7 +80,7 @@ public final class PairScreen {
         private static final byte USED = -1;
         private static final byte LIMIT_UNKNOWN = 1;
         private static final byte SUBSTITUTED = 2;
-        private final List<DuplicatePair> pairs;
+        private final PairList pairs;
         private final byte[] absReason;
         private final byte[] relReason;
         private final byte[] flags;
@@ -88,7 +89,7 @@ public final class PairScreen {
         private final double[] relA;
         private final double[] relB;
 
-        private Decisions(List<DuplicatePair> pairs, int n) {
+        private Decisions(PairList pairs, int n) {
             this.pairs = pairs;
             absReason = new byte[n];
             relReason = new byte[n];
@@ -115,11 +116,7 @@ public final class PairScreen {
          * the result index the subset's pairs in that order.
          */
         public ScreenedPairs of(int[] indices) {
-            List<DuplicatePair> subset = new ArrayList<>(indices.length);
-            for (int i : indices) {
-                subset.add(pairs.get(i));
-            }
-            return of(subset, indices);
+            return of(pairs.select(indices), indices);
         }
 
         private ScreenedPairs of(List<DuplicatePair> subset, int[] indices) {

@@ -26,7 +26,7 @@ public record ScreenedPairs(List<DuplicatePair> pairs, Members absolute, Members
                             int censoredSubstituted) {
 
     public ScreenedPairs {
-        pairs = List.copyOf(pairs);
+        pairs = PairList.of(pairs);
         excludedAbsolute = Collections.unmodifiableMap(new EnumMap<>(excludedAbsolute.isEmpty()
                 ? new EnumMap<>(ExclusionReason.class) : excludedAbsolute));
         excludedRelative = Collections.unmodifiableMap(new EnumMap<>(excludedRelative.isEmpty()
