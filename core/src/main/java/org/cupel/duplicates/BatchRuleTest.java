@@ -34,6 +34,9 @@ import org.cupel.assay.LimitComparison;
 public record BatchRuleTest(int within, int n, double acceptancePercent, double pValue, double alpha,
                             RuleOutcome outcome, String note) {
 
+    /** Point probabilities summed in full up to this many terms. */
+    static final int SUMMED_TERMS = 1000;
+
     public static BatchRuleTest of(int within, int n, double acceptancePercent, double alpha) {
         if (n == 0) {
             return new BatchRuleTest(0, 0, acceptancePercent, Double.NaN, alpha, RuleOutcome.NOT_JUDGED,
@@ -60,13 +63,44 @@ public record BatchRuleTest(int within, int n, double acceptancePercent, double 
      * cumulative probability goes through a continued fraction of the incomplete beta function that is off
      * by up to 5e-9 relative in the far lower tail (0.1⁸ came out 1.0000000050e-8); a sum of positive terms
      * each accurate to a few ulps is not.
+     *
+     * <p>Above {@link #SUMMED_TERMS} terms (a whole set of a million pairs is one batch of a pairs file without a
+     * batch column) the sum stops where the terms left cannot change it ({@link #monotoneTail}): below the mode
+     * the terms fall away from k geometrically, so P(X ≤ k) is summed from k down; at or above the mode, where the
+     * share within meets the rule anyway, P(X ≤ k) = 1 − P(X &gt; k) and the upper tail is summed from k + 1 up.
      */
     static double lowerTail(int k, int n, double p) {
         BinomialDistribution b = new BinomialDistribution(null, n, p);
-        double sum = 0;
-        for (int j = 0; j <= k; j++) {
-            sum += b.probability(j);
+        if (k < SUMMED_TERMS) {
+            double sum = 0;
+            for (int j = 0; j <= k; j++) {
+                sum += b.probability(j);
+            }
+            return Math.min(1.0, sum);
         }
-        return Math.min(1.0, sum);
+        int mode = (int) Math.floor((n + 1) * p);
+        if (k < mode) {
+            return Math.min(1.0, monotoneTail(b, k, -1, n, p));
+        }
+        return k >= n ? 1.0 : Math.max(0.0, 1.0 - monotoneTail(b, k + 1, 1, n, p));
+    }
+
+    /**
+     * Σ P(X = j) from j = {@code from} in direction {@code step} (−1 down to 0, +1 up to n), on the side of the
+     * mode where the terms shrink: the ratio of the next term to this one, r = j(1−p)/((n−j+1)p) going down or
+     * (n−j)p/((j+1)(1−p)) going up, is below 1 and shrinks further on, so the terms still to come add at most
+     * t·r/(1 − r); the sum stops when that is below 2⁻⁶⁰ of it, where it can no longer change the double.
+     */
+    private static double monotoneTail(BinomialDistribution b, int from, int step, int n, double p) {
+        double sum = 0;
+        for (int j = from; j >= 0 && j <= n; j += step) {
+            double t = b.probability(j);
+            sum += t;
+            double r = step < 0 ? j * (1 - p) / ((n - j + 1) * p) : (n - j) * p / ((j + 1) * (1 - p));
+            if (r < 1 && t * r / (1 - r) <= sum * 0x1p-60) {
+                break;
+            }
+        }
+        return sum;
     }
 }

@@ -2,11 +2,11 @@ package org.cupel.duplicates;
 
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Comparator;
 import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.ToDoubleFunction;
 import org.cupel.assay.LimitComparison;
 import org.cupel.assay.QcRole;
 
@@ -39,15 +39,17 @@ public final class DuplicateAnalysis {
     public static DuplicateReport run(String analyte, String unit, List<DuplicatePair> pairs,
                                       List<OrphanDuplicate> orphans, double[] grades, DuplicateSettings settings,
                                       String detectionLimits) {
-        Map<QcRole, List<DuplicatePair>> byType = new EnumMap<>(QcRole.class);
-        for (DuplicatePair p : pairs) {
-            byType.computeIfAbsent(p.type(), k -> new ArrayList<>()).add(p);
+        PairList all = PairList.of(pairs);
+        Map<QcRole, Group> byType = new EnumMap<>(QcRole.class);
+        for (int i = 0; i < all.size(); i++) {
+            byType.computeIfAbsent(all.type(i), k -> new Group(k.name())).add(i);
         }
         List<DuplicateSetResult> sets = new ArrayList<>();
         for (QcRole type : TYPE_ORDER) {
-            List<DuplicatePair> ofType = byType.get(type);
+            Group ofType = byType.get(type);
             if (ofType != null) {
-                sets.add(analyseSet(analyte, unit, type, ofType, grades, settings));
+                PairList set = ofType.size == all.size() ? all : all.select(ofType.indices());
+                sets.add(analyseSet(analyte, unit, type, set, grades, settings));
             }
         }
         return new DuplicateReport(analyte, unit, settings, sets, orphans, detectionLimits);
@@ -73,19 +75,19 @@ public final class DuplicateAnalysis {
     /** Per-batch precision, in the order batches first appear; each batch's pairs keep the set's screening. */
     private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, PairScreen.Decisions decisions,
                                                 Estimate setRmsCv, DuplicateSettings settings) {
-        Map<String, BatchPairs> byBatch = new LinkedHashMap<>();
-        BatchPairs last = null;
+        Map<String, Group> byBatch = new LinkedHashMap<>();
+        Group last = null;
         PairList list = PairList.of(pairs);
         for (int i = 0; i < list.size(); i++) {
             String batch = list.batch(i);
             // A batch's pairs mostly come together: the last batch is compared before hashing.
-            if (last == null || !last.batch.equals(batch)) {
-                last = byBatch.computeIfAbsent(batch, BatchPairs::new);
+            if (last == null || !last.key.equals(batch)) {
+                last = byBatch.computeIfAbsent(batch, Group::new);
             }
             last.add(i);
         }
         List<BatchPrecision> out = new ArrayList<>();
-        for (Map.Entry<String, BatchPairs> e : byBatch.entrySet()) {
+        for (Map.Entry<String, Group> e : byBatch.entrySet()) {
             ScreenedPairs batch = decisions.of(e.getValue().indices());
             BatchRuleTest rule = PrecisionMeasures.batchRule(type, batch, settings);
             PrecisionSummary p = PrecisionMeasures.summariseBatch(type, batch, settings, rule);
@@ -95,14 +97,14 @@ public final class DuplicateAnalysis {
         return out;
     }
 
-    /** The indices in the set of one batch's pairs, ascending. */
-    private static final class BatchPairs {
-        private final String batch;
+    /** The indices of one batch's (or one type's) pairs, ascending. */
+    private static final class Group {
+        private final String key;
         private int[] indices = new int[8];
         private int size;
 
-        BatchPairs(String batch) {
-            this.batch = batch;
+        Group(String key) {
+            this.key = key;
         }
 
         void add(int index) {
@@ -174,9 +176,28 @@ public final class DuplicateAnalysis {
                 (relative[row] ? ranked : low).add(outlier(set.pairs().get(row), testsOf(tests[row])));
             }
         }
-        ranked.sort(Comparator.comparingDouble(OutlierPair::hard).reversed());
-        low.sort(Comparator.comparingDouble(OutlierPair::absDifference).reversed());
-        return new Flagged(ranked, low, tests);
+        return new Flagged(descending(ranked, OutlierPair::hard), descending(low, OutlierPair::absDifference), tests);
+    }
+
+    /**
+     * {@code list} ordered by {@code key}, largest first, ties in list order (as a stable sort by the reversed
+     * key): a sort of the primitive keys with the list positions as tie-breaker, since a comparator sort of a
+     * hundred thousand flagged pairs cost more than the rest of their analysis.
+     */
+    private static List<OutlierPair> descending(List<OutlierPair> list, ToDoubleFunction<OutlierPair> key) {
+        int n = list.size();
+        double[] negated = new double[n];
+        double[] position = new double[n];
+        for (int i = 0; i < n; i++) {
+            negated[i] = -key.applyAsDouble(list.get(i));
+            position[i] = i;
+        }
+        PairGroups.sortByMeanThenDiff(negated, position);
+        List<OutlierPair> out = new ArrayList<>(n);
+        for (double p : position) {
+            out.add(list.get((int) p));
+        }
+        return out;
     }
 
     /** The tests in the order they were listed before: the 99 % line first, then the HARD limit. */

@@ -71,6 +71,11 @@ public final class PairColumns extends PairList {
     }
 
     @Override
+    public QcRole type(int i) {
+        return ROLES[type[i]];
+    }
+
+    @Override
     public String batch(int i) {
         return batchNames[batch[i]];
     }

@@ -4,6 +4,7 @@ import java.util.AbstractList;
 import java.util.List;
 import java.util.RandomAccess;
 import org.cupel.assay.AssayValue;
+import org.cupel.assay.QcRole;
 
 /**
  * An immutable list of pairs whose members and batch can be read without creating the pair: the analysis reads
@@ -27,6 +28,11 @@ public abstract class PairList extends AbstractList<DuplicatePair> implements Ra
     /** The duplicate's value of pair {@code i}. */
     public AssayValue duplicate(int i) {
         return get(i).duplicate();
+    }
+
+    /** The type of pair {@code i}. */
+    public QcRole type(int i) {
+        return get(i).type();
     }
 
     /** The batch of pair {@code i}. */
@@ -79,6 +85,11 @@ public abstract class PairList extends AbstractList<DuplicatePair> implements Ra
         @Override
         public AssayValue duplicate(int i) {
             return base.duplicate(indices[i]);
+        }
+
+        @Override
+        public QcRole type(int i) {
+            return base.type(indices[i]);
         }
 
         @Override

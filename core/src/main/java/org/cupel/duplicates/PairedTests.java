@@ -68,12 +68,7 @@ public final class PairedTests {
         }
         double[] sorted = abs.clone();
         Arrays.sort(sorted);
-        double wPlus = 0;
-        for (int i = 0; i < n; i++) {
-            if (d[i] > 0) {
-                wPlus += midRank(sorted, abs[i]);
-            }
-        }
+        double wPlus = positiveRankSum(sorted, positiveMagnitudes(d, abs));
         double total = n * (n + 1) / 2.0;
         double w = Math.min(wPlus, total - wPlus);
         double tieTerm = tieTerm(sorted);
@@ -101,30 +96,45 @@ public final class PairedTests {
         return Arrays.copyOf(d, k);
     }
 
-    /**
-     * The 1-based rank of {@code v} in {@code sorted}, ties given the mean of their ranks: (first + last)/2 for a
-     * run of equal values at ranks first..last (as Commons Math's {@code NaturalRanking} with
-     * {@code TiesStrategy.AVERAGE} computes it, without sorting boxed pairs).
-     */
-    private static double midRank(double[] sorted, double v) {
-        int first = firstAbove(sorted, v, false);
-        int last = firstAbove(sorted, v, true) - 1;
-        return (first + last + 2) / 2.0;
-    }
-
-    /** The first index whose value is above v (or at least v, when {@code strictly} is false). */
-    private static int firstAbove(double[] sorted, double v, boolean strictly) {
-        int lo = 0;
-        int hi = sorted.length;
-        while (lo < hi) {
-            int mid = (lo + hi) >>> 1;
-            if (strictly ? sorted[mid] <= v : sorted[mid] < v) {
-                lo = mid + 1;
-            } else {
-                hi = mid;
+    /** The magnitudes of the positive differences, sorted. */
+    private static double[] positiveMagnitudes(double[] d, double[] abs) {
+        double[] pos = new double[d.length];
+        int k = 0;
+        for (int i = 0; i < d.length; i++) {
+            if (d[i] > 0) {
+                pos[k++] = abs[i];
             }
         }
-        return lo;
+        pos = Arrays.copyOf(pos, k);
+        Arrays.sort(pos);
+        return pos;
+    }
+
+    /**
+     * W+: the sum of the ranks of the positive differences in {@code sorted} (all magnitudes), ties given the mean
+     * of their ranks, (first + last)/2 for a run of equal values at ranks first..last (as Commons Math's
+     * {@code NaturalRanking} with {@code TiesStrategy.AVERAGE} computes it). One walk over both sorted arrays: a
+     * run of t equal magnitudes holding c positive ones adds c times its mid-rank. Mid-ranks are multiples of ½,
+     * so the sum is exact in any order (below 2⁵³).
+     */
+    static double positiveRankSum(double[] sorted, double[] positiveSorted) {
+        double sum = 0;
+        int q = 0;
+        int i = 0;
+        while (i < sorted.length) {
+            int j = i;
+            while (j + 1 < sorted.length && sorted[j + 1] == sorted[i]) {
+                j++;
+            }
+            int c = 0;
+            while (q < positiveSorted.length && positiveSorted[q] == sorted[i]) {
+                q++;
+                c++;
+            }
+            sum += c * ((i + j + 2) / 2.0);
+            i = j + 1;
+        }
+        return sum;
     }
 
     /**
