@@ -40,6 +40,18 @@ public abstract class PairList extends AbstractList<DuplicatePair> implements Ra
         return get(i).batch();
     }
 
+    /** The pairs of {@code type}, in order, as a view. */
+    public PairList ofType(QcRole type) {
+        int[] indices = new int[size()];
+        int k = 0;
+        for (int i = 0; i < indices.length; i++) {
+            if (type(i) == type) {
+                indices[k++] = i;
+            }
+        }
+        return k == indices.length ? this : new Selection(this, java.util.Arrays.copyOf(indices, k));
+    }
+
     /** The pairs at {@code indices} (into this list), in that order, as a view. */
     PairList select(int[] indices) {
         return new Selection(this, indices.clone());
