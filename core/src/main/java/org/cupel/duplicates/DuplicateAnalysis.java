@@ -62,19 +62,19 @@ public final class DuplicateAnalysis {
         ScreenedPairs.Members abs = screened.absolute();
         ScreenedPairs.Members rel = screened.relative();
         PrecisionSummary precision = PrecisionMeasures.summarise(type, screened, settings);
-        PrecisionModelResult model = ThompsonHowarth.fit(abs.a(), abs.b(), grades, settings);
-        BiasResult bias = BiasAnalysis.compare(type, rel.a(), rel.b());
+        PrecisionModelResult model = ThompsonHowarth.fit(abs.sharedA(), abs.sharedB(), grades, settings);
+        BiasResult bias = BiasAnalysis.compare(type, rel.sharedA(), rel.sharedB());
         Flagged outliers = outliers(screened, model, settings.hardLimit(type));
         return new DuplicateSetResult(analyte, unit, type, precision, model, bias, outliers.ranked(),
                 outliers.belowThreshold(),
-                new DuplicateSetResult.PairValues(abs.a(), abs.b(), rel.a(), rel.b(), outliers.flags(abs),
+                new DuplicateSetResult.PairValues(abs.sharedA(), abs.sharedB(), rel.sharedA(), rel.sharedB(), outliers.flags(abs),
                         outliers.flags(rel)),
-                batches(type, pairs, decisions, precision.rmsCv(), settings));
+                batches(type, pairs, decisions, screened, precision.rmsCv(), settings));
     }
 
     /** Per-batch precision, in the order batches first appear; each batch's pairs keep the set's screening. */
     private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, PairScreen.Decisions decisions,
-                                                Estimate setRmsCv, DuplicateSettings settings) {
+                                                ScreenedPairs set, Estimate setRmsCv, DuplicateSettings settings) {
         Map<String, Group> byBatch = new LinkedHashMap<>();
         Group last = null;
         PairList list = PairList.of(pairs);
@@ -88,7 +88,8 @@ public final class DuplicateAnalysis {
         }
         List<BatchPrecision> out = new ArrayList<>();
         for (Map.Entry<String, Group> e : byBatch.entrySet()) {
-            ScreenedPairs batch = decisions.of(e.getValue().indices());
+            // One batch holding the whole set (a pairs file without batches) is the set, screened already.
+            ScreenedPairs batch = byBatch.size() == 1 ? set : decisions.of(e.getValue().indices());
             BatchRuleTest rule = PrecisionMeasures.batchRule(type, batch, settings);
             PrecisionSummary p = PrecisionMeasures.summariseBatch(type, batch, settings, rule);
             out.add(new BatchPrecision(e.getKey(), p, rule, BatchDispersion.test(p.rmsCv(), setRmsCv),
@@ -134,7 +135,7 @@ public final class DuplicateAnalysis {
 
         /** The flags of {@code members}' pairs, in their order: the charts mark what the tables list. */
         DuplicateSetResult.PairFlags flags(ScreenedPairs.Members members) {
-            int[] rows = members.rows();
+            int[] rows = members.sharedRows();
             boolean[] hard = new boolean[rows.length];
             boolean[] line = new boolean[rows.length];
             for (int i = 0; i < rows.length; i++) {
@@ -150,8 +151,8 @@ public final class DuplicateAnalysis {
         ScreenedPairs.Members abs = set.absolute();
         if (model.available()) {
             boolean[] above = ThompsonHowarth.above(NormalDifferenceConstants.P99, model.thompsonHowarth().model(),
-                    abs.a(), abs.b());
-            int[] rows = abs.rows();
+                    abs.sharedA(), abs.sharedB());
+            int[] rows = abs.sharedRows();
             for (int i = 0; i < rows.length; i++) {
                 if (above[i]) {
                     tests[rows[i]] |= Flagged.ABOVE_LINE;
@@ -159,9 +160,9 @@ public final class DuplicateAnalysis {
             }
         }
         ScreenedPairs.Members rel = set.relative();
-        double[] a = rel.a();
-        double[] b = rel.b();
-        int[] rows = rel.rows();
+        double[] a = rel.sharedA();
+        double[] b = rel.sharedB();
+        int[] rows = rel.sharedRows();
         boolean[] relative = new boolean[tests.length];
         for (int i = 0; i < rows.length; i++) {
             relative[rows[i]] = true;

@@ -27,20 +27,21 @@ public final class PairColumns extends PairList {
     private final byte[] type;
     private final int[] batch;
     private final String[] batchNames;
-    private final char[] labels;
+    private final String labels;
     private final int[] labelEnd;
     private final long[] line;
 
+    /** Takes over the builder's arrays (not copied: a million pairs are tens of MB; the builder is spent). */
     private PairColumns(Builder b) {
         size = b.size;
-        original = b.original.trimmed(size);
-        duplicate = b.duplicate.trimmed(size);
-        type = Arrays.copyOf(b.type, size);
-        batch = Arrays.copyOf(b.batch, size);
+        original = b.original;
+        duplicate = b.duplicate;
+        type = b.type;
+        batch = b.batch;
         batchNames = b.batchNames.toArray(String[]::new);
-        labels = b.labels.toString().toCharArray();
-        labelEnd = Arrays.copyOf(b.labelEnd, size);
-        line = Arrays.copyOf(b.line, size);
+        labels = b.labels.toString();
+        labelEnd = b.labelEnd;
+        line = b.line;
     }
 
     @Override
@@ -84,7 +85,7 @@ public final class PairColumns extends PairList {
     private String label(int i) {
         int from = i == 0 ? 0 : labelEnd[i - 1];
         int to = labelEnd[i];
-        return from == to ? "line " + line[i] : new String(labels, from, to - from);
+        return from == to ? "line " + line[i] : labels.substring(from, to);
     }
 
     /** One member of every pair, in columns. */
@@ -109,16 +110,6 @@ public final class PairColumns extends PairList {
             limit = Arrays.copyOf(limit, capacity);
             missing = Arrays.copyOf(missing, capacity);
             decimals = Arrays.copyOf(decimals, capacity);
-        }
-
-        Member trimmed(int size) {
-            Member m = new Member(0);
-            m.qualifier = Arrays.copyOf(qualifier, size);
-            m.value = Arrays.copyOf(value, size);
-            m.limit = Arrays.copyOf(limit, size);
-            m.missing = Arrays.copyOf(missing, size);
-            m.decimals = Arrays.copyOf(decimals, size);
-            return m;
         }
 
         void set(int i, Qualifier q, double v, double l, MissingReason reason, int written) {
@@ -148,6 +139,7 @@ public final class PairColumns extends PairList {
         private int[] labelEnd;
         private long[] line;
         private final int noBatch;
+        private boolean built;
 
         /** @param expected the number of pairs expected (arrays grow beyond it) */
         public Builder(int expected) {
@@ -161,8 +153,11 @@ public final class PairColumns extends PairList {
             noBatch = batchNumber("");
         }
 
-        /** Adds a pair of {@code role} from {@code fileLine}, without label (until {@link #label}) or batch (""). */
+        /** Adds a pair of {@code role} from {@code fileLine}, without label (until {@link #endLabel}) or batch (""). */
         public void add(QcRole role, long fileLine) {
+            if (built) {
+                throw new IllegalStateException("the pairs were built; a builder makes one list");
+            }
             if (size == type.length) {
                 int capacity = size * 2;
                 original.grow(capacity);
@@ -232,7 +227,9 @@ public final class PairColumns extends PairList {
             return batchNames.size() - 1;
         }
 
+        /** The pairs added; the list takes over the arrays, so the builder takes no more pairs. */
         public PairColumns build() {
+            built = true;
             return new PairColumns(this);
         }
     }

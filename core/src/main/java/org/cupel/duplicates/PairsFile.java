@@ -42,7 +42,7 @@ public final class PairsFile {
      * @throws InputException when the file cannot be read or lacks the original or duplicate column
      */
     public static Result read(Path file, QcRole defaultType) {
-        Reader reader = new Reader(defaultType, TableRows.estimatedRows(file, 3, 7));
+        Reader reader = new Reader(defaultType, TableRows.estimatedRows(file, 3, 6));
         TableRows.scan(file, cells -> hasColumn(cells, ORIGINAL) && hasColumn(cells, DUPLICATE), reader::open);
         reader.parser.checkDecimalMarks();
         List<DataIssue> issues = new ArrayList<>(reader.head.issues());

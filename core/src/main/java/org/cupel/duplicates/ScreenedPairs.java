@@ -48,6 +48,21 @@ public record ScreenedPairs(List<DuplicatePair> pairs, Members absolute, Members
             return rows.length;
         }
 
+        /** The originals themselves, not a copy: for the kernels of this package, which only read them. */
+        double[] sharedA() {
+            return a;
+        }
+
+        /** The duplicates themselves, not a copy (see {@link #sharedA}). */
+        double[] sharedB() {
+            return b;
+        }
+
+        /** The rows themselves, not a copy (see {@link #sharedA}). */
+        int[] sharedRows() {
+            return rows;
+        }
+
         @Override
         public int[] rows() {
             return rows.clone();
