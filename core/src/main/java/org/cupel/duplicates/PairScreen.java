@@ -50,12 +50,12 @@ public final class PairScreen {
                     d.relReason[i] = (byte) ExclusionReason.BELOW_DETECTION.ordinal();
                     continue;
                 }
-            } else {
-                d.absA[i] = original.value();
-                d.absB[i] = duplicate.value();
             }
+            // A pair used in absolute measures has no censored member, so its values there are these too.
             double a = ratioValue(original);
             double b = ratioValue(duplicate);
+            d.a[i] = a;
+            d.b[i] = b;
             double limit = pairLimit(original, duplicate);
             if (Double.isNaN(limit)) {
                 d.flags[i] |= Decisions.LIMIT_UNKNOWN;
@@ -66,8 +66,6 @@ public final class PairScreen {
             if (censored) {
                 d.flags[i] |= Decisions.SUBSTITUTED;
             }
-            d.relA[i] = a;
-            d.relB[i] = b;
         }
         return d;
     }
@@ -84,10 +82,9 @@ public final class PairScreen {
         private final byte[] absReason;
         private final byte[] relReason;
         private final byte[] flags;
-        private final double[] absA;
-        private final double[] absB;
-        private final double[] relA;
-        private final double[] relB;
+        /** The values a used pair enters its measures with (a below-detection member at half its limit). */
+        private final double[] a;
+        private final double[] b;
 
         private Decisions(PairList pairs, int n) {
             this.pairs = pairs;
@@ -96,10 +93,8 @@ public final class PairScreen {
             Arrays.fill(absReason, USED);
             Arrays.fill(relReason, USED);
             flags = new byte[n];
-            absA = new double[n];
-            absB = new double[n];
-            relA = new double[n];
-            relB = new double[n];
+            a = new double[n];
+            b = new double[n];
         }
 
         /** The screened pairs of the whole set. */
@@ -121,14 +116,20 @@ public final class PairScreen {
 
         private ScreenedPairs of(List<DuplicatePair> subset, int[] indices) {
             int n = indices.length;
-            int[] absRows = new int[n];
-            int[] relRows = new int[n];
-            double[] a1 = new double[n];
-            double[] b1 = new double[n];
-            double[] a2 = new double[n];
-            double[] b2 = new double[n];
             int na = 0;
             int nr = 0;
+            for (int i : indices) {
+                na += absReason[i] == USED ? 1 : 0;
+                nr += relReason[i] == USED ? 1 : 0;
+            }
+            int[] absRows = new int[na];
+            int[] relRows = new int[nr];
+            double[] a1 = new double[na];
+            double[] b1 = new double[na];
+            double[] a2 = new double[nr];
+            double[] b2 = new double[nr];
+            na = 0;
+            nr = 0;
             int limitUnknown = 0;
             int substituted = 0;
             int[] exAbs = new int[REASONS.length];
@@ -137,8 +138,8 @@ public final class PairScreen {
                 int i = indices[k];
                 if (absReason[i] == USED) {
                     absRows[na] = k;
-                    a1[na] = absA[i];
-                    b1[na] = absB[i];
+                    a1[na] = a[i];
+                    b1[na] = b[i];
                     na++;
                 } else {
                     exAbs[absReason[i]]++;
@@ -154,16 +155,13 @@ public final class PairScreen {
                     substituted++;
                 }
                 relRows[nr] = k;
-                a2[nr] = relA[i];
-                b2[nr] = relB[i];
+                a2[nr] = a[i];
+                b2[nr] = b[i];
                 nr++;
             }
-            return new ScreenedPairs(subset,
-                    new ScreenedPairs.Members(Arrays.copyOf(absRows, na), Arrays.copyOf(a1, na),
-                            Arrays.copyOf(b1, na)),
-                    new ScreenedPairs.Members(Arrays.copyOf(relRows, nr), Arrays.copyOf(a2, nr),
-                            Arrays.copyOf(b2, nr)),
-                    counts(exAbs), counts(exRel), limitUnknown, substituted);
+            return new ScreenedPairs(subset, new ScreenedPairs.Members(absRows, a1, b1, true),
+                    new ScreenedPairs.Members(relRows, a2, b2, true), counts(exAbs), counts(exRel), limitUnknown,
+                    substituted);
         }
     }
 
