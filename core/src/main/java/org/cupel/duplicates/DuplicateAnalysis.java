@@ -67,7 +67,7 @@ public final class DuplicateAnalysis {
         Flagged outliers = outliers(screened, model, settings.hardLimit(type));
         return new DuplicateSetResult(analyte, unit, type, precision, model, bias, outliers.ranked(),
                 outliers.belowThreshold(),
-                new DuplicateSetResult.PairValues(abs.sharedA(), abs.sharedB(), rel.sharedA(), rel.sharedB(), outliers.flags(abs),
+                new DuplicateSetResult.PairValues(abs, rel, outliers.flags(abs),
                         outliers.flags(rel)),
                 batches(type, pairs, decisions, screened, precision.rmsCv(), settings));
     }

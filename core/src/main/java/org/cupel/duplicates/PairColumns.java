@@ -27,7 +27,7 @@ public final class PairColumns extends PairList {
     private final byte[] type;
     private final int[] batch;
     private final String[] batchNames;
-    private final String labels;
+    private final StringBuilder labels;
     private final int[] labelEnd;
     private final long[] line;
 
@@ -39,7 +39,7 @@ public final class PairColumns extends PairList {
         type = b.type;
         batch = b.batch;
         batchNames = b.batchNames.toArray(String[]::new);
-        labels = b.labels.toString();
+        labels = b.labels;
         labelEnd = b.labelEnd;
         line = b.line;
     }
@@ -92,6 +92,7 @@ public final class PairColumns extends PairList {
     private static final class Member {
         private byte[] qualifier;
         private double[] value;
+        /** Null while every limit is unknown (NaN). */
         private double[] limit;
         private byte[] missing;
         private byte[] decimals;
@@ -99,7 +100,6 @@ public final class PairColumns extends PairList {
         Member(int capacity) {
             qualifier = new byte[capacity];
             value = new double[capacity];
-            limit = new double[capacity];
             missing = new byte[capacity];
             decimals = new byte[capacity];
         }
@@ -107,7 +107,7 @@ public final class PairColumns extends PairList {
         void grow(int capacity) {
             qualifier = Arrays.copyOf(qualifier, capacity);
             value = Arrays.copyOf(value, capacity);
-            limit = Arrays.copyOf(limit, capacity);
+            limit = limit == null ? null : Arrays.copyOf(limit, capacity);
             missing = Arrays.copyOf(missing, capacity);
             decimals = Arrays.copyOf(decimals, capacity);
         }
@@ -115,14 +115,22 @@ public final class PairColumns extends PairList {
         void set(int i, Qualifier q, double v, double l, MissingReason reason, int written) {
             qualifier[i] = (byte) q.ordinal();
             value[i] = v;
-            limit[i] = l;
+            // Limits are kept only once one is known (a file without a dl column and without '<' cells has none).
+            if (limit == null && !Double.isNaN(l)) {
+                limit = new double[value.length];
+                Arrays.fill(limit, Double.NaN);
+            }
+            if (limit != null) {
+                limit[i] = l;
+            }
             missing[i] = (byte) reason.ordinal();
             // Decimals beyond a byte are never written by a lab; kept as unknown rather than wrapped.
             decimals[i] = (byte) (written > Byte.MAX_VALUE ? -1 : written);
         }
 
         AssayValue value(int i) {
-            return new AssayValue(QUALIFIERS[qualifier[i]], value[i], limit[i], REASONS[missing[i]], decimals[i]);
+            return new AssayValue(QUALIFIERS[qualifier[i]], value[i], limit == null ? Double.NaN : limit[i],
+                    REASONS[missing[i]], decimals[i]);
         }
     }
 
@@ -135,7 +143,7 @@ public final class PairColumns extends PairList {
         private int[] batch;
         private final List<String> batchNames = new ArrayList<>();
         private final Map<String, Integer> batchIndex = new HashMap<>();
-        private final StringBuilder labels = new StringBuilder();
+        private final StringBuilder labels;
         private int[] labelEnd;
         private long[] line;
         private final int noBatch;
@@ -150,6 +158,8 @@ public final class PairColumns extends PairList {
             batch = new int[capacity];
             labelEnd = new int[capacity];
             line = new long[capacity];
+            // Sized for IDs of about ten characters, so that a million IDs are not copied as the buffer grows.
+            labels = new StringBuilder((int) Math.min(capacity * 10L, 1 << 28));
             noBatch = batchNumber("");
         }
 
@@ -192,6 +202,9 @@ public final class PairColumns extends PairList {
 
         /** The buffer the last pair's label is appended to (nothing appended: "line N"). */
         public StringBuilder labelBuffer() {
+            if (built) {
+                throw new IllegalStateException("the pairs were built; their labels are fixed");
+            }
             return labels;
         }
 

@@ -56,6 +56,11 @@ public record ScreenedPairs(List<DuplicatePair> pairs, Members absolute, Members
             this.b = b;
         }
 
+        /** Members without rows (an index per value), copied from {@code a} and {@code b}. */
+        static Members copy(double[] a, double[] b) {
+            return new Members(new int[a.length], a.clone(), b.clone(), true);
+        }
+
         public int size() {
             return rows.length;
         }
