@@ -48,8 +48,7 @@ for n in "${sizes[@]}"; do
   [ -f "$pairs" ] || "$python" "$here/bench/make_pairs.py" "$n" "$seed" "$pairs"
   c=(); p=()
   for ((i = 0; i < runs; i++)); do
-    out="$dir/cupel-$n.json"; c+=("$(CUPEL_JAVA_OPTS="$heap" timed "$here/cupel" duplicates "$pairs" --json \
-        --flagged-csv "$dir/flagged-$n.csv")")
+    out="$dir/cupel-$n.json"; c+=("$(CUPEL_JAVA_OPTS="$heap" timed "$here/cupel" duplicates "$pairs" --json)")
     out="$dir/pandas-$n.json"; p+=("$(timed "$python" "$here/bench/pairs_pandas.py" "$pairs")")
   done
   cm=$(printf '%s\n' "${c[@]}" | median); pm=$(printf '%s\n' "${p[@]}" | median)

@@ -7,6 +7,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 import java.util.List;
 import org.cupel.duplicates.DuplicateReport;
 import org.cupel.duplicates.DuplicateSetResult;
@@ -30,8 +31,11 @@ final class FlaggedPairsCsv {
         int rows = 0;
         try {
             Files.createDirectories(dir);
-            tmp = Files.createTempFile(dir, ".flagged-", ".csv.tmp");
-            try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
+            // Beside the target (the move stays on one file system), with the default permissions of a new file.
+            tmp = dir.resolve("." + target.getFileName() + "." + ProcessHandle.current().pid() + "."
+                    + System.nanoTime() + ".tmp");
+            try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8, StandardOpenOption.CREATE_NEW,
+                    StandardOpenOption.WRITE)) {
                 w.write("analyte,type,list,rank,id,original_id,batch,original,duplicate,hard,abs_difference,tests\r\n");
                 for (DuplicateReport r : reports) {
                     for (DuplicateSetResult s : r.sets()) {

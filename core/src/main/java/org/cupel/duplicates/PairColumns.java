@@ -92,7 +92,7 @@ public final class PairColumns extends PairList {
     private static final class Member {
         private byte[] qualifier;
         private double[] value;
-        /** Null while every limit is unknown (NaN). */
+        /** Null while every limit is the usual one ({@link #usualLimit}). */
         private double[] limit;
         private byte[] missing;
         private byte[] decimals;
@@ -115,10 +115,12 @@ public final class PairColumns extends PairList {
         void set(int i, Qualifier q, double v, double l, MissingReason reason, int written) {
             qualifier[i] = (byte) q.ordinal();
             value[i] = v;
-            // Limits are kept only once one is known (a file without a dl column and without '<' cells has none).
-            if (limit == null && !Double.isNaN(l)) {
+            // Limits are kept only once one differs from the usual one (a file without a dl column has none).
+            if (limit == null && Double.compare(l, usualLimit(q, v)) != 0) {
                 limit = new double[value.length];
-                Arrays.fill(limit, Double.NaN);
+                for (int k = 0; k < i; k++) {
+                    limit[k] = usualLimit(QUALIFIERS[qualifier[k]], value[k]);
+                }
             }
             if (limit != null) {
                 limit[i] = l;
@@ -129,8 +131,17 @@ public final class PairColumns extends PairList {
         }
 
         AssayValue value(int i) {
-            return new AssayValue(QUALIFIERS[qualifier[i]], value[i], limit == null ? Double.NaN : limit[i],
+            Qualifier q = QUALIFIERS[qualifier[i]];
+            return new AssayValue(q, value[i], limit == null ? usualLimit(q, value[i]) : limit[i],
                     REASONS[missing[i]], decimals[i]);
+        }
+
+        /**
+         * The limit a value has without a stated one: a censored value is its limit ({@code <0.005}: 0.005), a
+         * detected or missing one has none.
+         */
+        private static double usualLimit(Qualifier q, double value) {
+            return q == Qualifier.BELOW_DETECTION || q == Qualifier.ABOVE_UPPER_LIMIT ? value : Double.NaN;
         }
     }
 

@@ -118,16 +118,21 @@ public final class PairScreen {
             int n = indices.length;
             int na = 0;
             int nr = 0;
+            int both = 0;
             for (int i : indices) {
                 na += absReason[i] == USED ? 1 : 0;
                 nr += relReason[i] == USED ? 1 : 0;
+                both += absReason[i] == USED && relReason[i] == USED ? 1 : 0;
             }
+            // Usually every pair of absolute measures is also one of relative measures (no limit known, or all
+            // above the multiple): then both are the same pairs with the same values, held once.
+            boolean same = na == both && nr == both;
             int[] absRows = new int[na];
-            int[] relRows = new int[nr];
+            int[] relRows = same ? absRows : new int[nr];
             double[] a1 = new double[na];
             double[] b1 = new double[na];
-            double[] a2 = new double[nr];
-            double[] b2 = new double[nr];
+            double[] a2 = same ? a1 : new double[nr];
+            double[] b2 = same ? b1 : new double[nr];
             na = 0;
             nr = 0;
             int limitUnknown = 0;
@@ -159,8 +164,9 @@ public final class PairScreen {
                 b2[nr] = b[i];
                 nr++;
             }
-            return new ScreenedPairs(subset, new ScreenedPairs.Members(absRows, a1, b1, true),
-                    new ScreenedPairs.Members(relRows, a2, b2, true), counts(exAbs), counts(exRel), limitUnknown,
+            ScreenedPairs.Members absolute = new ScreenedPairs.Members(absRows, a1, b1, true);
+            ScreenedPairs.Members relative = same ? absolute : new ScreenedPairs.Members(relRows, a2, b2, true);
+            return new ScreenedPairs(subset, absolute, relative, counts(exAbs), counts(exRel), limitUnknown,
                     substituted);
         }
     }
