@@ -2,11 +2,15 @@ package org.cupel.report;
 
 import java.io.IOException;
 import java.io.Writer;
+import java.lang.invoke.MethodHandles;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.regex.Pattern;
+import tech.tablesaw.api.StringColumn;
+import tech.tablesaw.api.Table;
+import tech.tablesaw.columns.Column;
 
 /**
  * Writes report tables as CSV files that open safely in a spreadsheet: the header is the table's
@@ -34,14 +38,62 @@ public final class CsvTables {
     private CsvTables() {
     }
 
-    /** Writes {@code table} (header row, then the rows) to {@code file}. */
+    /**
+     * Writes {@code table} (header row, then the rows) to {@code file}, from its Tablesaw form
+     * ({@link ReportFrame}): the column names are the header, a text column's cells are neutralised and
+     * quoted, a missing number is an empty cell, and a number is written with the decimals the report gave it.
+     *
+     * <p>Tablesaw's own CSV writer is not used: it formats a number column with one formatter for every row,
+     * so a lab's {@code 0.070} beside a computed {@code 0.07} cannot both keep their decimals, and it knows
+     * neither the formula guard nor its exception for a plain negative number.
+     */
     public static void write(ReportTable table, Path file) throws IOException {
+        write(ReportFrame.of(table), file);
+    }
+
+    static void write(ReportFrame frame, Path file) throws IOException {
+        Table t = frame.table();
         try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
-            writeRow(w, table.csvColumns().stream().map(c -> new ReportColumn.CsvField(c.name(), false)).toList());
-            for (List<ReportColumn.CsvField> row : table.csvRows()) {
-                writeRow(w, row);
+            List<String> names = t.columnNames();
+            for (int c = 0; c < names.size(); c++) {
+                w.write(c > 0 ? "," : "");
+                w.write(field(names.get(c)));
+            }
+            w.write("\r\n");
+            List<Column<?>> columns = t.columns();
+            for (int r = 0; r < t.rowCount(); r++) {
+                for (int c = 0; c < columns.size(); c++) {
+                    w.write(c > 0 ? "," : "");
+                    Column<?> col = columns.get(c);
+                    if (col instanceof StringColumn s) {
+                        w.write(field(s.get(r)));
+                    } else if (!col.isMissing(r)) {
+                        // A number is a plain decimal (Cell.Number checks it): nothing to neutralise or quote.
+                        w.write(frame.csvNumber(c, r));
+                    }
+                }
+                w.write("\r\n");
             }
         }
+    }
+
+    /**
+     * Starts initialising Tablesaw on a background thread. Tablesaw's {@link Table} class scans the class path
+     * for Tablesaw's file readers when it is first used (about half a second, docs/performance.md); a command
+     * that will write tables calls this first, so that the scan overlaps reading the project. The thread that
+     * writes the first table waits for the initialisation if it is still running (the JVM initialises a class
+     * once); should it fail, that thread meets the same error and reports it, so this one stays silent.
+     */
+    public static void prepare() {
+        Thread init = new Thread(() -> {
+            try {
+                MethodHandles.lookup().ensureInitialized(Table.class);
+            } catch (IllegalAccessException | LinkageError e) {
+                // Reported by the thread that writes the first table.
+            }
+        }, "cupel-tablesaw-init");
+        init.setDaemon(true);
+        init.start();
     }
 
     /** One cell made spreadsheet-safe, then quoted per RFC 4180 when needed. */
@@ -65,17 +117,5 @@ public final class CsvTables {
     private static String quoted(String s) {
         boolean quote = s.indexOf(',') >= 0 || s.indexOf('"') >= 0 || s.indexOf('\n') >= 0 || s.indexOf('\r') >= 0;
         return quote ? '"' + s.replace("\"", "\"\"") + '"' : s;
-    }
-
-    private static void writeRow(Writer w, List<ReportColumn.CsvField> cells) throws IOException {
-        for (int i = 0; i < cells.size(); i++) {
-            if (i > 0) {
-                w.write(',');
-            }
-            ReportColumn.CsvField f = cells.get(i);
-            // A number field is a plain decimal (Cell.Number checks it): nothing to neutralise or quote.
-            w.write(f.numeric() ? f.text() : field(f.text()));
-        }
-        w.write("\r\n");
     }
 }

@@ -17,6 +17,14 @@ public record QcReport(String project, String selection, Instant generated, List
         sections = List.copyOf(sections);
     }
 
+    /**
+     * Every table of the appendix in reading order: what the HTML, PDF and Word pages show and
+     * {@code tables/*.csv} holds. Each is a Tablesaw table through {@link ReportTable#toTablesaw()}.
+     */
+    public List<ReportTable> tables() {
+        return new ReportFiles(this).tables();
+    }
+
     /** "QC appendix", the running title of every page. */
     public static final String TITLE = "QC appendix";
 }

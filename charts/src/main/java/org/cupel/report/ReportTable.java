@@ -4,15 +4,18 @@ import java.util.AbstractList;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Objects;
 import java.util.RandomAccess;
 import java.util.Set;
+import tech.tablesaw.api.Table;
 
 /**
  * A table of the report: typed cells ({@link Cell}) under typed columns ({@link ReportColumn}). The page
  * (HTML, PDF, Word) reads {@link #columns()} and {@link #rows()}, the display text; every table is also
- * written as {@code tables/<id>.csv} from {@link #csvColumns()} and {@link #csvRows()}, one number per
- * CSV cell. Values are raw text: each renderer escapes for its own format.
+ * available as a Tablesaw {@link Table} ({@link #toTablesaw()}), one typed column per CSV column, and is
+ * written as {@code tables/<id>.csv} from that table, one number per CSV cell. Values are raw text: each
+ * renderer escapes for its own format.
  *
  * <p>A table made from text rows ({@link #ReportTable(String, String, List, List, String)}) has text columns
  * only. Each column's type is fixed by its {@link ReportColumn}, so the typed table maps onto a data frame
@@ -136,7 +139,20 @@ public final class ReportTable {
         return cells;
     }
 
-    /** The CSV header: every column's typed CSV columns in order, names made unique within the table. */
+    /**
+     * This table as a Tablesaw {@link Table} named by {@link #id()}: one typed column per {@link #csvColumns()}
+     * entry under the same name (text a {@code StringColumn}, a number a {@code DoubleColumn}, a count a
+     * {@code LongColumn}; an interval its estimate, lower and upper columns; not computable missing), holding
+     * the numbers as {@code tables/<id>.csv} writes them. A new table on every call, the caller's to change.
+     */
+    public Table toTablesaw() {
+        return ReportFrame.of(this).table();
+    }
+
+    /**
+     * The CSV header: every column's typed CSV columns in order, names made unique within the table
+     * regardless of case (a data frame, Tablesaw's among them, tells its columns apart without case).
+     */
     public List<ReportColumn.CsvColumn> csvColumns() {
         List<ReportColumn.CsvColumn> out = new ArrayList<>();
         Set<String> seen = new HashSet<>();
@@ -144,12 +160,12 @@ public final class ReportTable {
         for (ReportColumn col : typedColumns) {
             // Two columns with one key (two headers that read alike) keep their CSV columns together: key_2.
             ReportColumn c = col;
-            for (int n = 2; !keys.add(c.key()); n++) {
+            for (int n = 2; !keys.add(c.key().toLowerCase(Locale.ROOT)); n++) {
                 c = col.withKey(col.key() + "_" + n);
             }
             for (ReportColumn.CsvColumn x : c.csvColumns()) {
                 String name = x.name();
-                for (int n = 2; !seen.add(name); n++) {
+                for (int n = 2; !seen.add(name.toLowerCase(Locale.ROOT)); n++) {
                     name = x.name() + "_" + n;
                 }
                 out.add(new ReportColumn.CsvColumn(name, x.type()));

@@ -56,14 +56,9 @@ class CsvTablesTest {
                 "a table of text rows: header names in the CSV style, text cells neutralised");
     }
 
-    /**
-     * One number per CSV cell: an interval column becomes value, lower and upper columns with the unit in
-     * the header; percentages lose their sign; a not computable number is empty with its reason in the note;
-     * a lab value is its number and its qualifier; numbers (negative ones too) are never neutralised.
-     */
-    @Test
-    void typedCellsAreOneNumberPerCell(@TempDir Path dir) throws Exception {
-        ReportTable t = ReportTable.typed("p", "P", List.of(ReportColumn.text("Type"),
+    /** A table of every kind of column: text, count, interval with note, signed percentage, lab value. */
+    static ReportTable typedTable() {
+        return ReportTable.typed("p", "P", List.of(ReportColumn.text("Type"),
                         ReportColumn.count("Pairs", "pairs"),
                         ReportColumn.interval("RMS CV (95 % CI)", "rms_cv", "%").withNote(),
                         ReportColumn.number("Bias", "bias", "%"),
@@ -73,6 +68,16 @@ class CsvTablesTest {
                                 Cell.signedPercent(-1.5, 2), Cell.assay(AssayValue.detected(0.07).withDecimals(3))),
                         List.of(Cell.text("-field"), Cell.count(5), Cell.notComputed("needs 2 pairs, has 1"),
                                 Cell.blank(), Cell.assay(AssayValue.belowDetection(0.005).withDecimals(3)))), "");
+    }
+
+    /**
+     * One number per CSV cell: an interval column becomes value, lower and upper columns with the unit in
+     * the header; percentages lose their sign; a not computable number is empty with its reason in the note;
+     * a lab value is its number and its qualifier; numbers (negative ones too) are never neutralised.
+     */
+    @Test
+    void typedCellsAreOneNumberPerCell(@TempDir Path dir) throws Exception {
+        ReportTable t = typedTable();
         assertEquals(List.of("pulp duplicate", "1,234", "9.24 % (6.79 % to 11.72 %)", "-1.50 %", "0.070"),
                 t.rows().get(0), "the page shows the display text");
         Path f = dir.resolve("p.csv");

@@ -60,6 +60,9 @@ final class BatchesCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
+        if (reassayCsv != null) {
+            CsvTables.prepare();
+        }
         Cupel cupel = Cupel.open(folder);
         Project project = cupel.project();
         BatchReview review = cupel.batches();

@@ -6,10 +6,8 @@ import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.concurrent.Callable;
 import org.cupel.api.Cupel;
 import org.cupel.assay.Numbers;
@@ -25,6 +23,7 @@ import org.cupel.duplicates.DuplicateSettings;
 import org.cupel.duplicates.Estimate;
 import org.cupel.duplicates.ModelFit;
 import org.cupel.duplicates.OutlierPair;
+import org.cupel.duplicates.PairList;
 import org.cupel.duplicates.PairsFile;
 import org.cupel.duplicates.PrecisionSummary;
 import org.cupel.duplicates.RuleOutcome;
@@ -76,6 +75,14 @@ public final class DuplicatesCommand implements Callable<Integer> {
                     + "(default 10, or duplicates.limitMultipleOfDetection).")
     Double dlMultiple;
 
+    @Option(names = "--flagged-limit", paramLabel = "N", defaultValue = "100",
+            description = "Flagged pairs listed per set in --json and the count of all (default 100).")
+    int flaggedLimit;
+
+    @Option(names = "--flagged-csv", paramLabel = "FILE",
+            description = "Write every flagged pair of every set to FILE (CSV).")
+    Path flaggedCsv;
+
     @Option(names = "--fail-on-qc", description = "Exit with code 1 when a set or a batch fails the acceptance rule.")
     boolean failOnQc;
 
@@ -90,6 +97,14 @@ public final class DuplicatesCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         QcRole only = type == null ? null : parseType(type);
+        if (flaggedLimit < 0) {
+            throw new InputException("--flagged-limit " + flaggedLimit + ": give a count of 0 or more.");
+        }
+        if (flaggedCsv != null && Files.exists(flaggedCsv) && Files.exists(input)
+                && sameFile(flaggedCsv, input)) {
+            throw new InputException("--flagged-csv " + flaggedCsv + ": this is the input file, which is never "
+                    + "overwritten; give another path.");
+        }
         List<DuplicateReport> reports = new ArrayList<>();
         List<DataIssue> issues = new ArrayList<>();
         if (Files.isDirectory(input)) {
@@ -103,7 +118,7 @@ public final class DuplicatesCommand implements Callable<Integer> {
         } else {
             PairsFile.Result r = PairsFile.read(input, only == null ? QcRole.PULP_DUPLICATE : only);
             issues.addAll(r.issues());
-            List<DuplicatePair> pairs = r.pairs().stream().filter(p -> only == null || p.type() == only).toList();
+            List<DuplicatePair> pairs = only == null ? r.pairs() : PairList.of(r.pairs()).ofType(only);
             if (pairs.isEmpty()) {
                 throw new InputException(input + ": no usable pairs" + (only == null ? "" : " of type " + type)
                         + "; check the values and the type column, or drop --type.");
@@ -117,12 +132,15 @@ public final class DuplicatesCommand implements Callable<Integer> {
             err.println("cupel: " + i.message());
         }
         err.flush();
+        if (flaggedCsv != null) {
+            int written = FlaggedPairsCsv.write(reports, flaggedCsv);
+            if (!json) {
+                out.println(written + " flagged pairs written to " + flaggedCsv);
+            }
+        }
         if (json) {
-            Map<String, Object> doc = new LinkedHashMap<>();
-            doc.put("input", input.toString());
-            doc.put("analytes", reports);
-            doc.put("inputIssues", issues.stream().map(DataIssue::message).toList());
-            Json.print(out, doc);
+            Json.print(out, DuplicatesJson.of(input.toString(), reports, issues.stream().map(DataIssue::message).toList(),
+                    flaggedLimit, flaggedCsv == null ? null : flaggedCsv.toString()));
         } else {
             PrintWriter text = terminal.text(out);
             for (DuplicateReport r : reports) {
@@ -135,6 +153,14 @@ public final class DuplicatesCommand implements Callable<Integer> {
         boolean failed = reports.stream().anyMatch(r -> !r.flaggedBatches().isEmpty()
                 || r.sets().stream().anyMatch(s -> s.precision().rule() == RuleOutcome.FAIL));
         return failOnQc && failed ? CupelCommand.QC_FAILED : CupelCommand.OK;
+    }
+
+    private static boolean sameFile(Path a, Path b) {
+        try {
+            return Files.isSameFile(a, b);
+        } catch (IOException e) {
+            return false;
+        }
     }
 
     static QcRole parseType(String text) {

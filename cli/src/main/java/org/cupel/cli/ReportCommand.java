@@ -17,6 +17,7 @@ import org.cupel.api.Cupel;
 import org.cupel.charts.PngWriter;
 import org.cupel.project.BatchSelection;
 import org.cupel.project.InputException;
+import org.cupel.report.CsvTables;
 import org.cupel.report.GenerationTime;
 import org.cupel.report.PdfReport;
 import org.cupel.report.QcAppendix;
@@ -80,6 +81,7 @@ public final class ReportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
+        CsvTables.prepare();
         BatchSelection selection = new BatchSelection(date("--since", since), date("--until", until),
                 new LinkedHashSet<>(batches));
         QcReport report = appendix(selection);

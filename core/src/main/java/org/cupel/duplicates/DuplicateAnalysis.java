@@ -2,11 +2,11 @@ package org.cupel.duplicates;
 
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Comparator;
 import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.ToDoubleFunction;
 import org.cupel.assay.LimitComparison;
 import org.cupel.assay.QcRole;
 
@@ -14,6 +14,11 @@ import org.cupel.assay.QcRole;
 public final class DuplicateAnalysis {
     private static final QcRole[] TYPE_ORDER = {QcRole.FIELD_DUPLICATE, QcRole.COARSE_DUPLICATE,
         QcRole.PULP_DUPLICATE, QcRole.LAB_REPEAT, QcRole.UMPIRE};
+
+    private static final List<OutlierPair.Test> BOTH = List.of(OutlierPair.Test.ABOVE_99_PERCENT_LINE,
+            OutlierPair.Test.OUTSIDE_HARD_LIMIT);
+    private static final List<OutlierPair.Test> LINE_ONLY = List.of(OutlierPair.Test.ABOVE_99_PERCENT_LINE);
+    private static final List<OutlierPair.Test> HARD_ONLY = List.of(OutlierPair.Test.OUTSIDE_HARD_LIMIT);
 
     private DuplicateAnalysis() {
     }
@@ -34,15 +39,17 @@ public final class DuplicateAnalysis {
     public static DuplicateReport run(String analyte, String unit, List<DuplicatePair> pairs,
                                       List<OrphanDuplicate> orphans, double[] grades, DuplicateSettings settings,
                                       String detectionLimits) {
-        Map<QcRole, List<DuplicatePair>> byType = new EnumMap<>(QcRole.class);
-        for (DuplicatePair p : pairs) {
-            byType.computeIfAbsent(p.type(), k -> new ArrayList<>()).add(p);
+        PairList all = PairList.of(pairs);
+        Map<QcRole, Group> byType = new EnumMap<>(QcRole.class);
+        for (int i = 0; i < all.size(); i++) {
+            byType.computeIfAbsent(all.type(i), k -> new Group(k.name())).add(i);
         }
         List<DuplicateSetResult> sets = new ArrayList<>();
         for (QcRole type : TYPE_ORDER) {
-            List<DuplicatePair> ofType = byType.get(type);
+            Group ofType = byType.get(type);
             if (ofType != null) {
-                sets.add(analyseSet(analyte, unit, type, ofType, grades, settings));
+                PairList set = ofType.size == all.size() ? all : all.select(ofType.indices());
+                sets.add(analyseSet(analyte, unit, type, set, grades, settings));
             }
         }
         return new DuplicateReport(analyte, unit, settings, sets, orphans, detectionLimits);
@@ -55,32 +62,34 @@ public final class DuplicateAnalysis {
         ScreenedPairs.Members abs = screened.absolute();
         ScreenedPairs.Members rel = screened.relative();
         PrecisionSummary precision = PrecisionMeasures.summarise(type, screened, settings);
-        PrecisionModelResult model = ThompsonHowarth.fit(abs.a(), abs.b(), grades, settings);
-        BiasResult bias = BiasAnalysis.compare(type, rel.a(), rel.b());
+        PrecisionModelResult model = ThompsonHowarth.fit(abs.sharedA(), abs.sharedB(), grades, settings);
+        BiasResult bias = BiasAnalysis.compare(type, rel.sharedA(), rel.sharedB());
         Flagged outliers = outliers(screened, model, settings.hardLimit(type));
         return new DuplicateSetResult(analyte, unit, type, precision, model, bias, outliers.ranked(),
                 outliers.belowThreshold(),
-                new DuplicateSetResult.PairValues(abs.a(), abs.b(), rel.a(), rel.b(), outliers.flags(abs),
+                new DuplicateSetResult.PairValues(abs, rel, outliers.flags(abs),
                         outliers.flags(rel)),
-                batches(type, pairs, decisions, precision.rmsCv(), settings));
+                batches(type, pairs, decisions, screened, precision.rmsCv(), settings));
     }
 
     /** Per-batch precision, in the order batches first appear; each batch's pairs keep the set's screening. */
     private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, PairScreen.Decisions decisions,
-                                                Estimate setRmsCv, DuplicateSettings settings) {
-        Map<String, BatchPairs> byBatch = new LinkedHashMap<>();
-        BatchPairs last = null;
-        for (int i = 0; i < pairs.size(); i++) {
-            String batch = pairs.get(i).batch();
+                                                ScreenedPairs set, Estimate setRmsCv, DuplicateSettings settings) {
+        Map<String, Group> byBatch = new LinkedHashMap<>();
+        Group last = null;
+        PairList list = PairList.of(pairs);
+        for (int i = 0; i < list.size(); i++) {
+            String batch = list.batch(i);
             // A batch's pairs mostly come together: the last batch is compared before hashing.
-            if (last == null || !last.batch.equals(batch)) {
-                last = byBatch.computeIfAbsent(batch, BatchPairs::new);
+            if (last == null || !last.key.equals(batch)) {
+                last = byBatch.computeIfAbsent(batch, Group::new);
             }
             last.add(i);
         }
         List<BatchPrecision> out = new ArrayList<>();
-        for (Map.Entry<String, BatchPairs> e : byBatch.entrySet()) {
-            ScreenedPairs batch = decisions.of(e.getValue().indices());
+        for (Map.Entry<String, Group> e : byBatch.entrySet()) {
+            // One batch holding the whole set (a pairs file without batches) is the set, screened already.
+            ScreenedPairs batch = byBatch.size() == 1 ? set : decisions.of(e.getValue().indices());
             BatchRuleTest rule = PrecisionMeasures.batchRule(type, batch, settings);
             PrecisionSummary p = PrecisionMeasures.summariseBatch(type, batch, settings, rule);
             out.add(new BatchPrecision(e.getKey(), p, rule, BatchDispersion.test(p.rmsCv(), setRmsCv),
@@ -89,14 +98,14 @@ public final class DuplicateAnalysis {
         return out;
     }
 
-    /** The indices in the set of one batch's pairs, ascending. */
-    private static final class BatchPairs {
-        private final String batch;
+    /** The indices of one batch's (or one type's) pairs, ascending. */
+    private static final class Group {
+        private final String key;
         private int[] indices = new int[8];
         private int size;
 
-        BatchPairs(String batch) {
-            this.batch = batch;
+        Group(String key) {
+            this.key = key;
         }
 
         void add(int index) {
@@ -117,54 +126,87 @@ public final class DuplicateAnalysis {
      * in relative measures come in {@code ranked}, largest HARD first. Pairs whose mean is below the
      * detection-limit multiple are not judged by HARD (near the limit a relative difference says little), so
      * when the 99 % line flags one it goes to {@code belowThreshold}, largest |d| first.
+     *
+     * @param tests per pair of the set, the tests it failed as bits ({@link #ABOVE_LINE}, {@link #BEYOND_HARD})
      */
-    private record Flagged(List<OutlierPair> ranked, List<OutlierPair> belowThreshold,
-                           Map<Integer, List<OutlierPair.Test>> byRow) {
+    private record Flagged(List<OutlierPair> ranked, List<OutlierPair> belowThreshold, byte[] tests) {
+        static final byte ABOVE_LINE = 1;
+        static final byte BEYOND_HARD = 2;
 
         /** The flags of {@code members}' pairs, in their order: the charts mark what the tables list. */
         DuplicateSetResult.PairFlags flags(ScreenedPairs.Members members) {
-            int[] rows = members.rows();
+            int[] rows = members.sharedRows();
             boolean[] hard = new boolean[rows.length];
             boolean[] line = new boolean[rows.length];
             for (int i = 0; i < rows.length; i++) {
-                List<OutlierPair.Test> tests = byRow.getOrDefault(rows[i], List.of());
-                hard[i] = tests.contains(OutlierPair.Test.OUTSIDE_HARD_LIMIT);
-                line[i] = tests.contains(OutlierPair.Test.ABOVE_99_PERCENT_LINE);
+                hard[i] = (tests[rows[i]] & BEYOND_HARD) != 0;
+                line[i] = (tests[rows[i]] & ABOVE_LINE) != 0;
             }
             return new DuplicateSetResult.PairFlags(hard, line);
         }
     }
 
     private static Flagged outliers(ScreenedPairs set, PrecisionModelResult model, double hardLimit) {
-        Map<Integer, List<OutlierPair.Test>> flagged = new java.util.TreeMap<>();
+        byte[] tests = new byte[set.pairs().size()];
         ScreenedPairs.Members abs = set.absolute();
         if (model.available()) {
             boolean[] above = ThompsonHowarth.above(NormalDifferenceConstants.P99, model.thompsonHowarth().model(),
-                    abs.a(), abs.b());
-            int[] rows = abs.rows();
+                    abs.sharedA(), abs.sharedB());
+            int[] rows = abs.sharedRows();
             for (int i = 0; i < rows.length; i++) {
                 if (above[i]) {
-                    flagged.computeIfAbsent(rows[i], k -> new ArrayList<>()).add(OutlierPair.Test.ABOVE_99_PERCENT_LINE);
+                    tests[rows[i]] |= Flagged.ABOVE_LINE;
                 }
             }
         }
         ScreenedPairs.Members rel = set.relative();
-        double[] a = rel.a();
-        double[] b = rel.b();
-        int[] rows = rel.rows();
-        boolean[] relative = new boolean[set.pairs().size()];
+        double[] a = rel.sharedA();
+        double[] b = rel.sharedB();
+        int[] rows = rel.sharedRows();
+        boolean[] relative = new boolean[tests.length];
         for (int i = 0; i < rows.length; i++) {
             relative[rows[i]] = true;
             if (LimitComparison.above(PairMeasures.hard(a[i], b[i]), hardLimit)) {
-                flagged.computeIfAbsent(rows[i], k -> new ArrayList<>()).add(OutlierPair.Test.OUTSIDE_HARD_LIMIT);
+                tests[rows[i]] |= Flagged.BEYOND_HARD;
             }
         }
         List<OutlierPair> ranked = new ArrayList<>();
         List<OutlierPair> low = new ArrayList<>();
-        flagged.forEach((row, tests) -> (relative[row] ? ranked : low).add(outlier(set.pairs().get(row), tests)));
-        ranked.sort(Comparator.comparingDouble(OutlierPair::hard).reversed());
-        low.sort(Comparator.comparingDouble(OutlierPair::absDifference).reversed());
-        return new Flagged(ranked, low, flagged);
+        for (int row = 0; row < tests.length; row++) {
+            if (tests[row] != 0) {
+                (relative[row] ? ranked : low).add(outlier(set.pairs().get(row), testsOf(tests[row])));
+            }
+        }
+        return new Flagged(descending(ranked, OutlierPair::hard), descending(low, OutlierPair::absDifference), tests);
+    }
+
+    /**
+     * {@code list} ordered by {@code key}, largest first, ties in list order (as a stable sort by the reversed
+     * key): a sort of the primitive keys with the list positions as tie-breaker, since a comparator sort of a
+     * hundred thousand flagged pairs cost more than the rest of their analysis.
+     */
+    private static List<OutlierPair> descending(List<OutlierPair> list, ToDoubleFunction<OutlierPair> key) {
+        int n = list.size();
+        double[] negated = new double[n];
+        double[] position = new double[n];
+        for (int i = 0; i < n; i++) {
+            negated[i] = -key.applyAsDouble(list.get(i));
+            position[i] = i;
+        }
+        PairGroups.sortByMeanThenDiff(negated, position);
+        List<OutlierPair> out = new ArrayList<>(n);
+        for (double p : position) {
+            out.add(list.get((int) p));
+        }
+        return out;
+    }
+
+    /** The tests in the order they were listed before: the 99 % line first, then the HARD limit. */
+    private static List<OutlierPair.Test> testsOf(byte bits) {
+        if (bits == (Flagged.ABOVE_LINE | Flagged.BEYOND_HARD)) {
+            return BOTH;
+        }
+        return bits == Flagged.ABOVE_LINE ? LINE_ONLY : HARD_ONLY;
     }
 
     private static OutlierPair outlier(DuplicatePair p, List<OutlierPair.Test> tests) {

@@ -38,36 +38,56 @@ public record DuplicateSetResult(String analyte, String unit, QcRole type, Preci
      * @param absoluteFlags per pair of {@code absoluteA}/{@code absoluteB}
      * @param relativeFlags per pair of {@code relativeA}/{@code relativeB}
      */
-    public record PairValues(double[] absoluteA, double[] absoluteB, double[] relativeA, double[] relativeB,
-                             PairFlags absoluteFlags, PairFlags relativeFlags) {
-        public PairValues {
-            absoluteA = absoluteA.clone();
-            absoluteB = absoluteB.clone();
-            relativeA = relativeA.clone();
-            relativeB = relativeB.clone();
+    public static final class PairValues {
+        private final double[] absoluteA;
+        private final double[] absoluteB;
+        private final double[] relativeA;
+        private final double[] relativeB;
+        private final PairFlags absoluteFlags;
+        private final PairFlags relativeFlags;
+
+        public PairValues(double[] absoluteA, double[] absoluteB, double[] relativeA, double[] relativeB,
+                          PairFlags absoluteFlags, PairFlags relativeFlags) {
+            this(ScreenedPairs.Members.copy(absoluteA, absoluteB), ScreenedPairs.Members.copy(relativeA, relativeB),
+                    absoluteFlags, relativeFlags);
+        }
+
+        /** Shares the screened members' arrays (immutable; a million pairs are tens of MB). */
+        PairValues(ScreenedPairs.Members absolute, ScreenedPairs.Members relative, PairFlags absoluteFlags,
+                   PairFlags relativeFlags) {
+            this.absoluteA = absolute.sharedA();
+            this.absoluteB = absolute.sharedB();
+            this.relativeA = relative.sharedA();
+            this.relativeB = relative.sharedB();
+            this.absoluteFlags = absoluteFlags;
+            this.relativeFlags = relativeFlags;
             if (absoluteFlags.size() != absoluteA.length || relativeFlags.size() != relativeA.length) {
                 throw new IllegalArgumentException("one flag per pair expected");
             }
         }
 
-        @Override
         public double[] absoluteA() {
             return absoluteA.clone();
         }
 
-        @Override
         public double[] absoluteB() {
             return absoluteB.clone();
         }
 
-        @Override
         public double[] relativeA() {
             return relativeA.clone();
         }
 
-        @Override
         public double[] relativeB() {
             return relativeB.clone();
+        }
+
+        public PairFlags absoluteFlags() {
+            return absoluteFlags;
+        }
+
+        public PairFlags relativeFlags() {
+            return relativeFlags;
         }
     }
 

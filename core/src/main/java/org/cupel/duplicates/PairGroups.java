@@ -86,7 +86,7 @@ public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, 
     /**
      * Sorts pairs by mean, ties broken by |d|: the canonical order of the multiset of pairs (pairs with equal mean
      * and |d| are interchangeable, so only the sorted values matter). A merge sort of the values themselves (no
-     * index indirection, no boxing).
+     * index indirection, no boxing); it orders any two parallel arrays by the first, then the second.
      */
     static void sortByMeanThenDiff(double[] means, double[] absDiff) {
         int n = means.length;

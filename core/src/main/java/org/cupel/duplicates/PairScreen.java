@@ -1,6 +1,5 @@
 package org.cupel.duplicates;
 
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.List;
@@ -30,32 +29,34 @@ final class PairScreen {
      * Judges every pair of a set once; the set's screened pairs and those of any subset (a batch) are then
      * assembled from the decisions without reading the pairs' values again.
      */
-    public static Decisions decide(List<DuplicatePair> pairs, DuplicateSettings settings) {
+    public static Decisions decide(List<DuplicatePair> list, DuplicateSettings settings) {
+        PairList pairs = PairList.of(list);
         int n = pairs.size();
         Decisions d = new Decisions(pairs, n);
         for (int i = 0; i < n; i++) {
-            DuplicatePair p = pairs.get(i);
-            ExclusionReason hard = unusable(p.original(), p.duplicate());
+            AssayValue original = pairs.original(i);
+            AssayValue duplicate = pairs.duplicate(i);
+            ExclusionReason hard = unusable(original, duplicate);
             if (hard != null) {
                 d.absReason[i] = (byte) hard.ordinal();
                 d.relReason[i] = (byte) hard.ordinal();
                 continue;
             }
-            boolean censored = p.original().qualifier() == Qualifier.BELOW_DETECTION
-                    || p.duplicate().qualifier() == Qualifier.BELOW_DETECTION;
+            boolean censored = original.qualifier() == Qualifier.BELOW_DETECTION
+                    || duplicate.qualifier() == Qualifier.BELOW_DETECTION;
             if (censored) {
                 d.absReason[i] = (byte) ExclusionReason.BELOW_DETECTION.ordinal();
                 if (!settings.censoredAtHalfLimit()) {
                     d.relReason[i] = (byte) ExclusionReason.BELOW_DETECTION.ordinal();
                     continue;
                 }
-            } else {
-                d.absA[i] = p.original().value();
-                d.absB[i] = p.duplicate().value();
             }
-            double a = ratioValue(p.original());
-            double b = ratioValue(p.duplicate());
-            double limit = pairLimit(p.original(), p.duplicate());
+            // A pair used in absolute measures has no censored member, so its values there are these too.
+            double a = ratioValue(original);
+            double b = ratioValue(duplicate);
+            d.a[i] = a;
+            d.b[i] = b;
+            double limit = pairLimit(original, duplicate);
             if (Double.isNaN(limit)) {
                 d.flags[i] |= Decisions.LIMIT_UNKNOWN;
             } else if (PairMeasures.mean(a, b) < settings.limitMultipleOfDetection() * limit) {
@@ -65,8 +66,6 @@ final class PairScreen {
             if (censored) {
                 d.flags[i] |= Decisions.SUBSTITUTED;
             }
-            d.relA[i] = a;
-            d.relB[i] = b;
         }
         return d;
     }
@@ -79,26 +78,23 @@ final class PairScreen {
         private static final byte USED = -1;
         private static final byte LIMIT_UNKNOWN = 1;
         private static final byte SUBSTITUTED = 2;
-        private final List<DuplicatePair> pairs;
+        private final PairList pairs;
         private final byte[] absReason;
         private final byte[] relReason;
         private final byte[] flags;
-        private final double[] absA;
-        private final double[] absB;
-        private final double[] relA;
-        private final double[] relB;
+        /** The values a used pair enters its measures with (a below-detection member at half its limit). */
+        private final double[] a;
+        private final double[] b;
 
-        private Decisions(List<DuplicatePair> pairs, int n) {
+        private Decisions(PairList pairs, int n) {
             this.pairs = pairs;
             absReason = new byte[n];
             relReason = new byte[n];
             Arrays.fill(absReason, USED);
             Arrays.fill(relReason, USED);
             flags = new byte[n];
-            absA = new double[n];
-            absB = new double[n];
-            relA = new double[n];
-            relB = new double[n];
+            a = new double[n];
+            b = new double[n];
         }
 
         /** The screened pairs of the whole set. */
@@ -115,23 +111,30 @@ final class PairScreen {
          * the result index the subset's pairs in that order.
          */
         public ScreenedPairs of(int[] indices) {
-            List<DuplicatePair> subset = new ArrayList<>(indices.length);
-            for (int i : indices) {
-                subset.add(pairs.get(i));
-            }
-            return of(subset, indices);
+            return of(pairs.select(indices), indices);
         }
 
         private ScreenedPairs of(List<DuplicatePair> subset, int[] indices) {
             int n = indices.length;
-            int[] absRows = new int[n];
-            int[] relRows = new int[n];
-            double[] a1 = new double[n];
-            double[] b1 = new double[n];
-            double[] a2 = new double[n];
-            double[] b2 = new double[n];
             int na = 0;
             int nr = 0;
+            int both = 0;
+            for (int i : indices) {
+                na += absReason[i] == USED ? 1 : 0;
+                nr += relReason[i] == USED ? 1 : 0;
+                both += absReason[i] == USED && relReason[i] == USED ? 1 : 0;
+            }
+            // Usually every pair of absolute measures is also one of relative measures (no limit known, or all
+            // above the multiple): then both are the same pairs with the same values, held once.
+            boolean same = na == both && nr == both;
+            int[] absRows = new int[na];
+            int[] relRows = same ? absRows : new int[nr];
+            double[] a1 = new double[na];
+            double[] b1 = new double[na];
+            double[] a2 = same ? a1 : new double[nr];
+            double[] b2 = same ? b1 : new double[nr];
+            na = 0;
+            nr = 0;
             int limitUnknown = 0;
             int substituted = 0;
             int[] exAbs = new int[REASONS.length];
@@ -140,8 +143,8 @@ final class PairScreen {
                 int i = indices[k];
                 if (absReason[i] == USED) {
                     absRows[na] = k;
-                    a1[na] = absA[i];
-                    b1[na] = absB[i];
+                    a1[na] = a[i];
+                    b1[na] = b[i];
                     na++;
                 } else {
                     exAbs[absReason[i]]++;
@@ -157,16 +160,14 @@ final class PairScreen {
                     substituted++;
                 }
                 relRows[nr] = k;
-                a2[nr] = relA[i];
-                b2[nr] = relB[i];
+                a2[nr] = a[i];
+                b2[nr] = b[i];
                 nr++;
             }
-            return new ScreenedPairs(subset,
-                    new ScreenedPairs.Members(Arrays.copyOf(absRows, na), Arrays.copyOf(a1, na),
-                            Arrays.copyOf(b1, na)),
-                    new ScreenedPairs.Members(Arrays.copyOf(relRows, nr), Arrays.copyOf(a2, nr),
-                            Arrays.copyOf(b2, nr)),
-                    counts(exAbs), counts(exRel), limitUnknown, substituted);
+            ScreenedPairs.Members absolute = new ScreenedPairs.Members(absRows, a1, b1, true);
+            ScreenedPairs.Members relative = same ? absolute : new ScreenedPairs.Members(relRows, a2, b2, true);
+            return new ScreenedPairs(subset, absolute, relative, counts(exAbs), counts(exRel), limitUnknown,
+                    substituted);
         }
     }
 

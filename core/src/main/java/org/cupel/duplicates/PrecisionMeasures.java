@@ -17,7 +17,7 @@ final class PrecisionMeasures {
     /** The summary of a set, its RMS CV with a 95 % interval; the rule is the plain share within the limit. */
     public static PrecisionSummary summarise(QcRole type, ScreenedPairs set, DuplicateSettings settings) {
         ScreenedPairs.Members rel = set.relative();
-        return summary(type, set, settings, rmsCv(rel.a(), rel.b(), settings), within -> !within.available()
+        return summary(type, set, settings, rmsCv(rel.sharedA(), rel.sharedB(), settings), within -> !within.available()
                 ? RuleOutcome.NOT_JUDGED : LimitComparison.atLeast(within.value(), settings.acceptancePercent())
                 ? RuleOutcome.PASS : RuleOutcome.FAIL);
     }
@@ -31,13 +31,13 @@ final class PrecisionMeasures {
     public static PrecisionSummary summariseBatch(QcRole type, ScreenedPairs batch, DuplicateSettings settings,
                                                   BatchRuleTest rule) {
         ScreenedPairs.Members rel = batch.relative();
-        return summary(type, batch, settings, rmsCvPoint(rel.a(), rel.b()), within -> rule.outcome());
+        return summary(type, batch, settings, rmsCvPoint(rel.sharedA(), rel.sharedB()), within -> rule.outcome());
     }
 
     /** The acceptance rule of one batch as a binomial test ({@link BatchRuleTest}). */
     public static BatchRuleTest batchRule(QcRole type, ScreenedPairs batch, DuplicateSettings settings) {
         ScreenedPairs.Members rel = batch.relative();
-        return BatchRuleTest.of(countWithin(rel.a(), rel.b(), settings.hardLimit(type)), rel.size(),
+        return BatchRuleTest.of(countWithin(rel.sharedA(), rel.sharedB(), settings.hardLimit(type)), rel.size(),
                 settings.acceptancePercent(), settings.batchRuleAlpha());
     }
 
@@ -45,12 +45,12 @@ final class PrecisionMeasures {
                                             Estimate rmsCv, Function<Estimate, RuleOutcome> ruleOf) {
         ScreenedPairs.Members rel = set.relative();
         ScreenedPairs.Members abs = set.absolute();
-        double[] ra = rel.a();
-        double[] rb = rel.b();
+        double[] ra = rel.sharedA();
+        double[] rb = rel.sharedB();
         double limit = settings.hardLimit(type);
         Estimate within = percentWithin(ra, rb, limit);
         RuleOutcome rule = ruleOf.apply(within);
-        Estimate sr = repeatabilitySd(abs.a(), abs.b());
+        Estimate sr = repeatabilitySd(abs.sharedA(), abs.sharedB());
         Estimate r = sr.available() ? Estimate.point(REPEATABILITY_FACTOR * sr.value(), sr.n()) : sr;
         return new PrecisionSummary(type, set.pairs().size(), abs.size(), rel.size(), set.excludedAbsolute(),
                 set.excludedRelative(), set.limitUnknown(), settings.limitMultipleOfDetection(), limit,

@@ -26,41 +26,70 @@ record ScreenedPairs(List<DuplicatePair> pairs, Members absolute, Members relati
                             int censoredSubstituted) {
 
     public ScreenedPairs {
-        pairs = List.copyOf(pairs);
+        pairs = PairList.of(pairs);
         excludedAbsolute = Collections.unmodifiableMap(new EnumMap<>(excludedAbsolute.isEmpty()
                 ? new EnumMap<>(ExclusionReason.class) : excludedAbsolute));
         excludedRelative = Collections.unmodifiableMap(new EnumMap<>(excludedRelative.isEmpty()
                 ? new EnumMap<>(ExclusionReason.class) : excludedRelative));
     }
 
-    /** Values of the used pairs: {@code a} original, {@code b} duplicate, {@code rows} into the pair list. */
-    public record Members(int[] rows, double[] a, double[] b) {
-        public Members {
+    /**
+     * Values of the used pairs: {@code a} original, {@code b} duplicate, {@code rows} into the pair list. Immutable:
+     * the public accessors return copies; the screening hands its arrays over without copying them.
+     */
+    public static final class Members {
+        private final int[] rows;
+        private final double[] a;
+        private final double[] b;
+
+        public Members(int[] rows, double[] a, double[] b) {
+            this(rows.clone(), a.clone(), b.clone(), true);
+        }
+
+        /** Takes the arrays over (the caller keeps no reference). */
+        Members(int[] rows, double[] a, double[] b, boolean owned) {
             if (rows.length != a.length || a.length != b.length) {
                 throw new IllegalArgumentException("rows, a and b must have the same length");
             }
-            rows = rows.clone();
-            a = a.clone();
-            b = b.clone();
+            this.rows = rows;
+            this.a = a;
+            this.b = b;
+        }
+
+        /** Members without rows (an index per value), copied from {@code a} and {@code b}. */
+        static Members copy(double[] a, double[] b) {
+            return new Members(new int[a.length], a.clone(), b.clone(), true);
         }
 
         public int size() {
             return rows.length;
         }
 
-        @Override
         public int[] rows() {
             return rows.clone();
         }
 
-        @Override
         public double[] a() {
             return a.clone();
         }
 
-        @Override
         public double[] b() {
             return b.clone();
+        }
+
+        /** The originals themselves, not a copy: for the kernels of this package, which only read them. */
+        double[] sharedA() {
+            return a;
+        }
+
+        /** The duplicates themselves, not a copy (see {@link #sharedA}). */
+        double[] sharedB() {
+            return b;
+        }
+
+        /** The rows themselves, not a copy (see {@link #sharedA}). */
+        int[] sharedRows() {
+            return rows;
         }
 
         @Override

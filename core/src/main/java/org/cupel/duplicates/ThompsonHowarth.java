@@ -63,8 +63,9 @@ final class ThompsonHowarth {
             m[i] = PairMeasures.mean(a[i], b[i]);
             d[i] = PairMeasures.absDifference(a[i], b[i]);
         }
-        double[] sm = m.clone();
-        double[] sd = d.clone();
+        // Sorted in place: the control-line counts below do not depend on the order of the pairs.
+        double[] sm = m;
+        double[] sd = d;
         PairGroups.sortByMean(sm, sd);
         PairGroups groups = PairGroups.ofSorted(sm, sd, settings.thGroupSize());
         double[] means = groups.means();

@@ -323,7 +323,7 @@ public final class ValueParser {
     }
 
     /** The stated limit when it is a usable detection limit, else NaN. */
-    static double validLimit(double limit) {
+    public static double validLimit(double limit) {
         return limit > 0 && Double.isFinite(limit) ? limit : Double.NaN;
     }
 

@@ -67,6 +67,27 @@ class BatchRuleTestTest {
     }
 
     @Test
+    void largeBatchesMatchScipyBinomtest() throws Exception {
+        // 70 (n, k, p0) cases, n = 1,001 to 1,000,000, k from 1,000 (far lower tail) through the mode to n,
+        // p0 = 0.9, 0.8 (testdata/reference/duplicates/batch_rule_binomial_large.py, scipy 1.10.1). Above 1,000
+        // terms the sum stops where the remaining terms cannot change it, from k down below the mode and as
+        // 1 − P(X > k) from the mode up. Tolerance 1e-10 relative plus 1e-15 absolute: near the mode of n = 10⁶
+        // the terms shrink by a ratio close to 1, so up to ~10⁵ terms are summed (relative rounding below
+        // 10⁵ × 1.1e-16 ≈ 1e-11, each term a few ulps); the complement 1 − P(X > k) has an absolute error of a
+        // few ulps of 1; scipy's value comes from Boost's incomplete beta, to near double precision.
+        List<String> lines = Files.readAllLines(ReferenceData.dir().resolve("batch_rule_binomial_large.csv"));
+        for (String line : lines.subList(1, lines.size())) {
+            String[] c = line.split(",");
+            int n = Integer.parseInt(c[0]);
+            int k = Integer.parseInt(c[1]);
+            double p0 = Double.parseDouble(c[2]);
+            double expected = Double.parseDouble(c[3]);
+            double got = BatchRuleTest.of(k, n, 100 * p0, 0.05).pValue();
+            assertEquals(expected, got, 1e-10 * expected + 1e-15, "n " + n + ", k " + k + ", p0 " + p0);
+        }
+    }
+
+    @Test
     void outcomesAtTheEdgesForTheDefaultRule() {
         // p0 = 0.9, α = 0.05. By hand: P(X ≤ 0 | 1) = 0.1; P(X ≤ 0 | 2) = 0.01; P(X ≤ 1 | 2) = 1 − 0.81 = 0.19;
         // P(X ≤ 2 | 5) = 0.00856; P(X ≤ 3 | 5) = 0.08146; P(X ≤ 4 | 5) = 1 − 0.9^5 = 0.40951.

@@ -1,5 +1,6 @@
 package org.cupel.duplicates;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.List;
@@ -43,5 +44,17 @@ class PairScreenTest {
         // mean 0.055 is above 5 x 0.01, so that pair comes back.
         assertEquals(3, s.relative().size());
         assertEquals(null, s.excludedRelative().get(ExclusionReason.BELOW_LIMIT_MULTIPLE));
+    }
+
+    @Test
+    void aPairBelowTheMultipleKeepsItsValuesInAbsoluteMeasures() {
+        // Pairs 0, 1 and 5 (1.0/1.1, 0.05/0.06, 3.0/3.3) have two detected positive values; pair 1's mean 0.055 is
+        // below 10 × 0.01, so it is out of the relative measures only, and enters the absolute ones as 0.05/0.06.
+        ScreenedPairs s = PairScreen.screen(PAIRS, DuplicateSettings.DEFAULTS);
+        assertArrayEquals(new int[] {0, 1, 5}, s.absolute().rows());
+        assertArrayEquals(new double[] {1.0, 0.05, 3.0}, s.absolute().a());
+        assertArrayEquals(new double[] {1.1, 0.06, 3.3}, s.absolute().b());
+        assertArrayEquals(new int[] {0, 5}, s.relative().rows());
+        assertArrayEquals(new double[] {1.0, 3.0}, s.relative().a());
     }
 }

@@ -10,7 +10,6 @@ import static org.junit.jupiter.api.Assumptions.assumeFalse;
 import java.util.stream.Collectors;
 import java.util.stream.IntStream;
 import org.junit.jupiter.api.Test;
-import org.opentest4j.AssertionFailedError;
 
 class GoldenTextTest {
 
@@ -71,7 +70,7 @@ class GoldenTextTest {
     void aMismatchFailsNamingTheFileAndHowToRewriteIt() {
         // A rewriting run would write this file instead of failing.
         assumeFalse(Boolean.getBoolean(GoldenText.UPDATE_PROPERTY));
-        AssertionFailedError e = assertThrows(AssertionFailedError.class,
+        AssertionError e = assertThrows(AssertionError.class,
                 () -> GoldenText.assertMatches("no-such-golden.txt", "x\n"));
         assertTrue(e.getMessage().contains("no-such-golden.txt") && e.getMessage().contains("cupel.golden.update"),
                 e.getMessage());
