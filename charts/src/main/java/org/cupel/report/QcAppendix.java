@@ -9,6 +9,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.function.Supplier;
+import org.cupel.api.Cupel;
 import org.cupel.control.BatchReview;
 import org.cupel.project.Project;
 import org.cupel.project.ProjectSummary;
@@ -26,39 +27,36 @@ import org.cupel.report.recovery.TestworkSection;
  * The one place that lists the sections of the QC appendix, in the order a reviewer reads them: the summary
  * (the verdict in plain words), scope and insertion rates, batch verdicts and the re-assay list, data exceptions and the detection-limit
  * treatment, CRMs, blanks, duplicates, metallurgical testwork (when given), methods and references,
- * cautions. The core analyses compute every result; each section builder only formats them.
+ * cautions. The core analyses ({@link Cupel}) compute every result; each section builder only formats them.
  */
 public final class QcAppendix {
     private QcAppendix() {
     }
 
     /**
-     * The report for {@code project}, which is already narrowed to the batches under review.
+     * The report of the project of {@code cupel}, which is already narrowed to the batches under review
+     * ({@link Cupel#select}). The analyses not yet computed are computed side by side first
+     * ({@link Cupel#analyseAll()}).
      *
-     * @param testwork the recovery results of the project's testwork, when it has any
      * @param selection the batches covered, in words, for the title page
      * @param generated generation time shown in the HTML and PDF
      */
-    public static QcReport build(Project project, Optional<RecoveryResult> testwork, String selection,
-                                 Instant generated) {
-        return build(project, AppendixAnalyses.of(project), testwork, selection, generated);
-    }
-
-    /** The report of {@code project} from analyses already computed (so a caller can time them). */
-    public static QcReport build(Project project, AppendixAnalyses analyses, Optional<RecoveryResult> testwork,
-                                 String selection, Instant generated) {
-        BatchReview batches = analyses.batches();
+    public static QcReport build(Cupel cupel, String selection, Instant generated) {
+        cupel.analyseAll();
+        Project project = cupel.project();
+        BatchReview batches = cupel.batches();
+        Optional<RecoveryResult> testwork = cupel.recovery();
         List<Supplier<ReportSection>> builders = new ArrayList<>();
         builders.add(() -> ScopeSection.build(ProjectSummary.of(project), selection));
         builders.add(() -> InsertionRateSection.build(batches.insertion()));
         builders.add(() -> VerdictSection.build(batches.groups(), batches.reassay(), batches.resubmit()));
         builders.add(() -> DataExceptionsSection.build(project));
-        builders.add(() -> DetectionLimitSection.build(analyses.censoring()));
-        builders.add(() -> CrmSection.of(analyses.crms()));
-        builders.add(() -> BlankSection.build(batches.blanks(), project.config()));
-        builders.add(() -> DuplicatesSection.build(analyses.duplicates(), path -> project.config().isUserSet(path)));
+        builders.add(() -> DetectionLimitSection.build(cupel.censored()));
+        builders.add(() -> CrmSection.of(cupel.crm()));
+        builders.add(() -> BlankSection.build(cupel.blanks(), project.config()));
+        builders.add(() -> DuplicatesSection.build(cupel.duplicates(), path -> project.config().isUserSet(path)));
         testwork.ifPresent(r -> builders.add(() -> TestworkSection.build(r)));
-        builders.add(0, () -> SummarySection.build(batches, analyses.crms(), analyses.duplicates(), testwork));
+        builders.add(0, () -> SummarySection.build(batches, cupel.crm(), cupel.duplicates(), testwork));
         List<ReportSection> sections = buildAll(builders);
         ReportSection cautions = CautionsSection.build();
         List<ReportSection> citing = new ArrayList<>(sections);
@@ -66,6 +64,16 @@ public final class QcAppendix {
         sections.add(MethodsSection.build(citing, project.config()));
         sections.add(cautions);
         return new QcReport(project.name(), selection, generated, sections);
+    }
+
+    /**
+     * The report of a project built in memory or read by other means ({@link Cupel#of(Project, Optional)}).
+     *
+     * @param testwork the recovery results of the project's testwork, when it has any
+     */
+    public static QcReport build(Project project, Optional<RecoveryResult> testwork, String selection,
+                                 Instant generated) {
+        return build(Cupel.of(project, testwork), selection, generated);
     }
 
     /**
@@ -92,8 +100,8 @@ public final class QcAppendix {
         }
     }
 
-    /** The report of a project without testwork. */
+    /** The report of a project built in memory or read by other means, without testwork. */
     public static QcReport build(Project project, String selection, Instant generated) {
-        return build(project, Optional.empty(), selection, generated);
+        return build(Cupel.of(project), selection, generated);
     }
 }

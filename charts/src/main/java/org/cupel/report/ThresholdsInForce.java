@@ -13,6 +13,7 @@ import org.cupel.control.crm.CrmSettings;
 import org.cupel.control.crm.RuleAction;
 import org.cupel.duplicates.DuplicateSettings;
 import org.cupel.recovery.RecoverySettings;
+import org.cupel.settings.ProjectSettings;
 
 /**
  * The table "Thresholds in force" of Methods and references: every decision threshold the analyses apply,
@@ -32,13 +33,14 @@ final class ThresholdsInForce {
 
     static ReportTable table(CupelConfig config) {
         ThresholdsInForce t = new ThresholdsInForce(config);
-        t.crm(config.section("crm", CrmSettings.class, CrmSettings.DEFAULTS));
-        t.blanks(config.section("blanks", BlankSettings.class, BlankSettings.DEFAULTS));
-        t.duplicates(config.section("duplicates", DuplicateSettings.class, DuplicateSettings.DEFAULTS));
-        t.insertion(config.section("insertion", InsertionSettings.class, InsertionSettings.DEFAULTS));
-        t.reassay(config.section("reassay", ReassaySettings.class, ReassaySettings.DEFAULTS));
-        t.censored(CensoredSettings.from(config));
-        t.recovery(config.section("recovery", RecoverySettings.class, RecoverySettings.DEFAULTS));
+        ProjectSettings settings = ProjectSettings.of(config);
+        t.crm(settings.crm());
+        t.blanks(settings.blanks());
+        t.duplicates(settings.duplicates());
+        t.insertion(settings.insertion());
+        t.reassay(settings.reassay());
+        t.censored(settings.censored());
+        t.recovery(settings.recovery());
         return new ReportTable("thresholds", "Thresholds in force",
                 List.of("Setting", "Value", "What it decides", "Origin"), t.rows,
                 "Read from the settings the analyses used; \"user setting\" marks a value set in the project "

@@ -10,8 +10,8 @@ import java.util.Map;
 import java.util.TreeMap;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
+import org.cupel.api.Cupel;
 import org.cupel.project.InputException;
-import org.cupel.report.AppendixAnalyses;
 import org.cupel.report.GenerationTime;
 import org.cupel.report.QcAppendix;
 import org.cupel.report.QcReport;
@@ -67,17 +67,16 @@ public final class AnalyseCommand implements Callable<Integer> {
                     + "register.csv and lab/");
         }
         long start = System.nanoTime();
-        ReportInputs inputs = ReportInputs.load(projectFolder);
+        Cupel cupel = Cupel.open(projectFolder);
         long loaded = System.nanoTime();
-        AppendixAnalyses analyses = AppendixAnalyses.of(inputs.project());
+        Map<String, Long> stages = new LinkedHashMap<>(cupel.analyseAll());
         long computed = System.nanoTime();
-        QcReport report = QcAppendix.build(inputs.project(), analyses, inputs.testwork(), "all batches",
+        QcReport report = QcAppendix.build(cupel, "all batches",
                 GenerationTime.from(System.getenv(), Clock.systemUTC()));
         long analysed = System.nanoTime();
-        Map<String, Long> stages = new LinkedHashMap<>(analyses.stageMillis());
         stages.put("tables", (analysed - computed) / 1_000_000);
-        Summary summary = new Summary(inputs.project().name(), inputs.project().samples().size(),
-                inputs.project().analytes().size(), (loaded - start) / 1_000_000, (analysed - loaded) / 1_000_000,
+        Summary summary = new Summary(cupel.project().name(), cupel.project().samples().size(),
+                cupel.project().analytes().size(), (loaded - start) / 1_000_000, (analysed - loaded) / 1_000_000,
                 stages, report.sections().stream()
                         .map(s -> new SectionHeadlines(s.id(), s.title(), new TreeMap<>(s.headlines())))
                         .toList());

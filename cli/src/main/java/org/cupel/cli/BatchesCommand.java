@@ -9,6 +9,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.cupel.api.Cupel;
 import org.cupel.control.AnalyteVerdict;
 import org.cupel.control.BatchInsertion;
 import org.cupel.control.BatchReview;
@@ -20,7 +21,6 @@ import org.cupel.control.ResubmitEntry;
 import org.cupel.control.UmpireLab;
 import org.cupel.control.Verdict;
 import org.cupel.control.VerdictReason;
-import org.cupel.control.crm.CrmReview;
 import org.cupel.project.Project;
 import org.cupel.report.CsvTables;
 import org.cupel.report.control.InsertionRateSection;
@@ -63,8 +63,9 @@ final class BatchesCommand implements Callable<Integer> {
         if (reassayCsv != null) {
             CsvTables.prepare();
         }
-        Project project = ProjectFolder.load(folder);
-        BatchReview review = BatchReview.of(project, CrmReview.of(project).outcomes());
+        Cupel cupel = Cupel.open(folder);
+        Project project = cupel.project();
+        BatchReview review = cupel.batches();
         if (reassayCsv != null) {
             try {
                 CsvTables.write(VerdictSection.reassayTable(review.reassay()), reassayCsv);

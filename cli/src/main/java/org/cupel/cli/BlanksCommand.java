@@ -55,8 +55,7 @@ final class BlanksCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         BlankSettings settings;
         try {
-            settings = new BlankSettings(failMultiple, warnMultiple, BlankSettings.DEFAULTS.highGradeMultiple(),
-                    Map.of());
+            settings = BlankSettings.withDefaults().failMultiple(failMultiple).warnMultiple(warnMultiple).build();
         } catch (IllegalArgumentException e) {
             throw new picocli.CommandLine.ParameterException(spec.commandLine(), e.getMessage());
         }

@@ -59,8 +59,8 @@ public final class CensoredCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         ColumnReader.Column col = ColumnReader.read(file, column);
-        CensoredSettings settings = CensoredSettings.DEFAULTS.withKmLowestMass(kmLowest == KmLowest.detect
-                ? KaplanMeier.LowestMass.AT_LOWEST_DETECT : KaplanMeier.LowestMass.AT_LOWEST_LIMIT);
+        CensoredSettings settings = CensoredSettings.withDefaults().kmLowestMass(kmLowest == KmLowest.detect
+                ? KaplanMeier.LowestMass.AT_LOWEST_DETECT : KaplanMeier.LowestMass.AT_LOWEST_LIMIT).build();
         CensoredAnalysis a = CensoredAnalysis.of(CensoredSample.of(col.values()), settings);
         boolean drawable = !a.ros().points().isEmpty();
         if (chart != null && drawable) {

@@ -6,15 +6,13 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
+import org.cupel.api.Cupel;
 import org.cupel.assay.Numbers;
-import org.cupel.config.ConfigException;
-import org.cupel.ingest.ProjectLoader;
 import org.cupel.ingest.ProjectSummary;
+import org.cupel.project.DataExceptions;
 import org.cupel.project.DataIssue;
 import org.cupel.project.FileAccount;
-import org.cupel.project.InputException;
 import org.cupel.project.Project;
-import org.cupel.settings.ProjectSettings;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -53,49 +51,19 @@ public final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Project p = ProjectLoader.inspect(folder, ProjectSettings::check);
-        checkTestwork(p);
+        Cupel cupel = Cupel.inspect(folder);
+        Project p = cupel.project();
+        DataExceptions exceptions = cupel.exceptions();
         ProjectSummary s = ProjectSummary.of(p);
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
-            Json.print(out, new CheckReport(s, !p.exceptions().hasFatal(), List.copyOf(p.units().values()),
-                    p.exceptions().all()));
+            Json.print(out, new CheckReport(s, !exceptions.hasFatal(), List.copyOf(p.units().values()),
+                    exceptions.issues()));
         } else {
-            printTables(terminal.text(out), s, p.exceptions().all());
+            printTables(terminal.text(out), s, exceptions.issues());
             printUnits(terminal.text(out), p);
         }
-        return p.exceptions().hasFatal() ? CupelCommand.INPUT_ERROR : CupelCommand.OK;
-    }
-
-    /**
-     * Reads the testwork as the report would ({@link ReportInputs#testwork}): its problems join the register,
-     * and a testwork file the report could not use is a fatal entry, so that check and report refuse the
-     * same inputs.
-     */
-    private void checkTestwork(Project p) {
-        if (!ReportInputs.hasTestwork(folder)) {
-            return;
-        }
-        try {
-            ReportInputs.testwork(folder, p.config()).ifPresent(r -> r.issues().forEach(p.exceptions()::add));
-        } catch (InputException | ConfigException e) {
-            p.exceptions().add(DataIssue.fatal(testworkFile(e.getMessage()), e.getMessage()));
-        }
-    }
-
-    /** The testwork file a message begins with (its own name for it), else the testwork folder. */
-    private String testworkFile(String message) {
-        for (String stem : List.of("heads", "smelts")) {
-            for (Path dir : List.of(folder.resolve("testwork"), folder)) {
-                for (String ext : List.of(".csv", ".tsv", ".txt", ".xlsx")) {
-                    String name = dir.resolve(stem + ext).toString();
-                    if (message.startsWith(name + ":")) {
-                        return name;
-                    }
-                }
-            }
-        }
-        return folder.resolve("testwork").toString();
+        return exceptions.hasFatal() ? CupelCommand.INPUT_ERROR : CupelCommand.OK;
     }
 
     private static void printTables(PrintWriter out, ProjectSummary s, List<DataIssue> issues) {

@@ -6,6 +6,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.cupel.api.Cupel;
 import org.cupel.assay.Numbers;
 import org.cupel.charts.PngWriter;
 import org.cupel.charts.control.CrmBiasChart;
@@ -67,8 +68,9 @@ public final class CrmCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        Project p = load();
-        CrmReview review = CrmReview.of(p);
+        Cupel cupel = load();
+        Project p = cupel.project();
+        CrmReview review = cupel.crm();
         PrintWriter out = spec.commandLine().getOut();
         if (chartDir != null) {
             writeCharts(review);
@@ -81,7 +83,7 @@ public final class CrmCommand implements Callable<Integer> {
         return failOnQc && review.failures() > 0 ? CupelCommand.QC_FAILED : CupelCommand.OK;
     }
 
-    private Project load() {
+    private Cupel load() {
         if (results != null) {
             if (folder != null) {
                 throw new InputException("give either a project folder or --results with --catalog, not both.");
@@ -91,13 +93,13 @@ public final class CrmCommand implements Callable<Integer> {
                         + "certified_value, sd.");
             }
             var cat = CatalogReader.read(catalog, catalog.toString(), Map.of());
-            return CrmResultsFile.read(results, cat.catalog(), CupelConfig.defaults());
+            return Cupel.of(CrmResultsFile.read(results, cat.catalog(), CupelConfig.defaults()));
         }
         if (folder == null) {
             throw new InputException("no input: give a project folder, or --results FILE --catalog FILE "
                     + "(try 'cupel crm --help').");
         }
-        return ProjectFolder.load(folder);
+        return Cupel.open(folder);
     }
 
     private void writeCharts(CrmReview r) throws IOException {

@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Comparator;
 import java.util.stream.Stream;
+import org.cupel.api.Cupel;
 import org.cupel.demo.DemoGenerator;
 import org.cupel.demo.DemoSettings;
 import org.cupel.project.InputException;
@@ -18,7 +19,7 @@ final class DemoProject {
     private DemoProject() {
     }
 
-    static ReportInputs load(Path folderAlsoGiven) throws IOException {
+    static Cupel open(Path folderAlsoGiven) throws IOException {
         if (folderAlsoGiven != null) {
             throw new InputException("both --demo and the project folder " + folderAlsoGiven
                     + " were given; give one of them");
@@ -27,11 +28,11 @@ final class DemoProject {
         try {
             DemoGenerator.generate(new DemoSettings(DemoSettings.DEFAULT_SAMPLES, DemoSettings.DEFAULT_SEED),
                     DemoCommand.folderSink(tmp));
-            ReportInputs in = ReportInputs.load(tmp);
+            Cupel in = Cupel.open(tmp);
             Project p = in.project();
             // The generated folder has a temporary name; the demo's own name is the better title.
-            return new ReportInputs(new Project(p.config().projectName(DemoGenerator.PROJECT), null, p.config(),
-                    p.samples(), p.analytes(), p.catalog(), p.exceptions(), p.files(), p.units()), in.testwork());
+            return Cupel.of(new Project(p.config().projectName(DemoGenerator.PROJECT), null, p.config(),
+                    p.samples(), p.analytes(), p.catalog(), p.exceptions(), p.files(), p.units()), in.recovery());
         } finally {
             try (Stream<Path> walk = Files.walk(tmp)) {
                 for (Path p : (Iterable<Path>) walk.sorted(Comparator.reverseOrder())::iterator) {

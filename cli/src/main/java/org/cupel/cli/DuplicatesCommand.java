@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.cupel.api.Cupel;
 import org.cupel.assay.Numbers;
 import org.cupel.assay.QcRole;
 import org.cupel.charts.PngWriter;
@@ -22,10 +23,8 @@ import org.cupel.duplicates.DuplicateSettings;
 import org.cupel.duplicates.Estimate;
 import org.cupel.duplicates.ModelFit;
 import org.cupel.duplicates.OutlierPair;
-import org.cupel.duplicates.PairExtraction;
 import org.cupel.duplicates.PairList;
 import org.cupel.duplicates.PairsFile;
-import org.cupel.project.Project;
 import org.cupel.duplicates.PrecisionSummary;
 import org.cupel.duplicates.RuleOutcome;
 import org.cupel.project.DataIssue;
@@ -106,20 +105,12 @@ public final class DuplicatesCommand implements Callable<Integer> {
             throw new InputException("--flagged-csv " + flaggedCsv + ": this is the input file, which is never "
                     + "overwritten; give another path.");
         }
-        DuplicateSettings settings = DuplicateSettings.DEFAULTS;
-        if (dlMultiple != null) {
-            settings = settings.withLimitMultipleOfDetection(dlMultiple);
-        }
         List<DuplicateReport> reports = new ArrayList<>();
         List<DataIssue> issues = new ArrayList<>();
         if (Files.isDirectory(input)) {
-            Project project = ProjectFolder.load(input);
-            DuplicateSettings fromConfig = project.config().section("duplicates", DuplicateSettings.class,
-                    DuplicateSettings.DEFAULTS);
-            if (dlMultiple != null) {
-                fromConfig = fromConfig.withLimitMultipleOfDetection(dlMultiple);
-            }
-            reports.addAll(PairExtraction.analyse(project, fromConfig, analyte, only));
+            Cupel project = Cupel.open(input, s -> dlMultiple == null ? s : s.toBuilder()
+                    .duplicates(s.duplicates().toBuilder().limitMultipleOfDetection(dlMultiple).build()).build());
+            reports.addAll(project.duplicates(analyte, only));
             if (reports.isEmpty()) {
                 throw new InputException(input + ": no duplicates found" + (only == null ? "" : " of type " + type)
                         + "; the sample register marks duplicates by role with the original sample ID as reference.");
@@ -132,6 +123,8 @@ public final class DuplicatesCommand implements Callable<Integer> {
                 throw new InputException(input + ": no usable pairs" + (only == null ? "" : " of type " + type)
                         + "; check the values and the type column, or drop --type.");
             }
+            DuplicateSettings settings = dlMultiple == null ? DuplicateSettings.DEFAULTS
+                    : DuplicateSettings.withDefaults().limitMultipleOfDetection(dlMultiple).build();
             reports.add(DuplicateAnalysis.run(analyte == null ? "value" : analyte, unit == null ? "" : unit, pairs,
                     List.of(), new double[0], settings));
         }

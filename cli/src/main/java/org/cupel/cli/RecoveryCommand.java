@@ -72,10 +72,10 @@ public final class RecoveryCommand implements Callable<Integer> {
         CupelConfig config = config(folder);
         RecoverySettings settings = config.section("recovery", RecoverySettings.class, RecoverySettings.DEFAULTS);
         if (margin != null) {
-            settings = settings.withMargin(positive(margin, "--margin"));
+            settings = settings.toBuilder().equivalenceMargin(positive(margin, "--margin")).build();
         }
         if (powerDelta != null) {
-            settings = settings.withPowerDifference(positive(powerDelta, "--power-delta"));
+            settings = settings.toBuilder().powerDifference(positive(powerDelta, "--power-delta")).build();
         }
         RecoveryResult result = RecoveryAnalysis.run(TestworkReader.read(ProjectFiles.of(folder, config), settings,
                 ValueConventions.from(config)), settings);

@@ -13,11 +13,10 @@ import java.util.concurrent.Callable;
 import me.tongfei.progressbar.ConsoleProgressBarConsumer;
 import me.tongfei.progressbar.ProgressBar;
 import me.tongfei.progressbar.ProgressBarBuilder;
+import org.cupel.api.Cupel;
 import org.cupel.charts.PngWriter;
 import org.cupel.project.BatchSelection;
 import org.cupel.project.InputException;
-import org.cupel.project.Project;
-import org.cupel.project.ProjectFilter;
 import org.cupel.report.CsvTables;
 import org.cupel.report.GenerationTime;
 import org.cupel.report.PdfReport;
@@ -102,14 +101,8 @@ public final class ReportCommand implements Callable<Integer> {
      * only the report, whose sections hold the results they format.
      */
     private QcReport appendix(BatchSelection selection) throws IOException {
-        ReportInputs inputs = demo ? DemoProject.load(projectFolder) : ReportInputs.load(folder());
-        Project project = inputs.project();
-        Project reviewed = selection.selectsAll() ? project : ProjectFilter.batches(project, selection);
-        if (reviewed.samples().size() == 0 && !selection.selectsAll()) {
-            throw new InputException("no samples in " + selection.describe() + " of project " + project.name()
-                    + "; check the dates and batch IDs against the Batches table of a full report");
-        }
-        return QcAppendix.build(reviewed, inputs.testwork(), selection.describe(),
+        Cupel project = demo ? DemoProject.open(projectFolder) : Cupel.open(folder());
+        return QcAppendix.build(project.select(selection), selection.describe(),
                 GenerationTime.from(System.getenv(), Clock.systemUTC()));
     }
 

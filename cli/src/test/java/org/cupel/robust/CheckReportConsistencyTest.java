@@ -21,7 +21,7 @@ import org.junit.jupiter.api.io.TempDir;
  * {@code cupel check} refuses (exit 2) exactly the inputs that the report refuses (issue 15, item 11): it reads
  * every input the report reads, testwork heads and smelts and every section of {@code cupel.yaml} included.
  * The report's reading and analyses are run through {@code cupel analyse}, which is the report without the
- * writing (the same {@code ReportInputs} and {@code QcAppendix}).
+ * writing (the same {@code Cupel.open} and {@code QcAppendix}).
  */
 class CheckReportConsistencyTest {
     private static final long SEED = 20_261_215L;

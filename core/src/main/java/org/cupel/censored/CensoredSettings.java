@@ -49,7 +49,63 @@ public record CensoredSettings(KaplanMeier.LowestMass kmLowestMass, KaplanMeier.
         return new KaplanMeier.Options(kmLowestMass, kmSdDivisor);
     }
 
-    public CensoredSettings withKmLowestMass(KaplanMeier.LowestMass m) {
-        return new CensoredSettings(m, kmSdDivisor, bootstrapReplicates, bootstrapSeed, bootstrapMaxN);
+    /** A builder holding {@link #DEFAULTS}: {@code CensoredSettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
+        return DEFAULTS.toBuilder();
+    }
+
+    /** A builder holding these settings, to change some of them. */
+    public Builder toBuilder() {
+        return new Builder(this);
+    }
+
+    /**
+     * Sets any of the settings, each named as its record component; {@link #build} checks them together, as the
+     * config does, so the order of the calls does not matter.
+     */
+    public static final class Builder {
+        private KaplanMeier.LowestMass kmLowestMass;
+        private KaplanMeier.SdDivisor kmSdDivisor;
+        private int bootstrapReplicates;
+        private long bootstrapSeed;
+        private int bootstrapMaxN;
+
+        private Builder(CensoredSettings s) {
+            kmLowestMass = s.kmLowestMass();
+            kmSdDivisor = s.kmSdDivisor();
+            bootstrapReplicates = s.bootstrapReplicates();
+            bootstrapSeed = s.bootstrapSeed();
+            bootstrapMaxN = s.bootstrapMaxN();
+        }
+
+        public Builder kmLowestMass(KaplanMeier.LowestMass value) {
+            kmLowestMass = value;
+            return this;
+        }
+
+        public Builder kmSdDivisor(KaplanMeier.SdDivisor value) {
+            kmSdDivisor = value;
+            return this;
+        }
+
+        public Builder bootstrapReplicates(int value) {
+            bootstrapReplicates = value;
+            return this;
+        }
+
+        public Builder bootstrapSeed(long value) {
+            bootstrapSeed = value;
+            return this;
+        }
+
+        public Builder bootstrapMaxN(int value) {
+            bootstrapMaxN = value;
+            return this;
+        }
+
+        /** @throws org.cupel.config.SettingException or IllegalArgumentException for a value out of range */
+        public CensoredSettings build() {
+            return new CensoredSettings(kmLowestMass, kmSdDivisor, bootstrapReplicates, bootstrapSeed, bootstrapMaxN);
+        }
     }
 }

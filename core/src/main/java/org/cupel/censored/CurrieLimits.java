@@ -23,7 +23,7 @@ import org.cupel.recovery.NoncentralT;
  *     {@code L_D = 3.29·s}; the limit of the t-based form as n → ∞, and low for few replicates.</li>
  * </ul>
  */
-public final class CurrieLimits {
+final class CurrieLimits {
     public static final double ALPHA = 0.05;
     public static final double BETA = 0.05;
     private static final String SOURCE_T = "Currie 1995, IUPAC Recommendations, Pure Appl. Chem. 67";

@@ -21,7 +21,7 @@ import org.cupel.assay.Numbers;
  * A value above range ranks above every other. Applied to blanks, the spiked-sample formula omits the blank mean
  * and so understates the limit whenever the blanks read above zero.
  */
-public final class EpaMdl {
+final class EpaMdl {
     /** Replicates the procedure asks for, spiked samples and method blanks alike. */
     public static final int MIN_REPLICATES = 7;
     /** From this many blanks the 99th percentile replaces the highest result. */

@@ -149,6 +149,38 @@ public final class CupelConfig {
     }
 
     /**
+     * This config with section {@code name} bound to {@code settings}, for settings given in code rather than
+     * in the file. Each key of the section whose value differs from what the section binds to now is written
+     * over the file's, so that it counts as set by the user ({@link #isUserSet}) and the report labels it so;
+     * every other key keeps its origin, the file or the default.
+     *
+     * @throws IllegalArgumentException when the section cannot bind to {@code settings}: a key left out of a map
+     *     of settings (such as {@code crm.rules}) comes back with its default, as it would in the file
+     */
+    public <T> CupelConfig with(String name, Class<T> type, T defaults, T settings) {
+        T current = section(name, type, defaults);
+        if (current.equals(settings)) {
+            return this;
+        }
+        JsonNode now = YAML.valueToTree(current);
+        ObjectNode copy = root.deepCopy();
+        ObjectNode section = copy.get(name) instanceof ObjectNode given ? given : copy.putObject(name);
+        JsonNode wanted = YAML.valueToTree(settings);
+        for (Map.Entry<String, JsonNode> e : wanted.properties()) {
+            if (!e.getValue().equals(now.get(e.getKey()))) {
+                section.set(e.getKey(), e.getValue());
+            }
+        }
+        CupelConfig out = new CupelConfig(copy, source, places);
+        if (!out.section(name, type, defaults).equals(settings)) {
+            throw new IllegalArgumentException("the " + name + " settings cannot be set as given: a map of settings "
+                    + "keeps the default of every key it leaves out; start from the settings in force (toBuilder) "
+                    + "and change the values, leaving no key out");
+        }
+        return out;
+    }
+
+    /**
      * Refuses a top-level key that is neither {@value #PROJECT} nor one of {@code sections} (a misspelt
      * section would otherwise be ignored with all its settings), and a project name that is not text.
      *

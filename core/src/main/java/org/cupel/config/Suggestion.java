@@ -11,7 +11,7 @@ import java.util.Optional;
  * computer detection and correction of spelling errors") on the lower-cased keys, so {@code Ingest} and
  * {@code reprot} are one step from {@code ingest} and {@code report}.
  */
-public final class Suggestion {
+final class Suggestion {
     private Suggestion() {
     }
 

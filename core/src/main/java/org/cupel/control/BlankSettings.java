@@ -76,4 +76,57 @@ public record BlankSettings(double failMultiple, double warnMultiple, double hig
                 org.cupel.assay.Numbers.compact(failMultiple) + "×DL",
                 org.cupel.assay.Numbers.compact(warnMultiple) + "×DL"));
     }
+
+    /** A builder holding {@link #DEFAULTS}: {@code BlankSettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
+        return DEFAULTS.toBuilder();
+    }
+
+    /** A builder holding these settings, to change some of them. */
+    public Builder toBuilder() {
+        return new Builder(this);
+    }
+
+    /**
+     * Sets any of the settings, each named as its record component; {@link #build} checks them together, as the
+     * config does, so the order of the calls does not matter.
+     */
+    public static final class Builder {
+        private double failMultiple;
+        private double warnMultiple;
+        private double highGradeMultiple;
+        private Map<String, AbsoluteLimits> absolute;
+
+        private Builder(BlankSettings s) {
+            failMultiple = s.failMultiple();
+            warnMultiple = s.warnMultiple();
+            highGradeMultiple = s.highGradeMultiple();
+            absolute = s.absolute();
+        }
+
+        public Builder failMultiple(double value) {
+            failMultiple = value;
+            return this;
+        }
+
+        public Builder warnMultiple(double value) {
+            warnMultiple = value;
+            return this;
+        }
+
+        public Builder highGradeMultiple(double value) {
+            highGradeMultiple = value;
+            return this;
+        }
+
+        public Builder absolute(Map<String, AbsoluteLimits> value) {
+            absolute = value;
+            return this;
+        }
+
+        /** @throws org.cupel.config.SettingException or IllegalArgumentException for a value out of range */
+        public BlankSettings build() {
+            return new BlankSettings(failMultiple, warnMultiple, highGradeMultiple, absolute);
+        }
+    }
 }

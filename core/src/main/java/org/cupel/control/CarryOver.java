@@ -19,7 +19,7 @@ import org.cupel.assay.AssayValue;
  * √(s²/Sxx), p from t = b/SE(b) on n−2 degrees of freedom (any regression text, e.g. Draper &amp; Smith
  * 1998, Applied Regression Analysis, ch. 1); computed with Commons Math {@link SimpleRegression}.
  */
-public final class CarryOver {
+final class CarryOver {
     /** Fewest pairs for a correlation or slope with a p-value (n−2 ≥ 1 degrees of freedom). */
     public static final int MIN_PAIRS = 3;
     private static final NaturalRanking RANKING = new NaturalRanking();

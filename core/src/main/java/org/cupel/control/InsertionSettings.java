@@ -44,4 +44,78 @@ public record InsertionSettings(double crm, double blank, double fieldDuplicate,
             default: return 0;
         }
     }
+
+    /** A builder holding {@link #DEFAULTS}: {@code InsertionSettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
+        return DEFAULTS.toBuilder();
+    }
+
+    /** A builder holding these settings, to change some of them. */
+    public Builder toBuilder() {
+        return new Builder(this);
+    }
+
+    /**
+     * Sets any of the settings, each named as its record component; {@link #build} checks them together, as the
+     * config does, so the order of the calls does not matter.
+     */
+    public static final class Builder {
+        private double crm;
+        private double blank;
+        private double fieldDuplicate;
+        private double coarseDuplicate;
+        private double pulpDuplicate;
+        private double labRepeat;
+        private double umpire;
+
+        private Builder(InsertionSettings s) {
+            crm = s.crm();
+            blank = s.blank();
+            fieldDuplicate = s.fieldDuplicate();
+            coarseDuplicate = s.coarseDuplicate();
+            pulpDuplicate = s.pulpDuplicate();
+            labRepeat = s.labRepeat();
+            umpire = s.umpire();
+        }
+
+        public Builder crm(double value) {
+            crm = value;
+            return this;
+        }
+
+        public Builder blank(double value) {
+            blank = value;
+            return this;
+        }
+
+        public Builder fieldDuplicate(double value) {
+            fieldDuplicate = value;
+            return this;
+        }
+
+        public Builder coarseDuplicate(double value) {
+            coarseDuplicate = value;
+            return this;
+        }
+
+        public Builder pulpDuplicate(double value) {
+            pulpDuplicate = value;
+            return this;
+        }
+
+        public Builder labRepeat(double value) {
+            labRepeat = value;
+            return this;
+        }
+
+        public Builder umpire(double value) {
+            umpire = value;
+            return this;
+        }
+
+        /** @throws org.cupel.config.SettingException or IllegalArgumentException for a value out of range */
+        public InsertionSettings build() {
+            return new InsertionSettings(crm, blank, fieldDuplicate, coarseDuplicate, pulpDuplicate, labRepeat, umpire);
+        }
+    }
 }

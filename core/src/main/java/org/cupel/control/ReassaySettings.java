@@ -28,11 +28,6 @@ public record ReassaySettings(Scope scope, CrmBracket crmBracket, int blankFollo
         }
     }
 
-    /** The settings of {@code scope} with the default brackets. */
-    public ReassaySettings(Scope scope) {
-        this(scope, CrmBracket.PASSING_CRM, 0);
-    }
-
     /** How far a re-assay request reaches. */
     public enum Scope {
         /**
@@ -54,5 +49,51 @@ public record ReassaySettings(Scope scope, CrmBracket crmBracket, int blankFollo
         PASSING_CRM,
         /** The nearest passing control of any kind, a blank included (how Cupel bracketed before this setting). */
         PASSING_CONTROL
+    }
+
+    /** A builder holding {@link #DEFAULTS}: {@code ReassaySettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
+        return DEFAULTS.toBuilder();
+    }
+
+    /** A builder holding these settings, to change some of them. */
+    public Builder toBuilder() {
+        return new Builder(this);
+    }
+
+    /**
+     * Sets any of the settings, each named as its record component; {@link #build} checks them together, as the
+     * config does, so the order of the calls does not matter.
+     */
+    public static final class Builder {
+        private Scope scope;
+        private CrmBracket crmBracket;
+        private int blankFollowing;
+
+        private Builder(ReassaySettings s) {
+            scope = s.scope();
+            crmBracket = s.crmBracket();
+            blankFollowing = s.blankFollowing();
+        }
+
+        public Builder scope(Scope value) {
+            scope = value;
+            return this;
+        }
+
+        public Builder crmBracket(CrmBracket value) {
+            crmBracket = value;
+            return this;
+        }
+
+        public Builder blankFollowing(int value) {
+            blankFollowing = value;
+            return this;
+        }
+
+        /** @throws org.cupel.config.SettingException or IllegalArgumentException for a value out of range */
+        public ReassaySettings build() {
+            return new ReassaySettings(scope, crmBracket, blankFollowing);
+        }
     }
 }

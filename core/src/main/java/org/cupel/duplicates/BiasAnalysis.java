@@ -9,7 +9,7 @@ import org.cupel.assay.QcRole;
  * relative difference (b − a)/m with m = (a + b)/2, the mean difference, a paired t-test and a Wilcoxon
  * signed-rank test ({@link PairedTests}), and a plain-language verdict.
  */
-public final class BiasAnalysis {
+final class BiasAnalysis {
     private BiasAnalysis() {
     }
 

@@ -92,18 +92,6 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
         }
     }
 
-    /** The settings with the default {@link #batchRuleAlpha()} of 0.05. */
-    public DuplicateSettings(double limitMultipleOfDetection, boolean censoredAtHalfLimit, double acceptancePercent,
-                             double fieldHardLimitPercent, double coarseHardLimitPercent, double pulpHardLimitPercent,
-                             double labRepeatHardLimitPercent, double umpireHardLimitPercent, int thGroupSize,
-                             int thMinimumPairs, int bootstrapResamples, long bootstrapSeed, int bootstrapMaxPairs,
-                             List<Double> precisionGrades, double batchTestAlpha) {
-        this(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent, fieldHardLimitPercent,
-                coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent, umpireHardLimitPercent,
-                thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, bootstrapMaxPairs, precisionGrades,
-                batchTestAlpha, 0.05);
-    }
-
     /** Whether a statistic over {@code pairs} pairs gets the bootstrap interval (else the large-sample one). */
     public boolean bootstraps(int pairs) {
         return pairs <= bootstrapMaxPairs;
@@ -133,31 +121,143 @@ public record DuplicateSettings(double limitMultipleOfDetection, boolean censore
         }
     }
 
-    public DuplicateSettings withLimitMultipleOfDetection(double multiple) {
-        return new DuplicateSettings(multiple, censoredAtHalfLimit, acceptancePercent, fieldHardLimitPercent,
-                coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent, umpireHardLimitPercent,
-                thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, bootstrapMaxPairs, precisionGrades,
-                batchTestAlpha, batchRuleAlpha);
+    /** A builder holding {@link #DEFAULTS}: {@code DuplicateSettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
+        return DEFAULTS.toBuilder();
     }
 
-    public DuplicateSettings withCensoredAtHalfLimit(boolean halfLimit) {
-        return new DuplicateSettings(limitMultipleOfDetection, halfLimit, acceptancePercent, fieldHardLimitPercent,
-                coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent, umpireHardLimitPercent,
-                thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, bootstrapMaxPairs, precisionGrades,
-                batchTestAlpha, batchRuleAlpha);
+    /** A builder holding these settings, to change some of them. */
+    public Builder toBuilder() {
+        return new Builder(this);
     }
 
-    public DuplicateSettings withBootstrapMaxPairs(int maxPairs) {
-        return new DuplicateSettings(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent,
-                fieldHardLimitPercent, coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent,
-                umpireHardLimitPercent, thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, maxPairs,
-                precisionGrades, batchTestAlpha, batchRuleAlpha);
-    }
+    /**
+     * Sets any of the settings, each named as its record component; {@link #build} checks them together, as the
+     * config does, so the order of the calls does not matter.
+     */
+    public static final class Builder {
+        private double limitMultipleOfDetection;
+        private boolean censoredAtHalfLimit;
+        private double acceptancePercent;
+        private double fieldHardLimitPercent;
+        private double coarseHardLimitPercent;
+        private double pulpHardLimitPercent;
+        private double labRepeatHardLimitPercent;
+        private double umpireHardLimitPercent;
+        private int thGroupSize;
+        private int thMinimumPairs;
+        private int bootstrapResamples;
+        private long bootstrapSeed;
+        private int bootstrapMaxPairs;
+        private List<Double> precisionGrades;
+        private double batchTestAlpha;
+        private double batchRuleAlpha;
 
-    public DuplicateSettings withPrecisionGrades(List<Double> grades) {
-        return new DuplicateSettings(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent,
-                fieldHardLimitPercent, coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent,
-                umpireHardLimitPercent, thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed, bootstrapMaxPairs,
-                grades, batchTestAlpha, batchRuleAlpha);
+        private Builder(DuplicateSettings s) {
+            limitMultipleOfDetection = s.limitMultipleOfDetection();
+            censoredAtHalfLimit = s.censoredAtHalfLimit();
+            acceptancePercent = s.acceptancePercent();
+            fieldHardLimitPercent = s.fieldHardLimitPercent();
+            coarseHardLimitPercent = s.coarseHardLimitPercent();
+            pulpHardLimitPercent = s.pulpHardLimitPercent();
+            labRepeatHardLimitPercent = s.labRepeatHardLimitPercent();
+            umpireHardLimitPercent = s.umpireHardLimitPercent();
+            thGroupSize = s.thGroupSize();
+            thMinimumPairs = s.thMinimumPairs();
+            bootstrapResamples = s.bootstrapResamples();
+            bootstrapSeed = s.bootstrapSeed();
+            bootstrapMaxPairs = s.bootstrapMaxPairs();
+            precisionGrades = s.precisionGrades();
+            batchTestAlpha = s.batchTestAlpha();
+            batchRuleAlpha = s.batchRuleAlpha();
+        }
+
+        public Builder limitMultipleOfDetection(double value) {
+            limitMultipleOfDetection = value;
+            return this;
+        }
+
+        public Builder censoredAtHalfLimit(boolean value) {
+            censoredAtHalfLimit = value;
+            return this;
+        }
+
+        public Builder acceptancePercent(double value) {
+            acceptancePercent = value;
+            return this;
+        }
+
+        public Builder fieldHardLimitPercent(double value) {
+            fieldHardLimitPercent = value;
+            return this;
+        }
+
+        public Builder coarseHardLimitPercent(double value) {
+            coarseHardLimitPercent = value;
+            return this;
+        }
+
+        public Builder pulpHardLimitPercent(double value) {
+            pulpHardLimitPercent = value;
+            return this;
+        }
+
+        public Builder labRepeatHardLimitPercent(double value) {
+            labRepeatHardLimitPercent = value;
+            return this;
+        }
+
+        public Builder umpireHardLimitPercent(double value) {
+            umpireHardLimitPercent = value;
+            return this;
+        }
+
+        public Builder thGroupSize(int value) {
+            thGroupSize = value;
+            return this;
+        }
+
+        public Builder thMinimumPairs(int value) {
+            thMinimumPairs = value;
+            return this;
+        }
+
+        public Builder bootstrapResamples(int value) {
+            bootstrapResamples = value;
+            return this;
+        }
+
+        public Builder bootstrapSeed(long value) {
+            bootstrapSeed = value;
+            return this;
+        }
+
+        public Builder bootstrapMaxPairs(int value) {
+            bootstrapMaxPairs = value;
+            return this;
+        }
+
+        public Builder precisionGrades(List<Double> value) {
+            precisionGrades = value;
+            return this;
+        }
+
+        public Builder batchTestAlpha(double value) {
+            batchTestAlpha = value;
+            return this;
+        }
+
+        public Builder batchRuleAlpha(double value) {
+            batchRuleAlpha = value;
+            return this;
+        }
+
+        /** @throws org.cupel.config.SettingException or IllegalArgumentException for a value out of range */
+        public DuplicateSettings build() {
+            return new DuplicateSettings(limitMultipleOfDetection, censoredAtHalfLimit, acceptancePercent,
+                    fieldHardLimitPercent, coarseHardLimitPercent, pulpHardLimitPercent, labRepeatHardLimitPercent,
+                    umpireHardLimitPercent, thGroupSize, thMinimumPairs, bootstrapResamples, bootstrapSeed,
+                    bootstrapMaxPairs, precisionGrades, batchTestAlpha, batchRuleAlpha);
+        }
     }
 }

@@ -15,7 +15,7 @@ import org.cupel.assay.Qualifier;
  * out of relative measures, because near the limit relative differences are dominated by the constant part
  * of the error (common practice; see Stanley and Lawie 2008 on precision near detection).
  */
-public final class PairScreen {
+final class PairScreen {
     private static final ExclusionReason[] REASONS = ExclusionReason.values();
 
     private PairScreen() {

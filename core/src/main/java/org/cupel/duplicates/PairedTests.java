@@ -8,7 +8,7 @@ import org.apache.commons.math3.stat.inference.TTest;
 import org.apache.commons.math3.stat.inference.WilcoxonSignedRankTest;
 
 /** Tests of whether duplicates read systematically higher or lower than their originals. */
-public final class PairedTests {
+final class PairedTests {
     /** Commons Math computes the exact signed-rank distribution up to this n. */
     private static final int EXACT_LIMIT = 30;
     /** 10^0 … 10^22, every one exact in double precision. */

@@ -5,7 +5,7 @@ import org.cupel.assay.LimitComparison;
 import org.cupel.assay.QcRole;
 
 /** Computes a {@link PrecisionSummary} from screened pairs: HARD acceptance, average CV, repeatability. */
-public final class PrecisionMeasures {
+final class PrecisionMeasures {
     /** ISO 5725-6 factor 2.8 ≈ 1.96·√2: the repeatability limit r = 2.8·s_r. */
     public static final double REPEATABILITY_FACTOR = 2.8;
     /** Ranges this short are finished by insertion sort: a Thompson–Howarth group of 11 never partitions. */

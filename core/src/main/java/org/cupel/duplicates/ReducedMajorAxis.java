@@ -13,7 +13,7 @@ import org.apache.commons.math3.distribution.TDistribution;
  * </pre>
  * The 95 % intervals are ± t(0.975, n − 2)·SE.
  */
-public final class ReducedMajorAxis {
+final class ReducedMajorAxis {
     private ReducedMajorAxis() {
     }
 

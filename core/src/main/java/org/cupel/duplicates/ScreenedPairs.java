@@ -20,7 +20,7 @@ import java.util.Map;
  * @param limitUnknown relative pairs kept although no detection limit was known to test the multiple
  * @param censoredSubstituted relative pairs with a below-detection member taken at half its limit
  */
-public record ScreenedPairs(List<DuplicatePair> pairs, Members absolute, Members relative,
+record ScreenedPairs(List<DuplicatePair> pairs, Members absolute, Members relative,
                             Map<ExclusionReason, Integer> excludedAbsolute,
                             Map<ExclusionReason, Integer> excludedRelative, int limitUnknown,
                             int censoredSubstituted) {

@@ -39,7 +39,7 @@ import org.cupel.assay.LimitComparison;
  * pairs × resamples and the normal approximation is close, they are normal intervals from the HC3 covariance of
  * each line over its groups ({@link RobustLine}).
  */
-public final class ThompsonHowarth {
+final class ThompsonHowarth {
     private ThompsonHowarth() {
     }
 

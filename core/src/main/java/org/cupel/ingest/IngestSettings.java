@@ -77,4 +77,122 @@ public record IngestSettings(boolean decimalComma, boolean negativeMeansBelowDet
                 v.belowDetectionCodes(), v.missingCodes(), v.detectionLimits(), v.repeatSuffixes(),
                 Map.of(), Map.of(), Map.of(), "", "ISO", false);
     }
+
+    /** A builder holding {@link #DEFAULTS}: {@code IngestSettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
+        return DEFAULTS.toBuilder();
+    }
+
+    /** A builder holding these settings, to change some of them. */
+    public Builder toBuilder() {
+        return new Builder(this);
+    }
+
+    /**
+     * Sets any of the settings, each named as its record component; {@link #build} checks them together, as the
+     * config does, so the order of the calls does not matter.
+     */
+    public static final class Builder {
+        private boolean decimalComma;
+        private boolean negativeMeansBelowDetection;
+        private boolean thousandsSeparator;
+        private List<String> belowDetectionCodes;
+        private Map<String, MissingReason> missingCodes;
+        private Map<String, Double> detectionLimits;
+        private List<String> repeatSuffixes;
+        private Map<String, String> columns;
+        private Map<String, String> units;
+        private Map<String, List<String>> methodPriority;
+        private String sheet;
+        private String dateFormat;
+        private boolean followLinksOutsideProject;
+
+        private Builder(IngestSettings s) {
+            decimalComma = s.decimalComma();
+            negativeMeansBelowDetection = s.negativeMeansBelowDetection();
+            thousandsSeparator = s.thousandsSeparator();
+            belowDetectionCodes = s.belowDetectionCodes();
+            missingCodes = s.missingCodes();
+            detectionLimits = s.detectionLimits();
+            repeatSuffixes = s.repeatSuffixes();
+            columns = s.columns();
+            units = s.units();
+            methodPriority = s.methodPriority();
+            sheet = s.sheet();
+            dateFormat = s.dateFormat();
+            followLinksOutsideProject = s.followLinksOutsideProject();
+        }
+
+        public Builder decimalComma(boolean value) {
+            decimalComma = value;
+            return this;
+        }
+
+        public Builder negativeMeansBelowDetection(boolean value) {
+            negativeMeansBelowDetection = value;
+            return this;
+        }
+
+        public Builder thousandsSeparator(boolean value) {
+            thousandsSeparator = value;
+            return this;
+        }
+
+        public Builder belowDetectionCodes(List<String> value) {
+            belowDetectionCodes = value;
+            return this;
+        }
+
+        public Builder missingCodes(Map<String, MissingReason> value) {
+            missingCodes = value;
+            return this;
+        }
+
+        public Builder detectionLimits(Map<String, Double> value) {
+            detectionLimits = value;
+            return this;
+        }
+
+        public Builder repeatSuffixes(List<String> value) {
+            repeatSuffixes = value;
+            return this;
+        }
+
+        public Builder columns(Map<String, String> value) {
+            columns = value;
+            return this;
+        }
+
+        public Builder units(Map<String, String> value) {
+            units = value;
+            return this;
+        }
+
+        public Builder methodPriority(Map<String, List<String>> value) {
+            methodPriority = value;
+            return this;
+        }
+
+        public Builder sheet(String value) {
+            sheet = value;
+            return this;
+        }
+
+        public Builder dateFormat(String value) {
+            dateFormat = value;
+            return this;
+        }
+
+        public Builder followLinksOutsideProject(boolean value) {
+            followLinksOutsideProject = value;
+            return this;
+        }
+
+        /** @throws org.cupel.config.SettingException or IllegalArgumentException for a value out of range */
+        public IngestSettings build() {
+            return new IngestSettings(decimalComma, negativeMeansBelowDetection, thousandsSeparator,
+                    belowDetectionCodes, missingCodes, detectionLimits, repeatSuffixes, columns, units, methodPriority,
+                    sheet, dateFormat, followLinksOutsideProject);
+        }
+    }
 }

@@ -9,5 +9,5 @@ package org.cupel.ingest;
  * @param detectionLimit the limit stated for the column (a detection-limit row under the header, else
  *     {@code ingest.detectionLimits}), in the column's unit; NaN when unknown
  */
-public record LabColumn(int index, String header, AnalyteHeader analyte, double detectionLimit) {
+record LabColumn(int index, String header, AnalyteHeader analyte, double detectionLimit) {
 }

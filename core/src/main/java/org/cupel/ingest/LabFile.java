@@ -22,7 +22,7 @@ import org.cupel.project.DataIssue;
  * @param rowsRead data rows below the header
  * @param rowsExcluded rows listed as exceptions instead of being kept
  */
-public record LabFile(String file, List<Batch> batches, List<LabColumn> columns, List<String> ignoredColumns,
+record LabFile(String file, List<Batch> batches, List<LabColumn> columns, List<String> ignoredColumns,
                       LabRows table, List<DataIssue> issues, Set<String> excludedIds, long rowsRead,
                       long rowsExcluded) {
     public LabFile {

@@ -32,7 +32,7 @@ import org.cupel.project.MessageText;
  * cells add no result. A file that reads one character both as thousands separator and as decimal mark
  * is refused ({@link ValueParser#checkDecimalMarks}).
  */
-public final class LabFileReader {
+final class LabFileReader {
     private final IngestSettings settings;
     private final ValueConventions conventions;
     private final HeaderParser headers;

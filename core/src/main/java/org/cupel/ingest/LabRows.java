@@ -12,7 +12,7 @@ import org.cupel.assay.Qualifier;
  * The rows kept from one lab file, column-wise: per row the sample fields, per row and analyte column
  * the usable result as primitives (a file's cells cost a few arrays, not an object each).
  */
-public final class LabRows {
+final class LabRows {
     /** {@link #qualifier} of a cell that adds no result (blank, or left out with an issue). */
     static final byte NO_RESULT = -1;
     private static final Qualifier[] QUALIFIERS = Qualifier.values();

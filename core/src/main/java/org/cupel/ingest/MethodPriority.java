@@ -23,7 +23,7 @@ import org.cupel.assay.Qualifier;
  * </ol>
  * The reason returned names the rule, so outputs can show why a value was reported.
  */
-public final class MethodPriority implements MethodSelector {
+final class MethodPriority implements MethodSelector {
     private final Map<String, List<String>> priority;
 
     /** @param priority analyte → methods, most preferred first */

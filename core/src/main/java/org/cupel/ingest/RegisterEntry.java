@@ -11,6 +11,6 @@ import org.cupel.assay.SourceLocation;
  * @param from interval start in metres, NaN when not given
  * @param to interval end in metres, NaN when not given
  */
-public record RegisterEntry(String sampleId, QcRole role, String reference, String holeId, double from, double to,
+record RegisterEntry(String sampleId, QcRole role, String reference, String holeId, double from, double to,
                             SourceLocation source) {
 }

@@ -18,7 +18,7 @@ import org.cupel.project.MessageText;
  * other than the header's) is excluded; a CRM or duplicate without a reference is kept with a warning, since
  * the analyses then cannot pair it.
  */
-public final class RegisterReader {
+final class RegisterReader {
     private static final String[] HOLE = {"hole id", "hole", "holeid", "bhid", "drillhole"};
     private static final String[] FROM = {"from m", "from", "depth from"};
     private static final String[] TO = {"to m", "to", "depth to"};

@@ -13,7 +13,7 @@ import org.cupel.project.DataIssue;
  * The sample register as read: its usable entries column-wise, in file order, found by sample ID.
  * Built by {@link RegisterReader}.
  */
-public final class SampleRegister {
+final class SampleRegister {
     private static final QcRole[] ROLES = QcRole.values();
 
     private final String file;

@@ -6,7 +6,7 @@ package org.cupel.recovery;
  * converted to g/t by {@link org.cupel.units.GradeUnit} before they get here, masses to grams by
  * {@link org.cupel.units.MassUnit}.
  */
-public final class MetalContent {
+final class MetalContent {
     private static final double GRAMS_PER_GRAM_PER_GPT = 1e-6;
 
     private MetalContent() {

@@ -87,17 +87,6 @@ public record RecoverySettings(String definition, double confidence, double alph
         return RecoveryDefinition.parse(definition);
     }
 
-    public RecoverySettings withMargin(double margin) {
-        return new RecoverySettings(definition, confidence, alpha, margin, powerDifference, power, balanceTolerance,
-                nearComplete, balanceResolutionGrams, assayRelativeSd, precisionSigma0, precisionK, productRoles);
-    }
-
-    public RecoverySettings withPowerDifference(double difference) {
-        return new RecoverySettings(definition, confidence, alpha, equivalenceMargin, difference, power,
-                balanceTolerance, nearComplete, balanceResolutionGrams, assayRelativeSd, precisionSigma0, precisionK,
-                productRoles);
-    }
-
     /** Standard uncertainty of one weighing: resolution/√12. */
     public double massUncertaintyGrams() {
         return balanceResolutionGrams / Math.sqrt(12);
@@ -116,5 +105,123 @@ public record RecoverySettings(String definition, double confidence, double alph
             rsd = assayRelativeSd.getOrDefault(roleKey, 0.0);
         }
         return rsd * gradeGpt;
+    }
+
+    /** A builder holding {@link #DEFAULTS}: {@code RecoverySettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
+        return DEFAULTS.toBuilder();
+    }
+
+    /** A builder holding these settings, to change some of them. */
+    public Builder toBuilder() {
+        return new Builder(this);
+    }
+
+    /**
+     * Sets any of the settings, each named as its record component; {@link #build} checks them together, as the
+     * config does, so the order of the calls does not matter.
+     */
+    public static final class Builder {
+        private String definition;
+        private double confidence;
+        private double alpha;
+        private double equivalenceMargin;
+        private double powerDifference;
+        private double power;
+        private double balanceTolerance;
+        private double nearComplete;
+        private double balanceResolutionGrams;
+        private Map<String, Double> assayRelativeSd;
+        private Double precisionSigma0;
+        private Double precisionK;
+        private Map<String, String> productRoles;
+
+        private Builder(RecoverySettings s) {
+            definition = s.definition();
+            confidence = s.confidence();
+            alpha = s.alpha();
+            equivalenceMargin = s.equivalenceMargin();
+            powerDifference = s.powerDifference();
+            power = s.power();
+            balanceTolerance = s.balanceTolerance();
+            nearComplete = s.nearComplete();
+            balanceResolutionGrams = s.balanceResolutionGrams();
+            assayRelativeSd = s.assayRelativeSd();
+            precisionSigma0 = s.precisionSigma0();
+            precisionK = s.precisionK();
+            productRoles = s.productRoles();
+        }
+
+        public Builder definition(String value) {
+            definition = value;
+            return this;
+        }
+
+        public Builder confidence(double value) {
+            confidence = value;
+            return this;
+        }
+
+        public Builder alpha(double value) {
+            alpha = value;
+            return this;
+        }
+
+        public Builder equivalenceMargin(double value) {
+            equivalenceMargin = value;
+            return this;
+        }
+
+        public Builder powerDifference(double value) {
+            powerDifference = value;
+            return this;
+        }
+
+        public Builder power(double value) {
+            power = value;
+            return this;
+        }
+
+        public Builder balanceTolerance(double value) {
+            balanceTolerance = value;
+            return this;
+        }
+
+        public Builder nearComplete(double value) {
+            nearComplete = value;
+            return this;
+        }
+
+        public Builder balanceResolutionGrams(double value) {
+            balanceResolutionGrams = value;
+            return this;
+        }
+
+        public Builder assayRelativeSd(Map<String, Double> value) {
+            assayRelativeSd = value;
+            return this;
+        }
+
+        public Builder precisionSigma0(Double value) {
+            precisionSigma0 = value;
+            return this;
+        }
+
+        public Builder precisionK(Double value) {
+            precisionK = value;
+            return this;
+        }
+
+        public Builder productRoles(Map<String, String> value) {
+            productRoles = value;
+            return this;
+        }
+
+        /** @throws org.cupel.config.SettingException or IllegalArgumentException for a value out of range */
+        public RecoverySettings build() {
+            return new RecoverySettings(definition, confidence, alpha, equivalenceMargin, powerDifference, power,
+                    balanceTolerance, nearComplete, balanceResolutionGrams, assayRelativeSd, precisionSigma0,
+                    precisionK, productRoles);
+        }
     }
 }

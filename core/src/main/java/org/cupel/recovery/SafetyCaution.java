@@ -1,7 +1,7 @@
 package org.cupel.recovery;
 
 /** The caution printed with every recovery output. */
-public final class SafetyCaution {
+final class SafetyCaution {
     /**
      * Hazards of fire assay and smelting; the regulations named are examples (US), not a complete list.
      */

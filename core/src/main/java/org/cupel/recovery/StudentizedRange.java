@@ -22,7 +22,7 @@ import org.apache.commons.statistics.distribution.NormalDistribution;
  * distribution function value before and after; docs/performance.md, "Kept libraries"). Checked against R's
  * {@code ptukey} and {@code qtukey}.
  */
-public final class StudentizedRange {
+final class StudentizedRange {
     private static final NormalDistribution STANDARD_NORMAL = NormalDistribution.of(0, 1);
     private static final int PANELS = 16;
     private static final int POINTS = 16;

@@ -7,7 +7,7 @@ package org.cupel.recovery;
  * (Satterthwaite 1946, "An approximate distribution of estimates of variance components", Biometrics
  * Bulletin 2). Components with νᵢ = ∞ (type B from a stated precision) contribute nothing to the sum.
  */
-public final class WelchSatterthwaite {
+final class WelchSatterthwaite {
     private WelchSatterthwaite() {
     }
 

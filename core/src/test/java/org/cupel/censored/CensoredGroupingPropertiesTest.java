@@ -107,8 +107,8 @@ class CensoredGroupingPropertiesTest {
         SeededTries.forAll(200, r -> new Shuffled(OBSERVATIONS.next(r), r.nextLong()), in -> {
             List<Obs> shuffled = new ArrayList<>(in.obs());
             Collections.shuffle(shuffled, new Random(in.seed()));
-            CensoredSettings settings = new CensoredSettings(KaplanMeier.LowestMass.AT_LOWEST_LIMIT,
-                    KaplanMeier.SdDivisor.DISTRIBUTION, 0, 1, 0);
+            CensoredSettings settings = CensoredSettings.withDefaults().bootstrapReplicates(0)
+                    .bootstrapSeed(1).bootstrapMaxN(0).build();
             CensoredAnalysis a = CensoredAnalysis.of(sample(in.obs()), settings);
             CensoredAnalysis b = CensoredAnalysis.of(sample(shuffled), settings);
             // Exactly equal: every method works on the sorted distinct values, never on the input order.

@@ -25,8 +25,8 @@ class CensoredPropertiesTest {
     /** Relative tolerance for maximum likelihood: Newton–Raphson stops at a step of about 1e-11. */
     private static final double ITERATIVE = 1e-6;
     /** The invariants concern the estimates; the seeded bootstrap would only slow the tries down. */
-    private static final CensoredSettings NO_BOOTSTRAP = new CensoredSettings(KaplanMeier.LowestMass.AT_LOWEST_LIMIT,
-            KaplanMeier.SdDivisor.DISTRIBUTION, 0, 1, 0);
+    private static final CensoredSettings NO_BOOTSTRAP = CensoredSettings.withDefaults().bootstrapReplicates(0)
+            .bootstrapSeed(1).bootstrapMaxN(0).build();
 
     /** 6 to 60 values, a quarter below one of four limits, with at least three distinct detects. */
     private static final Gen<List<AssayValue>> CENSORED_VALUES = Gen.<AssayValue>frequency(

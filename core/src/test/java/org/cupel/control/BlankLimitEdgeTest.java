@@ -2,7 +2,6 @@ package org.cupel.control;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import java.util.Map;
 import org.cupel.assay.AssayValue;
 import org.junit.jupiter.api.Test;
 
@@ -29,7 +28,7 @@ class BlankLimitEdgeTest {
     @Test
     void aBlankOnALevelWhoseDoubleFallsShortIsNotAboveIt() {
         // DL 0.3, fail at 3 × DL: the level is 0.8999999999999999 as a double, the blank 0.9 is exactly on it.
-        BlankSettings threeTimes = new BlankSettings(3, 3, 10, Map.of());
+        BlankSettings threeTimes = BlankSettings.withDefaults().failMultiple(3).warnMultiple(3).build();
         assertEquals(Verdict.PASS, judge(threeTimes, 0.3, 0.9));
         assertEquals(Verdict.FAIL, judge(threeTimes, 0.3, 0.901));
         // Warn level 3 × 0.1 = 0.30000000000000004: a blank of 0.3 is on it, 0.31 above it.

@@ -44,7 +44,8 @@ class BlankVerdictTest {
 
     @Test
     void censoredBlankWithLimitAboveTheThresholdCannotBeJudged() {
-        BlankSettings s = new BlankSettings(5, 3, 10, Map.of("Au", new BlankSettings.AbsoluteLimits(0.02, 0.015)));
+        BlankSettings s = BlankSettings.withDefaults()
+                .absolute(Map.of("Au", new BlankSettings.AbsoluteLimits(0.02, 0.015))).build();
         BlankThreshold t = s.thresholdFor("Au", 0.05).orElseThrow();
         assertEquals(Verdict.CANNOT_JUDGE, BlankVerdict.judge(AssayValue.belowDetection(0.05), t, "g/t").verdict());
         // A limit exactly at the absolute failure level still shows the blank is not above it.
@@ -53,7 +54,8 @@ class BlankVerdictTest {
 
     @Test
     void absoluteThresholdReplacesTheMultiples() {
-        BlankSettings s = new BlankSettings(5, 3, 10, Map.of("Au", new BlankSettings.AbsoluteLimits(0.02, null)));
+        BlankSettings s = BlankSettings.withDefaults()
+                .absolute(Map.of("Au", new BlankSettings.AbsoluteLimits(0.02, null))).build();
         BlankThreshold t = s.thresholdFor("Au", DL).orElseThrow();
         assertEquals(0.02, t.fail(), 0);
         assertEquals(Verdict.PASS, BlankVerdict.judge(AssayValue.detected(0.02, DL), t, "g/t").verdict());
@@ -74,7 +76,8 @@ class BlankVerdictTest {
     @Test
     void tenTimesRuleIsASetting() {
         // Some practitioners fail blanks above 10× DL (common practice); the multiple is configurable.
-        BlankThreshold ten = new BlankSettings(10, 3, 10, Map.of()).thresholdFor("Au", DL).orElseThrow();
+        BlankThreshold ten = BlankSettings.withDefaults().failMultiple(10).build().thresholdFor("Au", DL)
+                .orElseThrow();
         assertEquals(Verdict.WARN, BlankVerdict.judge(AssayValue.detected(0.08, DL), ten, "g/t").verdict());
         assertEquals(Verdict.FAIL, BlankVerdict.judge(AssayValue.detected(0.11, DL), ten, "g/t").verdict());
     }

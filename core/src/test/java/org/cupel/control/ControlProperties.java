@@ -79,8 +79,8 @@ class ControlProperties {
                 order.add(i);
             }
             SampleTable t = table(in.codes(), order);
-            ReassaySettings s = new ReassaySettings(in.wholeBatch() ? ReassaySettings.Scope.WHOLE_BATCH
-                    : ReassaySettings.Scope.BRACKET);
+            ReassaySettings s = ReassaySettings.withDefaults().scope(in.wholeBatch()
+                    ? ReassaySettings.Scope.WHOLE_BATCH : ReassaySettings.Scope.BRACKET).build();
             for (ReassayEntry e : ReassayList.build(t, outcomes(t, in.seed()), s).entries()) {
                 assertFalse(ReassayList.isControl(t.role(t.rowOf(e.sampleId()).getAsInt())), e.sampleId());
             }

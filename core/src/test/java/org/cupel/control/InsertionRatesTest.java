@@ -67,7 +67,8 @@ class InsertionRatesTest {
     @Test
     void zeroTargetsFlagNothing() {
         SampleTable t = new Sequences().batch("J", "RRRR").table();
-        InsertionRates r = InsertionRates.compute(t, new InsertionSettings(0, 0, 0, 0, 0, 0, 0));
+        InsertionRates r = InsertionRates.compute(t, InsertionSettings.withDefaults().crm(0).blank(0)
+                .fieldDuplicate(0).coarseDuplicate(0).pulpDuplicate(0).labRepeat(0).umpire(0).build());
         assertFalse(r.batches().get(0).belowTarget());
     }
 }

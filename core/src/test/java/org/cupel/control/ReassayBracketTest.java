@@ -41,8 +41,8 @@ class ReassayBracketTest {
         assertEquals("from passing CRM J-3 to passing CRM J-11", l.brackets().get(0).note());
         assertEquals(ReassaySettings.CrmBracket.PASSING_CRM, l.crmBracket());
         // With crmBracket PASSING_CONTROL the blanks at 5 and 9 bound it: samples 6 and 8.
-        ReassayList any = run(t, new ReassaySettings(ReassaySettings.Scope.BRACKET,
-                ReassaySettings.CrmBracket.PASSING_CONTROL, 0), outcomes);
+        ReassayList any = run(t, ReassaySettings.withDefaults()
+                .crmBracket(ReassaySettings.CrmBracket.PASSING_CONTROL).build(), outcomes);
         assertEquals(List.of("J-6", "J-8"), ids(any));
         assertEquals("from passing control J-5 to passing control J-9", any.brackets().get(0).note());
     }
@@ -64,15 +64,14 @@ class ReassayBracketTest {
         Object[] outcomes = {"J-2", Verdict.FAIL, "J-5", Verdict.PASS, "J-9", Verdict.PASS};
         assertEquals(List.of("J-3", "J-4", "J-6", "J-7", "J-8"), ids(run(t, ReassaySettings.DEFAULTS, outcomes)));
         // blankFollowing 3: the first three samples after the blank (the CRM between is not a sample): 3, 4, 6.
-        ReassayList capped = run(t, new ReassaySettings(ReassaySettings.Scope.BRACKET,
-                ReassaySettings.CrmBracket.PASSING_CRM, 3), outcomes);
+        ReassayList capped = run(t, ReassaySettings.withDefaults().blankFollowing(3).build(), outcomes);
         assertEquals(List.of("J-3", "J-4", "J-6"), ids(capped));
         ReassayBracket b = capped.brackets().get(0);
         assertEquals(List.of(3, 6, 3), List.of(b.fromPosition(), b.toPosition(), b.nSamples()));
         assertTrue(b.note().endsWith("at most 3 samples (reassay.blankFollowing)"), b.note());
         // A cap beyond the next passing blank changes nothing.
-        assertEquals(List.of("J-3", "J-4", "J-6", "J-7", "J-8"), ids(run(t, new ReassaySettings(
-                ReassaySettings.Scope.BRACKET, ReassaySettings.CrmBracket.PASSING_CRM, 20), outcomes)));
+        assertEquals(List.of("J-3", "J-4", "J-6", "J-7", "J-8"), ids(run(t, ReassaySettings.withDefaults()
+                .blankFollowing(20).build(), outcomes)));
     }
 
     @Test

@@ -23,7 +23,7 @@ class ReassayListTest {
         for (int i = 0; i < idAndVerdict.length; i += 2) {
             outs.add(Sequences.outcome(t, (String) idAndVerdict[i], (Verdict) idAndVerdict[i + 1]));
         }
-        return ReassayList.build(t, outs, new ReassaySettings(scope));
+        return ReassayList.build(t, outs, ReassaySettings.withDefaults().scope(scope).build());
     }
 
     @Test

@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
  */
 class LargeSampleAgreementTest {
     private static final DuplicateSettings LARGE_SAMPLE = DuplicateSettings.DEFAULTS;
-    private static final DuplicateSettings BOOTSTRAP = DuplicateSettings.DEFAULTS.withBootstrapMaxPairs(20_000);
+    private static final DuplicateSettings BOOTSTRAP = DuplicateSettings.withDefaults().bootstrapMaxPairs(20_000).build();
 
     static double[][] simulate(Random random, int n, double gradeSpread) {
         double[] a = new double[n];

@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
  * with their intervals, unchanged; the order in which pairs arrive changes nothing.
  */
 class LargeSampleIntervalProperties {
-    private static final DuplicateSettings SETTINGS = DuplicateSettings.DEFAULTS.withBootstrapMaxPairs(1000);
+    private static final DuplicateSettings SETTINGS = DuplicateSettings.withDefaults().bootstrapMaxPairs(1000).build();
     private static final double GRADE = 1.5;
 
     private static double[][] pairs(long seed, int n) {

@@ -20,7 +20,7 @@ class LargeSampleReferenceTest {
     private static final double REL = 1e-9;
     private static final JsonNode REF = ReferenceData.json("large_sample_reference.json");
     /** 1,325 pairs, above a bootstrap budget of 1,000: the large-sample intervals apply. */
-    private static final DuplicateSettings SETTINGS = DuplicateSettings.DEFAULTS.withBootstrapMaxPairs(1000);
+    private static final DuplicateSettings SETTINGS = DuplicateSettings.withDefaults().bootstrapMaxPairs(1000).build();
     private static final double[] GRADES = {0.5, 2.0};
 
     @Test

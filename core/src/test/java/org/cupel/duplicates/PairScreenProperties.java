@@ -28,7 +28,7 @@ class PairScreenProperties {
         List<Gen<Screening>> empty = List.of(r -> new Screening(List.of(), r.nextBoolean(), r.nextLong()));
         SeededTries.forAll(300, empty, r -> new Screening(PAIRS.next(r), r.nextBoolean(), r.nextLong()), in -> {
             List<DuplicatePair> pairs = in.pairs();
-            DuplicateSettings settings = in.halfLimit() ? DuplicateSettings.DEFAULTS.withCensoredAtHalfLimit(true)
+            DuplicateSettings settings = in.halfLimit() ? DuplicateSettings.withDefaults().censoredAtHalfLimit(true).build()
                     : DuplicateSettings.DEFAULTS;
             PairScreen.Decisions decisions = PairScreen.decide(pairs, settings);
             assertEquals(PairScreen.screen(pairs, settings), decisions.all());

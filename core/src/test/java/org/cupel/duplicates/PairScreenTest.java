@@ -40,7 +40,7 @@ class PairScreenTest {
 
     @Test
     void theMultipleIsASetting() {
-        ScreenedPairs s = PairScreen.screen(PAIRS, DuplicateSettings.DEFAULTS.withLimitMultipleOfDetection(5));
+        ScreenedPairs s = PairScreen.screen(PAIRS, DuplicateSettings.withDefaults().limitMultipleOfDetection(5).build());
         // mean 0.055 is above 5 x 0.01, so that pair comes back.
         assertEquals(3, s.relative().size());
         assertEquals(null, s.excludedRelative().get(ExclusionReason.BELOW_LIMIT_MULTIPLE));

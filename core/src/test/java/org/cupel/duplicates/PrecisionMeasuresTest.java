@@ -65,8 +65,8 @@ class PrecisionMeasuresTest {
             pairs.add(new DuplicatePair("D" + i, "S" + i, "B1", QcRole.PULP_DUPLICATE,
                     AssayValue.detected(A[i], 0.01), AssayValue.detected(B[i], 0.01)));
         }
-        DuplicateSettings tight = new DuplicateSettings(10, false, 90, 30, 20, 5, 10, 10, 11, 50, 200, 7L, 5000,
-                List.of(), 0.01);
+        DuplicateSettings tight = DuplicateSettings.withDefaults().pulpHardLimitPercent(5).bootstrapResamples(200)
+                .bootstrapSeed(7L).build();
         PrecisionSummary s = PrecisionMeasures.summarise(QcRole.PULP_DUPLICATE,
                 PairScreen.screen(pairs, tight), tight);
         assertEquals(RuleOutcome.FAIL, s.rule());

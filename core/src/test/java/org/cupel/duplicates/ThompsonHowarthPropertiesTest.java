@@ -3,15 +3,14 @@ package org.cupel.duplicates;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import java.util.List;
 import java.util.Random;
 import org.cupel.testing.Gen;
 import org.cupel.testing.SeededTries;
 import org.junit.jupiter.api.Test;
 
 class ThompsonHowarthPropertiesTest {
-    private static final DuplicateSettings SETTINGS = new DuplicateSettings(10, false, 90, 30, 20, 10, 10, 10, 11,
-            50, 100, 5L, 5000, List.of(), 0.01);
+    private static final DuplicateSettings SETTINGS = DuplicateSettings.withDefaults().bootstrapResamples(100)
+            .bootstrapSeed(5L).build();
 
     /** Thompson–Howarth sorts pairs by mean, so the order the pairs arrive in must not matter. */
     @Test

@@ -16,8 +16,8 @@ class ThompsonHowarthTest {
     private static final double[] MEANS = {10, 20, 30, 40, 50};
     /** |d| as multiples of the group median: the sixth of eleven is 1. */
     private static final double[] SPREAD = {0.2, 0.4, 0.6, 0.8, 0.9, 1.0, 1.1, 1.5, 2.0, 3.0, 4.0};
-    private static final DuplicateSettings SETTINGS = new DuplicateSettings(10, false, 90, 30, 20, 10, 10, 10, 11,
-            50, 200, 11L, 5000, List.of(), 0.01);
+    private static final DuplicateSettings SETTINGS = DuplicateSettings.withDefaults().bootstrapResamples(200)
+            .bootstrapSeed(11L).build();
 
     /**
      * Constructed case: five groups of 11 pairs, all pairs of group j with mean c_j and |d| spread around a
@@ -116,8 +116,8 @@ class ThompsonHowarthTest {
             a[i] = c + sd * random.nextGaussian();
             b[i] = c + sd * random.nextGaussian();
         }
-        DuplicateSettings settings = new DuplicateSettings(10, false, 90, 30, 20, 10, 10, 10, 11, 50, 500, 99L, 5000,
-                List.of(), 0.01);
+        DuplicateSettings settings = DuplicateSettings.withDefaults().bootstrapResamples(500).bootstrapSeed(99L)
+                .build();
         PrecisionModelResult r = ThompsonHowarth.fit(a, b, new double[] {1.0}, settings);
         for (ModelFit fit : List.of(r.thompsonHowarth(), r.rmsRegression())) {
             assertTrue(fit.sigma0().ciLow() <= s0 && s0 <= fit.sigma0().ciHigh(), fit.method() + " " + fit.sigma0());

@@ -153,9 +153,7 @@ class ReconciliationScaleTest {
     }
 
     private static RecoverySettings settings(double f) {
-        RecoverySettings d = RecoverySettings.DEFAULTS;
-        return new RecoverySettings(d.definition(), d.confidence(), d.alpha(), d.equivalenceMargin(),
-                d.powerDifference(), d.power(), d.balanceTolerance(), d.nearComplete(), d.balanceResolutionGrams() * f,
-                d.assayRelativeSd(), null, null, Map.of());
+        return RecoverySettings.withDefaults()
+                .balanceResolutionGrams(RecoverySettings.DEFAULTS.balanceResolutionGrams() * f).build();
     }
 }

@@ -65,7 +65,8 @@ class RecoveryAnalysisTest {
 
     @Test
     void comparisonsGiveVerdictsAndPlans() {
-        RecoveryResult r = RecoveryAnalysis.run(lowRecovery(), RecoverySettings.DEFAULTS.withMargin(0.5));
+        RecoveryResult r = RecoveryAnalysis.run(lowRecovery(),
+                RecoverySettings.withDefaults().equivalenceMargin(0.5).build());
         PairComparison ab = r.comparisons().get(0);
         assertEquals("A", ab.first());
         assertTrue(ab.welch().difference() > 0);

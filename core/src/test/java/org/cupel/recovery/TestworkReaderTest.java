@@ -70,8 +70,8 @@ class TestworkReaderTest {
         Files.writeString(dir.resolve("testwork/heads.csv"), HEADS);
         Files.writeString(dir.resolve("testwork/smelts.csv"), "test_id,condition,feed,charge_g,button_g,button_Au_g/t,"
                 + "speiss_g,speiss_Au_g/t\nT1,A,F1,100,40,2000,5,600\n");
-        RecoverySettings settings = new RecoverySettings("loss", 0.95, 0.05, 0.5, 1, 0.8, 0.05, 95, 0.01, null, null,
-                null, java.util.Map.of("speiss", "collected"));
+        RecoverySettings settings = RecoverySettings.withDefaults()
+                .productRoles(java.util.Map.of("speiss", "collected")).build();
         Testwork t = TestworkReader.read(dir, settings, ValueConventions.DEFAULTS);
         assertEquals(ProductRole.COLLECTED, t.smelts().get(0).products().get(1).role());
     }

@@ -126,7 +126,7 @@ class ControlSectionsTest {
 
     @Test
     void blankSectionSaysWhichThresholdTheUserSet() {
-        BlankReport rep = BlankReview.review(List.of(), new BlankSettings(10, 3, 10, java.util.Map.of()));
+        BlankReport rep = BlankReview.review(List.of(), BlankSettings.withDefaults().failMultiple(10).build());
         ReportSection s = BlankSection.build(rep, org.cupel.config.CupelConfig.fromYaml("blanks:\n  failMultiple: 10\n",
                 "cupel.yaml"));
         String rules = ((ReportBlock.Paragraph) s.blocks().get(1)).text();

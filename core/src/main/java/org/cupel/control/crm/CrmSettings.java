@@ -83,4 +83,100 @@ public record CrmSettings(Map<String, RuleAction> rules, double ewmaLambda, doub
         m.put(CrmRule.W_2_2S.id(), RuleAction.FAIL);
         return m;
     }
+
+    /** A builder holding {@link #DEFAULTS}: {@code CrmSettings.withDefaults().someSetting(value).build()}. */
+    public static Builder withDefaults() {
+        return DEFAULTS.toBuilder();
+    }
+
+    /** A builder holding these settings, to change some of them. */
+    public Builder toBuilder() {
+        return new Builder(this);
+    }
+
+    /**
+     * Sets any of the settings, each named as its record component; {@link #build} checks them together, as the
+     * config does, so the order of the calls does not matter.
+     */
+    public static final class Builder {
+        private Map<String, RuleAction> rules;
+        private double ewmaLambda;
+        private double ewmaWidth;
+        private double cusumK;
+        private double cusumH;
+        private int projectLimitsMinN;
+        private double swapWithinSd;
+        private double blankLevelMultiple;
+        private double confidence;
+        private double driftAlpha;
+
+        private Builder(CrmSettings s) {
+            rules = s.rules();
+            ewmaLambda = s.ewmaLambda();
+            ewmaWidth = s.ewmaWidth();
+            cusumK = s.cusumK();
+            cusumH = s.cusumH();
+            projectLimitsMinN = s.projectLimitsMinN();
+            swapWithinSd = s.swapWithinSd();
+            blankLevelMultiple = s.blankLevelMultiple();
+            confidence = s.confidence();
+            driftAlpha = s.driftAlpha();
+        }
+
+        public Builder rules(Map<String, RuleAction> value) {
+            rules = value;
+            return this;
+        }
+
+        public Builder ewmaLambda(double value) {
+            ewmaLambda = value;
+            return this;
+        }
+
+        public Builder ewmaWidth(double value) {
+            ewmaWidth = value;
+            return this;
+        }
+
+        public Builder cusumK(double value) {
+            cusumK = value;
+            return this;
+        }
+
+        public Builder cusumH(double value) {
+            cusumH = value;
+            return this;
+        }
+
+        public Builder projectLimitsMinN(int value) {
+            projectLimitsMinN = value;
+            return this;
+        }
+
+        public Builder swapWithinSd(double value) {
+            swapWithinSd = value;
+            return this;
+        }
+
+        public Builder blankLevelMultiple(double value) {
+            blankLevelMultiple = value;
+            return this;
+        }
+
+        public Builder confidence(double value) {
+            confidence = value;
+            return this;
+        }
+
+        public Builder driftAlpha(double value) {
+            driftAlpha = value;
+            return this;
+        }
+
+        /** @throws org.cupel.config.SettingException or IllegalArgumentException for a value out of range */
+        public CrmSettings build() {
+            return new CrmSettings(rules, ewmaLambda, ewmaWidth, cusumK, cusumH, projectLimitsMinN, swapWithinSd,
+                    blankLevelMultiple, confidence, driftAlpha);
+        }
+    }
 }

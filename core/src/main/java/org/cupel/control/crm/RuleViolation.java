@@ -9,7 +9,7 @@ import java.util.List;
  * @param signal index (in the sequence evaluated) of the result that completes the pattern
  * @param involved indices of every result of the pattern, ascending, the signal included
  */
-public record RuleViolation(CrmRule rule, int signal, List<Integer> involved) {
+record RuleViolation(CrmRule rule, int signal, List<Integer> involved) {
     public RuleViolation {
         involved = List.copyOf(involved);
     }

@@ -11,7 +11,7 @@ import org.cupel.assay.LimitComparison;
  * comparison of z with ±1, ±2 or ±3 goes through {@link LimitComparison}, so a result exactly on a limit
  * in its reported decimals is on it, whatever the last bit of the computed z.
  */
-public final class RunRules {
+final class RunRules {
     private RunRules() {
     }
 

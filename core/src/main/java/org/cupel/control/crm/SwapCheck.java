@@ -13,7 +13,7 @@ import org.cupel.project.CrmCertificate;
  * material follows Smee, Bloom, Arne &amp; Heberlein 2024 (Geochemistry: Exploration, Environment,
  * Analysis 24). When several CRMs match, the closest in SD units is named.
  */
-public final class SwapCheck {
+final class SwapCheck {
     /** The label used in {@link CrmResult#swapWith()} for a blank-level value. */
     public static final String BLANK = "blank";
 
