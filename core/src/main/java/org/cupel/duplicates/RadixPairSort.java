@@ -9,30 +9,59 @@ import java.util.Arrays;
  * array's bits, made order-preserving as unsigned integers, carrying the second array along; then each run of
  * equal first values has its second values sorted. Digits that every key shares (the sign and most exponent
  * bits of assay means) are skipped, so a million pairs take three to five passes instead of the twenty of a
- * merge sort. Equal pairs are interchangeable, so the result is the same arrays as any correct sort's.
+ * merge sort. Equal pairs are interchangeable, so the result is the same arrays as any correct sort's. A single
+ * array is sorted the same way ({@link #sort(double[])}), for the ranks of the Wilcoxon signed-rank test.
  */
 final class RadixPairSort {
     private static final int BITS = 11;
     private static final int BUCKETS = 1 << BITS;
     private static final int DIGITS = (Long.SIZE + BITS - 1) / BITS;
+    private static final int SHORT_RUN = 24;
 
     private RadixPairSort() {
     }
 
     /** Sorts {@code first} and {@code second} together, in place: by first, then second. */
     static void sort(double[] first, double[] second) {
-        int n = first.length;
-        if (n < 2) {
+        if (first.length < 2) {
             return;
         }
-        long[] key = new long[n];
-        for (int i = 0; i < n; i++) {
-            key[i] = sortable(first[i]);
+        long[] key = byDigits(keys(first), second);
+        fromKeys(key, first);
+        sortTies(key, second);
+    }
+
+    /** Sorts {@code values} in place, in the order of {@link Arrays#sort(double[])}. */
+    static void sort(double[] values) {
+        if (values.length >= 2) {
+            fromKeys(byDigits(keys(values), null), values);
         }
+    }
+
+    private static long[] keys(double[] values) {
+        long[] key = new long[values.length];
+        for (int i = 0; i < key.length; i++) {
+            key[i] = sortable(values[i]);
+        }
+        return key;
+    }
+
+    private static void fromKeys(long[] key, double[] values) {
+        for (int i = 0; i < key.length; i++) {
+            values[i] = unsortable(key[i]);
+        }
+    }
+
+    /**
+     * The keys sorted, one stable distribution pass per digit that the keys do not all share, with
+     * {@code payload} (may be null) moved along and left, sorted, in its own array.
+     */
+    private static long[] byDigits(long[] key, double[] payload) {
+        int n = key.length;
         int[][] counts = histograms(key);
         long[] keyOut = new long[n];
-        double[] second0 = second;
-        double[] secondOut = new double[n];
+        double[] p = payload;
+        double[] pOut = payload == null ? null : new double[n];
         for (int digit = 0; digit < DIGITS; digit++) {
             int shift = digit * BITS;
             int[] count = counts[digit];
@@ -46,22 +75,21 @@ final class RadixPairSort {
             for (int i = 0; i < n; i++) {
                 int at = start[(int) ((key[i] >>> shift) & (BUCKETS - 1))]++;
                 keyOut[at] = key[i];
-                secondOut[at] = second[i];
+                if (p != null) {
+                    pOut[at] = p[i];
+                }
             }
             long[] k = key;
             key = keyOut;
             keyOut = k;
-            double[] s = second;
-            second = secondOut;
-            secondOut = s;
+            double[] t = p;
+            p = pOut;
+            pOut = t;
         }
-        if (second != second0) {
-            System.arraycopy(second, 0, second0, 0, n);
+        if (p != payload) {
+            System.arraycopy(p, 0, payload, 0, n);
         }
-        for (int i = 0; i < n; i++) {
-            first[i] = unsortable(key[i]);
-        }
-        sortTies(key, second0);
+        return key;
     }
 
     /** One count per bucket per digit, from a single pass over the keys. */
@@ -83,10 +111,25 @@ final class RadixPairSort {
             while (to < n && key[to] == key[from]) {
                 to++;
             }
-            if (to - from > 1) {
+            if (to - from > SHORT_RUN) {
                 Arrays.sort(second, from, to);
+            } else if (to - from > 1) {
+                insertionSort(second, from, to);
             }
             from = to;
+        }
+    }
+
+    /** Short runs (the ties of rounded means) by insertion: {@link Arrays#sort} costs more to set up. */
+    private static void insertionSort(double[] v, int from, int to) {
+        for (int i = from + 1; i < to; i++) {
+            double x = v[i];
+            int j = i - 1;
+            while (j >= from && Double.compare(v[j], x) > 0) {
+                v[j + 1] = v[j];
+                j--;
+            }
+            v[j + 1] = x;
         }
     }
 

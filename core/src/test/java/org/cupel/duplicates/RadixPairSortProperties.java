@@ -66,6 +66,17 @@ class RadixPairSortProperties {
     }
 
     @Test
+    void radixSortOfOneArrayGivesArraysSort() {
+        SeededTries.forAll(60, List.of(inputs(0, 1), inputs(1, 2)), inputs(0, 9000), in -> {
+            double[] radix = in.first().clone();
+            double[] reference = in.first().clone();
+            RadixPairSort.sort(radix);
+            Arrays.sort(reference);
+            assertArrayEquals(reference, radix);
+        });
+    }
+
+    @Test
     void sortableKeysKeepTheOrderOfDoubleCompareAndInvert() {
         SeededTries.forAll(200, inputs(2, 2), in -> {
             double x = in.first()[0];
