@@ -66,9 +66,10 @@ public final class PairedTests {
         for (int i = 0; i < n; i++) {
             abs[i] = roundedMagnitude(d[i]);
         }
-        double[] sorted = abs.clone();
+        double[] positive = positiveMagnitudes(d, abs);
+        double[] sorted = abs;
         sortValues(sorted);
-        double wPlus = positiveRankSum(sorted, positiveMagnitudes(d, abs));
+        double wPlus = positiveRankSum(sorted, positive);
         double total = n * (n + 1) / 2.0;
         double w = Math.min(wPlus, total - wPlus);
         double tieTerm = tieTerm(sorted);
