@@ -1,27 +1,29 @@
 package org.cupel.duplicates;
 
 import com.fasterxml.jackson.annotation.JsonIgnore;
+import com.fasterxml.jackson.annotation.JsonProperty;
+import com.fasterxml.jackson.annotation.JsonPropertyOrder;
 import org.cupel.assay.AssayValue;
 
 /**
  * A pair flagged for a look: its IDs, batch, values and the test that flagged it. Read it original first:
  * {@code originalId} with {@code original}, then {@code id} with {@code duplicate}.
  *
+ * <p>The values' text ({@link #original()}, {@link #duplicate()}) is written when asked for, not when the pair is
+ * flagged: a set of a million pairs can flag a hundred thousand, of which the JSON lists the first hundred.
+ *
  * @param id duplicate sample ID
  * @param originalId original sample ID
  * @param batch the duplicate's batch
- * @param original the original as reported
- * @param duplicate the duplicate as reported
  * @param hard HARD of the pair as a fraction (for a pair below the detection-limit multiple it is shown for
  *     reference only: such pairs are neither judged nor ranked by HARD)
  * @param absDifference |original − duplicate| in the analyte's unit
  * @param tests which tests flagged it
- * @param originalValue the original's value, for tables that keep the number apart from its text (the JSON
- *     has {@code original}, the value as the lab wrote it)
+ * @param originalValue the original's value (the JSON has {@link #original()}, the value as the lab wrote it)
  * @param duplicateValue the duplicate's value, likewise
  */
-public record OutlierPair(String id, String originalId, String batch, String original, String duplicate,
-                          double hard, double absDifference, java.util.List<Test> tests,
+@JsonPropertyOrder({"id", "originalId", "batch", "original", "duplicate", "hard", "absDifference", "tests"})
+public record OutlierPair(String id, String originalId, String batch, double hard, double absDifference, java.util.List<Test> tests,
                           @JsonIgnore AssayValue originalValue, @JsonIgnore AssayValue duplicateValue) {
 
     public OutlierPair {
@@ -32,8 +34,19 @@ public record OutlierPair(String id, String originalId, String batch, String ori
     public static OutlierPair of(String id, String originalId, String batch, AssayValue original,
                                  AssayValue duplicate, double hard, double absDifference,
                                  java.util.List<Test> tests) {
-        return new OutlierPair(id, originalId, batch, original.display(), duplicate.display(), hard, absDifference,
-                tests, original, duplicate);
+        return new OutlierPair(id, originalId, batch, hard, absDifference, tests, original, duplicate);
+    }
+
+    /** The original as the lab wrote it. */
+    @JsonProperty("original")
+    public String original() {
+        return originalValue.display();
+    }
+
+    /** The duplicate as the lab wrote it. */
+    @JsonProperty("duplicate")
+    public String duplicate() {
+        return duplicateValue.display();
     }
 
     /** "original ID / duplicate ID", the order in which the values are given; the duplicate ID alone without one. */

@@ -17,6 +17,8 @@ public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, 
                          double droppedFromMean) {
     /** Runs this short are sorted by insertion before {@link #sortByMean} merges them. */
     private static final int RUN = 32;
+    /** From this many pairs on, {@link RadixPairSort} is faster than the merge sort. */
+    static final int RADIX_FROM = 4096;
 
     public PairGroups {
         means = means.clone();
@@ -85,10 +87,20 @@ public record PairGroups(int groupSize, double[] means, double[] medianAbsDiff, 
 
     /**
      * Sorts pairs by mean, ties broken by |d|: the canonical order of the multiset of pairs (pairs with equal mean
-     * and |d| are interchangeable, so only the sorted values matter). A merge sort of the values themselves (no
-     * index indirection, no boxing); it orders any two parallel arrays by the first, then the second.
+     * and |d| are interchangeable, so only the sorted values matter). It orders any two parallel arrays by the
+     * first, then the second: by {@link RadixPairSort} from {@link #RADIX_FROM} pairs on, else by
+     * {@link #mergeSort}; both give the same arrays.
      */
     static void sortByMeanThenDiff(double[] means, double[] absDiff) {
+        if (means.length >= RADIX_FROM) {
+            RadixPairSort.sort(means, absDiff);
+        } else {
+            mergeSort(means, absDiff);
+        }
+    }
+
+    /** A merge sort of the values themselves (no index indirection, no boxing) by first, then second. */
+    static void mergeSort(double[] means, double[] absDiff) {
         int n = means.length;
         for (int from = 0; from < n; from += RUN) {
             insertionSort(means, absDiff, from, Math.min(n, from + RUN));

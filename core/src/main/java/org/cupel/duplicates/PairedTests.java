@@ -66,12 +66,13 @@ final class PairedTests {
         for (int i = 0; i < n; i++) {
             abs[i] = roundedMagnitude(d[i]);
         }
-        double[] sorted = abs.clone();
-        Arrays.sort(sorted);
-        double wPlus = positiveRankSum(sorted, positiveMagnitudes(d, abs));
+        double[] positive = positiveMagnitudes(d, abs);
+        double[] sorted = abs;
+        sortValues(sorted);
+        double wPlus = positiveRankSum(sorted, positive);
         double total = n * (n + 1) / 2.0;
         double w = Math.min(wPlus, total - wPlus);
-        double tieTerm = tieTerm(abs);
+        double tieTerm = tieTerm(sorted);
         if (n <= EXACT_LIMIT && tieTerm == 0) {
             double p = new WilcoxonSignedRankTest().wilcoxonSignedRankTest(d, new double[n], true);
             return new TestResult(name, w, Double.NaN, Math.min(1.0, p), n, "exact distribution", "");
@@ -106,7 +107,7 @@ final class PairedTests {
             }
         }
         pos = Arrays.copyOf(pos, k);
-        Arrays.sort(pos);
+        sortValues(pos);
         return pos;
     }
 
@@ -166,10 +167,17 @@ final class PairedTests {
         return new BigDecimal(v).round(TWELVE_DIGITS).doubleValue();
     }
 
-    /** The tie correction Σ(t³ − t) over runs of equal values of {@code values}. */
-    private static double tieTerm(double[] values) {
-        double[] s = values.clone();
-        Arrays.sort(s);
+    /** Ascending, by radix from {@link PairGroups#RADIX_FROM} values on (a million differences at 1M pairs). */
+    private static void sortValues(double[] values) {
+        if (values.length >= PairGroups.RADIX_FROM) {
+            RadixPairSort.sort(values);
+        } else {
+            Arrays.sort(values);
+        }
+    }
+
+    /** The tie correction Σ(t³ − t) over runs of equal values of {@code s}, sorted ascending. */
+    private static double tieTerm(double[] s) {
         double sum = 0;
         int i = 0;
         while (i < s.length) {
