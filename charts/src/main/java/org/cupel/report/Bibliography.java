@@ -193,6 +193,8 @@ public final class Bibliography {
     }
 
     static final class MethodForm {
+        private static final Pattern BACK_REFERENCE = Pattern.compile("\\\\(?:[1-9]|k<)");
+
         public String name;
         public String pattern;
         public List<String> sources = List.of();
@@ -200,6 +202,12 @@ public final class Bibliography {
         Method toMethod() {
             require(name, "name", name);
             require(pattern, "pattern", name);
+            if (BACK_REFERENCE.matcher(pattern).find()) {
+                // The report searches each pattern in a section's texts joined by line breaks (Citations), where
+                // a back-reference could join two texts; no method name needs one.
+                throw new IllegalStateException(RESOURCE + ": the pattern of " + name + " uses a back-reference ("
+                        + pattern + "); write the name out instead");
+            }
             try {
                 return new Method(name, Pattern.compile(pattern), sources);
             } catch (PatternSyntaxException e) {

@@ -39,8 +39,10 @@ public final class MethodsSection {
         // The thresholds table cites too ("Westgard et al. 1981"), and is named as the place that cites.
         all.add(new ReportSection(ID, thresholds.title(), List.of(new ReportBlock.Table(thresholds)), Map.of()));
         Sources sources = new Sources(bibliography);
-        for (ReportSection s : all) {
-            sources.collect(s);
+        // Searching the texts is the costly part (seconds at a million samples), so the sections are searched
+        // on every core; what they cite is then recorded in the sections' order.
+        for (Found f : all.parallelStream().map(s -> Found.in(s, bibliography)).toList()) {
+            sources.collect(f);
         }
         for (Reference r : OWN) {
             sources.add(r, "report format");
@@ -83,6 +85,13 @@ public final class MethodsSection {
         return new ReportSection(ID, TITLE, blocks, h);
     }
 
+    /** What one section cites by author and year and the methods it names. */
+    private record Found(ReportSection section, List<Citations.Cited> cited, List<Bibliography.Method> methods) {
+        static Found in(ReportSection s, Bibliography bibliography) {
+            return new Found(s, Citations.in(s), Citations.methodsIn(s, bibliography));
+        }
+    }
+
     /** The sources found so far, in order of first citation, with where each is cited and what is wrong. */
     private static final class Sources {
         private final Bibliography bibliography;
@@ -95,7 +104,8 @@ public final class MethodsSection {
             this.bibliography = bibliography;
         }
 
-        void collect(ReportSection s) {
+        void collect(Found f) {
+            ReportSection s = f.section();
             for (Reference r : s.references()) {
                 if (bibliography.entryOf(r).isPresent()) {
                     add(r, s.title());
@@ -103,7 +113,7 @@ public final class MethodsSection {
                     problem(r.citation() + " (listed by " + s.title() + ", not the bibliography's entry)");
                 }
             }
-            for (Citations.Cited c : Citations.in(s)) {
+            for (Citations.Cited c : f.cited()) {
                 List<Bibliography.Entry> found = bibliography.resolve(c);
                 if (found.size() == 1) {
                     add(found.get(0).reference(), s.title());
@@ -111,7 +121,7 @@ public final class MethodsSection {
                     problem(c.asWritten() + (found.isEmpty() ? "" : " (names " + found.size() + " entries)"));
                 }
             }
-            for (Bibliography.Method m : Citations.methodsIn(s, bibliography)) {
+            for (Bibliography.Method m : f.methods()) {
                 addOnce(methodsUsedIn.computeIfAbsent(m, k -> new ArrayList<>()), s.title());
                 if (m.sources().isEmpty()) {
                     problem(m.name() + " (named in " + s.title() + ", no source in the bibliography)");

@@ -1,17 +1,21 @@
 package org.cupel.report;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.ByteArrayInputStream;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.cupel.config.CupelConfig;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /** Author–year citations and method names as the sections write them; expected readings are the plain sense of the text. */
 class CitationsTest {
@@ -130,5 +134,42 @@ class CitationsTest {
         assertTrue(warns(m, "Tukey–Kramer comparisons (named in X, no source in the bibliography)"));
         assertEquals(1, m.headlines().get("citationsWithoutReference"));
         assertEquals(List.of("Tukey–Kramer comparisons", "", "X"), table(m, "method-sources").rows().get(0));
+    }
+
+    /**
+     * The methods found in a section's texts joined once are those found by searching every text on its own
+     * (the reading before the join), for every section of the demo appendix and a text that puts two method
+     * names' halves in neighbouring cells.
+     */
+    @Test
+    void methodsFoundInTheJoinedTextsAreThoseOfEachText(@TempDir Path scratch) throws Exception {
+        Bibliography b = Bibliography.standard();
+        List<ReportSection> sections = new ArrayList<>(DemoReport.build(scratch).sections());
+        sections.add(new ReportSection("y", "Y", List.of(new ReportBlock.Paragraph("least"),
+                new ReportBlock.Paragraph("squares, Kaplan"), new ReportBlock.Paragraph("Meier; RMS"),
+                new ReportBlock.Paragraph("CV; Welch")), Map.of(), List.of()));
+        int named = 0;
+        for (ReportSection s : sections) {
+            List<Bibliography.Method> eachText = b.methods().stream().filter(m -> {
+                boolean[] found = {false};
+                Citations.texts(s, text -> found[0] |= m.pattern().matcher(text).find());
+                return found[0];
+            }).toList();
+            assertEquals(eachText, Citations.methodsIn(s, b), s.title());
+            named += eachText.size();
+        }
+        assertTrue(named > 20, "the demo appendix names methods: " + named);
+    }
+
+    @Test
+    void aMethodPatternWithABackReferenceIsRefused() throws Exception {
+        String file;
+        try (InputStream in = Bibliography.class.getResourceAsStream("references.yaml")) {
+            file = new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        }
+        String withBackReference = file + "  - name: Doubled word\n    pattern: '(\\w+) \\1'\n    sources: []\n";
+        IllegalStateException e = assertThrows(IllegalStateException.class, () -> Bibliography.read(
+                new ByteArrayInputStream(withBackReference.getBytes(StandardCharsets.UTF_8))));
+        assertTrue(e.getMessage().contains("the pattern of Doubled word uses a back-reference"), e.getMessage());
     }
 }
