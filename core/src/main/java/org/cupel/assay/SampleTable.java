@@ -24,6 +24,8 @@ public final class SampleTable {
     private final List<Batch> batches;
     private final List<String> files;
     private final RowIndex rowById;
+    /** Rows of each role, by {@link QcRole#ordinal()}; made on first use ({@link #rowsByRole()}). */
+    private volatile int[][] rowsByRole;
 
     private SampleTable(Builder b) {
         int n = b.size;
@@ -98,22 +100,33 @@ public final class SampleTable {
     }
 
     /** Rows with the given role, in table order. */
+    /** The rows of {@code role} in row order; a fresh array the caller may reorder. */
     public int[] rowsWithRole(QcRole role) {
-        byte r = (byte) role.ordinal();
-        int count = 0;
-        for (byte x : roles) {
-            if (x == r) {
-                count++;
+        return rowsByRole()[role.ordinal()].clone();
+    }
+
+    /**
+     * Every role's rows, found in one pass the first time they are asked for: the analyses ask for them per
+     * analyte, and a pass over a million rows per question cost more than the copy.
+     */
+    private int[][] rowsByRole() {
+        int[][] byRole = rowsByRole;
+        if (byRole == null) {
+            int[] counts = new int[ROLES.length];
+            for (byte r : roles) {
+                counts[r]++;
             }
-        }
-        int[] out = new int[count];
-        int k = 0;
-        for (int i = 0; i < roles.length; i++) {
-            if (roles[i] == r) {
-                out[k++] = i;
+            byRole = new int[ROLES.length][];
+            for (int r = 0; r < ROLES.length; r++) {
+                byRole[r] = new int[counts[r]];
             }
+            int[] filled = new int[ROLES.length];
+            for (int i = 0; i < roles.length; i++) {
+                byRole[roles[i]][filled[roles[i]]++] = i;
+            }
+            rowsByRole = byRole; // a race computes the same arrays twice, no worse
         }
-        return out;
+        return byRole;
     }
 
     public static Builder builder() {

@@ -28,6 +28,30 @@ class SampleTableTest {
         assertArrayEquals(new int[] {0, 20}, java.util.Arrays.copyOf(table.rowsWithRole(QcRole.CRM), 2));
     }
 
+    /** Every role's rows are those of that role in row order, each call a fresh array the caller may reorder. */
+    @Test
+    void rowsOfEachRoleAreFoundInRowOrderAndHandedOutAsCopies() {
+        Batch b = new Batch("J", "", null, "f");
+        QcRole[] roles = QcRole.values();
+        SampleTable.Builder t = SampleTable.builder();
+        java.util.Random random = new java.util.Random(7);
+        for (int i = 0; i < 500; i++) {
+            t.add("S" + i, b, i + 1, roles[random.nextInt(roles.length)], "", new SourceLocation("f", i + 2, 0));
+        }
+        SampleTable table = t.build();
+        int total = 0;
+        for (QcRole role : roles) {
+            int[] expected = java.util.stream.IntStream.range(0, table.size()).filter(r -> table.role(r) == role)
+                    .toArray();
+            int[] rows = table.rowsWithRole(role);
+            assertArrayEquals(expected, rows, role.name());
+            java.util.Arrays.fill(rows, -1);
+            assertArrayEquals(expected, table.rowsWithRole(role), role + ": a caller's change does not reach the table");
+            total += expected.length;
+        }
+        assertEquals(500, total);
+    }
+
     @Test
     void duplicateIdIsRefused() {
         SampleTable.Builder t = SampleTable.builder();
