@@ -6,6 +6,8 @@ import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.Function;
+import java.util.function.Supplier;
 import java.util.function.ToDoubleFunction;
 import org.cupel.assay.LimitComparison;
 import org.cupel.assay.QcRole;
@@ -57,19 +59,42 @@ public final class DuplicateAnalysis {
 
     static DuplicateSetResult analyseSet(String analyte, String unit, QcRole type, List<DuplicatePair> pairs,
                                          double[] grades, DuplicateSettings settings) {
+        return analyseSet(analyte, unit, type, pairs, grades, settings, SideTask::start);
+    }
+
+    /**
+     * The analysis of one set. The Thompson–Howarth fit and the flags that need its model go to a spare core
+     * ({@code side}) while this thread computes the precision summary, the bias and the batches: they share
+     * nothing but the screened pairs, which no step modifies (each copies what it sorts), so the result is the
+     * same whichever thread computes what.
+     *
+     * @param side starts the model's task: {@link SideTask#start}, or {@link SideTask#inPlace} for one thread
+     */
+    static DuplicateSetResult analyseSet(String analyte, String unit, QcRole type, List<DuplicatePair> pairs,
+                                         double[] grades, DuplicateSettings settings,
+                                         Function<Supplier<Modelled>, SideTask<Modelled>> side) {
         PairScreen.Decisions decisions = PairScreen.decide(pairs, settings);
         ScreenedPairs screened = decisions.all();
         ScreenedPairs.Members abs = screened.absolute();
         ScreenedPairs.Members rel = screened.relative();
+        SideTask<Modelled> modelled = side.apply(() -> {
+            PrecisionModelResult model = ThompsonHowarth.fit(abs.sharedA(), abs.sharedB(), grades, settings);
+            return new Modelled(model, outliers(screened, model, settings.hardLimit(type)));
+        });
         PrecisionSummary precision = PrecisionMeasures.summarise(type, screened, settings);
-        PrecisionModelResult model = ThompsonHowarth.fit(abs.sharedA(), abs.sharedB(), grades, settings);
         BiasResult bias = BiasAnalysis.compare(type, rel.sharedA(), rel.sharedB());
-        Flagged outliers = outliers(screened, model, settings.hardLimit(type));
-        return new DuplicateSetResult(analyte, unit, type, precision, model, bias, outliers.ranked(),
+        List<BatchPrecision> batches = batches(type, pairs, decisions, screened, precision.rmsCv(), settings);
+        Modelled m = modelled.join();
+        Flagged outliers = m.outliers();
+        return new DuplicateSetResult(analyte, unit, type, precision, m.model(), bias, outliers.ranked(),
                 outliers.belowThreshold(),
                 new DuplicateSetResult.PairValues(abs, rel, outliers.flags(abs),
                         outliers.flags(rel)),
-                batches(type, pairs, decisions, screened, precision.rmsCv(), settings));
+                batches);
+    }
+
+    /** The precision model of a set and the pairs it and the HARD limit flag. */
+    record Modelled(PrecisionModelResult model, Flagged outliers) {
     }
 
     /** Per-batch precision, in the order batches first appear; each batch's pairs keep the set's screening. */
@@ -129,7 +154,7 @@ public final class DuplicateAnalysis {
      *
      * @param tests per pair of the set, the tests it failed as bits ({@link #ABOVE_LINE}, {@link #BEYOND_HARD})
      */
-    private record Flagged(List<OutlierPair> ranked, List<OutlierPair> belowThreshold, byte[] tests) {
+    record Flagged(List<OutlierPair> ranked, List<OutlierPair> belowThreshold, byte[] tests) {
         static final byte ABOVE_LINE = 1;
         static final byte BEYOND_HARD = 2;
 
