@@ -83,7 +83,7 @@ public final class DuplicateAnalysis {
         });
         PrecisionSummary precision = PrecisionMeasures.summarise(type, screened, settings);
         BiasResult bias = BiasAnalysis.compare(type, rel.sharedA(), rel.sharedB());
-        List<BatchPrecision> batches = batches(type, pairs, decisions, screened, precision.rmsCv(), settings);
+        List<BatchPrecision> batches = batches(type, pairs, decisions, screened, precision, settings);
         Modelled m = modelled.join();
         Flagged outliers = m.outliers();
         return new DuplicateSetResult(analyte, unit, type, precision, m.model(), bias, outliers.ranked(),
@@ -99,7 +99,8 @@ public final class DuplicateAnalysis {
 
     /** Per-batch precision, in the order batches first appear; each batch's pairs keep the set's screening. */
     private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, PairScreen.Decisions decisions,
-                                                ScreenedPairs set, Estimate setRmsCv, DuplicateSettings settings) {
+                                                ScreenedPairs set, PrecisionSummary setPrecision,
+                                                DuplicateSettings settings) {
         Map<String, Group> byBatch = new LinkedHashMap<>();
         Group last = null;
         PairList list = PairList.of(pairs);
@@ -113,11 +114,14 @@ public final class DuplicateAnalysis {
         }
         List<BatchPrecision> out = new ArrayList<>();
         for (Map.Entry<String, Group> e : byBatch.entrySet()) {
-            // One batch holding the whole set (a pairs file without batches) is the set, screened already.
-            ScreenedPairs batch = byBatch.size() == 1 ? set : decisions.of(e.getValue().indices());
+            // One batch holding the whole set (a pairs file without batches) is the set, screened and
+            // summarised already.
+            boolean whole = byBatch.size() == 1;
+            ScreenedPairs batch = whole ? set : decisions.of(e.getValue().indices());
             BatchRuleTest rule = PrecisionMeasures.batchRule(type, batch, settings);
-            PrecisionSummary p = PrecisionMeasures.summariseBatch(type, batch, settings, rule);
-            out.add(new BatchPrecision(e.getKey(), p, rule, BatchDispersion.test(p.rmsCv(), setRmsCv),
+            PrecisionSummary p = whole ? PrecisionMeasures.summariseWholeSetAsBatch(setPrecision, rule)
+                    : PrecisionMeasures.summariseBatch(type, batch, settings, rule);
+            out.add(new BatchPrecision(e.getKey(), p, rule, BatchDispersion.test(p.rmsCv(), setPrecision.rmsCv()),
                     settings.batchTestAlpha()));
         }
         return out;

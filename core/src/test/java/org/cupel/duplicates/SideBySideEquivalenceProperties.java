@@ -85,7 +85,7 @@ class SideBySideEquivalenceProperties {
      * Log-normal grades with Thompson–Howarth errors (σ = 0.01 + 0.05c) written to three decimals, so that equal
      * means are common; a few pairs below detection or missing when {@code censored}; pairs in batches of 1 to 60.
      */
-    private static List<DuplicatePair> pairs(SetInput in) {
+    static List<DuplicatePair> pairs(SetInput in) {
         Random r = new Random(in.seed());
         List<DuplicatePair> out = new ArrayList<>(in.n());
         int batch = 0;
