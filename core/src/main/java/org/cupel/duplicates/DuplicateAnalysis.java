@@ -8,7 +8,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.Function;
 import java.util.function.Supplier;
-import java.util.function.ToDoubleFunction;
 import org.cupel.assay.LimitComparison;
 import org.cupel.assay.QcRole;
 
@@ -16,11 +15,6 @@ import org.cupel.assay.QcRole;
 public final class DuplicateAnalysis {
     private static final QcRole[] TYPE_ORDER = {QcRole.FIELD_DUPLICATE, QcRole.COARSE_DUPLICATE,
         QcRole.PULP_DUPLICATE, QcRole.LAB_REPEAT, QcRole.UMPIRE};
-
-    private static final List<OutlierPair.Test> BOTH = List.of(OutlierPair.Test.ABOVE_99_PERCENT_LINE,
-            OutlierPair.Test.OUTSIDE_HARD_LIMIT);
-    private static final List<OutlierPair.Test> LINE_ONLY = List.of(OutlierPair.Test.ABOVE_99_PERCENT_LINE);
-    private static final List<OutlierPair.Test> HARD_ONLY = List.of(OutlierPair.Test.OUTSIDE_HARD_LIMIT);
 
     private DuplicateAnalysis() {
     }
@@ -127,7 +121,7 @@ public final class DuplicateAnalysis {
         return out;
     }
 
-    /** The indices of one batch's (or one type's) pairs, ascending. */
+    /** The indices of one batch's (or one type's, or one list of flagged) pairs, ascending. */
     private static final class Group {
         private final String key;
         private int[] indices = new int[8];
@@ -159,8 +153,8 @@ public final class DuplicateAnalysis {
      * @param tests per pair of the set, the tests it failed as bits ({@link #ABOVE_LINE}, {@link #BEYOND_HARD})
      */
     record Flagged(List<OutlierPair> ranked, List<OutlierPair> belowThreshold, byte[] tests) {
-        static final byte ABOVE_LINE = 1;
-        static final byte BEYOND_HARD = 2;
+        static final byte ABOVE_LINE = FlaggedPairList.ABOVE_LINE;
+        static final byte BEYOND_HARD = FlaggedPairList.BEYOND_HARD;
 
         /** The flags of {@code members}' pairs, in their order: the charts mark what the tables list. */
         DuplicateSetResult.PairFlags flags(ScreenedPairs.Members members) {
@@ -199,49 +193,14 @@ public final class DuplicateAnalysis {
                 tests[rows[i]] |= Flagged.BEYOND_HARD;
             }
         }
-        List<OutlierPair> ranked = new ArrayList<>();
-        List<OutlierPair> low = new ArrayList<>();
+        Group ranked = new Group("judged by HARD");
+        Group low = new Group("below the relative threshold");
         for (int row = 0; row < tests.length; row++) {
             if (tests[row] != 0) {
-                (relative[row] ? ranked : low).add(outlier(set.pairs().get(row), testsOf(tests[row])));
+                (relative[row] ? ranked : low).add(row);
             }
         }
-        return new Flagged(descending(ranked, OutlierPair::hard), descending(low, OutlierPair::absDifference), tests);
-    }
-
-    /**
-     * {@code list} ordered by {@code key}, largest first, ties in list order (as a stable sort by the reversed
-     * key): a sort of the primitive keys with the list positions as tie-breaker, since a comparator sort of a
-     * hundred thousand flagged pairs cost more than the rest of their analysis.
-     */
-    private static List<OutlierPair> descending(List<OutlierPair> list, ToDoubleFunction<OutlierPair> key) {
-        int n = list.size();
-        double[] negated = new double[n];
-        double[] position = new double[n];
-        for (int i = 0; i < n; i++) {
-            negated[i] = -key.applyAsDouble(list.get(i));
-            position[i] = i;
-        }
-        PairGroups.sortByMeanThenDiff(negated, position);
-        List<OutlierPair> out = new ArrayList<>(n);
-        for (double p : position) {
-            out.add(list.get((int) p));
-        }
-        return out;
-    }
-
-    /** The tests in the order they were listed before: the 99 % line first, then the HARD limit. */
-    private static List<OutlierPair.Test> testsOf(byte bits) {
-        if (bits == (Flagged.ABOVE_LINE | Flagged.BEYOND_HARD)) {
-            return BOTH;
-        }
-        return bits == Flagged.ABOVE_LINE ? LINE_ONLY : HARD_ONLY;
-    }
-
-    private static OutlierPair outlier(DuplicatePair p, List<OutlierPair.Test> tests) {
-        double a = p.original().value();
-        double b = p.duplicate().value();
-        return OutlierPair.of(p.id(), p.originalId(), p.batch(), p.original(), p.duplicate(),
-                PairMeasures.hard(a, b), PairMeasures.absDifference(a, b), tests);
+        return new Flagged(FlaggedPairList.descending(set.pairs(), ranked.indices(), tests, PairMeasures::hard),
+                FlaggedPairList.descending(set.pairs(), low.indices(), tests, PairMeasures::absDifference), tests);
     }
 }
