@@ -95,9 +95,19 @@ public final class DuplicateAnalysis {
     private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, PairScreen.Decisions decisions,
                                                 ScreenedPairs set, PrecisionSummary setPrecision,
                                                 DuplicateSettings settings) {
+        PairList list = PairList.of(pairs);
+        if (list.isEmpty()) {
+            return List.of();
+        }
+        if (oneBatch(list)) {
+            // The batch is the set (a pairs file without batches): screened and summarised already, and no list
+            // of its ten million indices is needed.
+            BatchRuleTest rule = PrecisionMeasures.batchRule(type, set, settings);
+            return List.of(batch(list.batch(0), PrecisionMeasures.summariseWholeSetAsBatch(setPrecision, rule), rule,
+                    setPrecision, settings));
+        }
         Map<String, Group> byBatch = new LinkedHashMap<>();
         Group last = null;
-        PairList list = PairList.of(pairs);
         for (int i = 0; i < list.size(); i++) {
             String batch = list.batch(i);
             // A batch's pairs mostly come together: the last batch is compared before hashing.
@@ -108,17 +118,28 @@ public final class DuplicateAnalysis {
         }
         List<BatchPrecision> out = new ArrayList<>();
         for (Map.Entry<String, Group> e : byBatch.entrySet()) {
-            // One batch holding the whole set (a pairs file without batches) is the set, screened and
-            // summarised already.
-            boolean whole = byBatch.size() == 1;
-            ScreenedPairs batch = whole ? set : decisions.of(e.getValue().indices());
+            ScreenedPairs batch = decisions.of(e.getValue().indices());
             BatchRuleTest rule = PrecisionMeasures.batchRule(type, batch, settings);
-            PrecisionSummary p = whole ? PrecisionMeasures.summariseWholeSetAsBatch(setPrecision, rule)
-                    : PrecisionMeasures.summariseBatch(type, batch, settings, rule);
-            out.add(new BatchPrecision(e.getKey(), p, rule, BatchDispersion.test(p.rmsCv(), setPrecision.rmsCv()),
-                    settings.batchTestAlpha()));
+            out.add(batch(e.getKey(), PrecisionMeasures.summariseBatch(type, batch, settings, rule), rule, setPrecision,
+                    settings));
         }
         return out;
+    }
+
+    private static boolean oneBatch(PairList list) {
+        String first = list.batch(0);
+        for (int i = 1; i < list.size(); i++) {
+            if (!first.equals(list.batch(i))) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static BatchPrecision batch(String name, PrecisionSummary p, BatchRuleTest rule, PrecisionSummary set,
+                                        DuplicateSettings settings) {
+        return new BatchPrecision(name, p, rule, BatchDispersion.test(p.rmsCv(), set.rmsCv()),
+                settings.batchTestAlpha());
     }
 
     /** The indices of one batch's (or one type's, or one list of flagged) pairs, ascending. */
