@@ -36,19 +36,40 @@ public final class DuplicateAnalysis {
                                       List<OrphanDuplicate> orphans, double[] grades, DuplicateSettings settings,
                                       String detectionLimits) {
         PairList all = PairList.of(pairs);
+        List<DuplicateSetResult> sets = new ArrayList<>();
+        QcRole only = oneType(all);
+        if (only != null) {
+            // A pairs file of one type: the set is the whole list, without a list of its millions of indices.
+            if (Arrays.asList(TYPE_ORDER).contains(only)) {
+                sets.add(analyseSet(analyte, unit, only, all, grades, settings));
+            }
+            return new DuplicateReport(analyte, unit, settings, sets, orphans, detectionLimits);
+        }
         Map<QcRole, Group> byType = new EnumMap<>(QcRole.class);
         for (int i = 0; i < all.size(); i++) {
             byType.computeIfAbsent(all.type(i), k -> new Group(k.name())).add(i);
         }
-        List<DuplicateSetResult> sets = new ArrayList<>();
         for (QcRole type : TYPE_ORDER) {
             Group ofType = byType.get(type);
             if (ofType != null) {
-                PairList set = ofType.size == all.size() ? all : all.select(ofType.indices());
-                sets.add(analyseSet(analyte, unit, type, set, grades, settings));
+                sets.add(analyseSet(analyte, unit, type, all.select(ofType.indices()), grades, settings));
             }
         }
         return new DuplicateReport(analyte, unit, settings, sets, orphans, detectionLimits);
+    }
+
+    /** The type of every pair when they all have the same, else (or when there is none) null. */
+    private static QcRole oneType(PairList list) {
+        if (list.isEmpty()) {
+            return null;
+        }
+        QcRole first = list.type(0);
+        for (int i = 1; i < list.size(); i++) {
+            if (list.type(i) != first) {
+                return null;
+            }
+        }
+        return first;
     }
 
     static DuplicateSetResult analyseSet(String analyte, String unit, QcRole type, List<DuplicatePair> pairs,
@@ -67,8 +88,12 @@ public final class DuplicateAnalysis {
     static DuplicateSetResult analyseSet(String analyte, String unit, QcRole type, List<DuplicatePair> pairs,
                                          double[] grades, DuplicateSettings settings,
                                          Function<Supplier<Modelled>, SideTask<Modelled>> side) {
-        PairScreen.Decisions decisions = PairScreen.decide(pairs, settings);
-        ScreenedPairs screened = decisions.all();
+        PairList list = PairList.of(pairs);
+        boolean oneBatch = !list.isEmpty() && oneBatch(list);
+        // The per-pair decisions serve the batches' subsets; a set in one batch has none, so they are dropped as
+        // soon as the set is screened (at ten million pairs their values are 160 MB of heap).
+        PairScreen.Decisions decisions = oneBatch ? null : PairScreen.decide(list, settings);
+        ScreenedPairs screened = oneBatch ? PairScreen.screen(list, settings) : decisions.all();
         ScreenedPairs.Members abs = screened.absolute();
         ScreenedPairs.Members rel = screened.relative();
         SideTask<Modelled> modelled = side.apply(() -> {
@@ -77,7 +102,8 @@ public final class DuplicateAnalysis {
         });
         PrecisionSummary precision = PrecisionMeasures.summarise(type, screened, settings);
         BiasResult bias = BiasAnalysis.compare(type, rel.sharedA(), rel.sharedB());
-        List<BatchPrecision> batches = batches(type, pairs, decisions, screened, precision, settings);
+        List<BatchPrecision> batches = oneBatch ? List.of(wholeSetBatch(type, list.batch(0), screened, precision,
+                settings)) : batches(type, list, decisions, precision, settings);
         Modelled m = modelled.join();
         Flagged outliers = m.outliers();
         return new DuplicateSetResult(analyte, unit, type, precision, m.model(), bias, outliers.ranked(),
@@ -91,21 +117,17 @@ public final class DuplicateAnalysis {
     record Modelled(PrecisionModelResult model, Flagged outliers) {
     }
 
+    /** The one batch of a set in one batch (a pairs file without batches): the set, screened and summarised. */
+    private static BatchPrecision wholeSetBatch(QcRole type, String name, ScreenedPairs set,
+                                                PrecisionSummary setPrecision, DuplicateSettings settings) {
+        BatchRuleTest rule = PrecisionMeasures.batchRule(type, set, settings);
+        return batch(name, PrecisionMeasures.summariseWholeSetAsBatch(setPrecision, rule), rule, setPrecision,
+                settings);
+    }
+
     /** Per-batch precision, in the order batches first appear; each batch's pairs keep the set's screening. */
-    private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, PairScreen.Decisions decisions,
-                                                ScreenedPairs set, PrecisionSummary setPrecision,
-                                                DuplicateSettings settings) {
-        PairList list = PairList.of(pairs);
-        if (list.isEmpty()) {
-            return List.of();
-        }
-        if (oneBatch(list)) {
-            // The batch is the set (a pairs file without batches): screened and summarised already, and no list
-            // of its ten million indices is needed.
-            BatchRuleTest rule = PrecisionMeasures.batchRule(type, set, settings);
-            return List.of(batch(list.batch(0), PrecisionMeasures.summariseWholeSetAsBatch(setPrecision, rule), rule,
-                    setPrecision, settings));
-        }
+    private static List<BatchPrecision> batches(QcRole type, PairList list, PairScreen.Decisions decisions,
+                                                PrecisionSummary setPrecision, DuplicateSettings settings) {
         Map<String, Group> byBatch = new LinkedHashMap<>();
         Group last = null;
         for (int i = 0; i < list.size(); i++) {
