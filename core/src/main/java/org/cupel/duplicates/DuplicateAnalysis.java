@@ -6,8 +6,6 @@ import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.function.Function;
-import java.util.function.Supplier;
 import org.cupel.assay.LimitComparison;
 import org.cupel.assay.QcRole;
 
@@ -78,16 +76,16 @@ public final class DuplicateAnalysis {
     }
 
     /**
-     * The analysis of one set. The Thompson–Howarth fit and the flags that need its model go to a spare core
-     * ({@code side}) while this thread computes the precision summary, the bias and the batches: they share
-     * nothing but the screened pairs, which no step modifies (each copies what it sorts), so the result is the
-     * same whichever thread computes what.
+     * The analysis of one set. The Thompson–Howarth fit with the flags that need its model, then the Wilcoxon
+     * test, go to a spare core ({@code side}) while this thread computes the precision summary, the rest of the
+     * bias and the batches, and then takes back the Wilcoxon test if the spare core has not started it (the two
+     * halves then take about the same time). They share nothing but the screened pairs, which no step modifies
+     * (each copies what it sorts), so the result is the same whichever thread computes what.
      *
-     * @param side starts the model's task: {@link SideTask#start}, or {@link SideTask#inPlace} for one thread
+     * @param side starts the side tasks: {@link SideTask#start}, or {@link SideTask#inPlace} for one thread
      */
     static DuplicateSetResult analyseSet(String analyte, String unit, QcRole type, List<DuplicatePair> pairs,
-                                         double[] grades, DuplicateSettings settings,
-                                         Function<Supplier<Modelled>, SideTask<Modelled>> side) {
+                                         double[] grades, DuplicateSettings settings, SideTask.Starter side) {
         PairList list = PairList.of(pairs);
         boolean oneBatch = !list.isEmpty() && oneBatch(list);
         // The per-pair decisions serve the batches' subsets; a set in one batch has none, so they are dropped as
@@ -96,12 +94,13 @@ public final class DuplicateAnalysis {
         ScreenedPairs screened = oneBatch ? PairScreen.screen(list, settings) : decisions.all();
         ScreenedPairs.Members abs = screened.absolute();
         ScreenedPairs.Members rel = screened.relative();
-        SideTask<Modelled> modelled = side.apply(() -> {
+        SideTask<Modelled> modelled = side.start(() -> {
             PrecisionModelResult model = ThompsonHowarth.fit(abs.sharedA(), abs.sharedB(), grades, settings);
             return new Modelled(model, outliers(screened, model, settings.hardLimit(type)));
         });
+        SideTask<TestResult> wilcoxon = side.start(() -> PairedTests.wilcoxon(rel.sharedA(), rel.sharedB()));
         PrecisionSummary precision = PrecisionMeasures.summarise(type, screened, settings);
-        BiasResult bias = BiasAnalysis.compare(type, rel.sharedA(), rel.sharedB());
+        BiasResult bias = BiasAnalysis.compare(type, rel.sharedA(), rel.sharedB(), wilcoxon::join);
         List<BatchPrecision> batches = oneBatch ? List.of(wholeSetBatch(type, list.batch(0), screened, precision,
                 settings)) : batches(type, list, decisions, precision, settings);
         Modelled m = modelled.join();

@@ -31,6 +31,11 @@ final class SideTask<T> {
         this.work = work;
     }
 
+    /** How work is started: {@link SideTask#start}, or {@link SideTask#inPlace} for one thread. */
+    interface Starter {
+        <T> SideTask<T> start(Supplier<T> work);
+    }
+
     /** Starts {@code work} on a spare thread when one is free soon enough; see {@link #join}. */
     static <T> SideTask<T> start(Supplier<T> work) {
         SideTask<T> task = new SideTask<>(work);
