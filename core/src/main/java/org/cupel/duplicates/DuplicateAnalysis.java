@@ -90,8 +90,8 @@ public final class DuplicateAnalysis {
         boolean oneBatch = !list.isEmpty() && oneBatch(list);
         // The per-pair decisions serve the batches' subsets; a set in one batch has none, so they are dropped as
         // soon as the set is screened (at ten million pairs their values are 160 MB of heap).
-        PairScreen.Decisions decisions = oneBatch ? null : PairScreen.decide(list, settings);
-        ScreenedPairs screened = oneBatch ? PairScreen.screen(list, settings) : decisions.all();
+        PairScreen.Decisions decisions = oneBatch ? null : PairScreen.decide(list, settings, side);
+        ScreenedPairs screened = oneBatch ? PairScreen.decide(list, settings, side).all() : decisions.all();
         ScreenedPairs.Members abs = screened.absolute();
         ScreenedPairs.Members rel = screened.relative();
         SideTask<Modelled> modelled = side.start(() -> {

@@ -35,7 +35,8 @@ class SideBySideEquivalenceProperties {
      */
     private static final List<Gen<SetInput>> EDGES = List.of(r -> new SetInput(r.nextLong(), 0, true),
             r -> new SetInput(r.nextLong(), 1, false), r -> new SetInput(r.nextLong(), 4096, true),
-            r -> new SetInput(r.nextLong(), 5001, false), r -> new SetInput(r.nextLong(), 7000, true));
+            r -> new SetInput(r.nextLong(), 5001, false), r -> new SetInput(r.nextLong(), 7000, true),
+            r -> new SetInput(r.nextLong(), PairScreen.SPLIT_FROM + 1, true));
 
     @Test
     void theSetAnalysedSideBySideIsTheSetAnalysedOnOneThread() {
@@ -43,6 +44,26 @@ class SideBySideEquivalenceProperties {
         SeededTries.forAll(40, EDGES, r -> new SetInput(r.nextLong(), n.next(r), r.nextBoolean()), in -> {
             List<DuplicatePair> pairs = pairs(in);
             assertEquals(analysed(pairs, false), analysed(pairs, true));
+        });
+    }
+
+    /**
+     * A set screened in two halves, the second by a side task, is the set screened in one pass: at the sizes
+     * where the split starts, with an odd count (the halves differ by one pair), and above.
+     */
+    @Test
+    void aSetScreenedInHalvesIsTheSetScreenedInOnePass() {
+        List<Gen<SetInput>> edges = List.of(r -> new SetInput(r.nextLong(), PairScreen.SPLIT_FROM - 1, true),
+                r -> new SetInput(r.nextLong(), PairScreen.SPLIT_FROM, false),
+                r -> new SetInput(r.nextLong(), PairScreen.SPLIT_FROM + 1, true));
+        Gen<Integer> n = Gen.ints(PairScreen.SPLIT_FROM, 3 * PairScreen.SPLIT_FROM);
+        SeededTries.forAll(8, edges, r -> new SetInput(r.nextLong(), n.next(r), r.nextBoolean()), in -> {
+            List<DuplicatePair> pairs = pairs(in);
+            for (DuplicateSettings settings : List.of(DuplicateSettings.DEFAULTS,
+                    DuplicateSettings.withDefaults().censoredAtHalfLimit(true).build())) {
+                assertEquals(PairScreen.screen(pairs, settings),
+                        PairScreen.decide(pairs, settings, SideTask::start).all());
+            }
         });
     }
 
