@@ -33,13 +33,24 @@ public final class DuplicateAnalysis {
     public static DuplicateReport run(String analyte, String unit, List<DuplicatePair> pairs,
                                       List<OrphanDuplicate> orphans, double[] grades, DuplicateSettings settings,
                                       String detectionLimits) {
+        return run(analyte, unit, pairs, orphans, grades, settings, detectionLimits, SideTask::start);
+    }
+
+    /**
+     * @param side starts the parts of a set's analysis that can run beside the rest
+     *     ({@link #analyseSet(String, String, QcRole, List, double[], DuplicateSettings, SideTask.Starter)}):
+     *     {@link SideTask#inPlace} where the caller's own pool keeps every core busy already
+     */
+    static DuplicateReport run(String analyte, String unit, List<DuplicatePair> pairs, List<OrphanDuplicate> orphans,
+                               double[] grades, DuplicateSettings settings, String detectionLimits,
+                               SideTask.Starter side) {
         PairList all = PairList.of(pairs);
         List<DuplicateSetResult> sets = new ArrayList<>();
         QcRole only = oneType(all);
         if (only != null) {
             // A pairs file of one type: the set is the whole list, without a list of its millions of indices.
             if (Arrays.asList(TYPE_ORDER).contains(only)) {
-                sets.add(analyseSet(analyte, unit, only, all, grades, settings));
+                sets.add(analyseSet(analyte, unit, only, all, grades, settings, side));
             }
             return new DuplicateReport(analyte, unit, settings, sets, orphans, detectionLimits);
         }
@@ -50,7 +61,7 @@ public final class DuplicateAnalysis {
         for (QcRole type : TYPE_ORDER) {
             Group ofType = byType.get(type);
             if (ofType != null) {
-                sets.add(analyseSet(analyte, unit, type, all.select(ofType.indices()), grades, settings));
+                sets.add(analyseSet(analyte, unit, type, all.select(ofType.indices()), grades, settings, side));
             }
         }
         return new DuplicateReport(analyte, unit, settings, sets, orphans, detectionLimits);
