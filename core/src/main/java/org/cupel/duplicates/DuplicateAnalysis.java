@@ -81,11 +81,6 @@ public final class DuplicateAnalysis {
         return first;
     }
 
-    static DuplicateSetResult analyseSet(String analyte, String unit, QcRole type, List<DuplicatePair> pairs,
-                                         double[] grades, DuplicateSettings settings) {
-        return analyseSet(analyte, unit, type, pairs, grades, settings, SideTask::start);
-    }
-
     /**
      * The analysis of one set. The Thompson–Howarth fit with the flags that need its model, then the Wilcoxon
      * test, go to a spare core ({@code side}) while this thread computes the precision summary, the rest of the
