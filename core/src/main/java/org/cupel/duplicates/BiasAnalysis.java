@@ -1,6 +1,7 @@
 package org.cupel.duplicates;
 
 import java.util.Locale;
+import java.util.function.Supplier;
 import org.apache.commons.math3.distribution.TDistribution;
 import org.cupel.assay.QcRole;
 
@@ -15,6 +16,14 @@ final class BiasAnalysis {
 
     /** Uses the pairs fit for relative measures ({@code a} originals, {@code b} duplicates). */
     public static BiasResult compare(QcRole type, double[] a, double[] b) {
+        return compare(type, a, b, () -> PairedTests.wilcoxon(a, b));
+    }
+
+    /**
+     * As {@link #compare(QcRole, double[], double[])}, with the Wilcoxon test of the same pairs from
+     * {@code wilcoxon}, asked for last: the set's analysis computes it on another core meanwhile.
+     */
+    static BiasResult compare(QcRole type, double[] a, double[] b, Supplier<TestResult> wilcoxon) {
         int n = a.length;
         double[] rel = new double[n];
         double[] diff = new double[n];
@@ -25,8 +34,10 @@ final class BiasAnalysis {
         Estimate relBias = meanWithInterval(rel, "mean of (b − a)/m with Student-t 95 % interval");
         Estimate meanDiff = meanWithInterval(diff, "mean of b − a with Student-t 95 % interval");
         boolean significant = relBias.hasInterval() && (relBias.ciLow() > 0 || relBias.ciHigh() < 0);
-        return new BiasResult(type, n, ReducedMajorAxis.fit(a, b), relBias, meanDiff, PairedTests.pairedT(a, b),
-                PairedTests.wilcoxon(a, b), significant, verdict(type, relBias, significant));
+        RmaFit rma = ReducedMajorAxis.fit(a, b);
+        TestResult pairedT = PairedTests.pairedT(a, b);
+        return new BiasResult(type, n, rma, relBias, meanDiff, pairedT, wilcoxon.get(), significant,
+                verdict(type, relBias, significant));
     }
 
     /**

@@ -6,7 +6,6 @@ import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.function.ToDoubleFunction;
 import org.cupel.assay.LimitComparison;
 import org.cupel.assay.QcRole;
 
@@ -14,11 +13,6 @@ import org.cupel.assay.QcRole;
 public final class DuplicateAnalysis {
     private static final QcRole[] TYPE_ORDER = {QcRole.FIELD_DUPLICATE, QcRole.COARSE_DUPLICATE,
         QcRole.PULP_DUPLICATE, QcRole.LAB_REPEAT, QcRole.UMPIRE};
-
-    private static final List<OutlierPair.Test> BOTH = List.of(OutlierPair.Test.ABOVE_99_PERCENT_LINE,
-            OutlierPair.Test.OUTSIDE_HARD_LIMIT);
-    private static final List<OutlierPair.Test> LINE_ONLY = List.of(OutlierPair.Test.ABOVE_99_PERCENT_LINE);
-    private static final List<OutlierPair.Test> HARD_ONLY = List.of(OutlierPair.Test.OUTSIDE_HARD_LIMIT);
 
     private DuplicateAnalysis() {
     }
@@ -39,45 +33,108 @@ public final class DuplicateAnalysis {
     public static DuplicateReport run(String analyte, String unit, List<DuplicatePair> pairs,
                                       List<OrphanDuplicate> orphans, double[] grades, DuplicateSettings settings,
                                       String detectionLimits) {
+        return run(analyte, unit, pairs, orphans, grades, settings, detectionLimits, SideTask::start);
+    }
+
+    /**
+     * @param side starts the parts of a set's analysis that can run beside the rest
+     *     ({@link #analyseSet(String, String, QcRole, List, double[], DuplicateSettings, SideTask.Starter)}):
+     *     {@link SideTask#inPlace} where the caller's own pool keeps every core busy already
+     */
+    static DuplicateReport run(String analyte, String unit, List<DuplicatePair> pairs, List<OrphanDuplicate> orphans,
+                               double[] grades, DuplicateSettings settings, String detectionLimits,
+                               SideTask.Starter side) {
         PairList all = PairList.of(pairs);
+        List<DuplicateSetResult> sets = new ArrayList<>();
+        QcRole only = oneType(all);
+        if (only != null) {
+            // A pairs file of one type: the set is the whole list, without a list of its millions of indices.
+            if (Arrays.asList(TYPE_ORDER).contains(only)) {
+                sets.add(analyseSet(analyte, unit, only, all, grades, settings, side));
+            }
+            return new DuplicateReport(analyte, unit, settings, sets, orphans, detectionLimits);
+        }
         Map<QcRole, Group> byType = new EnumMap<>(QcRole.class);
         for (int i = 0; i < all.size(); i++) {
             byType.computeIfAbsent(all.type(i), k -> new Group(k.name())).add(i);
         }
-        List<DuplicateSetResult> sets = new ArrayList<>();
         for (QcRole type : TYPE_ORDER) {
             Group ofType = byType.get(type);
             if (ofType != null) {
-                PairList set = ofType.size == all.size() ? all : all.select(ofType.indices());
-                sets.add(analyseSet(analyte, unit, type, set, grades, settings));
+                sets.add(analyseSet(analyte, unit, type, all.select(ofType.indices()), grades, settings, side));
             }
         }
         return new DuplicateReport(analyte, unit, settings, sets, orphans, detectionLimits);
     }
 
+    /** The type of every pair when they all have the same, else (or when there is none) null. */
+    private static QcRole oneType(PairList list) {
+        if (list.isEmpty()) {
+            return null;
+        }
+        QcRole first = list.type(0);
+        for (int i = 1; i < list.size(); i++) {
+            if (list.type(i) != first) {
+                return null;
+            }
+        }
+        return first;
+    }
+
+    /**
+     * The analysis of one set. The Thompson–Howarth fit with the flags that need its model, then the Wilcoxon
+     * test, go to a spare core ({@code side}) while this thread computes the precision summary, the rest of the
+     * bias and the batches, and then takes back the Wilcoxon test if the spare core has not started it (the two
+     * halves then take about the same time). They share nothing but the screened pairs, which no step modifies
+     * (each copies what it sorts), so the result is the same whichever thread computes what.
+     *
+     * @param side starts the side tasks: {@link SideTask#start}, or {@link SideTask#inPlace} for one thread
+     */
     static DuplicateSetResult analyseSet(String analyte, String unit, QcRole type, List<DuplicatePair> pairs,
-                                         double[] grades, DuplicateSettings settings) {
-        PairScreen.Decisions decisions = PairScreen.decide(pairs, settings);
-        ScreenedPairs screened = decisions.all();
+                                         double[] grades, DuplicateSettings settings, SideTask.Starter side) {
+        PairList list = PairList.of(pairs);
+        boolean oneBatch = !list.isEmpty() && oneBatch(list);
+        // The per-pair decisions serve the batches' subsets; a set in one batch has none, so they are dropped as
+        // soon as the set is screened (at ten million pairs their values are 160 MB of heap).
+        PairScreen.Decisions decisions = oneBatch ? null : PairScreen.decide(list, settings, side);
+        ScreenedPairs screened = oneBatch ? PairScreen.decide(list, settings, side).all() : decisions.all();
         ScreenedPairs.Members abs = screened.absolute();
         ScreenedPairs.Members rel = screened.relative();
+        SideTask<Modelled> modelled = side.start(() -> {
+            PrecisionModelResult model = ThompsonHowarth.fit(abs.sharedA(), abs.sharedB(), grades, settings);
+            return new Modelled(model, outliers(screened, model, settings.hardLimit(type)));
+        });
+        SideTask<TestResult> wilcoxon = side.start(() -> PairedTests.wilcoxon(rel.sharedA(), rel.sharedB()));
         PrecisionSummary precision = PrecisionMeasures.summarise(type, screened, settings);
-        PrecisionModelResult model = ThompsonHowarth.fit(abs.sharedA(), abs.sharedB(), grades, settings);
-        BiasResult bias = BiasAnalysis.compare(type, rel.sharedA(), rel.sharedB());
-        Flagged outliers = outliers(screened, model, settings.hardLimit(type));
-        return new DuplicateSetResult(analyte, unit, type, precision, model, bias, outliers.ranked(),
+        BiasResult bias = BiasAnalysis.compare(type, rel.sharedA(), rel.sharedB(), wilcoxon::join);
+        List<BatchPrecision> batches = oneBatch ? List.of(wholeSetBatch(type, list.batch(0), screened, precision,
+                settings)) : batches(type, list, decisions, precision, settings);
+        Modelled m = modelled.join();
+        Flagged outliers = m.outliers();
+        return new DuplicateSetResult(analyte, unit, type, precision, m.model(), bias, outliers.ranked(),
                 outliers.belowThreshold(),
                 new DuplicateSetResult.PairValues(abs, rel, outliers.flags(abs),
                         outliers.flags(rel)),
-                batches(type, pairs, decisions, screened, precision.rmsCv(), settings));
+                batches);
+    }
+
+    /** The precision model of a set and the pairs it and the HARD limit flag. */
+    record Modelled(PrecisionModelResult model, Flagged outliers) {
+    }
+
+    /** The one batch of a set in one batch (a pairs file without batches): the set, screened and summarised. */
+    private static BatchPrecision wholeSetBatch(QcRole type, String name, ScreenedPairs set,
+                                                PrecisionSummary setPrecision, DuplicateSettings settings) {
+        BatchRuleTest rule = PrecisionMeasures.batchRule(type, set, settings);
+        return batch(name, PrecisionMeasures.summariseWholeSetAsBatch(setPrecision, rule), rule, setPrecision,
+                settings);
     }
 
     /** Per-batch precision, in the order batches first appear; each batch's pairs keep the set's screening. */
-    private static List<BatchPrecision> batches(QcRole type, List<DuplicatePair> pairs, PairScreen.Decisions decisions,
-                                                ScreenedPairs set, Estimate setRmsCv, DuplicateSettings settings) {
+    private static List<BatchPrecision> batches(QcRole type, PairList list, PairScreen.Decisions decisions,
+                                                PrecisionSummary setPrecision, DuplicateSettings settings) {
         Map<String, Group> byBatch = new LinkedHashMap<>();
         Group last = null;
-        PairList list = PairList.of(pairs);
         for (int i = 0; i < list.size(); i++) {
             String batch = list.batch(i);
             // A batch's pairs mostly come together: the last batch is compared before hashing.
@@ -88,17 +145,31 @@ public final class DuplicateAnalysis {
         }
         List<BatchPrecision> out = new ArrayList<>();
         for (Map.Entry<String, Group> e : byBatch.entrySet()) {
-            // One batch holding the whole set (a pairs file without batches) is the set, screened already.
-            ScreenedPairs batch = byBatch.size() == 1 ? set : decisions.of(e.getValue().indices());
+            ScreenedPairs batch = decisions.of(e.getValue().indices());
             BatchRuleTest rule = PrecisionMeasures.batchRule(type, batch, settings);
-            PrecisionSummary p = PrecisionMeasures.summariseBatch(type, batch, settings, rule);
-            out.add(new BatchPrecision(e.getKey(), p, rule, BatchDispersion.test(p.rmsCv(), setRmsCv),
-                    settings.batchTestAlpha()));
+            out.add(batch(e.getKey(), PrecisionMeasures.summariseBatch(type, batch, settings, rule), rule, setPrecision,
+                    settings));
         }
         return out;
     }
 
-    /** The indices of one batch's (or one type's) pairs, ascending. */
+    private static boolean oneBatch(PairList list) {
+        String first = list.batch(0);
+        for (int i = 1; i < list.size(); i++) {
+            if (!first.equals(list.batch(i))) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static BatchPrecision batch(String name, PrecisionSummary p, BatchRuleTest rule, PrecisionSummary set,
+                                        DuplicateSettings settings) {
+        return new BatchPrecision(name, p, rule, BatchDispersion.test(p.rmsCv(), set.rmsCv()),
+                settings.batchTestAlpha());
+    }
+
+    /** The indices of one batch's (or one type's, or one list of flagged) pairs, ascending. */
     private static final class Group {
         private final String key;
         private int[] indices = new int[8];
@@ -129,9 +200,9 @@ public final class DuplicateAnalysis {
      *
      * @param tests per pair of the set, the tests it failed as bits ({@link #ABOVE_LINE}, {@link #BEYOND_HARD})
      */
-    private record Flagged(List<OutlierPair> ranked, List<OutlierPair> belowThreshold, byte[] tests) {
-        static final byte ABOVE_LINE = 1;
-        static final byte BEYOND_HARD = 2;
+    record Flagged(List<OutlierPair> ranked, List<OutlierPair> belowThreshold, byte[] tests) {
+        static final byte ABOVE_LINE = FlaggedPairList.ABOVE_LINE;
+        static final byte BEYOND_HARD = FlaggedPairList.BEYOND_HARD;
 
         /** The flags of {@code members}' pairs, in their order: the charts mark what the tables list. */
         DuplicateSetResult.PairFlags flags(ScreenedPairs.Members members) {
@@ -170,49 +241,14 @@ public final class DuplicateAnalysis {
                 tests[rows[i]] |= Flagged.BEYOND_HARD;
             }
         }
-        List<OutlierPair> ranked = new ArrayList<>();
-        List<OutlierPair> low = new ArrayList<>();
+        Group ranked = new Group("judged by HARD");
+        Group low = new Group("below the relative threshold");
         for (int row = 0; row < tests.length; row++) {
             if (tests[row] != 0) {
-                (relative[row] ? ranked : low).add(outlier(set.pairs().get(row), testsOf(tests[row])));
+                (relative[row] ? ranked : low).add(row);
             }
         }
-        return new Flagged(descending(ranked, OutlierPair::hard), descending(low, OutlierPair::absDifference), tests);
-    }
-
-    /**
-     * {@code list} ordered by {@code key}, largest first, ties in list order (as a stable sort by the reversed
-     * key): a sort of the primitive keys with the list positions as tie-breaker, since a comparator sort of a
-     * hundred thousand flagged pairs cost more than the rest of their analysis.
-     */
-    private static List<OutlierPair> descending(List<OutlierPair> list, ToDoubleFunction<OutlierPair> key) {
-        int n = list.size();
-        double[] negated = new double[n];
-        double[] position = new double[n];
-        for (int i = 0; i < n; i++) {
-            negated[i] = -key.applyAsDouble(list.get(i));
-            position[i] = i;
-        }
-        PairGroups.sortByMeanThenDiff(negated, position);
-        List<OutlierPair> out = new ArrayList<>(n);
-        for (double p : position) {
-            out.add(list.get((int) p));
-        }
-        return out;
-    }
-
-    /** The tests in the order they were listed before: the 99 % line first, then the HARD limit. */
-    private static List<OutlierPair.Test> testsOf(byte bits) {
-        if (bits == (Flagged.ABOVE_LINE | Flagged.BEYOND_HARD)) {
-            return BOTH;
-        }
-        return bits == Flagged.ABOVE_LINE ? LINE_ONLY : HARD_ONLY;
-    }
-
-    private static OutlierPair outlier(DuplicatePair p, List<OutlierPair.Test> tests) {
-        double a = p.original().value();
-        double b = p.duplicate().value();
-        return OutlierPair.of(p.id(), p.originalId(), p.batch(), p.original(), p.duplicate(),
-                PairMeasures.hard(a, b), PairMeasures.absDifference(a, b), tests);
+        return new Flagged(FlaggedPairList.descending(set.pairs(), ranked.indices(), tests, PairMeasures::hard),
+                FlaggedPairList.descending(set.pairs(), low.indices(), tests, PairMeasures::absDifference), tests);
     }
 }

@@ -25,8 +25,10 @@ public record DuplicateSetResult(String analyte, String unit, QcRole type, Preci
                                  List<OutlierPair> outliersBelowRelativeThreshold,
                                  @JsonIgnore PairValues pairs, List<BatchPrecision> batches) {
     public DuplicateSetResult {
-        outliers = List.copyOf(outliers);
-        outliersBelowRelativeThreshold = List.copyOf(outliersBelowRelativeThreshold);
+        // The analysis's own lists are unmodifiable already and make each pair when read (FlaggedPairList).
+        outliers = outliers instanceof FlaggedPairList ? outliers : List.copyOf(outliers);
+        outliersBelowRelativeThreshold = outliersBelowRelativeThreshold instanceof FlaggedPairList
+                ? outliersBelowRelativeThreshold : List.copyOf(outliersBelowRelativeThreshold);
         batches = List.copyOf(batches);
     }
 

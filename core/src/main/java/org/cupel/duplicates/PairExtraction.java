@@ -107,7 +107,8 @@ public final class PairExtraction {
                     + String.join(", ", project.analyteNames()) + ".");
         }
         List<DuplicateReport> out = new ArrayList<>();
-        for (Supplier<Optional<DuplicateReport>> task : perAnalyte(project, settings, analyte, type)) {
+        // One analyte after the other on this thread: each set's analysis may use a spare core.
+        for (Supplier<Optional<DuplicateReport>> task : perAnalyte(project, settings, analyte, type, SideTask::start)) {
             task.get().ifPresent(out::add);
         }
         return out;
@@ -116,26 +117,30 @@ public final class PairExtraction {
     /**
      * The work of {@link #analyse(Project, DuplicateSettings)} as one task per analyte, in the project's analyte
      * order; a task gives nothing for an analyte without duplicates. The tasks share only the immutable project
-     * and pairing, so they may run on several threads; each gives the same report however they are run.
+     * and pairing, so they may run on several threads; each gives the same report however they are run. They
+     * are meant for a pool that keeps the cores busy with them and other analyses, so each computes its sets on
+     * its own thread, without side tasks ({@link SideTask#inPlace}): those would only compete for the same cores.
      */
     public static List<Supplier<Optional<DuplicateReport>>> perAnalyte(Project project, DuplicateSettings settings) {
-        return perAnalyte(project, settings, null, null);
+        return perAnalyte(project, settings, null, null, SideTask::inPlace);
     }
 
     private static List<Supplier<Optional<DuplicateReport>>> perAnalyte(Project project, DuplicateSettings settings,
-                                                                         String analyte, QcRole type) {
+                                                                         String analyte, QcRole type,
+                                                                         SideTask.Starter side) {
         Pairing pairing = Pairing.of(project.samples());
         List<Supplier<Optional<DuplicateReport>>> tasks = new ArrayList<>();
         for (AnalyteColumn column : project.analytes().values()) {
             if (analyte == null || analyte.equals(column.analyte().name())) {
-                tasks.add(() -> analyseColumn(project, pairing, column, settings, type));
+                tasks.add(() -> analyseColumn(project, pairing, column, settings, type, side));
             }
         }
         return tasks;
     }
 
     private static Optional<DuplicateReport> analyseColumn(Project project, Pairing pairing, AnalyteColumn column,
-                                                           DuplicateSettings settings, QcRole type) {
+                                                           DuplicateSettings settings, QcRole type,
+                                                           SideTask.Starter side) {
         String name = column.analyte().name();
         DetectionLimits limits = DetectionLimits.of(column);
         Extracted all = pairing.extract(column, limits);
@@ -146,7 +151,7 @@ public final class PairExtraction {
             return Optional.empty();
         }
         return Optional.of(DuplicateAnalysis.run(name, column.analyte().unit().symbol(), e.pairs(), e.orphans(),
-                grades(project, name, settings), settings, limits.describe()));
+                grades(project, name, settings), settings, limits.describe(), side));
     }
 
     static double[] grades(Project project, String analyte, DuplicateSettings settings) {

@@ -17,6 +17,8 @@ import org.cupel.assay.Qualifier;
  */
 final class PairScreen {
     private static final ExclusionReason[] REASONS = ExclusionReason.values();
+    /** Sets from this size on are judged in two halves ({@link #decide(List, DuplicateSettings, SideTask.Starter)}). */
+    static final int SPLIT_FROM = 1 << 16;
 
     private PairScreen() {
     }
@@ -30,10 +32,35 @@ final class PairScreen {
      * assembled from the decisions without reading the pairs' values again.
      */
     public static Decisions decide(List<DuplicatePair> list, DuplicateSettings settings) {
+        return decide(list, settings, SideTask::inPlace);
+    }
+
+    /**
+     * As {@link #decide(List, DuplicateSettings)}, the second half of a large set judged by a side task
+     * ({@code side}): each pair's decision depends on that pair alone and is written to its own index, so the
+     * halves give the same decisions on any thread.
+     */
+    static Decisions decide(List<DuplicatePair> list, DuplicateSettings settings, SideTask.Starter side) {
         PairList pairs = PairList.of(list);
         int n = pairs.size();
         Decisions d = new Decisions(pairs, n);
-        for (int i = 0; i < n; i++) {
+        if (n < SPLIT_FROM) {
+            judge(d, pairs, settings, 0, n);
+            return d;
+        }
+        int half = n / 2;
+        SideTask<Boolean> upper = side.start(() -> {
+            judge(d, pairs, settings, half, n);
+            return true;
+        });
+        judge(d, pairs, settings, 0, half);
+        upper.join();
+        return d;
+    }
+
+    /** Sets the decisions of pairs {@code from} (inclusive) to {@code to} (exclusive). */
+    private static void judge(Decisions d, PairList pairs, DuplicateSettings settings, int from, int to) {
+        for (int i = from; i < to; i++) {
             AssayValue original = pairs.original(i);
             AssayValue duplicate = pairs.duplicate(i);
             ExclusionReason hard = unusable(original, duplicate);
@@ -67,7 +94,6 @@ final class PairScreen {
                 d.flags[i] |= Decisions.SUBSTITUTED;
             }
         }
-        return d;
     }
 
     /**

@@ -62,17 +62,15 @@ final class PairedTests {
         if (n < 1) {
             return TestResult.unavailable(name, 0, "every difference is zero");
         }
-        double[] abs = new double[n];
+        long[] keys = new long[n];
         for (int i = 0; i < n; i++) {
-            abs[i] = roundedMagnitude(d[i]);
+            keys[i] = signedRankKey(roundedMagnitude(d[i]), d[i] > 0);
         }
-        double[] positive = positiveMagnitudes(d, abs);
-        double[] sorted = abs;
-        sortValues(sorted);
-        double wPlus = positiveRankSum(sorted, positive);
+        sortKeys(keys);
+        double wPlus = positiveRankSum(keys);
         double total = n * (n + 1) / 2.0;
         double w = Math.min(wPlus, total - wPlus);
-        double tieTerm = tieTerm(sorted);
+        double tieTerm = tieTerm(keys);
         if (n <= EXACT_LIMIT && tieTerm == 0) {
             double p = new WilcoxonSignedRankTest().wilcoxonSignedRankTest(d, new double[n], true);
             return new TestResult(name, w, Double.NaN, Math.min(1.0, p), n, "exact distribution", "");
@@ -97,44 +95,44 @@ final class PairedTests {
         return Arrays.copyOf(d, k);
     }
 
-    /** The magnitudes of the positive differences, sorted. */
-    private static double[] positiveMagnitudes(double[] d, double[] abs) {
-        double[] pos = new double[d.length];
-        int k = 0;
-        for (int i = 0; i < d.length; i++) {
-            if (d[i] > 0) {
-                pos[k++] = abs[i];
-            }
-        }
-        pos = Arrays.copyOf(pos, k);
-        sortValues(pos);
-        return pos;
+    /**
+     * One difference as one sortable key: its magnitude's bits in the order of {@link Double#compare}
+     * ({@link RadixPairSort#sortable}) shifted up by one bit, and its sign in the lowest bit (1: positive). A
+     * magnitude is never negative, so the top bit the shift drops is always set; keys in ascending unsigned order
+     * are the magnitudes in ascending order, each run of equal magnitudes with its negative differences first.
+     * One sort of these keys gives both the ranks of all magnitudes and which of them are positive, where two
+     * sorts (all magnitudes, then the positive ones) were needed before.
+     */
+    static long signedRankKey(double magnitude, boolean positive) {
+        return (RadixPairSort.sortable(magnitude) << 1) | (positive ? 1 : 0);
+    }
+
+    /** The magnitude of a {@link #signedRankKey}, as a key of equal magnitudes only: its sign bit dropped. */
+    private static long magnitudeBits(long key) {
+        return key >>> 1;
     }
 
     /**
-     * W+: the sum of the ranks of the positive differences in {@code sorted} (all magnitudes), ties given the mean
-     * of their ranks, (first + last)/2 for a run of equal values at ranks first..last (as Commons Math's
-     * {@code NaturalRanking} with {@code TiesStrategy.AVERAGE} computes it). One walk over both sorted arrays: a
-     * run of t equal magnitudes holding c positive ones adds c times its mid-rank. Mid-ranks are multiples of ½,
-     * so the sum is exact in any order (below 2⁵³). Kept by hand rather than Commons Statistics' ranking for a
-     * measured reason: the library's ranking took the whole test at 50,000 pairs from 3.9–4.4 ms to 7.7–7.9 ms
-     * of CPU (bench KernelCpuTime), and at a million pairs the Wilcoxon test was 14 % of the duplicates command's
-     * time (JFR samples, docs/performance.md); this walk allocates two sorted arrays and no ranks. Checked
-     * against the ranks of NaturalRanking (ties AVERAGE) by PositiveRankSumProperties.
+     * W+: the sum of the ranks of the positive differences among all magnitudes, ties given the mean of their
+     * ranks, (first + last)/2 for a run of equal magnitudes at ranks first..last (as Commons Math's
+     * {@code NaturalRanking} with {@code TiesStrategy.AVERAGE} computes it), from {@code sortedKeys}
+     * ({@link #signedRankKey}, ascending unsigned). One walk: a run of t equal magnitudes holding c positive ones
+     * adds c times its mid-rank. Mid-ranks are multiples of ½, so the sum is exact in any order (below 2⁵³). Kept
+     * by hand rather than Commons Statistics' ranking for a measured reason: the library's ranking took the whole
+     * test at 50,000 pairs from 3.9–4.4 ms to 7.7–7.9 ms of CPU (bench KernelCpuTime), and at a million pairs the
+     * Wilcoxon test was 14 % of the duplicates command's time (JFR samples, docs/performance.md); this walk
+     * allocates nothing. Checked against the ranks of NaturalRanking (ties AVERAGE) by PositiveRankSumProperties.
      */
-    static double positiveRankSum(double[] sorted, double[] positiveSorted) {
+    static double positiveRankSum(long[] sortedKeys) {
         double sum = 0;
-        int q = 0;
         int i = 0;
-        while (i < sorted.length) {
+        while (i < sortedKeys.length) {
+            long magnitude = magnitudeBits(sortedKeys[i]);
             int j = i;
-            while (j + 1 < sorted.length && sorted[j + 1] == sorted[i]) {
+            int c = (int) (sortedKeys[i] & 1);
+            while (j + 1 < sortedKeys.length && magnitudeBits(sortedKeys[j + 1]) == magnitude) {
                 j++;
-            }
-            int c = 0;
-            while (q < positiveSorted.length && positiveSorted[q] == sorted[i]) {
-                q++;
-                c++;
+                c += (int) (sortedKeys[j] & 1);
             }
             sum += c * ((i + j + 2) / 2.0);
             i = j + 1;
@@ -167,22 +165,32 @@ final class PairedTests {
         return new BigDecimal(v).round(TWELVE_DIGITS).doubleValue();
     }
 
-    /** Ascending, by radix from {@link PairGroups#RADIX_FROM} values on (a million differences at 1M pairs). */
-    private static void sortValues(double[] values) {
-        if (values.length >= PairGroups.RADIX_FROM) {
-            RadixPairSort.sort(values);
-        } else {
-            Arrays.sort(values);
+    /**
+     * {@link #signedRankKey}s in ascending unsigned order: by radix from {@link PairGroups#RADIX_FROM} keys on (a
+     * million differences at 1M pairs), else by {@link Arrays#sort(long[])} of the keys with their top bit
+     * flipped, which turns the unsigned order into the signed one.
+     */
+    private static void sortKeys(long[] keys) {
+        if (keys.length >= PairGroups.RADIX_FROM) {
+            RadixPairSort.sortUnsigned(keys);
+            return;
+        }
+        for (int i = 0; i < keys.length; i++) {
+            keys[i] ^= Long.MIN_VALUE;
+        }
+        Arrays.sort(keys);
+        for (int i = 0; i < keys.length; i++) {
+            keys[i] ^= Long.MIN_VALUE;
         }
     }
 
-    /** The tie correction Σ(t³ − t) over runs of equal values of {@code s}, sorted ascending. */
-    private static double tieTerm(double[] s) {
+    /** The tie correction Σ(t³ − t) over runs of equal magnitudes of {@code sortedKeys} ({@link #positiveRankSum}). */
+    private static double tieTerm(long[] sortedKeys) {
         double sum = 0;
         int i = 0;
-        while (i < s.length) {
+        while (i < sortedKeys.length) {
             int j = i;
-            while (j + 1 < s.length && s[j + 1] == s[i]) {
+            while (j + 1 < sortedKeys.length && magnitudeBits(sortedKeys[j + 1]) == magnitudeBits(sortedKeys[i])) {
                 j++;
             }
             double t = j - i + 1;

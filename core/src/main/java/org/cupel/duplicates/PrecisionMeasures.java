@@ -34,6 +34,21 @@ final class PrecisionMeasures {
         return summary(type, batch, settings, rmsCvPoint(rel.sharedA(), rel.sharedB()), within -> rule.outcome());
     }
 
+    /**
+     * {@link #summariseBatch} of a batch that holds the whole set (a pairs file without batches), from the set's
+     * summary: the share within the limit, mean CV, median HARD and s_r are the set's, computed once instead of
+     * twice (the median HARD of ten million pairs is a selection over all of them); the RMS CV is the set's
+     * without its interval (the same root of the same mean square), and the rule is {@code rule}.
+     */
+    public static PrecisionSummary summariseWholeSetAsBatch(PrecisionSummary set, BatchRuleTest rule) {
+        Estimate cv = set.rmsCv();
+        return new PrecisionSummary(set.type(), set.pairs(), set.usedAbsolute(), set.usedRelative(),
+                set.excludedAbsolute(), set.excludedRelative(), set.limitUnknown(), set.limitMultiple(),
+                set.hardLimit(), set.acceptancePercent(), set.percentWithinLimit(), rule.outcome(),
+                cv.available() ? Estimate.point(cv.value(), cv.n()) : cv, set.meanCv(), set.medianHard(),
+                set.repeatabilitySd(), set.repeatabilityLimit());
+    }
+
     /** The acceptance rule of one batch as a binomial test ({@link BatchRuleTest}). */
     public static BatchRuleTest batchRule(QcRole type, ScreenedPairs batch, DuplicateSettings settings) {
         ScreenedPairs.Members rel = batch.relative();

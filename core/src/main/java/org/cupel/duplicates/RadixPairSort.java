@@ -9,8 +9,9 @@ import java.util.Arrays;
  * array's bits, made order-preserving as unsigned integers, carrying the second array along; then each run of
  * equal first values has its second values sorted. Digits that every key shares (the sign and most exponent
  * bits of assay means) are skipped, so a million pairs take three to five passes instead of the twenty of a
- * merge sort. Equal pairs are interchangeable, so the result is the same arrays as any correct sort's. A single
- * array is sorted the same way ({@link #sort(double[])}), for the ranks of the Wilcoxon signed-rank test.
+ * merge sort. Equal pairs are interchangeable, so the result is the same arrays as any correct sort's. Keys
+ * already made sortable are sorted the same way ({@link #sortUnsigned}: the magnitudes and signs of the Wilcoxon
+ * signed-rank test).
  */
 final class RadixPairSort {
     private static final int BITS = 11;
@@ -31,10 +32,13 @@ final class RadixPairSort {
         sortTies(key, second);
     }
 
-    /** Sorts {@code values} in place, in the order of {@link Arrays#sort(double[])}. */
-    static void sort(double[] values) {
-        if (values.length >= 2) {
-            fromKeys(byDigits(keys(values), null), values);
+    /** Sorts {@code keys} in place, in ascending unsigned order (the order of {@link Long#compareUnsigned}). */
+    static void sortUnsigned(long[] keys) {
+        if (keys.length >= 2) {
+            long[] sorted = byDigits(keys, null);
+            if (sorted != keys) {
+                System.arraycopy(sorted, 0, keys, 0, keys.length);
+            }
         }
     }
 

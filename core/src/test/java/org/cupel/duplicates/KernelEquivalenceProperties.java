@@ -110,11 +110,15 @@ class KernelEquivalenceProperties {
         }
     }
 
-    /** n from 60 with 30 % noise: far above the exact-distribution limit of 30 non-zero differences. */
+    /**
+     * n from 60 with 30 % noise: far above the exact-distribution limit of 30 non-zero differences; up to 6,000
+     * pairs, so that the keys are sorted both by {@link java.util.Arrays#sort(long[])} and, from
+     * {@link PairGroups#RADIX_FROM} on, by radix.
+     */
     @Test
     void wilcoxonMatchesTheNaturalRankingVersion() {
-        SeededTries.forAll(300, sizeEdges(60, 600), sized(60, 600),
-                in -> wilcoxonMatchesTheNaturalRankingVersion(in.seed(), in.n()));
+        SeededTries.forAll(300, sizeEdges(60, 600, PairGroups.RADIX_FROM - 1, PairGroups.RADIX_FROM, 6000),
+                sized(60, 6000), in -> wilcoxonMatchesTheNaturalRankingVersion(in.seed(), in.n()));
     }
 
     private static void wilcoxonMatchesTheNaturalRankingVersion(long seed, int n) {
@@ -127,6 +131,32 @@ class KernelEquivalenceProperties {
         TestResult actual = PairedTests.wilcoxon(a, b);
         assertEquals("normal approximation with tie and continuity corrections", actual.method());
         assertEquals(replacedWilcoxonW(a, b), actual.statistic(), 0.0);
+        assertEquals(replacedWilcoxonP(a, b, actual.statistic()), actual.pValue(), 0.0);
+    }
+
+    /**
+     * The p-value as computed before, from the statistic and the tie term Σ(t³ − t) over the tie groups of the
+     * BigDecimal-rounded magnitudes (normal approximation with tie and continuity corrections).
+     */
+    private static double replacedWilcoxonP(double[] a, double[] b, double w) {
+        double[] abs = Arrays.stream(indices(a.length)).mapToDouble(i -> b[i] - a[i]).filter(x -> x != 0)
+                .map(x -> new BigDecimal(Math.abs(x)).round(new MathContext(12)).doubleValue()).sorted().toArray();
+        int n = abs.length;
+        double tieTerm = 0;
+        for (int i = 0; i < n; ) {
+            int j = i;
+            while (j + 1 < n && abs[j + 1] == abs[i]) {
+                j++;
+            }
+            double t = j - i + 1;
+            tieTerm += t * t * t - t;
+            i = j + 1;
+        }
+        double mean = n * (n + 1) / 4.0;
+        double var = n * (n + 1) * (2.0 * n + 1) / 24.0 - tieTerm / 48.0;
+        double z = (w - mean + 0.5) / Math.sqrt(var);
+        return Math.min(1.0, 2 * new org.apache.commons.math3.distribution.NormalDistribution(null, 0, 1)
+                .cumulativeProbability(Math.min(z, 0)));
     }
 
     /** W = min(W+, W−) as computed before, with Commons Math mid-ranks of BigDecimal-rounded magnitudes. */

@@ -10,7 +10,8 @@ import org.cupel.testing.SeededTries;
 import org.junit.jupiter.api.Test;
 
 /**
- * The one-walk W+ of {@link PairedTests#positiveRankSum} (kept by hand for speed) equals the sum of the
+ * The one-walk W+ of {@link PairedTests#positiveRankSum} (kept by hand for speed), over the differences'
+ * magnitudes and signs as sorted keys ({@link PairedTests#signedRankKey}), equals the sum of the
  * mid-ranks of the positive differences among all |d| from Commons Math's NaturalRanking (ties AVERAGE), the
  * definition of the Wilcoxon signed-rank statistic (Wilcoxon 1945, Biometrics Bulletin 1). Differences are
  * drawn from a few levels of either sign so that ties, also across signs, are common; zeros are left out as
@@ -26,24 +27,18 @@ class PositiveRankSumProperties {
             double[] abs = Arrays.stream(d).map(Math::abs).toArray();
             double[] ranks = new NaturalRanking().rank(abs);
             double expected = 0;
-            int positives = 0;
             for (int i = 0; i < d.length; i++) {
                 if (d[i] > 0) {
                     expected += ranks[i];
-                    positives++;
                 }
             }
-            double[] sorted = abs.clone();
-            Arrays.sort(sorted);
-            double[] positiveSorted = new double[positives];
-            int k = 0;
+            long[] keys = new long[d.length];
             for (int i = 0; i < d.length; i++) {
-                if (d[i] > 0) {
-                    positiveSorted[k++] = abs[i];
-                }
+                keys[i] = PairedTests.signedRankKey(abs[i], d[i] > 0);
             }
-            Arrays.sort(positiveSorted);
-            assertEquals(expected, PairedTests.positiveRankSum(sorted, positiveSorted), 0.0, "exact: mid-ranks are halves");
+            long[] sorted = Arrays.stream(keys).boxed().sorted(Long::compareUnsigned).mapToLong(Long::longValue)
+                    .toArray();
+            assertEquals(expected, PairedTests.positiveRankSum(sorted), 0.0, "exact: mid-ranks are halves");
         });
     }
 }
