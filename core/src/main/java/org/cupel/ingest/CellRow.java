@@ -155,6 +155,11 @@ final class CellRow {
     }
 
     private static boolean isTrimmed(char c) {
+        // Printable ASCII, the first and last character of nearly every cell, is never trimmed: decided
+        // without the Unicode tables.
+        if (c > ' ' && c < 0x7F) {
+            return false;
+        }
         return Character.isWhitespace(c) || c == BYTE_ORDER_MARK || c == ZERO_WIDTH_SPACE;
     }
 

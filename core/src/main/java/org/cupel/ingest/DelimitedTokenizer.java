@@ -92,7 +92,11 @@ final class DelimitedTokenizer {
             if (c == '\r' || c == '\n') {
                 return endLine(c);
             }
-            append(row, from, c, column);
+            if (c == 0) {
+                append(row, from, c, column);
+            }
+            // The character just read is still in the buffer: it is copied with the run that follows it.
+            pos--;
             copyRun(row, from, column);
             c = read();
         }
