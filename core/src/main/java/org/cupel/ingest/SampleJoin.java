@@ -100,12 +100,15 @@ final class SampleJoin {
     private final class FileColumns {
         private final List<LabColumn> columns;
         private final AnalyteColumn.Builder[] builders;
+        /** Per column, its builder's source for this file's results (made with the builder). */
+        private final AnalyteColumn.Builder.Source[] sources;
         private final double[] factors;
         private final long[] results;
 
         FileColumns(List<LabColumn> columns) {
             this.columns = columns;
             this.builders = new AnalyteColumn.Builder[columns.size()];
+            this.sources = new AnalyteColumn.Builder.Source[columns.size()];
             this.factors = new double[columns.size()];
             this.results = new long[columns.size()];
             for (int c = 0; c < columns.size(); c++) {
@@ -132,11 +135,12 @@ final class SampleJoin {
 
         /** Adds the result of {@code row}, column {@code c}, to sample row {@code r}, in the reporting unit. */
         void add(int c, int r, LabRows rows, int row, String file) {
-            AnalyteHeader a = columns.get(c).analyte();
             if (builders[c] == null) {
+                AnalyteHeader a = columns.get(c).analyte();
                 GradeUnit target = units.get(a.analyte());
                 builders[c] = SampleJoin.this.columns.computeIfAbsent(a.analyte(),
                         k -> AnalyteColumn.builder(new Analyte(k, target), expectedRows()));
+                sources[c] = builders[c].source(a.method(), file);
             }
             Qualifier q = rows.qualifier(row, c);
             double value = rows.value(row, c);
@@ -152,11 +156,13 @@ final class SampleJoin {
                     throw new IllegalArgumentException("a non-missing assay value must be finite: " + value);
                 }
             }
-            builders[c].add(r, q, value, limit, rows.missingReason(row, c), decimals, a.method(), file,
-                    rows.line(row), 0);
-            String code = rows.code(row, c);
-            if (!code.isEmpty()) {
-                builders[c].missingCode(r, code);
+            sources[c].add(r, q, value, limit, rows.missingReason(row, c), decimals, rows.line(row));
+            // Only a missing result has a code (see LabRows#setCode).
+            if (q == Qualifier.MISSING) {
+                String code = rows.code(row, c);
+                if (!code.isEmpty()) {
+                    builders[c].missingCode(r, code);
+                }
             }
         }
     }
