@@ -1,0 +1,88 @@
+package org.cupel.ingest;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertSame;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.locks.LockSupport;
+import org.cupel.project.InputException;
+import org.cupel.testing.Gen;
+import org.cupel.testing.SeededTries;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The caller receives every item's outcome in list order, exactly as a sequential read gives it, whoever read
+ * it (the worker, or the caller while it waited) and whatever the window; an input error takes its item's
+ * place; anything else thrown while reading reaches the caller at that item.
+ */
+class ReadAheadProperties {
+    /** Items, how long reading each takes (microseconds), which fail, the window. */
+    record Case(int items, List<Integer> micros, int failEvery, int window) {
+    }
+
+    private static final Gen<Case> CASES = r -> {
+        int n = r.nextInt(0, 60);
+        List<Integer> micros = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            micros.add(r.nextInt(4) == 0 ? r.nextInt(2000) : r.nextInt(50));
+        }
+        return new Case(n, micros, r.nextInt(2, 12), r.nextInt(1, 9));
+    };
+
+    @Test
+    void outcomesArriveInListOrderAsReadOneByOne() {
+        SeededTries.forAll(60, CASES, c -> {
+            List<Integer> items = new ArrayList<>();
+            for (int i = 0; i < c.items(); i++) {
+                items.add(i);
+            }
+            List<String> received = new ArrayList<>();
+            try (ReadAhead<Integer, String> reads = ReadAhead.start(items, () -> i -> read(c, i), c.window())) {
+                // The caller is busy for a while first, as with the register.
+                LockSupport.parkNanos(r(c) * 1000L);
+                reads.readInOrder(o -> received.add(o.item() + ":" + (o.error() == null ? o.result()
+                        : "error " + o.error().getMessage())));
+            }
+            List<String> sequential = new ArrayList<>();
+            for (int i : items) {
+                try {
+                    sequential.add(i + ":" + read(c, i));
+                } catch (InputException e) {
+                    sequential.add(i + ":error " + e.getMessage());
+                }
+            }
+            assertEquals(sequential, received);
+        });
+    }
+
+    @Test
+    void aBugWhileReadingReachesTheCallerAtItsItem() {
+        List<Integer> items = List.of(0, 1, 2, 3, 4, 5, 6, 7);
+        IllegalStateException bug = new IllegalStateException("bug at 5");
+        List<Integer> received = new ArrayList<>();
+        try (ReadAhead<Integer, Integer> reads = ReadAhead.start(items, () -> i -> {
+            if (i == 5) {
+                throw bug;
+            }
+            return i;
+        }, 2)) {
+            assertSame(bug, assertThrows(IllegalStateException.class,
+                    () -> reads.readInOrder(o -> received.add(o.result()))));
+        }
+        assertEquals(List.of(0, 1, 2, 3, 4), received);
+    }
+
+    private static int r(Case c) {
+        return c.micros().isEmpty() ? 0 : c.micros().get(0) * 5;
+    }
+
+    private static String read(Case c, int i) {
+        LockSupport.parkNanos(c.micros().get(i) * 1000L);
+        if (i % c.failEvery() == 1) {
+            throw new InputException("file " + i + " cannot be read");
+        }
+        return "parsed " + i;
+    }
+}
