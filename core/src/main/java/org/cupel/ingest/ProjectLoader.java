@@ -38,8 +38,11 @@ public final class ProjectLoader {
     public static final String REGISTER = "register.csv";
     public static final String CATALOG = "crm-catalog.csv";
     public static final String LAB_DIR = "lab";
-    /** Parsed lab files that may wait for the join: enough to keep the reading core busy, few in memory. */
-    private static final int READ_AHEAD_FILES = 4;
+    /**
+     * Bytes of lab files that may be parsed ahead of the join: enough to keep the second core busy while the
+     * register is read, a bounded memory (a parsed lab file takes a few times its size).
+     */
+    private static final long READ_AHEAD_BYTES = Long.getLong("cupel.readAheadBytes", 32L << 20);
 
     private ProjectLoader() {
     }
@@ -272,7 +275,7 @@ public final class ProjectLoader {
             return new LabReads(null, entries.isEmpty(), refused, ReadAhead.start(readable, () -> {
                 LabFileReader reader = new LabFileReader(settings);
                 return f -> reader.read(f, displayName(f));
-            }, READ_AHEAD_FILES));
+            }, TableReader::sizeOf, READ_AHEAD_BYTES));
         }
 
         /** The lab files being read: each entry that may not be read is a fatal problem. */

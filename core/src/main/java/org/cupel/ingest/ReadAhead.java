@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.function.Consumer;
 import java.util.function.Function;
 import java.util.function.Supplier;
+import java.util.function.ToLongFunction;
 import org.cupel.project.InputException;
 import org.cupel.project.Workers;
 
@@ -14,8 +15,8 @@ import org.cupel.project.Workers;
  * as the reads are {@linkplain #start started}, while the caller still reads the register, and once the
  * caller is receiving, it reads the next unread item itself whenever the one it waits for is still being
  * read (the join takes about half as long as the parsing, so both cores parse). The loaded project, its
- * exceptions and their order are exactly those of a sequential read. The window bounds how many items are
- * read but not yet received, so how many parsed files wait in memory.
+ * exceptions and their order are exactly those of a sequential read. A budget of input bytes bounds the items
+ * read (or being read) but not yet received, so how many parsed files wait in memory.
  *
  * @param <I> what is read (a path)
  * @param <R> what reading gives (a parsed file)
@@ -31,7 +32,8 @@ final class ReadAhead<I, R> implements AutoCloseable {
 
     private final List<I> items;
     private final Supplier<Function<I, R>> readers;
-    private final int window;
+    private final long[] sizes;
+    private final long budget;
     private final Object lock = new Object();
     /** The items read and not yet received, by index; guarded by {@link #lock}. */
     private final Object[] done;
@@ -39,13 +41,16 @@ final class ReadAhead<I, R> implements AutoCloseable {
     private int claimed;
     /** How many items the caller has received; guarded by {@link #lock}. */
     private int received;
+    /** The input bytes of the items claimed and not yet received; guarded by {@link #lock}. */
+    private long inFlight;
     private boolean closed;
     private Function<I, R> callerReader;
 
-    private ReadAhead(List<I> items, Supplier<Function<I, R>> readers, int window) {
+    private ReadAhead(List<I> items, Supplier<Function<I, R>> readers, ToLongFunction<I> size, long budget) {
         this.items = List.copyOf(items);
         this.readers = readers;
-        this.window = Math.max(1, window);
+        this.sizes = this.items.stream().mapToLong(size).toArray();
+        this.budget = budget;
         this.done = new Object[this.items.size()];
     }
 
@@ -53,10 +58,12 @@ final class ReadAhead<I, R> implements AutoCloseable {
      * Starts reading {@code items} on a worker thread (on two cores or more, and for two items or more).
      *
      * @param readers makes one reader per thread (readers keep scratch buffers, so are not shared)
-     * @param window how many items may be read ahead of the caller
+     * @param size the input bytes of an item
+     * @param budget how many input bytes may be read ahead of the caller (at least one item always may)
      */
-    static <I, R> ReadAhead<I, R> start(List<I> items, Supplier<Function<I, R>> readers, int window) {
-        ReadAhead<I, R> reads = new ReadAhead<>(items, readers, window);
+    static <I, R> ReadAhead<I, R> start(List<I> items, Supplier<Function<I, R>> readers, ToLongFunction<I> size,
+                                        long budget) {
+        ReadAhead<I, R> reads = new ReadAhead<>(items, readers, size, budget);
         if (Runtime.getRuntime().availableProcessors() >= 2 && reads.items.size() >= 2) {
             Workers.daemonThreads("cupel-read-ahead").newThread(reads::work).start();
         }
@@ -89,11 +96,12 @@ final class ReadAhead<I, R> implements AutoCloseable {
                     Done<I, R> d = (Done<I, R>) done[k];
                     done[k] = null;
                     received = k + 1;
+                    inFlight -= sizes[k];
                     lock.notifyAll();
                     return unwrap(d);
                 }
-                if (claimed < items.size() && claimed - k < window) {
-                    mine = claimed++;
+                if (mayClaim()) {
+                    mine = claim();
                 } else {
                     waitOn();
                     continue;
@@ -109,19 +117,19 @@ final class ReadAhead<I, R> implements AutoCloseable {
         }
     }
 
-    /** The worker: reads the next unclaimed item while fewer than {@link #window} wait unreceived. */
+    /** The worker: reads the next unclaimed item while the budget allows. */
     private void work() {
         Function<I, R> reader = readers.get();
         while (true) {
             int mine;
             synchronized (lock) {
-                while (!closed && claimed < items.size() && claimed - received >= window) {
+                while (!closed && claimed < items.size() && !mayClaim()) {
                     waitOn();
                 }
                 if (closed || claimed >= items.size()) {
                     return;
                 }
-                mine = claimed++;
+                mine = claim();
             }
             Done<I, R> d = read(reader, mine);
             synchronized (lock) {
@@ -129,6 +137,16 @@ final class ReadAhead<I, R> implements AutoCloseable {
                 lock.notifyAll();
             }
         }
+    }
+
+    /** Whether an item is left and the budget allows reading it; the next item to receive always may be read. */
+    private boolean mayClaim() {
+        return claimed < items.size() && (claimed == received || inFlight + sizes[claimed] <= budget);
+    }
+
+    private int claim() {
+        inFlight += sizes[claimed];
+        return claimed++;
     }
 
     private void waitOn() {

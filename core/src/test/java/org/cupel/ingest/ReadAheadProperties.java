@@ -18,8 +18,8 @@ import org.junit.jupiter.api.Test;
  * place; anything else thrown while reading reaches the caller at that item.
  */
 class ReadAheadProperties {
-    /** Items, how long reading each takes (microseconds), which fail, the window. */
-    record Case(int items, List<Integer> micros, int failEvery, int window) {
+    /** Items, how long reading each takes (microseconds, also its size), which fail, the budget. */
+    record Case(int items, List<Integer> micros, int failEvery, int budget) {
     }
 
     private static final Gen<Case> CASES = r -> {
@@ -28,7 +28,7 @@ class ReadAheadProperties {
         for (int i = 0; i < n; i++) {
             micros.add(r.nextInt(4) == 0 ? r.nextInt(2000) : r.nextInt(50));
         }
-        return new Case(n, micros, r.nextInt(2, 12), r.nextInt(1, 9));
+        return new Case(n, micros, r.nextInt(2, 12), r.nextInt(0, 5000));
     };
 
     @Test
@@ -39,7 +39,8 @@ class ReadAheadProperties {
                 items.add(i);
             }
             List<String> received = new ArrayList<>();
-            try (ReadAhead<Integer, String> reads = ReadAhead.start(items, () -> i -> read(c, i), c.window())) {
+            try (ReadAhead<Integer, String> reads = ReadAhead.start(items, () -> i -> read(c, i),
+                    i -> c.micros().get(i), c.budget())) {
                 // The caller is busy for a while first, as with the register.
                 LockSupport.parkNanos(r(c) * 1000L);
                 reads.readInOrder(o -> received.add(o.item() + ":" + (o.error() == null ? o.result()
@@ -67,7 +68,7 @@ class ReadAheadProperties {
                 throw bug;
             }
             return i;
-        }, 2)) {
+        }, i -> 1, 2)) {
             assertSame(bug, assertThrows(IllegalStateException.class,
                     () -> reads.readInOrder(o -> received.add(o.result()))));
         }
