@@ -146,6 +146,7 @@ final class LabFileReader {
                         "the file has a header on line " + t.headerLine() + " but no data rows",
                         "one row per sample below the header", "check that the lab's export is complete"));
             }
+            kept.trim();
             return new LabFile(t.file(), batches(), columns, ignored, kept, issues, excludedIds, rowsRead,
                     rowsExcluded);
         }
