@@ -21,26 +21,32 @@ public final class SampleTable {
     private final String[] references;
     private final int[] fileIndex;
     private final long[] lines;
+    /** The rows; the arrays, handed over by the builder, may be longer. */
+    private final int size;
     private final List<Batch> batches;
     private final List<String> files;
     private final RowIndex rowById;
 
+    /**
+     * Takes the builder's arrays as they are: copying a million rows' arrays to their exact length would leave
+     * the originals (about 40 MB, already in the old generation) as garbage for a full collection.
+     */
     private SampleTable(Builder b) {
-        int n = b.size;
-        this.ids = Arrays.copyOf(b.ids, n);
-        this.batchIndex = Arrays.copyOf(b.batchIndex, n);
-        this.positions = Arrays.copyOf(b.positions, n);
-        this.roles = Arrays.copyOf(b.roles, n);
-        this.references = Arrays.copyOf(b.references, n);
-        this.fileIndex = Arrays.copyOf(b.fileIndex, n);
-        this.lines = Arrays.copyOf(b.lines, n);
+        this.size = b.size;
+        this.ids = b.ids;
+        this.batchIndex = b.batchIndex;
+        this.positions = b.positions;
+        this.roles = b.roles;
+        this.references = b.references;
+        this.fileIndex = b.fileIndex;
+        this.lines = b.lines;
         this.batches = List.copyOf(b.batches);
         this.files = List.copyOf(b.files);
         this.rowById = b.rowById;
     }
 
     public int size() {
-        return ids.length;
+        return size;
     }
 
     public String id(int row) {
@@ -87,7 +93,7 @@ public final class SampleTable {
      * sits just before it, and comparing one ID spares a hash probe into a table of a million IDs.
      */
     public int row(String sampleId, int guess) {
-        if (guess >= 0 && guess < ids.length && ids[guess].equals(sampleId)) {
+        if (guess >= 0 && guess < size && ids[guess].equals(sampleId)) {
             return guess;
         }
         return rowById.row(sampleId);
@@ -101,14 +107,14 @@ public final class SampleTable {
     public int[] rowsWithRole(QcRole role) {
         byte r = (byte) role.ordinal();
         int count = 0;
-        for (byte x : roles) {
-            if (x == r) {
+        for (int i = 0; i < size; i++) {
+            if (roles[i] == r) {
                 count++;
             }
         }
         int[] out = new int[count];
         int k = 0;
-        for (int i = 0; i < roles.length; i++) {
+        for (int i = 0; i < size; i++) {
             if (roles[i] == r) {
                 out[k++] = i;
             }
@@ -131,6 +137,7 @@ public final class SampleTable {
 
     /** Collects rows one at a time; sample IDs must be unique. The builder is spent by {@link #build()}. */
     public static final class Builder {
+        private boolean built;
         private String[] ids;
         private int[] batchIndex;
         private int[] positions;
@@ -167,6 +174,7 @@ public final class SampleTable {
 
         /** As {@link #add(String, Batch, int, QcRole, String, SourceLocation)} with the source's file and line. */
         public int add(String id, Batch batch, int position, QcRole role, String reference, String file, long line) {
+            requireOpen();
             if (!rowById.put(id, size)) {
                 throw new IllegalArgumentException("sample ID already present: " + id);
             }
@@ -179,6 +187,7 @@ public final class SampleTable {
          */
         public int addKnown(int known, Batch batch, int position, QcRole role, String reference, String file,
                             long line) {
+            requireOpen();
             if (!rowById.putKnown(known, size)) {
                 throw new IllegalArgumentException("sample ID already present: " + rowById.knownId(known));
             }
@@ -192,6 +201,7 @@ public final class SampleTable {
 
         private int append(String id, Batch batch, int position, QcRole role, String reference, String file,
                            long line) {
+            requireOpen();
             ensureCapacity(size + 1);
             ids[size] = id;
             batchIndex[size] = batchIndex(batch);
@@ -242,6 +252,7 @@ public final class SampleTable {
 
         /** Sets role and reference after the register has been joined to the lab rows. */
         public void setRole(int row, QcRole role, String reference) {
+            requireOpen();
             roles[row] = (byte) role.ordinal();
             references[row] = reference == null ? "" : reference;
         }
@@ -250,8 +261,17 @@ public final class SampleTable {
             return size;
         }
 
+        /** The table; the builder hands its arrays over, so it takes no more rows or changes. */
         public SampleTable build() {
+            requireOpen();
+            built = true;
             return new SampleTable(this);
+        }
+
+        private void requireOpen() {
+            if (built) {
+                throw new IllegalStateException("the sample table has already been built");
+            }
         }
 
         private void ensureCapacity(int needed) {
