@@ -93,51 +93,49 @@ final class DelimitedTokenizer {
     private boolean plainRecord(CellRow row) {
         char[] b = buf;
         int e = end;
-        int q = pos;
-        while (q < e) {
-            char x = b[q];
-            if (x == '\n' || x == '\r' || x == '"' || x == 0) {
-                break;
-            }
-            q++;
-        }
-        int after;
-        if (q < e) {
-            char x = b[q];
-            if (x == '"' || x == 0) {
-                return false;
-            }
-            if (x == '\r' && q + 1 == e && !whole) {
-                return false;
-            }
-            after = x == '\r' && q + 1 < e && b[q + 1] == '\n' ? q + 2 : q + 1;
-        } else if (whole) {
-            after = e;
-        } else {
-            return false;
-        }
-        if (q - pos > MAX_FIELD_CHARS) {
-            return false;
-        }
-        row.borrow(b, line);
         char d = delimiter;
+        row.borrow(b, line);
         int from = pos;
-        for (int i = pos; ; i++) {
-            if (i == q || b[i] == d) {
+        int i = pos;
+        while (i < e) {
+            char x = b[i];
+            // Digits, letters and the signs of numbers lie above '"': one test for most characters.
+            if (x > '"' && x != d) {
+                i++;
+                continue;
+            }
+            if (x == d) {
                 row.addTrimmed(from, i);
                 if (row.size() > MAX_CELLS) {
                     return false;
                 }
-                if (i == q) {
-                    break;
-                }
-                from = i + 1;
+                from = ++i;
+                continue;
             }
+            if (x == '"' || x == 0) {
+                return false;
+            }
+            if (x == '\n' || x == '\r') {
+                break;
+            }
+            i++;
         }
-        if (q < e) {
+        if (i == e && !whole || i - pos > MAX_FIELD_CHARS) {
+            return false;
+        }
+        row.addTrimmed(from, i);
+        if (row.size() > MAX_CELLS) {
+            return false;
+        }
+        if (i < e) {
+            if (b[i] == '\r' && i + 1 == e && !whole) {
+                return false;
+            }
+            pos = b[i] == '\r' && i + 1 < e && b[i + 1] == '\n' ? i + 2 : i + 1;
             line++;
+        } else {
+            pos = e;
         }
-        pos = after;
         return true;
     }
 
