@@ -44,6 +44,11 @@ final class ReadAhead<I, R> implements AutoCloseable {
     /** The input bytes of the items claimed and not yet received; guarded by {@link #lock}. */
     private long inFlight;
     private boolean closed;
+    /**
+     * What stopped the worker outside an item's outcome (out of memory while recording it, say); guarded by
+     * {@link #lock}. The worker's claimed item will not come, so the caller throws this in its place.
+     */
+    private Throwable workerFailure;
     private Function<I, R> callerReader;
 
     private ReadAhead(List<I> items, Supplier<Function<I, R>> readers, ToLongFunction<I> size, long budget) {
@@ -100,6 +105,9 @@ final class ReadAhead<I, R> implements AutoCloseable {
                     lock.notifyAll();
                     return unwrap(d);
                 }
+                if (workerFailure != null) {
+                    throw rethrown(workerFailure);
+                }
                 if (mayClaim()) {
                     mine = claim();
                 } else {
@@ -117,8 +125,22 @@ final class ReadAhead<I, R> implements AutoCloseable {
         }
     }
 
-    /** The worker: reads the next unclaimed item while the budget allows. */
+    /**
+     * The worker: reads the next unclaimed item while the budget allows. Whatever stops it reaches the caller,
+     * never the thread's default handler (which would print a stack trace beside the command's own message).
+     */
     private void work() {
+        try {
+            readAhead();
+        } catch (Throwable t) {
+            synchronized (lock) {
+                workerFailure = t;
+                lock.notifyAll();
+            }
+        }
+    }
+
+    private void readAhead() {
         Function<I, R> reader = readers.get();
         while (true) {
             int mine;
@@ -171,12 +193,19 @@ final class ReadAhead<I, R> implements AutoCloseable {
 
     /** An error or out-of-memory on the worker reaches the command line exactly as from the calling thread. */
     private static <I, R> Outcome<I, R> unwrap(Done<I, R> d) {
-        if (d.thrown() instanceof RuntimeException e) {
-            throw e;
-        }
-        if (d.thrown() instanceof Error e) {
-            throw e;
+        if (d.thrown() != null) {
+            throw rethrown(d.thrown());
         }
         return d.outcome();
+    }
+
+    private static RuntimeException rethrown(Throwable t) {
+        if (t instanceof RuntimeException e) {
+            throw e;
+        }
+        if (t instanceof Error e) {
+            throw e;
+        }
+        throw new IllegalStateException(t);
     }
 }

@@ -75,6 +75,46 @@ class ReadAheadProperties {
         assertEquals(List.of(0, 1, 2, 3, 4), received);
     }
 
+    /**
+     * A failure of the worker outside an item (here its reader cannot be made; in practice, out of memory while
+     * recording an outcome) never reaches the thread's default handler, which would print a stack trace beside
+     * the command's one-sentence message: the caller throws it at the first item not yet read, or, when the
+     * caller has read every item itself, the run completes.
+     */
+    @Test
+    void aFailureOfTheWorkerReachesTheCallerNotTheThreadsHandler() throws Exception {
+        List<Integer> items = List.of(0, 1, 2, 3, 4, 5, 6, 7);
+        IllegalStateException noReader = new IllegalStateException("no reader on the worker");
+        java.util.concurrent.CountDownLatch failed = new java.util.concurrent.CountDownLatch(1);
+        List<Throwable> uncaught = new java.util.concurrent.CopyOnWriteArrayList<>();
+        Thread.UncaughtExceptionHandler before = Thread.getDefaultUncaughtExceptionHandler();
+        Thread.setDefaultUncaughtExceptionHandler((t, e) -> uncaught.add(e));
+        try {
+            List<Integer> received = new ArrayList<>();
+            try (ReadAhead<Integer, Integer> reads = ReadAhead.start(items, () -> {
+                if (Thread.currentThread().getName().equals("cupel-read-ahead")) {
+                    failed.countDown();
+                    throw noReader;
+                }
+                return i -> i;
+            }, i -> 1, 2)) {
+                failed.await(10, java.util.concurrent.TimeUnit.SECONDS);
+                LockSupport.parkNanos(50_000_000L);
+                try {
+                    reads.readInOrder(o -> received.add(o.result()));
+                    assertEquals(items, received, "the caller read every item itself");
+                } catch (IllegalStateException e) {
+                    assertSame(noReader, e);
+                    assertEquals(items.subList(0, received.size()), received);
+                }
+            }
+            LockSupport.parkNanos(50_000_000L);
+            assertEquals(List.of(), uncaught);
+        } finally {
+            Thread.setDefaultUncaughtExceptionHandler(before);
+        }
+    }
+
     private static int r(Case c) {
         return c.micros().isEmpty() ? 0 : c.micros().get(0) * 5;
     }
