@@ -249,6 +249,52 @@ public final class AnalyteColumn {
         }
 
         /**
+         * Where a run of results comes from: one method of one file (a lab file's analyte column). Its results
+         * are added as by {@link #add(int, Qualifier, double, double, MissingReason, int, String, String, long,
+         * int)} at column 0, without looking up the method and the file for each (they are numbered at the
+         * first result that is a row's first, as there).
+         *
+         * @param file the source file (not null)
+         */
+        public Source source(String method, String file) {
+            return new Source(method == null ? "" : method, file);
+        }
+
+        /** See {@link #source(String, String)}. */
+        public final class Source {
+            private final String method;
+            private final String file;
+            private short methodNumber = -1;
+            private int fileNumber = -1;
+
+            private Source(String method, String file) {
+                this.method = method;
+                this.file = file;
+            }
+
+            /** @param written the decimals the lab wrote the value with (0 to 127), or {@link Numbers#UNKNOWN_DECIMALS} */
+            public void add(int row, Qualifier qualifier, double value, double limit, MissingReason reason,
+                            int written, long line) {
+                if (built || row >= qualifiers.length || qualifiers[row] != ABSENT) {
+                    Builder.this.add(row, qualifier, value, limit, reason, written, method, file, line, 0);
+                    return;
+                }
+                if (methodNumber < 0) {
+                    methodNumber = methodIndex(method);
+                    fileNumber = fileIndex(file);
+                }
+                qualifiers[row] = (byte) qualifier.ordinal();
+                values[row] = value;
+                limits[row] = limit;
+                missing[row] = (byte) reason.ordinal();
+                decimals[row] = asByte(written);
+                methodOf[row] = methodNumber;
+                sourceFile[row] = fileNumber;
+                sourceLine[row] = Math.toIntExact(line);
+            }
+        }
+
+        /**
          * The lab's code of the missing result just added to {@code row}, kept when it is the row's first
          * result (see {@link AnalyteColumn#missingCode(int)}).
          */

@@ -21,28 +21,34 @@ public final class SampleTable {
     private final String[] references;
     private final int[] fileIndex;
     private final long[] lines;
+    /** The rows; the arrays, handed over by the builder, may be longer. */
+    private final int size;
     private final List<Batch> batches;
     private final List<String> files;
     private final RowIndex rowById;
     /** Rows of each role, by {@link QcRole#ordinal()}; made on first use ({@link #rowsByRole()}). */
     private volatile int[][] rowsByRole;
 
+    /**
+     * Takes the builder's arrays as they are: copying a million rows' arrays to their exact length would leave
+     * the originals (about 40 MB, already in the old generation) as garbage for a full collection.
+     */
     private SampleTable(Builder b) {
-        int n = b.size;
-        this.ids = Arrays.copyOf(b.ids, n);
-        this.batchIndex = Arrays.copyOf(b.batchIndex, n);
-        this.positions = Arrays.copyOf(b.positions, n);
-        this.roles = Arrays.copyOf(b.roles, n);
-        this.references = Arrays.copyOf(b.references, n);
-        this.fileIndex = Arrays.copyOf(b.fileIndex, n);
-        this.lines = Arrays.copyOf(b.lines, n);
+        this.size = b.size;
+        this.ids = b.ids;
+        this.batchIndex = b.batchIndex;
+        this.positions = b.positions;
+        this.roles = b.roles;
+        this.references = b.references;
+        this.fileIndex = b.fileIndex;
+        this.lines = b.lines;
         this.batches = List.copyOf(b.batches);
         this.files = List.copyOf(b.files);
         this.rowById = b.rowById;
     }
 
     public int size() {
-        return ids.length;
+        return size;
     }
 
     public String id(int row) {
@@ -89,7 +95,7 @@ public final class SampleTable {
      * sits just before it, and comparing one ID spares a hash probe into a table of a million IDs.
      */
     public int row(String sampleId, int guess) {
-        if (guess >= 0 && guess < ids.length && ids[guess].equals(sampleId)) {
+        if (guess >= 0 && guess < size && ids[guess].equals(sampleId)) {
             return guess;
         }
         return rowById.row(sampleId);
@@ -99,7 +105,6 @@ public final class SampleTable {
         return new Sample(ids[row], batch(row), positions[row], role(row), references[row], source(row));
     }
 
-    /** Rows with the given role, in table order. */
     /** The rows of {@code role} in row order; a fresh array the caller may reorder. */
     public int[] rowsWithRole(QcRole role) {
         return rowsByRole()[role.ordinal()].clone();
@@ -113,15 +118,15 @@ public final class SampleTable {
         int[][] byRole = rowsByRole;
         if (byRole == null) {
             int[] counts = new int[ROLES.length];
-            for (byte r : roles) {
-                counts[r]++;
+            for (int i = 0; i < size; i++) {
+                counts[roles[i]]++;
             }
             byRole = new int[ROLES.length][];
             for (int r = 0; r < ROLES.length; r++) {
                 byRole[r] = new int[counts[r]];
             }
             int[] filled = new int[ROLES.length];
-            for (int i = 0; i < roles.length; i++) {
+            for (int i = 0; i < size; i++) {
                 byRole[roles[i]][filled[roles[i]]++] = i;
             }
             rowsByRole = byRole; // a race computes the same arrays twice, no worse
@@ -144,6 +149,7 @@ public final class SampleTable {
 
     /** Collects rows one at a time; sample IDs must be unique. The builder is spent by {@link #build()}. */
     public static final class Builder {
+        private boolean built;
         private String[] ids;
         private int[] batchIndex;
         private int[] positions;
@@ -180,6 +186,7 @@ public final class SampleTable {
 
         /** As {@link #add(String, Batch, int, QcRole, String, SourceLocation)} with the source's file and line. */
         public int add(String id, Batch batch, int position, QcRole role, String reference, String file, long line) {
+            requireOpen();
             if (!rowById.put(id, size)) {
                 throw new IllegalArgumentException("sample ID already present: " + id);
             }
@@ -192,6 +199,7 @@ public final class SampleTable {
          */
         public int addKnown(int known, Batch batch, int position, QcRole role, String reference, String file,
                             long line) {
+            requireOpen();
             if (!rowById.putKnown(known, size)) {
                 throw new IllegalArgumentException("sample ID already present: " + rowById.knownId(known));
             }
@@ -205,6 +213,7 @@ public final class SampleTable {
 
         private int append(String id, Batch batch, int position, QcRole role, String reference, String file,
                            long line) {
+            requireOpen();
             ensureCapacity(size + 1);
             ids[size] = id;
             batchIndex[size] = batchIndex(batch);
@@ -255,6 +264,7 @@ public final class SampleTable {
 
         /** Sets role and reference after the register has been joined to the lab rows. */
         public void setRole(int row, QcRole role, String reference) {
+            requireOpen();
             roles[row] = (byte) role.ordinal();
             references[row] = reference == null ? "" : reference;
         }
@@ -263,8 +273,17 @@ public final class SampleTable {
             return size;
         }
 
+        /** The table; the builder hands its arrays over, so it takes no more rows or changes. */
         public SampleTable build() {
+            requireOpen();
+            built = true;
             return new SampleTable(this);
+        }
+
+        private void requireOpen() {
+            if (built) {
+                throw new IllegalStateException("the sample table has already been built");
+            }
         }
 
         private void ensureCapacity(int needed) {

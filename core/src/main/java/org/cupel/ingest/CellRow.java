@@ -7,7 +7,8 @@ import java.util.List;
 /**
  * One record of a table as the readers scan it, reused from row to row: the trimmed cell texts live in
  * one shared character buffer as offset ranges, so reading a million rows creates a String only for
- * the cells a reader keeps (sample IDs, codes, problems), not for every cell.
+ * the cells a reader keeps (sample IDs, codes, problems), not for every cell. The buffer is the row's own,
+ * or, for a record without quotes, the tokenizer's ({@link #borrow}), whose cells need no copying.
  */
 final class CellRow {
     /** U+FEFF: a byte-order mark, or a zero-width no-break space; invisible, never part of a cell. */
@@ -15,7 +16,8 @@ final class CellRow {
     /** U+200B: a zero-width space, invisible, never part of a cell. */
     private static final char ZERO_WIDTH_SPACE = '\u200B';
 
-    private char[] text = new char[256];
+    private char[] owned = new char[256];
+    private char[] text = owned;
     private int[] starts = new int[16];
     private int[] ends = new int[16];
     private int size;
@@ -111,6 +113,18 @@ final class CellRow {
         line = recordLine;
         size = 0;
         length = 0;
+        text = owned;
+    }
+
+    /**
+     * Begins a record whose cells are ranges of {@code source} ({@link #addTrimmed}), read in place until the
+     * next record begins; nothing is appended to a borrowed buffer.
+     */
+    void borrow(char[] source, long recordLine) {
+        line = recordLine;
+        size = 0;
+        length = 0;
+        text = source;
     }
 
     /** Text appended since the current cell began at {@code from}. */
@@ -124,7 +138,7 @@ final class CellRow {
 
     void append(char c) {
         if (length == text.length) {
-            text = Arrays.copyOf(text, length * 2);
+            text = owned = Arrays.copyOf(text, length * 2);
         }
         text[length++] = c;
     }
@@ -132,7 +146,7 @@ final class CellRow {
     void append(char[] src, int from, int to) {
         int n = to - from;
         if (length + n > text.length) {
-            text = Arrays.copyOf(text, Math.max(length + n, length * 2));
+            text = owned = Arrays.copyOf(text, Math.max(length + n, length * 2));
         }
         System.arraycopy(src, from, text, length, n);
         length += n;
@@ -143,8 +157,13 @@ final class CellRow {
      * zero-width characters (a sample ID must not differ from the register's by an invisible character).
      */
     void endCell(int from) {
+        addTrimmed(from, length);
+    }
+
+    /** Adds the cell {@code text()[from, to)}, trimmed as {@link #endCell} trims. */
+    void addTrimmed(int from, int to) {
         int s = from;
-        int e = length;
+        int e = to;
         while (s < e && isTrimmed(text[s])) {
             s++;
         }
@@ -155,6 +174,11 @@ final class CellRow {
     }
 
     private static boolean isTrimmed(char c) {
+        // Printable ASCII, the first and last character of nearly every cell, is never trimmed: decided
+        // without the Unicode tables.
+        if (c > ' ' && c < 0x7F) {
+            return false;
+        }
         return Character.isWhitespace(c) || c == BYTE_ORDER_MARK || c == ZERO_WIDTH_SPACE;
     }
 

@@ -23,6 +23,8 @@ final class DelimitedTokenizer {
     private final String file;
     private static final int BUFFER_CHARS = 1 << 16;
     private final char[] buf;
+    /** Whether the buffer holds the whole input (never refilled), so that its end is the input's end. */
+    private final boolean whole;
     private int pos;
     private int end;
     private long line = 1;
@@ -40,6 +42,7 @@ final class DelimitedTokenizer {
         this.delimiter = delimiter;
         this.file = file;
         this.buf = text;
+        this.whole = true;
         // An empty text is at its end at once (a read into an empty buffer would return 0 forever).
         this.end = length == 0 ? EOF : length;
     }
@@ -50,6 +53,7 @@ final class DelimitedTokenizer {
         this.delimiter = delimiter;
         this.file = file;
         this.buf = new char[Math.max(16, Math.min(BUFFER_CHARS, length))];
+        this.whole = false;
     }
 
     /**
@@ -59,6 +63,9 @@ final class DelimitedTokenizer {
     boolean next(CellRow row) {
         if (peek() == EOF) {
             return false;
+        }
+        if (plainRecord(row)) {
+            return true;
         }
         row.begin(line);
         long recordLine = line;
@@ -74,6 +81,62 @@ final class DelimitedTokenizer {
                 return true;
             }
         }
+    }
+
+    /**
+     * Reads the next record in place when it holds no quote and no NUL and lies whole in the buffer (nearly
+     * every record of a lab file): its cells are ranges of the buffer, split at the delimiter and trimmed as
+     * {@link #readField} and {@link CellRow#endCell} would, without copying a character. False, having read
+     * nothing, for any other record, which {@link #next} then reads character by character (and reports what
+     * is wrong with it).
+     */
+    private boolean plainRecord(CellRow row) {
+        char[] b = buf;
+        int e = end;
+        char d = delimiter;
+        row.borrow(b, line);
+        int from = pos;
+        int i = pos;
+        while (i < e) {
+            char x = b[i];
+            // Digits, letters and the signs of numbers lie above '"': one test for most characters.
+            if (x > '"' && x != d) {
+                i++;
+                continue;
+            }
+            if (x == d) {
+                row.addTrimmed(from, i);
+                if (row.size() > MAX_CELLS) {
+                    return false;
+                }
+                from = ++i;
+                continue;
+            }
+            if (x == '"' || x == 0) {
+                return false;
+            }
+            if (x == '\n' || x == '\r') {
+                break;
+            }
+            i++;
+        }
+        if (i == e && !whole || i - pos > MAX_FIELD_CHARS) {
+            return false;
+        }
+        row.addTrimmed(from, i);
+        if (row.size() > MAX_CELLS) {
+            return false;
+        }
+        if (i < e) {
+            if (b[i] == '\r' && i + 1 == e && !whole) {
+                return false;
+            }
+            pos = b[i] == '\r' && i + 1 < e && b[i + 1] == '\n' ? i + 2 : i + 1;
+            line++;
+        } else {
+            pos = e;
+        }
+        return true;
     }
 
     /** Reads one field into {@code row}; returns the character that ended it (delimiter, '\n' or EOF). */
@@ -92,7 +155,11 @@ final class DelimitedTokenizer {
             if (c == '\r' || c == '\n') {
                 return endLine(c);
             }
-            append(row, from, c, column);
+            if (c == 0) {
+                append(row, from, c, column);
+            }
+            // The character just read is still in the buffer: it is copied with the run that follows it.
+            pos--;
             copyRun(row, from, column);
             c = read();
         }

@@ -37,10 +37,37 @@ final class LabFileReader {
     private final ValueConventions conventions;
     private final HeaderParser headers;
 
+    /**
+     * Per ASCII character, whether an ID ending with it may end with a repeat suffix (compared as
+     * {@link ValueConventions#repeatOf} compares, ignoring case); null when a suffix is empty. Nearly every ID
+     * ends with a digit, which no suffix does, and is then not compared with each suffix.
+     */
+    private final boolean[] repeatEnds;
+
     public LabFileReader(IngestSettings settings) {
         this.settings = settings;
         this.conventions = settings.valueConventions();
         this.headers = new HeaderParser(settings.columns());
+        this.repeatEnds = repeatEnds(conventions);
+    }
+
+    private static boolean[] repeatEnds(ValueConventions conventions) {
+        boolean[] ends = new boolean[128];
+        for (String suffix : conventions.repeatSuffixes()) {
+            if (suffix.isEmpty()) {
+                return null;
+            }
+            for (char c = 0; c < ends.length; c++) {
+                ends[c] |= String.valueOf(c).regionMatches(true, 0, suffix, suffix.length() - 1, 1);
+            }
+        }
+        return ends;
+    }
+
+    /** Whether {@code id} may end with a repeat suffix: false only when its last character rules that out. */
+    private boolean mayBeRepeat(String id) {
+        char last = id.charAt(id.length() - 1);
+        return repeatEnds == null || last >= repeatEnds.length || repeatEnds[last];
     }
 
     public LabFile read(Path path, String displayName) {
@@ -119,6 +146,7 @@ final class LabFileReader {
                         "the file has a header on line " + t.headerLine() + " but no data rows",
                         "one row per sample below the header", "check that the lab's export is complete"));
             }
+            kept.trim();
             return new LabFile(t.file(), batches(), columns, ignored, kept, issues, excludedIds, rowsRead,
                     rowsExcluded);
         }
@@ -236,7 +264,7 @@ final class LabFileReader {
             int position = position(row, batchKey, id);
             QcRole role = role(row, id);
             String reference = refCol >= 0 ? row.cell(refCol) : "";
-            if (role == null) {
+            if (role == null && mayBeRepeat(id)) {
                 Optional<String> original = conventions.repeatOf(id);
                 if (original.isPresent()) {
                     role = QcRole.LAB_REPEAT;

@@ -161,8 +161,22 @@ final class LabRows {
         }
     }
 
+    /**
+     * Frees the room reserved for rows beyond those kept (the estimate from the file's size errs high): a parsed
+     * file may wait in memory for the join while the register is read.
+     */
+    void trim() {
+        if (size * 5L >= ids.length * 4L) {
+            return;
+        }
+        resize(size);
+    }
+
     private void grow() {
-        int cap = ids.length * 2;
+        resize(Math.max(16, ids.length * 2));
+    }
+
+    private void resize(int cap) {
         ids = Arrays.copyOf(ids, cap);
         batches = Arrays.copyOf(batches, cap);
         positions = Arrays.copyOf(positions, cap);

@@ -38,8 +38,13 @@ public final class ProjectLoader {
     public static final String REGISTER = "register.csv";
     public static final String CATALOG = "crm-catalog.csv";
     public static final String LAB_DIR = "lab";
-    /** Parsed lab files that may wait for the join: enough to keep the reading core busy, few in memory. */
-    private static final int READ_AHEAD_FILES = 4;
+    /**
+     * Bytes of lab files that may be parsed ahead of the join, so while the register is read. A parsed file
+     * takes about five times its size and, waiting through young collections, ends as old-generation garbage:
+     * at 1M samples 8 MB left the old generation as full after the ingest as before read-ahead (16 MB: +55 MB,
+     * and a full collection in the analyses), while the joining thread still parses files itself.
+     */
+    private static final long READ_AHEAD_BYTES = 8L << 20;
 
     private ProjectLoader() {
     }
@@ -206,15 +211,21 @@ public final class ProjectLoader {
             requireFolder(folder);
             Map<String, GradeUnit> configured = configuredUnits();
             Map<String, GradeUnit> units = new LinkedHashMap<>(configured);
-            SampleRegister register = readRegister();
-            SampleJoin join = new SampleJoin(register, units, exceptions);
-            // One lab file in memory at a time: each is joined as soon as it is read.
-            readLabs(file -> {
-                for (LabColumn c : file.columns()) {
-                    units.putIfAbsent(c.analyte().analyte(), c.analyte().unit());
-                }
-                join.add(file);
-            });
+            // The lab files are parsed from the start, on the second core while this one reads the register.
+            try (LabReads labs = startLabs()) {
+                SampleRegister register = readRegister();
+                SampleJoin join = new SampleJoin(register, units, exceptions);
+                labs.readInOrder(file -> {
+                    for (LabColumn c : file.columns()) {
+                        units.putIfAbsent(c.analyte().analyte(), c.analyte().unit());
+                    }
+                    join.add(file);
+                });
+                return finish(join, configured, units);
+            }
+        }
+
+        private Project finish(SampleJoin join, Map<String, GradeUnit> configured, Map<String, GradeUnit> units) {
             join.finishRegister();
             Map<String, UnitChoice> unitChoices = join.unitChoices(configured);
             unitChoices.forEach((analyte, choice) -> units.put(analyte, choice.unit()));
@@ -241,33 +252,77 @@ public final class ProjectLoader {
             return new Project(name, folder, config, table, columns, crms, exceptions, accounts, unitChoices);
         }
 
-        /** Reads the lab files that may be read, in name order; each entry that may not is a fatal problem. */
-        private void readLabs(java.util.function.Consumer<LabFile> sink) {
-            List<Path> entries = labFiles(folder);
+        /**
+         * Lists the lab files and starts parsing those that may be read, in name order. What cannot be used (no
+         * listing, no files, an entry that may not be read) is reported when the files are received, after the
+         * register, as when the files were read after it.
+         */
+        private LabReads startLabs() {
+            List<Path> entries;
+            try {
+                entries = labFiles(folder);
+            } catch (InputException e) {
+                return new LabReads(e, true, Map.of(), null);
+            }
             List<Path> readable = new ArrayList<>();
+            Map<Path, String> refused = new LinkedHashMap<>();
             for (Path f : entries) {
                 Optional<String> refusal = files.refusal(f, displayName(f));
                 if (refusal.isPresent()) {
-                    fail(displayName(f), "lab results", new InputException(refusal.get()));
+                    refused.put(f, refusal.get());
                 } else {
                     readable.add(f);
                 }
             }
-            if (entries.isEmpty()) {
-                fail(LAB_DIR, "lab results", new InputException(folder.resolve(LAB_DIR) + ": no lab result files "
-                        + "(expected .csv, .tsv, .txt or .xlsx files in lab/); put the lab's result files there."));
-            }
-            ReadAhead<Path, LabFile> reads = new ReadAhead<>(() -> {
+            return new LabReads(null, entries.isEmpty(), refused, ReadAhead.start(readable, () -> {
                 LabFileReader reader = new LabFileReader(settings);
                 return f -> reader.read(f, displayName(f));
-            }, READ_AHEAD_FILES);
-            reads.readInOrder(readable, outcome -> {
-                if (outcome.error() != null) {
-                    fail(displayName(outcome.item()), "lab results", outcome.error());
-                } else {
-                    sink.accept(outcome.result());
+            }, TableReader::sizeOf, READ_AHEAD_BYTES));
+        }
+
+        /** The lab files being read: each entry that may not be read is a fatal problem. */
+        private final class LabReads implements AutoCloseable {
+            private final InputException unlisted;
+            private final boolean none;
+            private final Map<Path, String> refused;
+            private final ReadAhead<Path, LabFile> reads;
+
+            /**
+             * @param unlisted why the folder could not be listed, or null
+             * @param none whether the folder holds no table file
+             * @param refused the entries that may not be read, each with why, in name order
+             */
+            LabReads(InputException unlisted, boolean none, Map<Path, String> refused, ReadAhead<Path, LabFile> reads) {
+                this.unlisted = unlisted;
+                this.none = none;
+                this.refused = refused;
+                this.reads = reads;
+            }
+
+            void readInOrder(java.util.function.Consumer<LabFile> sink) {
+                if (unlisted != null) {
+                    throw unlisted;
                 }
-            });
+                refused.forEach((f, why) -> fail(displayName(f), "lab results", new InputException(why)));
+                if (none) {
+                    fail(LAB_DIR, "lab results", new InputException(folder.resolve(LAB_DIR) + ": no lab result "
+                            + "files (expected .csv, .tsv, .txt or .xlsx files in lab/); put the lab's result files there."));
+                }
+                reads.readInOrder(outcome -> {
+                    if (outcome.error() != null) {
+                        fail(displayName(outcome.item()), "lab results", outcome.error());
+                    } else {
+                        sink.accept(outcome.result());
+                    }
+                });
+            }
+
+            @Override
+            public void close() {
+                if (reads != null) {
+                    reads.close();
+                }
+            }
         }
 
         /**

@@ -61,6 +61,8 @@ final class SampleJoin {
         long excluded = file.rowsExcluded();
         LabRows rows = file.table();
         FileColumns cols = new FileColumns(file.columns());
+        // The sample row of each lab row, -1 for a row left out.
+        int[] sampleRows = new int[rows.size()];
         for (int i = 0; i < rows.size(); i++) {
             String id = rows.sampleId(i);
             if (rejectedIds != null && rejectedIds.contains(id)) {
@@ -69,6 +71,7 @@ final class SampleJoin {
                         "a usable register row", "correct the sample's row in the register");
                 excludedLabIds.add(id);
                 excluded++;
+                sampleRows[i] = -1;
                 continue;
             }
             int entry = register == null ? -1 : register.indexOf(id, lastEntry + 1);
@@ -85,12 +88,9 @@ final class SampleJoin {
                     r = addSample(file, i, -1);
                 }
             }
-            for (int c = 0; c < cols.size(); c++) {
-                if (rows.hasResult(i, c)) {
-                    cols.add(c, r, rows, i, file.file());
-                }
-            }
+            sampleRows[i] = r;
         }
+        cols.addAll(rows, sampleRows, file.file());
         cols.countUnits();
         accounts.add(new FileAccount(file.file(), "lab results", file.rowsRead(), file.rowsRead() - excluded,
                 excluded));
@@ -100,12 +100,15 @@ final class SampleJoin {
     private final class FileColumns {
         private final List<LabColumn> columns;
         private final AnalyteColumn.Builder[] builders;
+        /** Per column, its builder's source for this file's results (made with the builder). */
+        private final AnalyteColumn.Builder.Source[] sources;
         private final double[] factors;
         private final long[] results;
 
         FileColumns(List<LabColumn> columns) {
             this.columns = columns;
             this.builders = new AnalyteColumn.Builder[columns.size()];
+            this.sources = new AnalyteColumn.Builder.Source[columns.size()];
             this.factors = new double[columns.size()];
             this.results = new long[columns.size()];
             for (int c = 0; c < columns.size(); c++) {
@@ -114,8 +117,67 @@ final class SampleJoin {
             }
         }
 
-        int size() {
-            return columns.size();
+        /**
+         * Adds every result of the file to the sample rows {@code sampleRows} gives its rows (-1: left out). The
+         * results go column by column, each column's writes in sample order through its builder's arrays, where
+         * row by row they went to every analyte's arrays at once (eight arrays an analyte: more streams than
+         * the processor's prefetching follows). The order of what is numbered stays that of reading row by row:
+         * the analytes' builders are made first in that order, and a file with two columns of one analyte (whose
+         * first results and methods depend on the order within a row) is added row by row.
+         */
+        void addAll(LabRows rows, int[] sampleRows, String file) {
+            if (!oneColumnPerAnalyte()) {
+                for (int i = 0; i < rows.size(); i++) {
+                    for (int c = 0; c < columns.size(); c++) {
+                        if (sampleRows[i] >= 0 && rows.hasResult(i, c)) {
+                            add(c, sampleRows[i], rows, i, file);
+                        }
+                    }
+                }
+                return;
+            }
+            makeBuilders(rows, sampleRows, file);
+            for (int c = 0; c < columns.size(); c++) {
+                for (int i = 0; i < rows.size(); i++) {
+                    if (sampleRows[i] >= 0 && rows.hasResult(i, c)) {
+                        add(c, sampleRows[i], rows, i, file);
+                    }
+                }
+            }
+        }
+
+        private boolean oneColumnPerAnalyte() {
+            Set<String> analytes = new HashSet<>();
+            for (LabColumn c : columns) {
+                if (!analytes.add(c.analyte().analyte())) {
+                    return false;
+                }
+            }
+            return true;
+        }
+
+        /** The builders of the columns with results, made in the order reading row by row meets their first. */
+        private void makeBuilders(LabRows rows, int[] sampleRows, String file) {
+            int missing = columns.size();
+            for (int c = 0; c < columns.size(); c++) {
+                missing -= builders[c] != null ? 1 : 0;
+            }
+            for (int i = 0; i < rows.size() && missing > 0; i++) {
+                for (int c = 0; c < columns.size(); c++) {
+                    if (builders[c] == null && sampleRows[i] >= 0 && rows.hasResult(i, c)) {
+                        makeBuilder(c, file);
+                        missing--;
+                    }
+                }
+            }
+        }
+
+        private void makeBuilder(int c, String file) {
+            AnalyteHeader a = columns.get(c).analyte();
+            GradeUnit target = units.get(a.analyte());
+            builders[c] = SampleJoin.this.columns.computeIfAbsent(a.analyte(),
+                    k -> AnalyteColumn.builder(new Analyte(k, target), expectedRows()));
+            sources[c] = builders[c].source(a.method(), file);
         }
 
         /** Adds this file's results to the count of each analyte's unit words; a file counts once per word. */
@@ -131,12 +193,9 @@ final class SampleJoin {
         }
 
         /** Adds the result of {@code row}, column {@code c}, to sample row {@code r}, in the reporting unit. */
-        void add(int c, int r, LabRows rows, int row, String file) {
-            AnalyteHeader a = columns.get(c).analyte();
+        private void add(int c, int r, LabRows rows, int row, String file) {
             if (builders[c] == null) {
-                GradeUnit target = units.get(a.analyte());
-                builders[c] = SampleJoin.this.columns.computeIfAbsent(a.analyte(),
-                        k -> AnalyteColumn.builder(new Analyte(k, target), expectedRows()));
+                makeBuilder(c, file);
             }
             Qualifier q = rows.qualifier(row, c);
             double value = rows.value(row, c);
@@ -152,11 +211,13 @@ final class SampleJoin {
                     throw new IllegalArgumentException("a non-missing assay value must be finite: " + value);
                 }
             }
-            builders[c].add(r, q, value, limit, rows.missingReason(row, c), decimals, a.method(), file,
-                    rows.line(row), 0);
-            String code = rows.code(row, c);
-            if (!code.isEmpty()) {
-                builders[c].missingCode(r, code);
+            sources[c].add(r, q, value, limit, rows.missingReason(row, c), decimals, rows.line(row));
+            // Only a missing result has a code (see LabRows#setCode).
+            if (q == Qualifier.MISSING) {
+                String code = rows.code(row, c);
+                if (!code.isEmpty()) {
+                    builders[c].missingCode(r, code);
+                }
             }
         }
     }

@@ -29,17 +29,21 @@ final class SampleRegister {
     private final long rowsRead;
     private final long rowsExcluded;
 
+    /**
+     * Takes the builder's arrays as they are (sized from the file's length, so mostly longer than needed):
+     * copies of a million entries would leave the originals, about 50 MB already in the old generation, as
+     * garbage for a full collection. Entries are read below {@link #size()} only.
+     */
     private SampleRegister(Builder b, Set<String> rejectedIds, List<DataIssue> issues, long rowsRead,
                            long rowsExcluded) {
-        int n = b.ids.size();
         this.file = b.file;
         this.ids = b.ids;
-        this.roles = Arrays.copyOf(b.roles, n);
-        this.references = Arrays.copyOf(b.references, n);
-        this.holes = Arrays.copyOf(b.holes, n);
-        this.from = Arrays.copyOf(b.from, n);
-        this.to = Arrays.copyOf(b.to, n);
-        this.lines = Arrays.copyOf(b.lines, n);
+        this.roles = b.roles;
+        this.references = b.references;
+        this.holes = b.holes;
+        this.from = b.from;
+        this.to = b.to;
+        this.lines = b.lines;
         this.rejectedIds = Set.copyOf(rejectedIds);
         this.issues = List.copyOf(issues);
         this.rowsRead = rowsRead;

@@ -52,6 +52,30 @@ class SampleTableTest {
         assertEquals(500, total);
     }
 
+    /**
+     * The table takes the builder's arrays as they are (room for 100 rows, 3 used): it counts and searches the
+     * rows added only, and the builder, whose arrays the table now holds, refuses any change.
+     */
+    @Test
+    void aBuiltTableHoldsItsRowsOnlyAndItsBuilderTakesNoMore() {
+        Batch b = new Batch("J", "", null, "f");
+        SampleTable.Builder t = SampleTable.builder(100, null);
+        t.add("S1", b, 1, QcRole.CRM, "STD-1", "f", 2);
+        t.add("S2", b, 2, QcRole.ROUTINE, "", "f", 3);
+        t.add("S3", b, 3, QcRole.CRM, "STD-2", "f", 4);
+        SampleTable table = t.build();
+        assertEquals(3, table.size());
+        assertArrayEquals(new int[] {0, 2}, table.rowsWithRole(QcRole.CRM));
+        assertEquals(0, table.rowsWithRole(QcRole.BLANK).length, "unused room is not a row of any role");
+        assertEquals(-1, table.row("S9", 3), "a guess beyond the rows falls back to the index");
+        assertThrows(IllegalStateException.class, () -> t.add("S4", b, 4, QcRole.ROUTINE, "", "f", 5));
+        assertThrows(IllegalStateException.class, () -> t.setRole(0, QcRole.ROUTINE, ""));
+        assertThrows(IllegalStateException.class, t::build);
+        assertEquals(3, table.size());
+        assertEquals(QcRole.CRM, table.role(0));
+        assertEquals(-1, table.row("S4", -1), "the refused row was not indexed");
+    }
+
     @Test
     void duplicateIdIsRefused() {
         SampleTable.Builder t = SampleTable.builder();
