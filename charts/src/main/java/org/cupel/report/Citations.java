@@ -2,6 +2,7 @@ package org.cupel.report;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.BitSet;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
@@ -50,15 +51,17 @@ final class Citations {
     }
 
     /**
-     * The methods of {@code bibliography} that the section names, in the bibliography's order. Each method's
-     * pattern is searched once, in the section's distinct texts joined by line breaks (no method name is
-     * written across one): a section of a large project shows 500 rows of many tables, and a matcher per
+     * The methods of {@code bibliography} that the section names, in the bibliography's order. The patterns are
+     * searched in one {@link PatternScan} of the section's distinct texts joined by line breaks (no method name
+     * is written across one): a section of a large project shows 500 rows of many tables, and a matcher per
      * pattern per cell took seconds at a million samples. {@code CitationsTest#methodsFoundInTheJoinedTexts
      * AreThoseOfEachText} checks the result against each pattern searched in each text.
      */
     static List<Bibliography.Method> methodsIn(ReportSection s, Bibliography bibliography) {
-        String joined = String.join("\n", distinctTexts(s));
-        return bibliography.methods().stream().filter(m -> m.pattern().matcher(joined).find()).toList();
+        List<Bibliography.Method> methods = bibliography.methods();
+        BitSet named = new PatternScan(methods.stream().map(Bibliography.Method::pattern).toList())
+                .matching(String.join("\n", distinctTexts(s)));
+        return named.stream().mapToObj(methods::get).toList();
     }
 
     /** The section's texts, each once, in the order a reader first meets them. */
