@@ -45,7 +45,7 @@ final class ReadAhead<I, R> implements AutoCloseable {
     private long inFlight;
     private boolean closed;
     /**
-     * What stopped the worker outside an item's outcome (out of memory while recording it, say); guarded by
+     * What stopped the worker outside an item's outcome (out of memory while storing it, say); guarded by
      * {@link #lock}. The worker's claimed item will not come, so the caller throws this in its place.
      */
     private Throwable workerFailure;

@@ -77,7 +77,7 @@ class ReadAheadProperties {
 
     /**
      * A failure of the worker outside an item (here its reader cannot be made; in practice, out of memory while
-     * recording an outcome) never reaches the thread's default handler, which would print a stack trace beside
+     * storing an outcome) never reaches the thread's default handler, which would print a stack trace beside
      * the command's one-sentence message: the caller throws it at the first item not yet read, or, when the
      * caller has read every item itself, the run completes.
      */
