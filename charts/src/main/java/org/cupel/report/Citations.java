@@ -43,8 +43,13 @@ final class Citations {
     }
 
     static List<Cited> in(ReportSection s) {
+        return in(distinctTexts(s));
+    }
+
+    /** The citations in {@code texts} (a section's {@link #distinctTexts}), in order of first appearance. */
+    static List<Cited> in(Set<String> texts) {
         Set<Cited> found = new LinkedHashSet<>();
-        for (String text : distinctTexts(s)) {
+        for (String text : texts) {
             scan(text, found);
         }
         return new ArrayList<>(found);
@@ -58,14 +63,19 @@ final class Citations {
      * AreThoseOfEachText} checks the result against each pattern searched in each text.
      */
     static List<Bibliography.Method> methodsIn(ReportSection s, Bibliography bibliography) {
+        return methodsIn(distinctTexts(s), bibliography);
+    }
+
+    /** As {@link #methodsIn(ReportSection, Bibliography)}, for a section's {@link #distinctTexts}. */
+    static List<Bibliography.Method> methodsIn(Set<String> texts, Bibliography bibliography) {
         List<Bibliography.Method> methods = bibliography.methods();
         BitSet named = new PatternScan(methods.stream().map(Bibliography.Method::pattern).toList())
-                .matching(String.join("\n", distinctTexts(s)));
+                .matching(String.join("\n", texts));
         return named.stream().mapToObj(methods::get).toList();
     }
 
     /** The section's texts, each once, in the order a reader first meets them. */
-    private static Set<String> distinctTexts(ReportSection s) {
+    static Set<String> distinctTexts(ReportSection s) {
         Set<String> texts = new LinkedHashSet<>();
         texts(s, texts::add);
         return texts;

@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import org.cupel.config.CupelConfig;
 
 /**
@@ -88,7 +89,8 @@ public final class MethodsSection {
     /** What one section cites by author and year and the methods it names. */
     private record Found(ReportSection section, List<Citations.Cited> cited, List<Bibliography.Method> methods) {
         static Found in(ReportSection s, Bibliography bibliography) {
-            return new Found(s, Citations.in(s), Citations.methodsIn(s, bibliography));
+            Set<String> texts = Citations.distinctTexts(s); // collected once for both searches
+            return new Found(s, Citations.in(texts), Citations.methodsIn(texts, bibliography));
         }
     }
 
