@@ -89,13 +89,15 @@ final class ChartJobs implements AutoCloseable {
         }
     }
 
+    /** Draws the chart of {@code f} at each resolution, then lets go of what it was drawn from. */
     private static void write(ReportBlock.Figure f, String name, Path dir, Path print, int dpi) throws IOException {
         if (print == null) {
             PngWriter.writeForPrint(f.chart().get(), dir.resolve(name));
-            return;
+        } else {
+            PngWriter.write(f.chart().get(), dir.resolve(name), dpi);
+            PngWriter.writeForPrint(f.chart().get(), print.resolve(printName(name)));
         }
-        PngWriter.write(f.chart().get(), dir.resolve(name), dpi);
-        PngWriter.writeForPrint(f.chart().get(), print.resolve(printName(name)));
+        f.release();
     }
 
     /** The file name of a chart's print copy in the print folder. */

@@ -21,9 +21,18 @@ public sealed interface ReportBlock permits ReportBlock.Paragraph, ReportBlock.T
      *
      * @param name file stem for {@code charts/<name>.png} (sanitised when written)
      * @param caption caption under the chart
-     * @param chart builds the chart; called once per output resolution
+     * @param chart builds the chart; called once per output resolution, until the report writer has drawn
+     *     the figure and {@linkplain #release released} what the chart is built from
      */
     record Figure(String name, String caption, Supplier<Chart<?, ?>> chart) implements ReportBlock {
+        public Figure {
+            chart = ChartSource.of(chart);
+        }
+
+        /** Lets the results the chart is built from go, once the chart is drawn; it cannot be built again. */
+        void release() {
+            ((ChartSource) chart).release();
+        }
     }
 
     /** A highlighted statement: a verdict, a caution. */

@@ -47,6 +47,11 @@ public final class ReportWriter {
     private ReportWriter() {
     }
 
+    /**
+     * Writes {@code report} into the folder {@code target}. A report is written once: each chart is drawn
+     * once and its figure then lets go of the results it was drawn from (at a million samples, half of the
+     * heap), so a second write of the same report fails; build the report again to write it again.
+     */
     @SuppressWarnings("try") // the lock is held for the body's duration, not used in it
     public static void write(QcReport report, Path target, ReportOptions options, ReportProgress progress)
             throws IOException {

@@ -47,6 +47,27 @@ class ReportWriterTest {
     }
 
     @Test
+    void eachChartLetsItsDataGoOnceDrawnAtBothResolutions(@TempDir Path dir) throws IOException {
+        QcReport report = ReportFixture.report();
+        List<ReportBlock.Figure> figures = new ReportFiles(report).figures();
+        assertFalse(figures.isEmpty());
+        for (ReportBlock.Figure f : figures) {
+            assertTrue(f.chart().get() != null && f.chart().get() != null, "built as often as asked before writing");
+        }
+        ReportWriter.write(report, dir.resolve("qc"), SCREEN, ReportProgress.NONE);
+        assertTrue(Files.size(dir.resolve("qc/charts/x.png")) > 0, "drawn at screen resolution first");
+        for (ReportBlock.Figure f : figures) {
+            IllegalStateException e = assertThrows(IllegalStateException.class, () -> f.chart().get(), f.name());
+            assertTrue(e.getMessage().contains("released"), e.getMessage());
+        }
+        assertThrows(IllegalStateException.class,
+                () -> ReportWriter.write(report, dir.resolve("again"), PRINT, ReportProgress.NONE),
+                "a report is written once; the second write fails instead of drawing empty charts");
+        assertEquals(List.of(".again.cupel-lock", ".qc.cupel-lock", "qc"), listing(dir),
+                "the failed second write leaves no folder behind");
+    }
+
+    @Test
     void csvNeutralisesFormulasFromTheData(@TempDir Path dir) throws IOException {
         Path out = dir.resolve("qc");
         ReportWriter.write(ReportFixture.report(), out, PRINT, ReportProgress.NONE);
