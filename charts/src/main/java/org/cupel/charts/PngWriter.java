@@ -29,7 +29,12 @@ public final class PngWriter {
     }
 
     public static void write(Chart<?, ?> chart, Path target, int dpi) throws IOException {
-        write(bytes(chart, dpi), target);
+        write(chart, target, dpi, new Canvas());
+    }
+
+    /** As {@link #write(Chart, Path, int)}, painting on {@code canvas}. */
+    public static void write(Chart<?, ?> chart, Path target, int dpi, Canvas canvas) throws IOException {
+        write(PngEncoder.encode(render(chart, dpi / 72.0, canvas), dpi), target);
     }
 
     /** Writes already encoded PNG bytes to {@code target} atomically. */
@@ -47,7 +52,7 @@ public final class PngWriter {
 
     /** The PNG bytes at {@code dpi}, for embedding in HTML or PDF. */
     public static byte[] bytes(Chart<?, ?> chart, int dpi) {
-        return PngEncoder.encode(render(chart, dpi / 72.0), dpi);
+        return PngEncoder.encode(render(chart, dpi / 72.0, new Canvas()), dpi);
     }
 
     /**
@@ -56,14 +61,21 @@ public final class PngWriter {
      * the pixels, all of them discarded when the PDF scales it to the text width.
      */
     public static void writeForPrint(Chart<?, ?> chart, Path target) throws IOException {
-        double scale = PRINT_WIDTH_INCHES * PRINT_DPI / chart.getWidth();
-        write(PngEncoder.encode(render(chart, scale), PRINT_DPI), target);
+        writeForPrint(chart, target, new Canvas());
     }
 
-    /** The chart painted {@code scale} pixels per point on an opaque RGB image, as XChart's own encoder does. */
-    static BufferedImage render(Chart<?, ?> chart, double scale) {
-        BufferedImage image = new BufferedImage((int) (chart.getWidth() * scale), (int) (chart.getHeight() * scale),
-                BufferedImage.TYPE_INT_RGB);
+    /** As {@link #writeForPrint(Chart, Path)}, painting on {@code canvas}. */
+    public static void writeForPrint(Chart<?, ?> chart, Path target, Canvas canvas) throws IOException {
+        double scale = PRINT_WIDTH_INCHES * PRINT_DPI / chart.getWidth();
+        write(PngEncoder.encode(render(chart, scale, canvas), PRINT_DPI), target);
+    }
+
+    /**
+     * The chart painted {@code scale} pixels per point on an opaque RGB image of {@code canvas}, as XChart's
+     * own encoder does on a new one.
+     */
+    static BufferedImage render(Chart<?, ?> chart, double scale, Canvas canvas) {
+        BufferedImage image = canvas.blank((int) (chart.getWidth() * scale), (int) (chart.getHeight() * scale));
         Graphics2D g = image.createGraphics();
         try {
             g.scale(scale, scale);

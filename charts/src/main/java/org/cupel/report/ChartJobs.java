@@ -11,6 +11,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
+import org.cupel.charts.Canvas;
 import org.cupel.charts.PngWriter;
 import org.cupel.project.Workers;
 
@@ -31,6 +32,8 @@ final class ChartJobs implements AutoCloseable {
     private final ReportFiles files;
     private final boolean separatePrint;
     private final ReportProgress progress;
+    /** Each drawing thread paints every chart on its own canvas. */
+    private final ThreadLocal<Canvas> canvases = ThreadLocal.withInitial(Canvas::new);
     private int reported;
 
     /**
@@ -90,12 +93,13 @@ final class ChartJobs implements AutoCloseable {
     }
 
     /** Draws the chart of {@code f} at each resolution, then lets go of what it was drawn from. */
-    private static void write(ReportBlock.Figure f, String name, Path dir, Path print, int dpi) throws IOException {
+    private void write(ReportBlock.Figure f, String name, Path dir, Path print, int dpi) throws IOException {
+        Canvas canvas = canvases.get();
         if (print == null) {
-            PngWriter.writeForPrint(f.chart().get(), dir.resolve(name));
+            PngWriter.writeForPrint(f.chart().get(), dir.resolve(name), canvas);
         } else {
-            PngWriter.write(f.chart().get(), dir.resolve(name), dpi);
-            PngWriter.writeForPrint(f.chart().get(), print.resolve(printName(name)));
+            PngWriter.write(f.chart().get(), dir.resolve(name), dpi, canvas);
+            PngWriter.writeForPrint(f.chart().get(), print.resolve(printName(name)), canvas);
         }
         f.release();
     }
