@@ -1,10 +1,14 @@
 package org.cupel.report;
 
+import java.io.BufferedWriter;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
 import java.time.Instant;
 import java.time.LocalDateTime;
 import java.time.ZoneOffset;
@@ -37,14 +41,23 @@ import org.apache.poi.xwpf.usermodel.XWPFDocument;
  * them 2-11 % smaller (8-30 % on the demo's charts). A package's ZIP items may be stored or deflated
  * (ISO/IEC 29500-2:2008, "Open Packaging Conventions", annex C, the ZIP clarifications); LibreOffice and
  * POI read the stored pictures ({@code DocxReportTest}).
+ *
+ * <p>On the way, the main document part goes through a {@link MainPart}, which writes what was kept out of
+ * POI's object model ({@link DocxTables}).
  */
 final class DocxPackage {
     private static final LocalDateTime DOS_EPOCH = LocalDateTime.of(1980, 1, 1, 0, 0);
 
+    /** Writes the main document part, given its XML as POI saved it. */
+    interface MainPart {
+        void write(String xml, Writer out) throws IOException;
+    }
+
     private DocxPackage() {
     }
 
-    static void write(XWPFDocument doc, String title, Instant generated, OutputStream out) throws IOException {
+    static void write(XWPFDocument doc, String title, Instant generated, MainPart main, OutputStream out)
+            throws IOException {
         POIXMLProperties.CoreProperties core = doc.getProperties().getCoreProperties();
         core.setTitle(DocxText.clean(title));
         core.setCreator("Cupel");
@@ -56,7 +69,8 @@ final class DocxPackage {
             z.setLevel(Deflater.NO_COMPRESSION);
             doc.write(z);
         }
-        restamp(saved.input(), entryTime(generated), out);
+        String mainName = doc.getPackagePart().getPartName().getName().substring(1);
+        restamp(saved.input(), entryTime(generated), mainName, main, out);
     }
 
     private static LocalDateTime entryTime(Instant generated) {
@@ -65,17 +79,24 @@ final class DocxPackage {
     }
 
     /**
-     * Copies the ZIP container with every entry dated {@code time}: PNG pictures stored, every other part
-     * deflated. {@link ZipEntry#setTimeLocal} stores the date as given, without the time-zone conversion
-     * {@link ZipEntry#setTime} applies, so the bytes do not depend on the machine's zone.
+     * Copies the ZIP container with every entry dated {@code time}: PNG pictures stored, the main part
+     * {@code mainName} as {@code main} writes it, every other part deflated. {@link ZipEntry#setTimeLocal}
+     * stores the date as given, without the time-zone conversion {@link ZipEntry#setTime} applies, so the
+     * bytes do not depend on the machine's zone.
      */
-    private static void restamp(InputStream zip, LocalDateTime time, OutputStream out) throws IOException {
+    private static void restamp(InputStream zip, LocalDateTime time, String mainName, MainPart main,
+                                OutputStream out) throws IOException {
         try (ZipInputStream in = new ZipInputStream(zip);
              ZipOutputStream z = new ZipOutputStream(new NonClosing(out))) {
             for (ZipEntry e = in.getNextEntry(); e != null; e = in.getNextEntry()) {
                 ZipEntry copy = new ZipEntry(e.getName());
                 copy.setTimeLocal(time);
-                if (e.getName().toLowerCase(Locale.ROOT).endsWith(".png")) {
+                if (e.getName().equals(mainName)) {
+                    z.putNextEntry(copy);
+                    Writer text = new BufferedWriter(new OutputStreamWriter(z, StandardCharsets.UTF_8), 1 << 16);
+                    main.write(new String(in.readAllBytes(), StandardCharsets.UTF_8), text);
+                    text.flush();
+                } else if (e.getName().toLowerCase(Locale.ROOT).endsWith(".png")) {
                     byte[] png = in.readAllBytes();
                     stored(copy, png);
                     z.putNextEntry(copy);
