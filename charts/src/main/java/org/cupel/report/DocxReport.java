@@ -73,7 +73,7 @@ public final class DocxReport {
     }
 
     private void render(OutputStream out) throws IOException {
-        try (doc) {
+        try {
             styles();
             page();
             cover();
@@ -82,6 +82,10 @@ public final class DocxReport {
                 section(i + 1, sections.get(i));
             }
             DocxPackage.write(doc, title(), report.generated(), tableText::expand, out);
+        } finally {
+            // Not close(): POI closes a document made in memory by saving it once more, into a buffer of its
+            // own, deflating every part (about 1.4 s of CPU for the 75 MB of parts of a million-sample report).
+            doc.getPackage().revert();
         }
     }
 

@@ -142,8 +142,10 @@ class DocxTableXmlTest {
 
     private static String documentXml(XWPFDocument doc, DocxPackage.MainPart main) throws IOException {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
-        try (doc) {
+        try {
             DocxPackage.write(doc, "T", Instant.EPOCH, main, out);
+        } finally {
+            doc.getPackage().revert();
         }
         try (ZipInputStream in = new ZipInputStream(new ByteArrayInputStream(out.toByteArray()))) {
             for (ZipEntry e = in.getNextEntry(); e != null; e = in.getNextEntry()) {
