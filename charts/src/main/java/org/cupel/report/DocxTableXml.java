@@ -14,7 +14,8 @@ import java.util.List;
  *
  * <p>Written as text because a table of {@link TableLimit#SHOWN} rows is tens of thousands of XML
  * elements: at a million samples the tables make 26 MB of {@code document.xml}, and building them as
- * XMLBeans objects through POI and saving those took most of the Word copy's time and heap. Cell text goes
+ * XMLBeans objects through POI and saving those took 330 of the Word copy's 366 Java execution samples
+ * (JFR) and most of its 1.7-3 s of GC pauses. Cell text goes
  * in as character data only, escaped as XML 1.0 requires (W3C, 2008, "Extensible Markup Language (XML) 1.0
  * (Fifth Edition)", section 2.4: {@code <} and {@code &} always, {@code >} after {@code ]]}), so it can never
  * become markup or a field ({@link DocxText}).
