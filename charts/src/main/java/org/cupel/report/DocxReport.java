@@ -12,23 +12,15 @@ import java.util.stream.IntStream;
 import org.apache.poi.common.usermodel.PictureType;
 import org.apache.poi.openxml4j.exceptions.InvalidFormatException;
 import org.apache.poi.wp.usermodel.HeaderFooterType;
-import org.apache.poi.xwpf.usermodel.ParagraphAlignment;
 import org.apache.poi.xwpf.usermodel.XWPFDocument;
 import org.apache.poi.xwpf.usermodel.XWPFParagraph;
 import org.apache.poi.xwpf.usermodel.XWPFPicture;
 import org.apache.poi.xwpf.usermodel.XWPFRun;
-import org.apache.poi.xwpf.usermodel.XWPFTable;
-import org.apache.poi.xwpf.usermodel.XWPFTableCell;
-import org.apache.poi.xwpf.usermodel.XWPFTableRow;
 import org.apache.xmlbeans.XmlException;
 import org.cupel.charts.PngEncoder;
 import org.openxmlformats.schemas.wordprocessingml.x2006.main.CTPageMar;
 import org.openxmlformats.schemas.wordprocessingml.x2006.main.CTPageSz;
 import org.openxmlformats.schemas.wordprocessingml.x2006.main.CTSectPr;
-import org.openxmlformats.schemas.wordprocessingml.x2006.main.CTTblGrid;
-import org.openxmlformats.schemas.wordprocessingml.x2006.main.CTTblPr;
-import org.openxmlformats.schemas.wordprocessingml.x2006.main.CTTblWidth;
-import org.openxmlformats.schemas.wordprocessingml.x2006.main.STTblWidth;
 import org.openxmlformats.schemas.wordprocessingml.x2006.main.StylesDocument;
 
 /**
@@ -37,9 +29,9 @@ import org.openxmlformats.schemas.wordprocessingml.x2006.main.StylesDocument;
  * contents field, one section per report section under a real "heading 1" (so Word's Navigation pane and
  * the contents find them), paragraphs, callouts as shaded paragraphs that begin with their level word,
  * tables as Word tables (header row repeated on each page, numbers right-aligned, numbered caption above,
- * note below, at most {@link TableLimit#SHOWN} rows as in the PDF) and charts as the print PNGs at the text
- * width with a numbered caption. Styles come from {@code docx-styles.xml}; the bytes are fixed by the report
- * ({@link DocxPackage}).
+ * note below, at most {@link TableLimit#SHOWN} rows as in the PDF; written as text, {@link DocxTables}) and
+ * charts as the print PNGs at the text width with a numbered caption. Styles come from
+ * {@code docx-styles.xml}; the bytes are fixed by the report ({@link DocxPackage}).
  */
 public final class DocxReport {
     /** Word measures the page in twentieths of a point; pictures in EMU, 635 to a twip (12,700 to a point). */
@@ -54,6 +46,7 @@ public final class DocxReport {
     private final ReportFiles files;
     private final Function<ReportBlock.Figure, byte[]> png;
     private final XWPFDocument doc = new XWPFDocument();
+    private final DocxTables tableText = new DocxTables();
     private final int pageWidth;
     private final int pageHeight;
     private int tables;
@@ -80,7 +73,7 @@ public final class DocxReport {
     }
 
     private void render(OutputStream out) throws IOException {
-        try (doc) {
+        try {
             styles();
             page();
             cover();
@@ -88,7 +81,11 @@ public final class DocxReport {
             for (int i = 0; i < sections.size(); i++) {
                 section(i + 1, sections.get(i));
             }
-            DocxPackage.write(doc, title(), report.generated(), out);
+            DocxPackage.write(doc, title(), report.generated(), tableText::expand, out);
+        } finally {
+            // Not close(): POI closes a document made in memory by saving it once more, into a buffer of its
+            // own, deflating every part (about 1.4 s of CPU for the 75 MB of parts of a million-sample report).
+            doc.getPackage().revert();
         }
     }
 
@@ -192,27 +189,8 @@ public final class DocxReport {
 
         int columns = t.columns().size();
         List<List<String>> rows = t.rows();
-        int shown = Math.min(rows.size(), TableLimit.SHOWN);
         PdfTableLayout set = PdfTableLayout.of(t, HELVETICA_BOLD, HELVETICA, textWidth() / 20f);
-        double points = set.size();
-        XWPFTable table = doc.createTable(1 + shown, columns);
-        layout(table, columnWidths(set, columns));
-        XWPFTableRow head = table.getRow(0);
-        head.setRepeatHeader(true);
-        head.setCantSplitRow(true);
-        for (int c = 0; c < columns; c++) {
-            XWPFTableCell cell = head.getCell(c);
-            cell.setColor("EAECF0");
-            cellText(cell, "TableHeading", t.columns().get(c), points, false);
-        }
-        for (int r = 0; r < shown; r++) {
-            XWPFTableRow row = table.getRow(r + 1);
-            row.setCantSplitRow(true);
-            for (int c = 0; c < columns; c++) {
-                String v = rows.get(r).get(c);
-                cellText(row.getCell(c), "TableText", v, points, TableLimit.isNumeric(v));
-            }
-        }
+        tableText.add(doc, t, Math.min(rows.size(), TableLimit.SHOWN), columnWidths(set, columns), set.size());
         if (rows.isEmpty()) {
             paragraph("TableNote", "No rows.");
         }
@@ -250,45 +228,6 @@ public final class DocxReport {
         } catch (IOException e) {
             throw new IllegalStateException("OpenPDF lacks its built-in " + name + " metrics", e);
         }
-    }
-
-    private void layout(XWPFTable table, int[] widths) {
-        table.setStyleID("CupelTable");
-        CTTblPr pr = table.getCTTbl().getTblPr();
-        // POI draws every border of a new table directly; the table style's lighter rules should show instead.
-        if (pr.isSetTblBorders()) {
-            pr.unsetTblBorders();
-        }
-        int total = 0;
-        for (int w : widths) {
-            total += w;
-        }
-        CTTblWidth width = pr.isSetTblW() ? pr.getTblW() : pr.addNewTblW();
-        width.setType(STTblWidth.DXA);
-        width.setW(BigInteger.valueOf(total));
-        CTTblGrid grid = table.getCTTbl().getTblGrid() != null ? table.getCTTbl().getTblGrid()
-                : table.getCTTbl().addNewTblGrid();
-        while (grid.sizeOfGridColArray() > 0) {
-            grid.removeGridCol(0);
-        }
-        for (int w : widths) {
-            grid.addNewGridCol().setW(BigInteger.valueOf(w));
-        }
-        for (XWPFTableRow row : table.getRows()) {
-            List<XWPFTableCell> cells = row.getTableCells();
-            for (int c = 0; c < cells.size(); c++) {
-                cells.get(c).setWidth(Integer.toString(widths[c]));
-            }
-        }
-    }
-
-    private static void cellText(XWPFTableCell cell, String style, String text, double points, boolean right) {
-        XWPFParagraph p = cell.getParagraphs().get(0);
-        p.setStyle(style);
-        if (right) {
-            p.setAlignment(ParagraphAlignment.RIGHT);
-        }
-        DocxText.append(p, text, false, points);
     }
 
     private void figure(ReportBlock.Figure f) throws IOException {

@@ -1,5 +1,6 @@
 package org.cupel.report;
 
+import java.util.regex.Pattern;
 import org.apache.poi.xwpf.usermodel.XWPFParagraph;
 import org.apache.poi.xwpf.usermodel.XWPFRun;
 
@@ -11,7 +12,18 @@ import org.apache.poi.xwpf.usermodel.XWPFRun;
  * writes).
  */
 final class DocxText {
+    private static final Pattern LINE_BREAK = Pattern.compile("\r\n|\r|\n");
+
     private DocxText() {
+    }
+
+    /** What a text is made of in Word: pieces of run text, line breaks and tabs, met in reading order. */
+    interface Pieces {
+        void text(String s);
+
+        void lineBreak();
+
+        void tab();
     }
 
     /**
@@ -24,6 +36,9 @@ final class DocxText {
     static String clean(String s) {
         if (s == null) {
             return "";
+        }
+        if (storable(s)) {
+            return s;
         }
         StringBuilder sb = new StringBuilder(s.length());
         for (int i = 0; i < s.length(); i++) {
@@ -40,38 +55,69 @@ final class DocxText {
         return sb.toString();
     }
 
-    /**
-     * Adds {@code text} to the paragraph as runs: line breaks become Word line breaks and tabs Word tabs
-     * (inside {@code w:t} Word would show them as spaces). Each piece is a run of its own, so the order of
-     * text, breaks and tabs cannot be mixed up.
-     */
-    static void append(XWPFParagraph p, String text, boolean bold) {
-        append(p, text, bold, 0);
-    }
-
-    /** As {@link #append(XWPFParagraph, String, boolean)}, in {@code points} (0: the paragraph style's size). */
-    static void append(XWPFParagraph p, String text, boolean bold, double points) {
-        String[] lines = clean(text).split("\r\n|\r|\n", -1);
-        for (int l = 0; l < lines.length; l++) {
-            if (l > 0) {
-                p.createRun().addBreak();
-            }
-            String[] parts = lines[l].split("\t", -1);
-            for (int t = 0; t < parts.length; t++) {
-                if (t > 0) {
-                    p.createRun().addTab();
-                }
-                if (!parts[t].isEmpty()) {
-                    XWPFRun run = p.createRun();
-                    if (bold) {
-                        run.setBold(true);
-                    }
-                    if (points > 0) {
-                        run.setFontSize(points);
-                    }
-                    run.setText(parts[t]);
-                }
+    /** Whether {@link #clean(String)} would leave {@code s} as it is (most texts: no copy made). */
+    private static boolean storable(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            if (c < 0x20 && c != '\t' && c != '\n' && c != '\r' || c >= 0x7f && (c == 0x7f || c == 0xfffe
+                    || c == 0xffff || Character.isSurrogate(c))) {
+                return false;
             }
         }
+        return true;
+    }
+
+    /**
+     * Walks {@code text}, made storable ({@link #clean(String)}), as Word holds it: line breaks become Word
+     * line breaks and tabs Word tabs (inside {@code w:t} Word would show them as spaces), the text between
+     * them pieces of run text (empty pieces are skipped).
+     */
+    static void pieces(String text, Pieces to) {
+        String[] lines = LINE_BREAK.split(clean(text), -1);
+        for (int l = 0; l < lines.length; l++) {
+            if (l > 0) {
+                to.lineBreak();
+            }
+            String line = lines[l];
+            int from = 0;
+            for (int tab = line.indexOf('\t'); ; tab = line.indexOf('\t', from)) {
+                int end = tab < 0 ? line.length() : tab;
+                if (end > from) {
+                    to.text(line.substring(from, end));
+                }
+                if (tab < 0) {
+                    break;
+                }
+                to.tab();
+                from = tab + 1;
+            }
+        }
+    }
+
+    /**
+     * Adds {@code text} to the paragraph as runs ({@link #pieces}). Each piece is a run of its own, so the
+     * order of text, breaks and tabs cannot be mixed up.
+     */
+    static void append(XWPFParagraph p, String text, boolean bold) {
+        pieces(text, new Pieces() {
+            @Override
+            public void text(String s) {
+                XWPFRun run = p.createRun();
+                if (bold) {
+                    run.setBold(true);
+                }
+                run.setText(s);
+            }
+
+            @Override
+            public void lineBreak() {
+                p.createRun().addBreak();
+            }
+
+            @Override
+            public void tab() {
+                p.createRun().addTab();
+            }
+        });
     }
 }

@@ -10,17 +10,23 @@ import static org.junit.jupiter.api.Assumptions.assumeTrue;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.nio.ByteBuffer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.time.LocalDateTime;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
+import java.util.HashSet;
 import java.util.Map;
+import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import java.util.zip.CRC32;
 import java.util.zip.ZipEntry;
+import java.util.zip.ZipFile;
 import java.util.zip.ZipInputStream;
 import org.apache.poi.xwpf.usermodel.IBodyElement;
 import org.apache.poi.xwpf.usermodel.ParagraphAlignment;
@@ -261,6 +267,40 @@ class DocxReportTest {
             assertEquals(LocalDateTime.of(1980, 1, 1, 0, 0), t);
         }
         assertFalse(part("word/settings.xml").contains("rsid"), "no revision-save IDs");
+    }
+
+    /**
+     * The pictures are stored as they are (a PNG is deflated already), each with its size and a CRC-32 that
+     * matches its bytes, and is the chart's print PNG; every other part is deflated.
+     */
+    @Test
+    void picturesAreStoredWithTheirCrcAndTheOtherPartsDeflated() throws IOException {
+        Path docx = dir.resolve("qc").resolve("appendix.docx");
+        Set<ByteBuffer> charts = new HashSet<>();
+        for (ReportBlock.Figure f : files.figures()) {
+            charts.add(ByteBuffer.wrap(Files.readAllBytes(dir.resolve("qc").resolve(files.chart(f)))));
+        }
+        int pictures = 0;
+        try (ZipFile zip = new ZipFile(docx.toFile())) {
+            for (ZipEntry e : Collections.list(zip.entries())) {
+                byte[] data = zip.getInputStream(e).readAllBytes();
+                if (e.getName().startsWith("word/media/")) {
+                    pictures++;
+                    assertEquals(ZipEntry.STORED, e.getMethod(), e.getName());
+                    assertEquals(data.length, e.getSize(), e.getName());
+                    assertEquals(data.length, e.getCompressedSize(), e.getName());
+                    CRC32 crc = new CRC32();
+                    crc.update(data);
+                    assertEquals(crc.getValue(), e.getCrc(), "CRC-32 of " + e.getName());
+                    assertTrue(charts.contains(ByteBuffer.wrap(data)),
+                            e.getName() + " is one of the charts' PNGs");
+                } else {
+                    assertEquals(ZipEntry.DEFLATED, e.getMethod(), e.getName());
+                }
+            }
+        }
+        // POI keeps one part for pictures with the same bytes: one per distinct chart.
+        assertEquals(charts.size(), pictures);
     }
 
     /** Hand-worked: each character XML 1.0 cannot hold becomes one U+FFFD; a valid surrogate pair is kept. */
