@@ -1,0 +1,248 @@
+package org.cupel.control;
+
+import java.util.AbstractList;
+import java.util.List;
+import java.util.RandomAccess;
+import org.cupel.assay.AnalyteColumn;
+import org.cupel.assay.AssayValue;
+import org.cupel.assay.MissingReason;
+import org.cupel.assay.SampleTable;
+
+/**
+ * Blank observations as an unmodifiable list whose fields can be read by index: those of a project are read
+ * from its sample table and analyte columns ({@link #of(SampleTable, BatchSequence, AnalyteColumn, int[], double[])}),
+ * keeping only each blank's row and detection limit; others are the objects given. A
+ * {@link BlankObservation} is made when an element is read.
+ */
+abstract class BlankObservations extends AbstractList<BlankObservation> implements RandomAccess {
+
+    int row(int i) {
+        return get(i).row();
+    }
+
+    String analyte(int i) {
+        return get(i).analyte();
+    }
+
+    String unit(int i) {
+        return get(i).unit();
+    }
+
+    AssayValue value(int i) {
+        return get(i).value();
+    }
+
+    double detectionLimit(int i) {
+        return get(i).detectionLimit();
+    }
+
+    String sampleId(int i) {
+        return get(i).sampleId();
+    }
+
+    String precedingId(int i) {
+        return get(i).precedingId();
+    }
+
+    AssayValue precedingGrade(int i) {
+        return get(i).precedingGrade();
+    }
+
+    /** {@code observations} as they are when already this kind of list, else an unmodifiable copy. */
+    static BlankObservations of(List<BlankObservation> observations) {
+        return observations instanceof BlankObservations b ? b : new Listed(List.copyOf(observations));
+    }
+
+    /**
+     * The blanks of one analyte read from the project's columns.
+     *
+     * @param rows the blanks' rows in run order
+     * @param limits each blank's detection limit, {@code NaN} when unknown
+     */
+    static BlankObservations of(SampleTable table, BatchSequence seq, AnalyteColumn col, int[] rows,
+                                double[] limits) {
+        return new FromColumn(table, seq, col, rows, limits);
+    }
+
+    /** The observations of {@code parts}, one after the other. */
+    static BlankObservations concat(List<BlankObservations> parts) {
+        return parts.size() == 1 ? parts.get(0) : new Joined(parts);
+    }
+
+    private static final class Listed extends BlankObservations {
+        private final List<BlankObservation> observations;
+
+        Listed(List<BlankObservation> observations) {
+            this.observations = observations;
+        }
+
+        @Override
+        public BlankObservation get(int i) {
+            return observations.get(i);
+        }
+
+        @Override
+        public int size() {
+            return observations.size();
+        }
+    }
+
+    private static final class FromColumn extends BlankObservations {
+        private final SampleTable table;
+        private final BatchSequence seq;
+        private final AnalyteColumn col;
+        private final String analyte;
+        private final String unit;
+        private final int[] rows;
+        private final double[] limits;
+
+        FromColumn(SampleTable table, BatchSequence seq, AnalyteColumn col, int[] rows, double[] limits) {
+            this.table = table;
+            this.seq = seq;
+            this.col = col;
+            this.analyte = col.analyte().name();
+            this.unit = col.analyte().unit().symbol();
+            this.rows = rows;
+            this.limits = limits;
+        }
+
+        @Override
+        public BlankObservation get(int i) {
+            int row = rows[i];
+            return new BlankObservation(row, table.id(row), seq.batch(seq.batchOf(row)).id(), table.position(row),
+                    analyte, unit, col.value(row), limits[i], precedingId(i), precedingGrade(i));
+        }
+
+        @Override
+        public int size() {
+            return rows.length;
+        }
+
+        @Override
+        int row(int i) {
+            return rows[i];
+        }
+
+        @Override
+        String analyte(int i) {
+            return analyte;
+        }
+
+        @Override
+        String unit(int i) {
+            return unit;
+        }
+
+        @Override
+        AssayValue value(int i) {
+            return col.value(rows[i]);
+        }
+
+        @Override
+        double detectionLimit(int i) {
+            return limits[i];
+        }
+
+        @Override
+        String sampleId(int i) {
+            return table.id(rows[i]);
+        }
+
+        @Override
+        String precedingId(int i) {
+            int prev = seq.preceding(rows[i]);
+            return prev < 0 ? "" : table.id(prev);
+        }
+
+        @Override
+        AssayValue precedingGrade(int i) {
+            int prev = seq.preceding(rows[i]);
+            return prev < 0 ? AssayValue.missing(MissingReason.NONE) : col.value(prev);
+        }
+    }
+
+    private static final class Joined extends BlankObservations {
+        private final List<BlankObservations> parts;
+        private final int[] start;
+
+        Joined(List<BlankObservations> parts) {
+            this.parts = List.copyOf(parts);
+            this.start = new int[parts.size() + 1];
+            for (int p = 0; p < parts.size(); p++) {
+                start[p + 1] = start[p] + parts.get(p).size();
+            }
+        }
+
+        /** The part holding observation {@code i}. */
+        private int part(int i) {
+            java.util.Objects.checkIndex(i, size());
+            int p = java.util.Arrays.binarySearch(start, i);
+            if (p < 0) {
+                return -p - 2;
+            }
+            while (start[p + 1] == i) {
+                p++; // empty parts start where the next begins
+            }
+            return p;
+        }
+
+        @Override
+        public BlankObservation get(int i) {
+            int p = part(i);
+            return parts.get(p).get(i - start[p]);
+        }
+
+        @Override
+        public int size() {
+            return start[start.length - 1];
+        }
+
+        @Override
+        int row(int i) {
+            int p = part(i);
+            return parts.get(p).row(i - start[p]);
+        }
+
+        @Override
+        String analyte(int i) {
+            int p = part(i);
+            return parts.get(p).analyte(i - start[p]);
+        }
+
+        @Override
+        String unit(int i) {
+            int p = part(i);
+            return parts.get(p).unit(i - start[p]);
+        }
+
+        @Override
+        AssayValue value(int i) {
+            int p = part(i);
+            return parts.get(p).value(i - start[p]);
+        }
+
+        @Override
+        double detectionLimit(int i) {
+            int p = part(i);
+            return parts.get(p).detectionLimit(i - start[p]);
+        }
+
+        @Override
+        String sampleId(int i) {
+            int p = part(i);
+            return parts.get(p).sampleId(i - start[p]);
+        }
+
+        @Override
+        String precedingId(int i) {
+            int p = part(i);
+            return parts.get(p).precedingId(i - start[p]);
+        }
+
+        @Override
+        AssayValue precedingGrade(int i) {
+            int p = part(i);
+            return parts.get(p).precedingGrade(i - start[p]);
+        }
+    }
+}

@@ -1,0 +1,114 @@
+package org.cupel.control;
+
+import java.util.AbstractList;
+import java.util.List;
+import java.util.RandomAccess;
+import org.cupel.assay.AssayValue;
+
+/**
+ * The judged blank results of a {@link BlankReport} as columns: per result the index of its observation, the
+ * thresholds in force (an index into the few distinct ones) and the case of the blank rules that applied
+ * with the carry-over flag, in one byte. A {@link BlankResult} with its observation, verdict, ratio and
+ * outcome is made when read ({@link BlankReview#result}); the outcomes are read by index without one
+ * ({@link #outcomes()}).
+ */
+final class JudgedBlanks extends AbstractList<BlankResult> implements RandomAccess {
+    private static final int CARRY_OVER = 0x80;
+
+    private final BlankObservations observations;
+    private final int[] observation;
+    private final int[] threshold;
+    private final List<BlankThreshold> thresholds;
+    /** {@link BlankVerdict#decide} of each result, with {@link #CARRY_OVER} set for a probable carry-over. */
+    private final byte[] decided;
+
+    /**
+     * @param thresholds the distinct thresholds, {@code null} among them for "none could be set"
+     * @param threshold each result's index into {@code thresholds}
+     */
+    JudgedBlanks(BlankObservations observations, int[] observation, int[] threshold, List<BlankThreshold> thresholds,
+                 byte[] decided) {
+        this.observations = observations;
+        this.observation = observation;
+        this.threshold = threshold;
+        this.thresholds = thresholds;
+        this.decided = decided;
+    }
+
+    /** The column byte of a result: the case decided and whether it is a probable carry-over. */
+    static byte code(int decided, boolean carryOver) {
+        return (byte) (decided | (carryOver ? CARRY_OVER : 0));
+    }
+
+    @Override
+    public BlankResult get(int i) {
+        BlankObservation o = observations.get(observation[i]);
+        BlankThreshold t = thresholds.get(threshold[i]);
+        return BlankReview.result(o, t, BlankVerdict.of(decided(i), o.value(), t, o.unit()), carryOver(i));
+    }
+
+    @Override
+    public int size() {
+        return observation.length;
+    }
+
+    private int decided(int i) {
+        return decided[i] & (CARRY_OVER - 1);
+    }
+
+    Verdict verdict(int i) {
+        return BlankVerdict.verdictOf(decided(i));
+    }
+
+    boolean carryOver(int i) {
+        return (decided[i] & CARRY_OVER) != 0;
+    }
+
+    AssayValue value(int i) {
+        return observations.value(observation[i]);
+    }
+
+    AssayValue precedingGrade(int i) {
+        return observations.precedingGrade(observation[i]);
+    }
+
+    /** The outcomes in the common form, read from these columns. */
+    ControlOutcomes outcomes() {
+        return new ControlOutcomes() {
+            @Override
+            public int size() {
+                return observation.length;
+            }
+
+            @Override
+            public int row(int i) {
+                return observations.row(observation[i]);
+            }
+
+            @Override
+            public String analyte(int i) {
+                return observations.analyte(observation[i]);
+            }
+
+            @Override
+            public Verdict verdict(int i) {
+                return JudgedBlanks.this.verdict(i);
+            }
+
+            @Override
+            public String rule(int i) {
+                return BlankVerdict.ruleOf(decided(i), thresholds.get(threshold[i]));
+            }
+
+            @Override
+            public String reason(int i) {
+                return JudgedBlanks.this.get(i).outcome().reason();
+            }
+
+            @Override
+            public boolean triggersReassay(int i) {
+                return verdict(i) == Verdict.FAIL;
+            }
+        };
+    }
+}
