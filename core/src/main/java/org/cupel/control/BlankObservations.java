@@ -10,8 +10,8 @@ import org.cupel.assay.SampleTable;
 
 /**
  * Blank observations as an unmodifiable list whose fields can be read by index: those of a project are read
- * from its sample table and analyte columns ({@link #of(SampleTable, BatchSequence, AnalyteColumn, int[], double[])}),
- * keeping only each blank's row and detection limit; others are the objects given. A
+ * from its sample table and analyte columns ({@link #of(SampleTable, AnalyteColumn, int[], int[], double[])}),
+ * keeping only each blank's row, the row before it and its detection limit; others are the objects given. A
  * {@link BlankObservation} is made when an element is read.
  */
 abstract class BlankObservations extends AbstractList<BlankObservation> implements RandomAccess {
@@ -57,11 +57,11 @@ abstract class BlankObservations extends AbstractList<BlankObservation> implemen
      * The blanks of one analyte read from the project's columns.
      *
      * @param rows the blanks' rows in run order
+     * @param preceding the row run before each blank in its batch, -1 when it opens the batch
      * @param limits each blank's detection limit, {@code NaN} when unknown
      */
-    static BlankObservations of(SampleTable table, BatchSequence seq, AnalyteColumn col, int[] rows,
-                                double[] limits) {
-        return new FromColumn(table, seq, col, rows, limits);
+    static BlankObservations of(SampleTable table, AnalyteColumn col, int[] rows, int[] preceding, double[] limits) {
+        return new FromColumn(table, col, rows, preceding, limits);
     }
 
     /** The observations of {@code parts}, one after the other. */
@@ -89,17 +89,17 @@ abstract class BlankObservations extends AbstractList<BlankObservation> implemen
 
     private static final class FromColumn extends BlankObservations {
         private final SampleTable table;
-        private final BatchSequence seq;
         private final AnalyteColumn col;
         private final String analyte;
         private final String unit;
         private final int[] rows;
+        private final int[] preceding;
         private final double[] limits;
 
-        FromColumn(SampleTable table, BatchSequence seq, AnalyteColumn col, int[] rows, double[] limits) {
+        FromColumn(SampleTable table, AnalyteColumn col, int[] rows, int[] preceding, double[] limits) {
             this.table = table;
-            this.seq = seq;
             this.col = col;
+            this.preceding = preceding;
             this.analyte = col.analyte().name();
             this.unit = col.analyte().unit().symbol();
             this.rows = rows;
@@ -109,7 +109,8 @@ abstract class BlankObservations extends AbstractList<BlankObservation> implemen
         @Override
         public BlankObservation get(int i) {
             int row = rows[i];
-            return new BlankObservation(row, table.id(row), seq.batch(seq.batchOf(row)).id(), table.position(row),
+            // The batch's ID: the table's batch record of the row has the lab and ID of its batch in the sequence.
+            return new BlankObservation(row, table.id(row), table.batch(row).id(), table.position(row),
                     analyte, unit, col.value(row), limits[i], precedingId(i), precedingGrade(i));
         }
 
@@ -150,13 +151,13 @@ abstract class BlankObservations extends AbstractList<BlankObservation> implemen
 
         @Override
         String precedingId(int i) {
-            int prev = seq.preceding(rows[i]);
+            int prev = preceding[i];
             return prev < 0 ? "" : table.id(prev);
         }
 
         @Override
         AssayValue precedingGrade(int i) {
-            int prev = seq.preceding(rows[i]);
+            int prev = preceding[i];
             return prev < 0 ? AssayValue.missing(MissingReason.NONE) : col.value(prev);
         }
     }

@@ -31,9 +31,10 @@ public final class BlankReview {
     public static BlankReport review(Project project, BatchSequence seq) {
         BlankSettings settings = project.config().section("blanks", BlankSettings.class, BlankSettings.DEFAULTS);
         int[] blanks = seq.inRunOrder(project.samples().rowsWithRole(QcRole.BLANK));
+        int[] preceding = preceding(seq, blanks);
         List<BlankObservations> all = new ArrayList<>();
         for (AnalyteColumn col : project.analytes().values()) {
-            all.add(observations(project.samples(), seq, col, blanks));
+            all.add(observations(project.samples(), col, blanks, preceding));
         }
         return review(BlankObservations.concat(all), settings);
     }
@@ -44,12 +45,22 @@ public final class BlankReview {
      * the same analyte and method elsewhere in the project.
      */
     public static List<BlankObservation> observations(SampleTable table, BatchSequence seq, AnalyteColumn col) {
-        return observations(table, seq, col, seq.inRunOrder(table.rowsWithRole(QcRole.BLANK)));
+        int[] blanks = seq.inRunOrder(table.rowsWithRole(QcRole.BLANK));
+        return observations(table, col, blanks, preceding(seq, blanks));
     }
 
-    /** The observations read from the column when asked for; only the rows and limits are kept. */
-    private static BlankObservations observations(SampleTable table, BatchSequence seq, AnalyteColumn col,
-                                                  int[] blanksInRunOrder) {
+    /** The row run before each of {@code rows} in its batch, -1 for one that opens its batch. */
+    private static int[] preceding(BatchSequence seq, int[] rows) {
+        int[] out = new int[rows.length];
+        for (int i = 0; i < rows.length; i++) {
+            out[i] = seq.preceding(rows[i]);
+        }
+        return out;
+    }
+
+    /** The observations read from the column when asked for; only the rows, preceding rows and limits are kept. */
+    private static BlankObservations observations(SampleTable table, AnalyteColumn col, int[] blanksInRunOrder,
+                                                  int[] preceding) {
         Map<String, Double> methodLimit = null;
         double[] limits = new double[blanksInRunOrder.length];
         for (int i = 0; i < limits.length; i++) {
@@ -62,7 +73,7 @@ public final class BlankReview {
             }
             limits[i] = dl;
         }
-        return BlankObservations.of(table, seq, col, blanksInRunOrder, limits);
+        return BlankObservations.of(table, col, blanksInRunOrder, preceding, limits);
     }
 
     /** Judges the observations (any mix of analytes); missing blank results are counted, not judged. */
@@ -72,14 +83,15 @@ public final class BlankReview {
 
     /**
      * Judges each observation into columns ({@link JudgedBlanks}): the thresholds, which depend only on the
-     * analyte and its limit and so change rarely from row to row, are kept once per change.
+     * analyte and its limit and so change rarely from row to row, are kept once per change, with the first
+     * result they apply to.
      */
     private static BlankReport review(BlankObservations obs, BlankSettings settings) {
         Map<String, IntArrayBuilder> byAnalyte = new LinkedHashMap<>();
         Map<String, Integer> missing = new HashMap<>();
         Map<String, String> units = new HashMap<>();
         IntArrayBuilder judged = new IntArrayBuilder();
-        IntArrayBuilder thresholdOf = new IntArrayBuilder();
+        IntArrayBuilder thresholdFrom = new IntArrayBuilder();
         byte[] decided = new byte[obs.size()];
         List<BlankThreshold> thresholds = new ArrayList<>();
         IntArrayBuilder current = null;
@@ -104,6 +116,7 @@ public final class BlankReview {
                 thresholdAnalyte = analyte;
                 thresholdLimit = dl;
                 thresholds.add(settings.thresholdFor(thresholdAnalyte, thresholdLimit).orElse(null));
+                thresholdFrom.add(judged.size());
             }
             BlankThreshold t = thresholds.get(thresholds.size() - 1);
             int d = BlankVerdict.decide(value, t);
@@ -111,9 +124,8 @@ public final class BlankReview {
             current.add(judged.size());
             decided[judged.size()] = JudgedBlanks.code(d, carry);
             judged.add(i);
-            thresholdOf.add(thresholds.size() - 1);
         }
-        JudgedBlanks results = new JudgedBlanks(obs, judged.toArray(), thresholdOf.toArray(), thresholds,
+        JudgedBlanks results = new JudgedBlanks(obs, judged.toArray(), thresholdFrom.toArray(), thresholds,
                 java.util.Arrays.copyOf(decided, judged.size()));
         List<BlankSummary> summaries = new ArrayList<>();
         for (Map.Entry<String, IntArrayBuilder> e : byAnalyte.entrySet()) {

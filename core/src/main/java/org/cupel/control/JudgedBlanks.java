@@ -1,13 +1,14 @@
 package org.cupel.control;
 
 import java.util.AbstractList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.RandomAccess;
 import org.cupel.assay.AssayValue;
 
 /**
  * The judged blank results of a {@link BlankReport} as columns: per result the index of its observation, the
- * thresholds in force (an index into the few distinct ones) and the case of the blank rules that applied
+ * thresholds in force (kept once for each run of results they apply to) and the case of the blank rules that applied
  * with the carry-over flag, in one byte. A {@link BlankResult} with its observation, verdict, ratio and
  * outcome is made when read ({@link BlankReview#result}); the outcomes are read by index without one
  * ({@link #outcomes()}).
@@ -17,20 +18,21 @@ final class JudgedBlanks extends AbstractList<BlankResult> implements RandomAcce
 
     private final BlankObservations observations;
     private final int[] observation;
-    private final int[] threshold;
+    /** Threshold {@code k} applies to the results from {@code thresholdFrom[k]} up to the next one's. */
+    private final int[] thresholdFrom;
     private final List<BlankThreshold> thresholds;
     /** {@link BlankVerdict#decide} of each result, with {@link #CARRY_OVER} set for a probable carry-over. */
     private final byte[] decided;
 
     /**
-     * @param thresholds the distinct thresholds, {@code null} among them for "none could be set"
-     * @param threshold each result's index into {@code thresholds}
+     * @param thresholdFrom the first result each of {@code thresholds} applies to, ascending, the first 0
+     * @param thresholds the thresholds in force over runs of results, {@code null} for "none could be set"
      */
-    JudgedBlanks(BlankObservations observations, int[] observation, int[] threshold, List<BlankThreshold> thresholds,
-                 byte[] decided) {
+    JudgedBlanks(BlankObservations observations, int[] observation, int[] thresholdFrom,
+                 List<BlankThreshold> thresholds, byte[] decided) {
         this.observations = observations;
         this.observation = observation;
-        this.threshold = threshold;
+        this.thresholdFrom = thresholdFrom;
         this.thresholds = thresholds;
         this.decided = decided;
     }
@@ -43,13 +45,19 @@ final class JudgedBlanks extends AbstractList<BlankResult> implements RandomAcce
     @Override
     public BlankResult get(int i) {
         BlankObservation o = observations.get(observation[i]);
-        BlankThreshold t = thresholds.get(threshold[i]);
+        BlankThreshold t = threshold(i);
         return BlankReview.result(o, t, BlankVerdict.of(decided(i), o.value(), t, o.unit()), carryOver(i));
     }
 
     @Override
     public int size() {
         return observation.length;
+    }
+
+    private BlankThreshold threshold(int i) {
+        int k = Arrays.binarySearch(thresholdFrom, i);
+        // No two thresholds start at the same result: an exact match is the run's start.
+        return thresholds.get(k >= 0 ? k : -k - 2);
     }
 
     private int decided(int i) {
@@ -97,7 +105,7 @@ final class JudgedBlanks extends AbstractList<BlankResult> implements RandomAcce
 
             @Override
             public String rule(int i) {
-                return BlankVerdict.ruleOf(decided(i), thresholds.get(threshold[i]));
+                return BlankVerdict.ruleOf(decided(i), threshold(i));
             }
 
             @Override

@@ -16,7 +16,6 @@ import org.cupel.assay.SampleTable;
  */
 final class ReassayEntries extends AbstractList<ReassayEntry> implements RandomAccess {
     private final SampleTable table;
-    private final BatchSequence seq;
     private final List<String> analytes;
     private final int[] rows;
     private final int[] analyteOf;
@@ -32,10 +31,8 @@ final class ReassayEntries extends AbstractList<ReassayEntry> implements RandomA
      * @param triggerIds the ID of each trigger's control sample
      * @param whys each trigger's reason
      */
-    ReassayEntries(SampleTable table, BatchSequence seq, List<String> analytes, Listings listed, String[] triggerIds,
-                   String[] whys) {
+    ReassayEntries(SampleTable table, List<String> analytes, Listings listed, String[] triggerIds, String[] whys) {
         this.table = table;
-        this.seq = seq;
         this.analytes = analytes;
         this.triggerIds = triggerIds;
         this.whys = whys;
@@ -100,7 +97,8 @@ final class ReassayEntries extends AbstractList<ReassayEntry> implements RandomA
             ids.add(triggerIds[triggerOf[k]]);
             reasons.add(whys[triggerOf[k]]);
         }
-        return new ReassayEntry(table.id(row), seq.batch(seq.batchOf(row)).id(), table.position(row),
+        // The batch's ID: the table's batch record of the row has the lab and ID of its batch in the sequence.
+        return new ReassayEntry(table.id(row), table.batch(row).id(), table.position(row),
                 analytes.get(analyteOf[e]), ids, String.join("; ", reasons));
     }
 

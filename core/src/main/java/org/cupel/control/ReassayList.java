@@ -100,7 +100,7 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
             brackets.add(bracket(table, seq, outcomes, i, status[a], settings, row -> listed.add(
                     (startOfBatch[seq.batchOf(row)] + seq.indexInBatch(row)) * analytes.size() + a, row, trigger)));
         }
-        return new ReassayList(new ReassayEntries(table, seq, analytes, listed, triggerIds, whys), brackets,
+        return new ReassayList(new ReassayEntries(table, analytes, listed, triggerIds, whys), brackets,
                 settings.scope(), settings.crmBracket(), settings.blankFollowing());
     }
 
