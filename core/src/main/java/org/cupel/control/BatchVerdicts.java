@@ -42,8 +42,11 @@ public final class BatchVerdicts {
         int na = analytes.size();
         int[] bucket = new int[outcomes.size()];
         int[] start = new int[seq.size() * na + 1];
+        // Each outcome's row read once: the sorts below and the tie check read it again by index.
+        int[] rows = new int[outcomes.size()];
         for (int i = 0; i < bucket.length; i++) {
-            bucket[i] = seq.batchOf(outcomes.row(i)) * na + analyteIndex.get(outcomes.analyte(i));
+            rows[i] = outcomes.row(i);
+            bucket[i] = seq.batchOf(rows[i]) * na + analyteIndex.get(outcomes.analyte(i));
             start[bucket[i] + 1]++;
         }
         for (int k = 1; k < start.length; k++) {
@@ -53,7 +56,7 @@ public final class BatchVerdicts {
         long[] keys = new long[bucket.length];
         for (int i = 0; i < bucket.length; i++) {
             // Run order within the batch (= position, then row), then the order given.
-            keys[next[bucket[i]]++] = ((long) seq.indexInBatch(outcomes.row(i)) << 32) | i;
+            keys[next[bucket[i]]++] = ((long) seq.indexInBatch(rows[i]) << 32) | i;
         }
         List<BatchVerdict> out = new ArrayList<>(seq.size());
         for (int b = 0; b < seq.size(); b++) {
@@ -63,7 +66,7 @@ public final class BatchVerdicts {
                 int from = start[b * na + a];
                 int to = start[b * na + a + 1];
                 Arrays.sort(keys, from, to);
-                AnalyteVerdict av = analyte(table, analytes.get(a), outcomes, inOrder(outcomes, keys, from, to));
+                AnalyteVerdict av = analyte(table, analytes.get(a), outcomes, rows, inOrder(outcomes, rows, keys, from, to));
                 per.add(av);
                 batchVerdict = batchVerdict.worst(av.verdict());
             }
@@ -77,7 +80,7 @@ public final class BatchVerdicts {
      * The indices of the outcomes of one bucket in run order. Several outcomes of one row (rare) are put in
      * order of rule, reason and verdict, so the result does not depend on the order the sources listed them.
      */
-    private static int[] inOrder(ControlOutcomes outcomes, long[] keys, int from, int to) {
+    private static int[] inOrder(ControlOutcomes outcomes, int[] rows, long[] keys, int from, int to) {
         int[] mine = new int[to - from];
         for (int k = from; k < to; k++) {
             mine[k - from] = (int) keys[k];
@@ -86,7 +89,7 @@ public final class BatchVerdicts {
                 .thenComparing(i -> outcomes.reason(i)).thenComparing(i -> outcomes.verdict(i).ordinal());
         for (int i = 0; i < mine.length; ) {
             int j = i + 1;
-            while (j < mine.length && outcomes.row(mine[j]) == outcomes.row(mine[i])) {
+            while (j < mine.length && rows[mine[j]] == rows[mine[i]]) {
                 j++;
             }
             if (j - i > 1) {
@@ -123,7 +126,8 @@ public final class BatchVerdicts {
         return (int) verdicts.stream().filter(b -> b.verdict() == v).count();
     }
 
-    private static AnalyteVerdict analyte(SampleTable table, String analyte, ControlOutcomes outcomes, int[] mine) {
+    private static AnalyteVerdict analyte(SampleTable table, String analyte, ControlOutcomes outcomes, int[] rows,
+                                          int[] mine) {
         if (mine.length == 0) {
             return new AnalyteVerdict(analyte, Verdict.CANNOT_JUDGE, 0, List.of(new VerdictReason("", 0, "",
                     analyte, Verdict.CANNOT_JUDGE, "no controls", "no control result for " + analyte
@@ -135,7 +139,7 @@ public final class BatchVerdicts {
             Verdict vi = outcomes.verdict(i);
             v = v.worst(vi);
             if (vi != Verdict.PASS) {
-                int row = outcomes.row(i);
+                int row = rows[i];
                 reasons.add(new VerdictReason(table.id(row), table.position(row), table.role(row).label(),
                         analyte, vi, outcomes.rule(i), outcomes.reason(i)));
             }

@@ -48,6 +48,11 @@ abstract class BlankObservations extends AbstractList<BlankObservation> implemen
         return get(i).precedingGrade();
     }
 
+    /** The lists this one is made of, one after the other: itself unless joined. */
+    List<BlankObservations> parts() {
+        return List.of(this);
+    }
+
     /** {@code observations} as they are when already this kind of list, else an unmodifiable copy. */
     static BlankObservations of(List<BlankObservation> observations) {
         return observations instanceof BlankObservations b ? b : new Listed(List.copyOf(observations));
@@ -185,6 +190,11 @@ abstract class BlankObservations extends AbstractList<BlankObservation> implemen
                 p++; // empty parts start where the next begins
             }
             return p;
+        }
+
+        @Override
+        List<BlankObservations> parts() {
+            return parts;
         }
 
         @Override

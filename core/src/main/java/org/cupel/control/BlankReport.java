@@ -23,16 +23,29 @@ public record BlankReport(List<BlankResult> results, List<BlankSummary> summarie
         return ControlOutcomes.of(results.stream().map(BlankResult::outcome).toList());
     }
 
+    /**
+     * The results of one analyte, in batch and sequence order. The results of a review are made when read: a
+     * chart reads its analyte's this way rather than filtering every result of the project.
+     */
+    public List<BlankResult> results(String analyte) {
+        if (results instanceof JudgedBlanks judged) {
+            return judged.picked(judged.indicesWhere(i -> judged.analyte(i).equals(analyte)));
+        }
+        return results.stream().filter(r -> r.observation().analyte().equals(analyte)).toList();
+    }
+
+    /** The results that did not pass (warnings, failures, and those that cannot be judged), in order. */
+    public List<BlankResult> notPassing() {
+        if (results instanceof JudgedBlanks judged) {
+            return judged.picked(judged.indicesWhere(i -> judged.verdict(i) != Verdict.PASS));
+        }
+        return results.stream().filter(r -> r.verdict().verdict() != Verdict.PASS).toList();
+    }
+
     /** Failing blanks that follow a high-grade sample. */
     public List<BlankResult> carryOverFindings() {
         if (results instanceof JudgedBlanks judged) {
-            List<BlankResult> out = new java.util.ArrayList<>();
-            for (int i = 0; i < judged.size(); i++) {
-                if (judged.carryOver(i)) {
-                    out.add(judged.get(i));
-                }
-            }
-            return List.copyOf(out);
+            return List.copyOf(judged.picked(judged.indicesWhere(judged::carryOver)));
         }
         return results.stream().filter(BlankResult::carryOver).toList();
     }

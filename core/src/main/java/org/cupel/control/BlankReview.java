@@ -98,32 +98,40 @@ public final class BlankReview {
         String currentAnalyte = null;
         String thresholdAnalyte = null;
         double thresholdLimit = Double.NaN;
-        for (int i = 0; i < obs.size(); i++) {
-            String analyte = obs.analyte(i);
-            if (!analyte.equals(currentAnalyte)) {
-                // Observations come analyte by analyte: look the analyte up once per run of it.
-                currentAnalyte = analyte;
-                current = byAnalyte.computeIfAbsent(currentAnalyte, k -> new IntArrayBuilder());
+        int offset = 0;
+        for (BlankObservations part : obs.parts()) {
+            // Read each part directly: a joined list would look up the part at every read.
+            for (int k = 0; k < part.size(); k++) {
+                int i = offset + k;
+                String analyte = part.analyte(k);
+                if (!analyte.equals(currentAnalyte)) {
+                    // Observations come analyte by analyte: look the analyte up once per run of it.
+                    currentAnalyte = analyte;
+                    current = byAnalyte.computeIfAbsent(currentAnalyte, a -> new IntArrayBuilder());
+                }
+                units.put(analyte, part.unit(k));
+                AssayValue value = part.value(k);
+                if (value.isMissing()) {
+                    missing.merge(analyte, 1, Integer::sum);
+                    continue;
+                }
+                double dl = part.detectionLimit(k);
+                if (thresholds.isEmpty() || !analyte.equals(thresholdAnalyte)
+                        || Double.compare(dl, thresholdLimit) != 0) {
+                    thresholdAnalyte = analyte;
+                    thresholdLimit = dl;
+                    thresholds.add(settings.thresholdFor(thresholdAnalyte, thresholdLimit).orElse(null));
+                    thresholdFrom.add(judged.size());
+                }
+                BlankThreshold t = thresholds.get(thresholds.size() - 1);
+                int d = BlankVerdict.decide(value, t);
+                boolean carry = BlankVerdict.verdictOf(d) == Verdict.FAIL
+                        && carryOver(part.precedingGrade(k), t, settings);
+                current.add(judged.size());
+                decided[judged.size()] = JudgedBlanks.code(d, carry);
+                judged.add(i);
             }
-            units.put(analyte, obs.unit(i));
-            AssayValue value = obs.value(i);
-            if (value.isMissing()) {
-                missing.merge(analyte, 1, Integer::sum);
-                continue;
-            }
-            double dl = obs.detectionLimit(i);
-            if (thresholds.isEmpty() || !analyte.equals(thresholdAnalyte) || Double.compare(dl, thresholdLimit) != 0) {
-                thresholdAnalyte = analyte;
-                thresholdLimit = dl;
-                thresholds.add(settings.thresholdFor(thresholdAnalyte, thresholdLimit).orElse(null));
-                thresholdFrom.add(judged.size());
-            }
-            BlankThreshold t = thresholds.get(thresholds.size() - 1);
-            int d = BlankVerdict.decide(value, t);
-            boolean carry = BlankVerdict.verdictOf(d) == Verdict.FAIL && carryOver(obs.precedingGrade(i), t, settings);
-            current.add(judged.size());
-            decided[judged.size()] = JudgedBlanks.code(d, carry);
-            judged.add(i);
+            offset += part.size();
         }
         JudgedBlanks results = new JudgedBlanks(obs, judged.toArray(), thresholdFrom.toArray(), thresholds,
                 java.util.Arrays.copyOf(decided, judged.size()));

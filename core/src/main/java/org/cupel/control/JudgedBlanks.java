@@ -4,6 +4,8 @@ import java.util.AbstractList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.RandomAccess;
+import java.util.function.IntPredicate;
+import java.util.stream.IntStream;
 import org.cupel.assay.AssayValue;
 
 /**
@@ -72,6 +74,38 @@ final class JudgedBlanks extends AbstractList<BlankResult> implements RandomAcce
         return (decided[i] & CARRY_OVER) != 0;
     }
 
+    String analyte(int i) {
+        return observations.analyte(observation[i]);
+    }
+
+    /** The indices of the results that satisfy {@code test}, ascending. */
+    int[] indicesWhere(IntPredicate test) {
+        return IntStream.range(0, size()).filter(test).toArray();
+    }
+
+    /** The results at {@code indices}, made when read. */
+    List<BlankResult> picked(int[] indices) {
+        return new Picked(indices);
+    }
+
+    private final class Picked extends AbstractList<BlankResult> implements RandomAccess {
+        private final int[] indices;
+
+        Picked(int[] indices) {
+            this.indices = indices;
+        }
+
+        @Override
+        public BlankResult get(int k) {
+            return JudgedBlanks.this.get(indices[k]);
+        }
+
+        @Override
+        public int size() {
+            return indices.length;
+        }
+    }
+
     AssayValue value(int i) {
         return observations.value(observation[i]);
     }
@@ -95,7 +129,7 @@ final class JudgedBlanks extends AbstractList<BlankResult> implements RandomAcce
 
             @Override
             public String analyte(int i) {
-                return observations.analyte(observation[i]);
+                return JudgedBlanks.this.analyte(i);
             }
 
             @Override

@@ -88,16 +88,22 @@ final class ReassayEntries extends AbstractList<ReassayEntry> implements RandomA
         return false;
     }
 
+    /** The entry; its batch ID is the table's batch record's, which has the lab and ID of its batch in the sequence. */
     @Override
     public ReassayEntry get(int e) {
         int row = rows[e];
+        if (triggerStart[e + 1] - triggerStart[e] == 1) {
+            // Most entries have one trigger: its ID and sentence as they are, nothing to join.
+            int t = triggerOf[triggerStart[e]];
+            return new ReassayEntry(table.id(row), table.batch(row).id(), table.position(row),
+                    analytes.get(analyteOf[e]), List.of(triggerIds[t]), whys[t]);
+        }
         List<String> ids = new ArrayList<>(triggerStart[e + 1] - triggerStart[e]);
         List<String> reasons = new ArrayList<>(ids.size());
         for (int k = triggerStart[e]; k < triggerStart[e + 1]; k++) {
             ids.add(triggerIds[triggerOf[k]]);
             reasons.add(whys[triggerOf[k]]);
         }
-        // The batch's ID: the table's batch record of the row has the lab and ID of its batch in the sequence.
         return new ReassayEntry(table.id(row), table.batch(row).id(), table.position(row),
                 analytes.get(analyteOf[e]), ids, String.join("; ", reasons));
     }

@@ -25,6 +25,15 @@ final class AnalyteJudgement {
     private final List<CrmSeries> series;
     private final CrmSettings settings;
     private final Map<CrmRule, RuleAction> actions;
+    /**
+     * Per series, read from its points once: the value, batch rank, position, row and batch date of every
+     * result (the merge and the rules read them many times; the table's columns are a cache miss a read).
+     */
+    private final double[][] number;
+    private final int[][] batchOrder;
+    private final int[][] position;
+    private final int[][] row;
+    private final LocalDate[][] date;
     /** Per series: z of every result. */
     private final double[][] z;
     /** Per series: swap label of every result, empty when none; {@code null} for a series without a swap. */
@@ -53,6 +62,11 @@ final class AnalyteJudgement {
         this.settings = settings;
         this.actions = settings.actions();
         int n = series.size();
+        this.number = new double[n][];
+        this.batchOrder = new int[n][];
+        this.position = new int[n][];
+        this.row = new int[n][];
+        this.date = new LocalDate[n][];
         this.z = new double[n][];
         this.swaps = new String[n][];
         this.judged = new int[n][];
@@ -85,8 +99,9 @@ final class AnalyteJudgement {
             String[] sw = null;
             int[] keep = new int[n];
             int kept = 0;
+            readPoints(s, points);
             for (int i = 0; i < n; i++) {
-                zs[i] = lim.z(points.number(i));
+                zs[i] = lim.z(number[s][i]);
                 Optional<String> m = LimitComparison.beyond(zs[i], 3)
                         ? SwapCheck.match(points.value(i), cs.certificate(), others, settings.swapWithinSd(),
                         settings.blankLevelMultiple())
@@ -109,6 +124,22 @@ final class AnalyteJudgement {
             hits[s] = new int[n];
             outlier[s] = isolatedOutliers(zs, judged[s]);
             findings.add(new ArrayList<>());
+        }
+    }
+
+    private void readPoints(int s, PointList points) {
+        int n = points.size();
+        number[s] = new double[n];
+        batchOrder[s] = new int[n];
+        position[s] = new int[n];
+        row[s] = new int[n];
+        date[s] = new LocalDate[n];
+        for (int i = 0; i < n; i++) {
+            number[s][i] = points.number(i);
+            batchOrder[s][i] = points.batchOrder(i);
+            position[s][i] = points.position(i);
+            row[s][i] = points.row(i);
+            date[s][i] = points.date(i);
         }
     }
 
@@ -152,15 +183,13 @@ final class AnalyteJudgement {
     }
 
     private boolean before(int s, int i, int t, int j) {
-        PointList a = points(s);
-        PointList b = points(t);
-        if (a.batchOrder(i) != b.batchOrder(j)) {
-            return a.batchOrder(i) < b.batchOrder(j);
+        if (batchOrder[s][i] != batchOrder[t][j]) {
+            return batchOrder[s][i] < batchOrder[t][j];
         }
-        if (a.position(i) != b.position(j)) {
-            return a.position(i) < b.position(j);
+        if (position[s][i] != position[t][j]) {
+            return position[s][i] < position[t][j];
         }
-        return a.row(i) < b.row(j);
+        return row[s][i] < row[t][j];
     }
 
     private PointList points(int s) {
@@ -174,7 +203,7 @@ final class AnalyteJudgement {
             int[] batch = new int[idx.length];
             for (int k = 0; k < idx.length; k++) {
                 zj[k] = z[s][idx[k]];
-                batch[k] = points(s).batchOrder(idx[k]);
+                batch[k] = batchOrder[s][idx[k]];
             }
             for (CrmRule rule : RULES) {
                 if (rule == CrmRule.W_R_4S || actions.get(rule) == RuleAction.OFF) {
@@ -200,7 +229,7 @@ final class AnalyteJudgement {
         int[] batch = new int[mergedSeries.length];
         for (int k = 0; k < zs.length; k++) {
             zs[k] = z[mergedSeries[k]][mergedIndex[k]];
-            batch[k] = points(mergedSeries[k]).batchOrder(mergedIndex[k]);
+            batch[k] = batchOrder[mergedSeries[k]][mergedIndex[k]];
         }
         for (RuleViolation v : RunRules.evaluate(CrmRule.W_R_4S, zs, batch)) {
             int[] seriesOf = v.involved().stream().mapToInt(k -> mergedSeries[k]).toArray();
@@ -241,7 +270,7 @@ final class AnalyteJudgement {
                 runningMean[i] = count == 0 ? Double.NaN : sum / count;
                 codes[i] = CrmResults.code(Verdict.WARN, false);
             } else {
-                values[count] = points.number(i);
+                values[count] = number[s][i];
                 sum += values[count];
                 count++;
                 runningMean[i] = sum / count;
@@ -294,7 +323,7 @@ final class AnalyteJudgement {
 
             @Override
             public LocalDate date(int k) {
-                return points(seriesOf.applyAsInt(k)).date(indexOf.applyAsInt(k));
+                return date[seriesOf.applyAsInt(k)][indexOf.applyAsInt(k)];
             }
 
             @Override

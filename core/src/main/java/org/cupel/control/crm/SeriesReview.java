@@ -50,6 +50,12 @@ public record SeriesReview(Analyte analyte, CrmCertificate certificate, Certifie
         return IntStream.range(0, rs.size()).filter(rs::isSwap).count();
     }
 
+    /** The results judged probable swaps, in series order. */
+    public List<CrmResult> probableSwaps() {
+        CrmResults rs = resultList();
+        return IntStream.range(0, rs.size()).filter(rs::isSwap).mapToObj(rs::get).toList();
+    }
+
     /** The results, their fields readable by index. */
     CrmResults resultList() {
         return (CrmResults) results;
