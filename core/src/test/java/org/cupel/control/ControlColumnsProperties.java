@@ -1,5 +1,7 @@
 package org.cupel.control;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
@@ -100,6 +102,50 @@ class ControlColumnsProperties {
         }
     }
 
+    /**
+     * What the batch verdicts, re-assay list, report and charts read by index or by filter from the columns is
+     * what the records made from them say: each outcome's row, analyte, verdict, rule, reason and trigger; each
+     * blank result's verdict and carry-over; one analyte's blanks, the non-passing ones and the carry-over ones;
+     * a series' failures, warnings and probable swaps; the re-assay list's distinct samples.
+     */
+    @Test
+    void fieldsReadByIndexAgreeWithTheRecords() {
+        SeededTries.forAll(150, ControlColumnsProperties::project, p -> {
+            CrmReview crm = CrmReview.of(p);
+            BatchReview batches = BatchReview.of(p, crm.outcomes());
+            for (List<ControlOutcome> list : List.of(crm.outcomes(), batches.blanks().outcomes(), batches.outcomes())) {
+                ControlOutcomes os = ControlOutcomes.of(list);
+                assertEquals(os, List.copyOf(os));
+                for (int i = 0; i < os.size(); i++) {
+                    ControlOutcome o = os.get(i);
+                    assertEquals(List.of(o.row(), o.analyte(), o.verdict(), o.rule(), o.reason(), o.triggersReassay()),
+                            List.of(os.row(i), os.analyte(i), os.verdict(i), os.rule(i), os.reason(i),
+                                    os.triggersReassay(i)), "outcome " + i);
+                }
+            }
+            BlankReport blanks = batches.blanks();
+            List<BlankResult> all = List.copyOf(blanks.results());
+            for (BlankSummary sum : blanks.summaries()) {
+                assertEquals(all.stream().filter(r -> r.observation().analyte().equals(sum.analyte())).toList(),
+                        List.copyOf(blanks.results(sum.analyte())));
+            }
+            assertEquals(all.stream().filter(r -> r.verdict().verdict() != Verdict.PASS).toList(),
+                    List.copyOf(blanks.notPassing()));
+            assertEquals(all.stream().filter(BlankResult::carryOver).toList(), blanks.carryOverFindings());
+            for (SeriesReview s : crm.series()) {
+                List<CrmResult> rs = List.copyOf(s.results());
+                assertEquals(rs.stream().filter(r -> r.verdict() == Verdict.FAIL).count(), s.failures());
+                assertEquals(rs.stream().filter(r -> r.verdict() == Verdict.WARN && !r.isSwap()).count(),
+                        s.warnings());
+                assertEquals(rs.stream().filter(CrmResult::isSwap).toList(), s.probableSwaps());
+                assertEquals(rs.stream().filter(CrmResult::isSwap).count(), s.swaps());
+            }
+            ReassayList reassay = batches.reassay();
+            assertEquals(List.copyOf(reassay.entries()).stream().map(ReassayEntry::sampleId).distinct().count(),
+                    reassay.sampleCount());
+        });
+    }
+
     /** Every control result of the project drawn from {@code r}, with settings drawn from it too, as text. */
     static String dump(Random r) {
         Project p = project(r);
@@ -147,6 +193,16 @@ class ControlColumnsProperties {
         out.append(BatchVerdicts.judge(p.samples(), seq, all)).append('\n');
         ReassayList list = ReassayList.build(p.samples(), seq, all, reassay);
         out.append(list).append('\n').append(list.sampleCount()).append('\n');
+        // A second source naming the same controls again: repeated triggers of one sample, ties within a row.
+        List<ControlOutcome> again = new ArrayList<>(all);
+        for (int i = 0; i < all.size(); i += 2) {
+            ControlOutcome o = all.get(i);
+            again.add(new ControlOutcome(o.row(), o.analyte(), r.nextBoolean() ? Verdict.FAIL : Verdict.WARN,
+                    r.nextBoolean() ? o.rule() : "second look", "seen again", o.triggersReassay() || r.nextBoolean()));
+        }
+        java.util.Collections.shuffle(again, r);
+        out.append(BatchVerdicts.judge(p.samples(), seq, again)).append('\n')
+                .append(ReassayList.build(p.samples(), seq, again, reassay)).append('\n');
         BatchReview review = BatchReview.of(p, crmOutcomes);
         out.append(review.verdicts()).append('\n').append(review.reassay()).append('\n').append(review.outcomes())
                 .append('\n');
