@@ -197,10 +197,15 @@ abstract class BlankObservations extends AbstractList<BlankObservation> implemen
             return parts;
         }
 
+        /** {@code read} of observation {@code i}, in the part that holds it. */
+        private <R> R at(int i, PartRead<R> read) {
+            int p = part(i);
+            return read.of(parts.get(p), i - start[p]);
+        }
+
         @Override
         public BlankObservation get(int i) {
-            int p = part(i);
-            return parts.get(p).get(i - start[p]);
+            return at(i, BlankObservations::get);
         }
 
         @Override
@@ -216,20 +221,17 @@ abstract class BlankObservations extends AbstractList<BlankObservation> implemen
 
         @Override
         String analyte(int i) {
-            int p = part(i);
-            return parts.get(p).analyte(i - start[p]);
+            return at(i, BlankObservations::analyte);
         }
 
         @Override
         String unit(int i) {
-            int p = part(i);
-            return parts.get(p).unit(i - start[p]);
+            return at(i, BlankObservations::unit);
         }
 
         @Override
         AssayValue value(int i) {
-            int p = part(i);
-            return parts.get(p).value(i - start[p]);
+            return at(i, BlankObservations::value);
         }
 
         @Override
@@ -240,20 +242,22 @@ abstract class BlankObservations extends AbstractList<BlankObservation> implemen
 
         @Override
         String sampleId(int i) {
-            int p = part(i);
-            return parts.get(p).sampleId(i - start[p]);
+            return at(i, BlankObservations::sampleId);
         }
 
         @Override
         String precedingId(int i) {
-            int p = part(i);
-            return parts.get(p).precedingId(i - start[p]);
+            return at(i, BlankObservations::precedingId);
         }
 
         @Override
         AssayValue precedingGrade(int i) {
-            int p = part(i);
-            return parts.get(p).precedingGrade(i - start[p]);
+            return at(i, BlankObservations::precedingGrade);
         }
+    }
+
+    /** A field of an observation of a part, by its index in the part. */
+    private interface PartRead<R> {
+        R of(BlankObservations part, int i);
     }
 }

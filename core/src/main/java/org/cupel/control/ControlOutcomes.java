@@ -107,9 +107,14 @@ public abstract class ControlOutcomes extends AbstractList<ControlOutcome> imple
             this.split = first.size();
         }
 
+        /** {@code read} of outcome {@code i}, in the list that holds it. */
+        private <R> R at(int i, PartRead<R> read) {
+            return i < split ? read.of(first, i) : read.of(second, i - split);
+        }
+
         @Override
         public ControlOutcome get(int i) {
-            return i < split ? first.get(i) : second.get(i - split);
+            return at(i, ControlOutcomes::get);
         }
 
         @Override
@@ -124,27 +129,32 @@ public abstract class ControlOutcomes extends AbstractList<ControlOutcome> imple
 
         @Override
         public String analyte(int i) {
-            return i < split ? first.analyte(i) : second.analyte(i - split);
+            return at(i, ControlOutcomes::analyte);
         }
 
         @Override
         public Verdict verdict(int i) {
-            return i < split ? first.verdict(i) : second.verdict(i - split);
+            return at(i, ControlOutcomes::verdict);
         }
 
         @Override
         public String rule(int i) {
-            return i < split ? first.rule(i) : second.rule(i - split);
+            return at(i, ControlOutcomes::rule);
         }
 
         @Override
         public String reason(int i) {
-            return i < split ? first.reason(i) : second.reason(i - split);
+            return at(i, ControlOutcomes::reason);
         }
 
         @Override
         public boolean triggersReassay(int i) {
             return i < split ? first.triggersReassay(i) : second.triggersReassay(i - split);
         }
+    }
+
+    /** A field of an outcome of one of the joined lists, by its index there. */
+    private interface PartRead<R> {
+        R of(ControlOutcomes part, int i);
     }
 }

@@ -2,12 +2,8 @@ package org.cupel.control;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import java.nio.charset.StandardCharsets;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.time.LocalDate;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -50,10 +46,10 @@ import org.junit.jupiter.api.Test;
  * <p>{@link #controlResultsAsAt23678bd} compares a digest of everything the reviews give ({@link #dump}: every
  * CRM result with its reason and outcome, every series' counts, findings and drift, every blank result with
  * its observation, verdict, explanation, ratio and outcome, every outcome list, the batch verdicts and the
- * re-assay list with its entries and brackets) for 150 fixed seeds with
- * testdata/golden/control-columns-projects.txt, written by the per-object implementation of commit 23678bd
- * (this test file run on that commit's sources). A differing seed is reproduced by {@link #project} with
- * {@code new Random(seed)}.
+ * re-assay list with its entries and brackets, also from a second source of outcomes that names the same controls
+ * again) for 150 fixed seeds with testdata/golden/control-columns-projects.txt, written by the per-object
+ * implementation of commit 23678bd (this test's digest method run on that commit's sources). A differing seed is
+ * reproduced by {@link #project} with {@code new Random(seed)}.
  */
 class ControlColumnsProperties {
     private static final long GOLDEN_SEED = 20_261_204_002L;
@@ -67,7 +63,7 @@ class ControlColumnsProperties {
         StringBuilder digests = new StringBuilder();
         for (int i = 0; i < GOLDEN_PROJECTS; i++) {
             long seed = SeededTries.trySeed(GOLDEN_SEED, i);
-            digests.append("seed ").append(seed).append(' ').append(sha256(dump(new Random(seed)))).append('\n');
+            digests.append("seed ").append(seed).append(' ').append(GoldenText.sha256(dump(new Random(seed)))).append('\n');
         }
         GoldenText.assertMatches("control-columns-projects.txt", digests.toString());
     }
@@ -289,14 +285,5 @@ class ControlColumnsProperties {
         int decimals = 3;
         v = Math.max(Math.round(v * 1000) / 1000.0, 0.001);
         return new AssayValue(org.cupel.assay.Qualifier.DETECTED, v, limit, MissingReason.NONE, decimals);
-    }
-
-    private static String sha256(String text) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256")
-                    .digest(text.getBytes(StandardCharsets.UTF_8)));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException(e);
-        }
     }
 }
