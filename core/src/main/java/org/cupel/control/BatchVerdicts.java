@@ -66,7 +66,8 @@ public final class BatchVerdicts {
                 int from = start[b * na + a];
                 int to = start[b * na + a + 1];
                 Arrays.sort(keys, from, to);
-                AnalyteVerdict av = analyte(table, analytes.get(a), outcomes, rows, inOrder(outcomes, rows, keys, from, to));
+                AnalyteVerdict av = analyte(table, analytes.get(a), outcomes, rows,
+                        inOrder(outcomes, rows, keys, from, to));
                 per.add(av);
                 batchVerdict = batchVerdict.worst(av.verdict());
             }

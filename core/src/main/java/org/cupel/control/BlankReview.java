@@ -150,7 +150,10 @@ public final class BlankReview {
         return result(o, t, BlankVerdict.of(d, o.value(), t, o.unit()), carry);
     }
 
-    /** Whether a failing blank follows a high-grade sample: {@code prev} at least highGradeMultiple × the failure level. */
+    /**
+     * Whether a failing blank follows a high-grade sample: {@code prev} at least highGradeMultiple × the failure
+     * level.
+     */
     private static boolean carryOver(AssayValue prev, BlankThreshold t, BlankSettings settings) {
         return t != null && !prev.isMissing() && prev.qualifier() != org.cupel.assay.Qualifier.BELOW_DETECTION
                 && LimitComparison.atLeast(prev.value(), settings.highGradeMultiple() * t.fail());

@@ -34,7 +34,10 @@ final class CarryOver {
                 i -> results.get(i).observation().precedingGrade());
     }
 
-    /** The relation over {@code n} blanks, the i-th blank's value {@code blanks(i)} and its preceding grade {@code preceding(i)}. */
+    /**
+     * The relation over {@code n} blanks, the i-th blank's value {@code blanks(i)} and its preceding grade
+     * {@code preceding(i)}.
+     */
     static CarryOverRelation relation(String analyte, int n, IntFunction<AssayValue> blanks,
                                       IntFunction<AssayValue> preceding) {
         List<double[]> ranked = new ArrayList<>();

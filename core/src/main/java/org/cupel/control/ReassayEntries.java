@@ -19,7 +19,10 @@ final class ReassayEntries extends AbstractList<ReassayEntry> implements RandomA
     private final List<String> analytes;
     private final int[] rows;
     private final int[] analyteOf;
-    /** The triggers of entry {@code e} are {@code triggerOf[triggerStart[e] .. triggerStart[e + 1])}, in the order listed. */
+    /**
+     * The triggers of entry {@code e} are {@code triggerOf[triggerStart[e] .. triggerStart[e + 1])}, in the order
+     * listed.
+     */
     private final int[] triggerStart;
     private final int[] triggerOf;
     /** Per trigger: the failed control's ID and the sentence saying why it lists samples. */

@@ -63,7 +63,8 @@ class ControlColumnsProperties {
         StringBuilder digests = new StringBuilder();
         for (int i = 0; i < GOLDEN_PROJECTS; i++) {
             long seed = SeededTries.trySeed(GOLDEN_SEED, i);
-            digests.append("seed ").append(seed).append(' ').append(GoldenText.sha256(dump(new Random(seed)))).append('\n');
+            digests.append("seed ").append(seed).append(' ').append(GoldenText.sha256(dump(new Random(seed))))
+                    .append('\n');
         }
         GoldenText.assertMatches("control-columns-projects.txt", digests.toString());
     }

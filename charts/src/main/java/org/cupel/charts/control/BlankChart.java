@@ -31,7 +31,10 @@ public final class BlankChart {
     private BlankChart() {
     }
 
-    /** @param given the blanks of one analyte, in batch and run order (as {@code BlankReport.results(analyte)} lists them) */
+    /**
+     * @param given the blanks of one analyte, in batch and run order (as {@code BlankReport.results(analyte)} lists
+     *     them)
+     */
     public static ChartFigure sequence(List<BlankResult> given) {
         // A review's results are made when read: read each once.
         List<BlankResult> results = List.copyOf(given);

@@ -294,7 +294,10 @@ final class AnalyteJudgement {
                 found.stream().map(Found::finding).toList());
     }
 
-    /** The verdict and re-assay flag ({@link CrmResults#code}) of a judged result that completed the rules {@code ruleBits}. */
+    /**
+     * The verdict and re-assay flag ({@link CrmResults#code}) of a judged result that completed the rules
+     * {@code ruleBits}.
+     */
     private byte code(int ruleBits) {
         Verdict v = Verdict.PASS;
         boolean reassay = false;
