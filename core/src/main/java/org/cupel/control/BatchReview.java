@@ -1,6 +1,5 @@
 package org.cupel.control;
 
-import java.util.ArrayList;
 import java.util.List;
 import org.cupel.project.Project;
 
@@ -23,17 +22,15 @@ public record BatchReview(List<BatchVerdict> verdicts, ReassayList reassay, Blan
 
     public BatchReview {
         verdicts = List.copyOf(verdicts);
-        outcomes = List.copyOf(outcomes);
+        outcomes = ControlOutcomes.of(outcomes);
     }
 
     /** @param otherOutcomes outcomes of other control reviews (CRMs), in any order; may be empty */
     public static BatchReview of(Project project, List<ControlOutcome> otherOutcomes) {
         BatchSequence seq = BatchSequence.of(project.samples());
         BlankReport blanks = BlankReview.review(project, seq);
-        List<ControlOutcome> blankOutcomes = blanks.outcomes();
-        List<ControlOutcome> all = new ArrayList<>(otherOutcomes.size() + blankOutcomes.size());
-        all.addAll(otherOutcomes);
-        all.addAll(blankOutcomes);
+        ControlOutcomes all = ControlOutcomes.concat(ControlOutcomes.of(otherOutcomes),
+                ControlOutcomes.of(blanks.outcomes()));
         ReassaySettings reassay = project.config().section("reassay", ReassaySettings.class, ReassaySettings.DEFAULTS);
         InsertionSettings insertion = project.config().section("insertion", InsertionSettings.class,
                 InsertionSettings.DEFAULTS);

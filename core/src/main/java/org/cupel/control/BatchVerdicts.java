@@ -33,7 +33,8 @@ public final class BatchVerdicts {
     }
 
     /** As {@link #judge(SampleTable, List)}, with the table's batch sequence already built. */
-    public static List<BatchVerdict> judge(SampleTable table, BatchSequence seq, List<ControlOutcome> outcomes) {
+    public static List<BatchVerdict> judge(SampleTable table, BatchSequence seq, List<ControlOutcome> given) {
+        ControlOutcomes outcomes = ControlOutcomes.of(given);
         List<String> analytes = analyteNames(outcomes);
         Map<String, Integer> analyteIndex = new HashMap<>();
         analytes.forEach(a -> analyteIndex.put(a, analyteIndex.size()));
@@ -41,9 +42,11 @@ public final class BatchVerdicts {
         int na = analytes.size();
         int[] bucket = new int[outcomes.size()];
         int[] start = new int[seq.size() * na + 1];
+        // Each outcome's row read once: the sorts below and the tie check read it again by index.
+        int[] rows = new int[outcomes.size()];
         for (int i = 0; i < bucket.length; i++) {
-            ControlOutcome o = outcomes.get(i);
-            bucket[i] = seq.batchOf(o.row()) * na + analyteIndex.get(o.analyte());
+            rows[i] = outcomes.row(i);
+            bucket[i] = seq.batchOf(rows[i]) * na + analyteIndex.get(outcomes.analyte(i));
             start[bucket[i] + 1]++;
         }
         for (int k = 1; k < start.length; k++) {
@@ -53,7 +56,7 @@ public final class BatchVerdicts {
         long[] keys = new long[bucket.length];
         for (int i = 0; i < bucket.length; i++) {
             // Run order within the batch (= position, then row), then the order given.
-            keys[next[bucket[i]]++] = ((long) seq.indexInBatch(outcomes.get(i).row()) << 32) | i;
+            keys[next[bucket[i]]++] = ((long) seq.indexInBatch(rows[i]) << 32) | i;
         }
         List<BatchVerdict> out = new ArrayList<>(seq.size());
         for (int b = 0; b < seq.size(); b++) {
@@ -63,7 +66,8 @@ public final class BatchVerdicts {
                 int from = start[b * na + a];
                 int to = start[b * na + a + 1];
                 Arrays.sort(keys, from, to);
-                AnalyteVerdict av = analyte(table, analytes.get(a), inOrder(outcomes, keys, from, to));
+                AnalyteVerdict av = analyte(table, analytes.get(a), outcomes, rows,
+                        inOrder(outcomes, rows, keys, from, to));
                 per.add(av);
                 batchVerdict = batchVerdict.worst(av.verdict());
             }
@@ -74,23 +78,30 @@ public final class BatchVerdicts {
     }
 
     /**
-     * The outcomes of one bucket in run order. Several outcomes of one row (rare) are put in order of rule,
-     * reason and verdict, so the result does not depend on the order the sources listed them.
+     * The indices of the outcomes of one bucket in run order. Several outcomes of one row (rare) are put in
+     * order of rule, reason and verdict, so the result does not depend on the order the sources listed them.
      */
-    private static List<ControlOutcome> inOrder(List<ControlOutcome> outcomes, long[] keys, int from, int to) {
-        List<ControlOutcome> mine = new ArrayList<>(to - from);
+    private static int[] inOrder(ControlOutcomes outcomes, int[] rows, long[] keys, int from, int to) {
+        int[] mine = new int[to - from];
         for (int k = from; k < to; k++) {
-            mine.add(outcomes.get((int) keys[k]));
+            mine[k - from] = (int) keys[k];
         }
-        Comparator<ControlOutcome> ties = Comparator.comparing(ControlOutcome::rule)
-                .thenComparing(ControlOutcome::reason).thenComparing(o -> o.verdict().ordinal());
-        for (int i = 0; i < mine.size(); ) {
+        Comparator<Integer> ties = Comparator.comparing((Integer i) -> outcomes.rule(i))
+                .thenComparing(i -> outcomes.reason(i)).thenComparing(i -> outcomes.verdict(i).ordinal());
+        for (int i = 0; i < mine.length; ) {
             int j = i + 1;
-            while (j < mine.size() && mine.get(j).row() == mine.get(i).row()) {
+            while (j < mine.length && rows[mine[j]] == rows[mine[i]]) {
                 j++;
             }
             if (j - i > 1) {
-                mine.subList(i, j).sort(ties);
+                Integer[] tied = new Integer[j - i];
+                for (int k = i; k < j; k++) {
+                    tied[k - i] = mine[k];
+                }
+                Arrays.sort(tied, ties);
+                for (int k = i; k < j; k++) {
+                    mine[k] = tied[k - i];
+                }
             }
             i = j;
         }
@@ -98,10 +109,10 @@ public final class BatchVerdicts {
     }
 
     /** The analytes of the outcomes in name order (a hash set first: a million outcomes name ten analytes). */
-    static List<String> analyteNames(List<ControlOutcome> outcomes) {
+    static List<String> analyteNames(ControlOutcomes outcomes) {
         Set<String> names = new HashSet<>();
-        for (ControlOutcome o : outcomes) {
-            names.add(o.analyte());
+        for (int i = 0; i < outcomes.size(); i++) {
+            names.add(outcomes.analyte(i));
         }
         return List.copyOf(new TreeSet<>(names));
     }
@@ -116,21 +127,24 @@ public final class BatchVerdicts {
         return (int) verdicts.stream().filter(b -> b.verdict() == v).count();
     }
 
-    private static AnalyteVerdict analyte(SampleTable table, String analyte, List<ControlOutcome> mine) {
-        if (mine.isEmpty()) {
+    private static AnalyteVerdict analyte(SampleTable table, String analyte, ControlOutcomes outcomes, int[] rows,
+                                          int[] mine) {
+        if (mine.length == 0) {
             return new AnalyteVerdict(analyte, Verdict.CANNOT_JUDGE, 0, List.of(new VerdictReason("", 0, "",
                     analyte, Verdict.CANNOT_JUDGE, "no controls", "no control result for " + analyte
                     + " in this batch")));
         }
         Verdict v = Verdict.PASS;
         Set<VerdictReason> reasons = new LinkedHashSet<>();
-        for (ControlOutcome o : mine) {
-            v = v.worst(o.verdict());
-            if (o.verdict() != Verdict.PASS) {
-                reasons.add(new VerdictReason(table.id(o.row()), table.position(o.row()), table.role(o.row()).label(),
-                        analyte, o.verdict(), o.rule(), o.reason()));
+        for (int i : mine) {
+            Verdict vi = outcomes.verdict(i);
+            v = v.worst(vi);
+            if (vi != Verdict.PASS) {
+                int row = rows[i];
+                reasons.add(new VerdictReason(table.id(row), table.position(row), table.role(row).label(),
+                        analyte, vi, outcomes.rule(i), outcomes.reason(i)));
             }
         }
-        return new AnalyteVerdict(analyte, v, mine.size(), new ArrayList<>(reasons));
+        return new AnalyteVerdict(analyte, v, mine.length, new ArrayList<>(reasons));
     }
 }

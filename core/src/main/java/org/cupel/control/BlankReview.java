@@ -7,8 +7,8 @@ import java.util.List;
 import java.util.Map;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.AssayValue;
+import org.cupel.assay.IntArrayBuilder;
 import org.cupel.assay.LimitComparison;
-import org.cupel.assay.MissingReason;
 import org.cupel.assay.Numbers;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
@@ -31,11 +31,12 @@ public final class BlankReview {
     public static BlankReport review(Project project, BatchSequence seq) {
         BlankSettings settings = project.config().section("blanks", BlankSettings.class, BlankSettings.DEFAULTS);
         int[] blanks = seq.inRunOrder(project.samples().rowsWithRole(QcRole.BLANK));
-        List<BlankObservation> all = new ArrayList<>();
+        int[] preceding = preceding(seq, blanks);
+        List<BlankObservations> all = new ArrayList<>();
         for (AnalyteColumn col : project.analytes().values()) {
-            all.addAll(observations(project.samples(), seq, col, blanks));
+            all.add(observations(project.samples(), col, blanks, preceding));
         }
-        return review(all, settings);
+        return review(BlankObservations.concat(all), settings);
     }
 
     /**
@@ -44,78 +45,125 @@ public final class BlankReview {
      * the same analyte and method elsewhere in the project.
      */
     public static List<BlankObservation> observations(SampleTable table, BatchSequence seq, AnalyteColumn col) {
-        return observations(table, seq, col, seq.inRunOrder(table.rowsWithRole(QcRole.BLANK)));
+        int[] blanks = seq.inRunOrder(table.rowsWithRole(QcRole.BLANK));
+        return observations(table, col, blanks, preceding(seq, blanks));
     }
 
-    private static List<BlankObservation> observations(SampleTable table, BatchSequence seq, AnalyteColumn col,
-                                                       int[] blanksInRunOrder) {
+    /** The row run before each of {@code rows} in its batch, -1 for one that opens its batch. */
+    private static int[] preceding(BatchSequence seq, int[] rows) {
+        int[] out = new int[rows.length];
+        for (int i = 0; i < rows.length; i++) {
+            out[i] = seq.preceding(rows[i]);
+        }
+        return out;
+    }
+
+    /** The observations read from the column when asked for; only the rows, preceding rows and limits are kept. */
+    private static BlankObservations observations(SampleTable table, AnalyteColumn col, int[] blanksInRunOrder,
+                                                  int[] preceding) {
         Map<String, Double> methodLimit = null;
-        String unit = col.analyte().unit().symbol();
-        String analyte = col.analyte().name();
-        List<BlankObservation> out = new ArrayList<>(blanksInRunOrder.length);
-        for (int row : blanksInRunOrder) {
-            int prev = seq.preceding(row);
+        double[] limits = new double[blanksInRunOrder.length];
+        for (int i = 0; i < limits.length; i++) {
+            int row = blanksInRunOrder[i];
             double dl = col.limit(row);
             if (!(dl > 0) || col.qualifier(row) == org.cupel.assay.Qualifier.ABOVE_UPPER_LIMIT) {
                 // Only blanks without a usable limit of their own need the scan of the whole column.
                 methodLimit = methodLimit == null ? methodLimits(col) : methodLimit;
                 dl = methodLimit.getOrDefault(col.method(row), Double.NaN);
             }
-            out.add(new BlankObservation(row, table.id(row), seq.batch(seq.batchOf(row)).id(), table.position(row),
-                    analyte, unit, col.value(row), dl, prev < 0 ? "" : table.id(prev),
-                    prev < 0 ? AssayValue.missing(MissingReason.NONE) : col.value(prev)));
+            limits[i] = dl;
         }
-        return out;
+        return BlankObservations.of(table, col, blanksInRunOrder, preceding, limits);
     }
 
     /** Judges the observations (any mix of analytes); missing blank results are counted, not judged. */
     public static BlankReport review(List<BlankObservation> observations, BlankSettings settings) {
-        Map<String, List<BlankResult>> byAnalyte = new LinkedHashMap<>();
+        return review(BlankObservations.of(observations), settings);
+    }
+
+    /**
+     * Judges each observation into columns ({@link JudgedBlanks}): the thresholds, which depend only on the
+     * analyte and its limit and so change rarely from row to row, are kept once per change, with the first
+     * result they apply to.
+     */
+    private static BlankReport review(BlankObservations obs, BlankSettings settings) {
+        Map<String, IntArrayBuilder> byAnalyte = new LinkedHashMap<>();
         Map<String, Integer> missing = new HashMap<>();
         Map<String, String> units = new HashMap<>();
-        List<BlankResult> results = new ArrayList<>(observations.size());
-        List<BlankResult> current = null;
+        IntArrayBuilder judged = new IntArrayBuilder();
+        IntArrayBuilder thresholdFrom = new IntArrayBuilder();
+        byte[] decided = new byte[obs.size()];
+        List<BlankThreshold> thresholds = new ArrayList<>();
+        IntArrayBuilder current = null;
         String currentAnalyte = null;
-        java.util.Optional<BlankThreshold> threshold = null;
         String thresholdAnalyte = null;
         double thresholdLimit = Double.NaN;
-        for (BlankObservation o : observations) {
-            if (!o.analyte().equals(currentAnalyte)) {
-                // Observations come analyte by analyte: look the analyte up once per run of it.
-                currentAnalyte = o.analyte();
-                current = byAnalyte.computeIfAbsent(currentAnalyte, k -> new ArrayList<>());
+        int offset = 0;
+        for (BlankObservations part : obs.parts()) {
+            // Read each part directly: a joined list would look up the part at every read.
+            for (int k = 0; k < part.size(); k++) {
+                int i = offset + k;
+                String analyte = part.analyte(k);
+                if (!analyte.equals(currentAnalyte)) {
+                    // Observations come analyte by analyte: look the analyte up once per run of it.
+                    currentAnalyte = analyte;
+                    current = byAnalyte.computeIfAbsent(currentAnalyte, a -> new IntArrayBuilder());
+                }
+                units.put(analyte, part.unit(k));
+                AssayValue value = part.value(k);
+                if (value.isMissing()) {
+                    missing.merge(analyte, 1, Integer::sum);
+                    continue;
+                }
+                double dl = part.detectionLimit(k);
+                if (thresholds.isEmpty() || !analyte.equals(thresholdAnalyte)
+                        || Double.compare(dl, thresholdLimit) != 0) {
+                    thresholdAnalyte = analyte;
+                    thresholdLimit = dl;
+                    thresholds.add(settings.thresholdFor(thresholdAnalyte, thresholdLimit).orElse(null));
+                    thresholdFrom.add(judged.size());
+                }
+                BlankThreshold t = thresholds.get(thresholds.size() - 1);
+                int d = BlankVerdict.decide(value, t);
+                boolean carry = BlankVerdict.verdictOf(d) == Verdict.FAIL
+                        && carryOver(part.precedingGrade(k), t, settings);
+                current.add(judged.size());
+                decided[judged.size()] = JudgedBlanks.code(d, carry);
+                judged.add(i);
             }
-            units.put(o.analyte(), o.unit());
-            if (o.value().isMissing()) {
-                missing.merge(o.analyte(), 1, Integer::sum);
-                continue;
-            }
-            if (threshold == null || !o.analyte().equals(thresholdAnalyte)
-                    || Double.compare(o.detectionLimit(), thresholdLimit) != 0) {
-                // The threshold depends only on the analyte and its limit, which change rarely from row to row.
-                thresholdAnalyte = o.analyte();
-                thresholdLimit = o.detectionLimit();
-                threshold = settings.thresholdFor(thresholdAnalyte, thresholdLimit);
-            }
-            BlankResult r = judge(o, settings, threshold.orElse(null));
-            results.add(r);
-            current.add(r);
+            offset += part.size();
         }
+        JudgedBlanks results = new JudgedBlanks(obs, judged.toArray(), thresholdFrom.toArray(), thresholds,
+                java.util.Arrays.copyOf(decided, judged.size()));
         List<BlankSummary> summaries = new ArrayList<>();
-        for (Map.Entry<String, List<BlankResult>> e : byAnalyte.entrySet()) {
-            summaries.add(summary(e.getKey(), units.get(e.getKey()), e.getValue(),
+        for (Map.Entry<String, IntArrayBuilder> e : byAnalyte.entrySet()) {
+            summaries.add(summary(e.getKey(), units.get(e.getKey()), results, e.getValue().toArray(),
                     missing.getOrDefault(e.getKey(), 0)));
         }
         return new BlankReport(results, summaries, settings);
     }
 
     static BlankResult judge(BlankObservation o, BlankSettings settings) {
-        return judge(o, settings, settings.thresholdFor(o.analyte(), o.detectionLimit()).orElse(null));
+        BlankThreshold t = settings.thresholdFor(o.analyte(), o.detectionLimit()).orElse(null);
+        int d = BlankVerdict.decide(o.value(), t);
+        boolean carry = BlankVerdict.verdictOf(d) == Verdict.FAIL && carryOver(o.precedingGrade(), t, settings);
+        return result(o, t, BlankVerdict.of(d, o.value(), t, o.unit()), carry);
     }
 
-    /** @param t the thresholds for the observation's analyte and limit, null when none can be set */
-    private static BlankResult judge(BlankObservation o, BlankSettings settings, BlankThreshold t) {
-        BlankVerdict v = BlankVerdict.judge(o.value(), t, o.unit());
+    /**
+     * Whether a failing blank follows a high-grade sample: {@code prev} at least highGradeMultiple × the failure
+     * level.
+     */
+    private static boolean carryOver(AssayValue prev, BlankThreshold t, BlankSettings settings) {
+        return t != null && !prev.isMissing() && prev.qualifier() != org.cupel.assay.Qualifier.BELOW_DETECTION
+                && LimitComparison.atLeast(prev.value(), settings.highGradeMultiple() * t.fail());
+    }
+
+    /**
+     * The result of observation {@code o} judged {@code v} under {@code t}, with its contamination ratio and its
+     * outcome (the reason written when read).
+     */
+    static BlankResult result(BlankObservation o, BlankThreshold t, BlankVerdict v, boolean carry) {
         AssayValue prev = o.precedingGrade();
         double ratio = Double.NaN;
         String ratioNote = "";
@@ -128,9 +176,6 @@ public final class BlankReview {
         } else {
             ratio = o.value().value() / prev.value();
         }
-        boolean carry = v.verdict() == Verdict.FAIL && t != null && !prev.isMissing()
-                && prev.qualifier() != org.cupel.assay.Qualifier.BELOW_DETECTION
-                && LimitComparison.atLeast(prev.value(), settings.highGradeMultiple() * t.fail());
         ControlOutcome outcome = ControlOutcome.described(o.row(), o.analyte(), v.verdict(), v.rule(),
                 () -> reason(o, v, carry), v.verdict() == Verdict.FAIL);
         return new BlankResult(o, t, v, ratio, ratioNote, carry, outcome);
@@ -149,16 +194,17 @@ public final class BlankReview {
         return reason;
     }
 
-    private static BlankSummary summary(String analyte, String unit, List<BlankResult> rs, int missing) {
+    private static BlankSummary summary(String analyte, String unit, JudgedBlanks results, int[] mine, int missing) {
         int[] counts = new int[Verdict.values().length];
         int carry = 0;
-        for (BlankResult r : rs) {
-            counts[r.verdict().verdict().ordinal()]++;
-            carry += r.carryOver() ? 1 : 0;
+        for (int i : mine) {
+            counts[results.verdict(i).ordinal()]++;
+            carry += results.carryOver(i) ? 1 : 0;
         }
-        return new BlankSummary(analyte, unit, rs.size(), counts[Verdict.PASS.ordinal()],
+        return new BlankSummary(analyte, unit, mine.length, counts[Verdict.PASS.ordinal()],
                 counts[Verdict.WARN.ordinal()], counts[Verdict.FAIL.ordinal()],
-                counts[Verdict.CANNOT_JUDGE.ordinal()], missing, carry, CarryOver.relation(analyte, rs));
+                counts[Verdict.CANNOT_JUDGE.ordinal()], missing, carry, CarryOver.relation(analyte, mine.length,
+                        k -> results.value(mine[k]), k -> results.precedingGrade(mine[k])));
     }
 
     private static Map<String, Double> methodLimits(AnalyteColumn col) {

@@ -18,28 +18,34 @@ import org.cupel.assay.Numbers;
  *   <li>no threshold (no detection limit and no absolute value): CANNOT_JUDGE.</li>
  * </ul>
  *
- * <p>A value class rather than a record so that the explanation is written when it is read (a
+ * <p>A value class rather than a record so that the rule and explanation are written when they are read (a
  * million-sample project has half a million blank results, and only those that do not pass reach a table);
- * equality, hash and JSON read it like the other fields.
+ * equality, hash and JSON read them like the verdict. The case that applied is a small number
+ * ({@link #decide}), which a column of blank results keeps instead of the verdict.
  */
 @JsonPropertyOrder({"verdict", "rule", "explanation"})
 public final class BlankVerdict {
-    /** Which case of the rules applied; decides the explanation. */
+    /** Which case of the rules applied; decides the verdict, the rule and the explanation. */
     private enum Case {
-        NO_THRESHOLD, DL_ABOVE_FAIL, BELOW_DETECTION, ABOVE_UPPER_FAIL, UPPER_BELOW_FAIL, FAIL, WARN, PASS
+        NO_THRESHOLD(Verdict.CANNOT_JUDGE), DL_ABOVE_FAIL(Verdict.CANNOT_JUDGE), BELOW_DETECTION(Verdict.PASS),
+        ABOVE_UPPER_FAIL(Verdict.FAIL), UPPER_BELOW_FAIL(Verdict.CANNOT_JUDGE), FAIL(Verdict.FAIL),
+        WARN(Verdict.WARN), PASS(Verdict.PASS);
+
+        private final Verdict verdict;
+
+        Case(Verdict verdict) {
+            this.verdict = verdict;
+        }
     }
 
-    private final Verdict verdict;
-    private final String rule;
+    private static final Case[] CASES = Case.values();
+
     private final Case kind;
     private final AssayValue value;
     private final BlankThreshold threshold;
     private final String unit;
 
-    private BlankVerdict(Verdict verdict, String rule, Case kind, AssayValue value, BlankThreshold threshold,
-                         String unit) {
-        this.verdict = verdict;
-        this.rule = rule;
+    private BlankVerdict(Case kind, AssayValue value, BlankThreshold threshold, String unit) {
         this.kind = kind;
         this.value = value;
         this.threshold = threshold;
@@ -47,46 +53,65 @@ public final class BlankVerdict {
     }
 
     public static BlankVerdict judge(AssayValue value, BlankThreshold t, String unit) {
+        return new BlankVerdict(CASES[decide(value, t)], value, t, unit);
+    }
+
+    /**
+     * Which case of the rules applies to {@code value} under {@code t}, as a small number for a column of
+     * results; {@link #of} makes the verdict from it again.
+     */
+    static int decide(AssayValue value, BlankThreshold t) {
         if (t == null) {
-            return new BlankVerdict(Verdict.CANNOT_JUDGE, "no blank threshold", Case.NO_THRESHOLD, value, null, unit);
+            return Case.NO_THRESHOLD.ordinal();
         }
         switch (value.qualifier()) {
             case BELOW_DETECTION:
-                if (t.aboveFail(value.value())) {
-                    return new BlankVerdict(Verdict.CANNOT_JUDGE, "DL above blank threshold", Case.DL_ABOVE_FAIL,
-                            value, t, unit);
-                }
-                return new BlankVerdict(Verdict.PASS, "blank ≤ " + t.failRule(), Case.BELOW_DETECTION, value, t, unit);
+                return (t.aboveFail(value.value()) ? Case.DL_ABOVE_FAIL : Case.BELOW_DETECTION).ordinal();
             case ABOVE_UPPER_LIMIT:
-                if (t.aboveFail(value.value())) {
-                    return new BlankVerdict(Verdict.FAIL, "blank > " + t.failRule(), Case.ABOVE_UPPER_FAIL, value, t,
-                            unit);
-                }
-                return new BlankVerdict(Verdict.CANNOT_JUDGE, "blank above upper limit", Case.UPPER_BELOW_FAIL, value,
-                        t, unit);
+                return (t.aboveFail(value.value()) ? Case.ABOVE_UPPER_FAIL : Case.UPPER_BELOW_FAIL).ordinal();
             case DETECTED:
                 if (t.aboveFail(value.value())) {
-                    return new BlankVerdict(Verdict.FAIL, "blank > " + t.failRule(), Case.FAIL, value, t, unit);
+                    return Case.FAIL.ordinal();
                 }
-                if (t.aboveWarn(value.value())) {
-                    return new BlankVerdict(Verdict.WARN, "blank > " + t.warnRule(), Case.WARN, value, t, unit);
-                }
-                return new BlankVerdict(Verdict.PASS, "blank ≤ " + t.warnRule(), Case.PASS, value, t, unit);
+                return (t.aboveWarn(value.value()) ? Case.WARN : Case.PASS).ordinal();
             default:
                 throw new IllegalArgumentException("a missing blank result cannot be judged; filter it first");
+        }
+    }
+
+    /** The verdict of case {@code decided} ({@link #decide}) on {@code value} under {@code t}. */
+    static BlankVerdict of(int decided, AssayValue value, BlankThreshold t, String unit) {
+        return new BlankVerdict(CASES[decided], value, t, unit);
+    }
+
+    /** The verdict of case {@code decided} ({@link #decide}). */
+    static Verdict verdictOf(int decided) {
+        return CASES[decided].verdict;
+    }
+
+    /** The rule of case {@code decided} ({@link #decide}) under {@code t}. */
+    static String ruleOf(int decided, BlankThreshold t) {
+        switch (CASES[decided]) {
+            case NO_THRESHOLD: return "no blank threshold";
+            case DL_ABOVE_FAIL: return "DL above blank threshold";
+            case BELOW_DETECTION: return "blank ≤ " + t.failRule();
+            case ABOVE_UPPER_FAIL: case FAIL: return "blank > " + t.failRule();
+            case UPPER_BELOW_FAIL: return "blank above upper limit";
+            case WARN: return "blank > " + t.warnRule();
+            default: return "blank ≤ " + t.warnRule();
         }
     }
 
     /** The judgement. */
     @JsonProperty
     public Verdict verdict() {
-        return verdict;
+        return kind.verdict;
     }
 
     /** The rule that decided it ("blank > 5×DL"). */
     @JsonProperty
     public String rule() {
-        return rule;
+        return ruleOf(kind.ordinal(), threshold);
     }
 
     /** Why, in words, without the sample ID. */
@@ -120,17 +145,17 @@ public final class BlankVerdict {
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof BlankVerdict b && verdict == b.verdict && rule.equals(b.rule)
+        return o instanceof BlankVerdict b && verdict() == b.verdict() && rule().equals(b.rule())
                 && explanation().equals(b.explanation());
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(verdict, rule, explanation());
+        return Objects.hash(verdict(), rule(), explanation());
     }
 
     @Override
     public String toString() {
-        return "BlankVerdict[verdict=" + verdict + ", rule=" + rule + ", explanation=" + explanation() + "]";
+        return "BlankVerdict[verdict=" + verdict() + ", rule=" + rule() + ", explanation=" + explanation() + "]";
     }
 }

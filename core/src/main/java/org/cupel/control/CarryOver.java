@@ -2,6 +2,7 @@ package org.cupel.control;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.IntFunction;
 import org.apache.commons.math3.distribution.TDistribution;
 import org.apache.commons.math3.stat.correlation.PearsonsCorrelation;
 import org.apache.commons.math3.stat.regression.SimpleRegression;
@@ -29,11 +30,21 @@ final class CarryOver {
 
     /** The relation over the blanks of one analyte that have a preceding grade. */
     public static CarryOverRelation relation(String analyte, List<BlankResult> results) {
+        return relation(analyte, results.size(), i -> results.get(i).observation().value(),
+                i -> results.get(i).observation().precedingGrade());
+    }
+
+    /**
+     * The relation over {@code n} blanks, the i-th blank's value {@code blanks(i)} and its preceding grade
+     * {@code preceding(i)}.
+     */
+    static CarryOverRelation relation(String analyte, int n, IntFunction<AssayValue> blanks,
+                                      IntFunction<AssayValue> preceding) {
         List<double[]> ranked = new ArrayList<>();
         List<double[]> detected = new ArrayList<>();
-        for (BlankResult r : results) {
-            AssayValue blank = r.observation().value();
-            AssayValue prev = r.observation().precedingGrade();
+        for (int i = 0; i < n; i++) {
+            AssayValue blank = blanks.apply(i);
+            AssayValue prev = preceding.apply(i);
             if (blank.isMissing() || prev.isMissing()) {
                 continue;
             }

@@ -5,7 +5,7 @@ import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.function.IntFunction;
+import java.util.function.IntConsumer;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
 
@@ -41,12 +41,15 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
     private static final Verdict[] VERDICTS = Verdict.values();
 
     public ReassayList {
-        entries = List.copyOf(entries);
+        entries = entries instanceof ReassayEntries ? entries : List.copyOf(entries);
         brackets = List.copyOf(brackets);
     }
 
     /** Distinct samples on the list (an entry is one sample and analyte). */
     public long sampleCount() {
+        if (entries instanceof ReassayEntries e) {
+            return e.sampleCount();
+        }
         return entries.stream().map(ReassayEntry::sampleId).distinct().count();
     }
 
@@ -55,71 +58,87 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
     }
 
     /** As {@link #build(SampleTable, List, ReassaySettings)}, with the table's batch sequence already built. */
-    public static ReassayList build(SampleTable table, BatchSequence seq, List<ControlOutcome> outcomes,
+    public static ReassayList build(SampleTable table, BatchSequence seq, List<ControlOutcome> given,
                                     ReassaySettings settings) {
+        ControlOutcomes outcomes = ControlOutcomes.of(given);
         List<String> analytes = BatchVerdicts.analyteNames(outcomes);
         Map<String, Integer> analyteIndex = new HashMap<>();
         analytes.forEach(a -> analyteIndex.put(a, analyteIndex.size()));
-        List<ControlOutcome> triggers = outcomes.stream().filter(ControlOutcome::triggersReassay)
-                .sorted(Comparator.comparingInt((ControlOutcome o) -> seq.batchOf(o.row()))
-                        .thenComparingInt(o -> seq.indexInBatch(o.row())).thenComparing(ControlOutcome::analyte)
-                        .thenComparing(ControlOutcome::rule))
-                .toList();
+        int[] triggers = triggers(outcomes, seq);
         // Worst verdict of each row per analyte, as ordinal + 1 (0: no outcome), for the analytes that
         // trigger a re-assay (no other is ever read).
         byte[][] status = new byte[analytes.size()][];
-        for (ControlOutcome o : triggers) {
-            int a = analyteIndex.get(o.analyte());
+        for (int i : triggers) {
+            int a = analyteIndex.get(outcomes.analyte(i));
             status[a] = status[a] == null ? new byte[table.size()] : status[a];
         }
-        for (ControlOutcome o : outcomes) {
-            byte[] st = status[analyteIndex.get(o.analyte())];
+        for (int i = 0; i < outcomes.size(); i++) {
+            byte[] st = status[analyteIndex.get(outcomes.analyte(i))];
             if (st != null) {
-                Verdict v = st[o.row()] == 0 ? o.verdict() : VERDICTS[st[o.row()] - 1].worst(o.verdict());
-                st[o.row()] = (byte) (v.ordinal() + 1);
+                int row = outcomes.row(i);
+                Verdict v = st[row] == 0 ? outcomes.verdict(i) : VERDICTS[st[row] - 1].worst(outcomes.verdict(i));
+                st[row] = (byte) (v.ordinal() + 1);
             }
         }
         long[] startOfBatch = new long[seq.size()];
         for (int b = 1; b < startOfBatch.length; b++) {
             startOfBatch[b] = startOfBatch[b - 1] + seq.batchSize(b - 1);
         }
-        // Entries keyed by place in the sequence, then analyte name: sorting the keys gives the list's order.
-        Map<Long, Builder> byKey = new HashMap<>();
+        // Each listed sample and analyte keyed by place in the sequence, then analyte: sorting the keys gives
+        // the list's order. One key, row and trigger per listing, in the order listed.
+        ReassayEntries.Listings listed = new ReassayEntries.Listings();
         List<ReassayBracket> brackets = new ArrayList<>();
-        for (ControlOutcome o : triggers) {
-            int a = analyteIndex.get(o.analyte());
-            brackets.add(bracket(table, seq, o, status[a], settings, row -> byKey.computeIfAbsent(
-                    (startOfBatch[seq.batchOf(row)] + seq.indexInBatch(row)) * analytes.size() + a,
-                    key -> new Builder(row, o.analyte()))));
+        String[] triggerIds = new String[triggers.length];
+        String[] whys = new String[triggers.length];
+        for (int t = 0; t < triggers.length; t++) {
+            int i = triggers[t];
+            int a = analyteIndex.get(outcomes.analyte(i));
+            int control = outcomes.row(i);
+            int trigger = t;
+            triggerIds[t] = table.id(control);
+            whys[t] = table.role(control).label() + " " + table.id(control) + " failed (" + outcomes.rule(i) + ")";
+            brackets.add(bracket(table, seq, outcomes, i, status[a], settings, row -> listed.add(
+                    (startOfBatch[seq.batchOf(row)] + seq.indexInBatch(row)) * analytes.size() + a, row, trigger)));
         }
-        long[] keys = byKey.keySet().stream().mapToLong(Long::longValue).sorted().toArray();
-        List<ReassayEntry> entries = new ArrayList<>(keys.length);
-        for (long key : keys) {
-            entries.add(byKey.get(key).build(table, seq));
-        }
-        return new ReassayList(entries, brackets, settings.scope(), settings.crmBracket(), settings.blankFollowing());
+        return new ReassayList(new ReassayEntries(table, analytes, listed, triggerIds, whys), brackets,
+                settings.scope(), settings.crmBracket(), settings.blankFollowing());
     }
 
-    private static ReassayBracket bracket(SampleTable table, BatchSequence seq, ControlOutcome o, byte[] status,
-                                          ReassaySettings settings, IntFunction<Builder> entry) {
-        int b = seq.batchOf(o.row());
-        Range r = range(table, seq, o.row(), status, settings);
+    /** The indices of the outcomes that trigger a re-assay, by batch, place in it, analyte and rule. */
+    private static int[] triggers(ControlOutcomes outcomes, BatchSequence seq) {
+        List<Integer> triggers = new ArrayList<>();
+        for (int i = 0; i < outcomes.size(); i++) {
+            if (outcomes.triggersReassay(i)) {
+                triggers.add(i);
+            }
+        }
+        triggers.sort(Comparator.comparingInt((Integer i) -> seq.batchOf(outcomes.row(i)))
+                .thenComparingInt(i -> seq.indexInBatch(outcomes.row(i))).thenComparing(i -> outcomes.analyte(i))
+                .thenComparing(i -> outcomes.rule(i)));
+        return triggers.stream().mapToInt(Integer::intValue).toArray();
+    }
+
+    /** The bracket of trigger {@code i}; {@code listed} receives the row of each sample it puts on the list. */
+    private static ReassayBracket bracket(SampleTable table, BatchSequence seq, ControlOutcomes outcomes, int i,
+                                          byte[] status, ReassaySettings settings, IntConsumer listed) {
+        int control = outcomes.row(i);
+        int b = seq.batchOf(control);
+        Range r = range(table, seq, control, status, settings);
         int n = 0;
         int to = r.to();
-        String why = table.role(o.row()).label() + " " + table.id(o.row()) + " failed (" + o.rule() + ")";
         for (int k = r.from(); k <= r.to() && n < r.cap(); k++) {
             int row = seq.row(b, k);
             if (isReassayed(table.role(row))) {
                 n++;
                 to = k;
-                entry.apply(row).add(table.id(o.row()), why);
+                listed.accept(row);
             }
         }
         to = n == r.cap() ? to : r.to();
-        int fromPosition = r.from() <= to ? table.position(seq.row(b, r.from())) : table.position(o.row());
-        int toPosition = r.from() <= to ? table.position(seq.row(b, to)) : table.position(o.row());
-        return new ReassayBracket(table.id(o.row()), table.role(o.row()).label(), seq.batch(b).id(),
-                o.analyte(), o.rule(), fromPosition, toPosition, n, r.note());
+        int fromPosition = r.from() <= to ? table.position(seq.row(b, r.from())) : table.position(control);
+        int toPosition = r.from() <= to ? table.position(seq.row(b, to)) : table.position(control);
+        return new ReassayBracket(table.id(control), table.role(control).label(), seq.batch(b).id(),
+                outcomes.analyte(i), outcomes.rule(i), fromPosition, toPosition, n, r.note());
     }
 
     /** Indices in the batch a failed control reaches, at most {@code cap} listed samples, and how it was bounded. */
@@ -198,29 +217,5 @@ public record ReassayList(List<ReassayEntry> entries, List<ReassayBracket> brack
     static boolean isReassayed(QcRole role) {
         return role == QcRole.ROUTINE || role == QcRole.FIELD_DUPLICATE || role == QcRole.COARSE_DUPLICATE
                 || role == QcRole.PULP_DUPLICATE;
-    }
-
-    private static final class Builder {
-        final int row;
-        final String analyte;
-        final List<String> triggers = new ArrayList<>();
-        final List<String> reasons = new ArrayList<>();
-
-        Builder(int row, String analyte) {
-            this.row = row;
-            this.analyte = analyte;
-        }
-
-        void add(String trigger, String reason) {
-            if (!triggers.contains(trigger)) {
-                triggers.add(trigger);
-                reasons.add(reason);
-            }
-        }
-
-        ReassayEntry build(SampleTable table, BatchSequence seq) {
-            return new ReassayEntry(table.id(row), seq.batch(seq.batchOf(row)).id(), table.position(row), analyte, triggers,
-                    String.join("; ", reasons));
-        }
     }
 }

@@ -5,10 +5,7 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -70,8 +67,8 @@ class LoaderEquivalenceProperties {
             long seed = SeededTries.trySeed(GOLDEN_SEED, i);
             Path folder = dir.resolve("p" + i);
             write(folder, project(new Random(seed)));
-            digests.append("seed ").append(seed).append(' ').append(sha256(dump(ProjectLoader.inspect(folder))))
-                    .append('\n');
+            digests.append("seed ").append(seed).append(' ')
+                    .append(GoldenText.sha256(dump(ProjectLoader.inspect(folder)))).append('\n');
         }
         GoldenText.assertMatches("ingest-messy-projects.txt", digests.toString());
     }
@@ -289,14 +286,5 @@ class LoaderEquivalenceProperties {
             }
         }
         return sb.toString();
-    }
-
-    private static String sha256(String text) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256")
-                    .digest(text.getBytes(StandardCharsets.UTF_8)));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException(e);
-        }
     }
 }

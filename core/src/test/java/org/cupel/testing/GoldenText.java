@@ -38,6 +38,16 @@ public final class GoldenText {
         return Path.of(System.getProperty("cupel.testdata", "../testdata"), "golden", name);
     }
 
+    /** The SHA-256 digest of {@code text} in UTF-8, in hex: a line of a golden text of digests. */
+    public static String sha256(String text) {
+        try {
+            return java.util.HexFormat.of().formatHex(java.security.MessageDigest.getInstance("SHA-256")
+                    .digest(text.getBytes(StandardCharsets.UTF_8)));
+        } catch (java.security.NoSuchAlgorithmException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
     /** Fails, showing the first differences, unless {@code actual} equals the golden text {@code name}. */
     public static void assertMatches(String name, String actual) {
         Path file = file(name);

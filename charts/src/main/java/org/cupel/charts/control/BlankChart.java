@@ -31,8 +31,13 @@ public final class BlankChart {
     private BlankChart() {
     }
 
-    /** @param results the blanks of one analyte, in batch and run order (as {@code BlankReport} lists them) */
-    public static ChartFigure sequence(List<BlankResult> results) {
+    /**
+     * @param given the blanks of one analyte, in batch and run order (as {@code BlankReport.results(analyte)} lists
+     *     them)
+     */
+    public static ChartFigure sequence(List<BlankResult> given) {
+        // A review's results are made when read: read each once.
+        List<BlankResult> results = List.copyOf(given);
         String analyte = results.isEmpty() ? "" : results.get(0).observation().analyte();
         String unit = results.isEmpty() ? "" : results.get(0).observation().unit();
         XYChart chart = new XYChartBuilder().width(ChartStyle.WIDTH).height(ChartStyle.HEIGHT)

@@ -25,7 +25,9 @@ public final class CarryOverChart {
     private CarryOverChart() {
     }
 
-    public static ChartFigure scatter(List<BlankResult> results, CarryOverRelation relation) {
+    public static ChartFigure scatter(List<BlankResult> given, CarryOverRelation relation) {
+        // A review's results are made when read: read each once.
+        List<BlankResult> results = List.copyOf(given);
         String analyte = results.isEmpty() ? relation.analyte() : results.get(0).observation().analyte();
         String unit = results.isEmpty() ? "" : results.get(0).observation().unit();
         XYChart chart = new XYChartBuilder().width(ChartStyle.WIDTH).height(ChartStyle.HEIGHT)

@@ -35,7 +35,8 @@ public final class CrmControlChart {
     /** The chart, its small print (n, certificate limits, thinning) in a strip under it. */
     public static ChartFigure of(SeriesReview s) {
         CertifiedLimits lim = s.limits();
-        List<CrmResult> rs = s.results();
+        // A review's results are made when read: read each once.
+        List<CrmResult> rs = List.copyOf(s.results());
         int n = rs.size();
         String unit = s.analyte().unit().symbol();
         XYChart c = new XYChartBuilder().width(ChartStyle.WIDTH).height(ChartStyle.HEIGHT)

@@ -13,7 +13,6 @@ import org.cupel.control.BlankResult;
 import org.cupel.control.BlankSettings;
 import org.cupel.control.BlankSummary;
 import org.cupel.control.CarryOverRelation;
-import org.cupel.control.Verdict;
 import org.cupel.report.Cell;
 import org.cupel.report.ReportBlock;
 import org.cupel.report.ReportColumn;
@@ -56,8 +55,7 @@ public final class BlankSection {
         blocks.add(new ReportBlock.Table(summaryTable(report)));
         blocks.add(new ReportBlock.Table(findingsTable(report)));
         for (BlankSummary sum : report.summaries()) {
-            List<BlankResult> rs = report.results().stream()
-                    .filter(r -> r.observation().analyte().equals(sum.analyte())).toList();
+            List<BlankResult> rs = report.results(sum.analyte());
             if (rs.isEmpty()) {
                 continue;
             }
@@ -120,10 +118,7 @@ public final class BlankSection {
 
     static ReportTable findingsTable(BlankReport report) {
         List<List<Cell>> rows = new ArrayList<>();
-        for (BlankResult r : report.results()) {
-            if (r.verdict().verdict() == Verdict.PASS) {
-                continue;
-            }
+        for (BlankResult r : report.notPassing()) {
             var o = r.observation();
             boolean perDl = o.detectionLimit() > 0 && o.value().isDetected();
             rows.add(List.of(Cell.text(o.sampleId()), Cell.text(o.batch()), Cell.count(o.position()),

@@ -202,12 +202,10 @@ public final class CrmSection {
     private static ReportTable swaps(CrmReview r) {
         List<List<Cell>> rows = new ArrayList<>();
         for (SeriesReview s : r.series()) {
-            for (CrmResult x : s.results()) {
-                if (x.isSwap()) {
-                    rows.add(List.of(Cell.text(x.point().sampleId()), Cell.text(x.point().batchId()), Cell.text(s.crm()),
-                            Cell.text(s.analyte().name()), Cell.assay(x.point().value()),
-                            Cell.text(s.analyte().unit().symbol()), Cell.text(x.swapWith()), Cell.text(x.reason())));
-                }
+            for (CrmResult x : s.probableSwaps()) {
+                rows.add(List.of(Cell.text(x.point().sampleId()), Cell.text(x.point().batchId()), Cell.text(s.crm()),
+                        Cell.text(s.analyte().name()), Cell.assay(x.point().value()),
+                        Cell.text(s.analyte().unit().symbol()), Cell.text(x.swapWith()), Cell.text(x.reason())));
             }
         }
         return ReportTable.typed("crm-swaps", "Probable swapped or mislabelled CRMs",

@@ -1,10 +1,12 @@
 package org.cupel.control.crm;
 
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.IntUnaryOperator;
 import org.cupel.assay.LimitComparison;
 import org.cupel.control.Verdict;
 import org.cupel.project.CrmCatalog;
@@ -18,15 +20,23 @@ import org.cupel.project.CrmCertificate;
 final class AnalyteJudgement {
     /** The rules of a judged result that violated none. */
     static final List<String> NO_RULE = List.of("no rule violated");
-    private static final List<String> SWAP = List.of(CrmReview.SWAP_RULE);
     private static final CrmRule[] RULES = CrmRule.values();
 
     private final List<CrmSeries> series;
     private final CrmSettings settings;
     private final Map<CrmRule, RuleAction> actions;
+    /**
+     * Per series, read from its points once: the value, batch rank, position, row and batch date of every
+     * result (the merge and the rules read them many times; the table's columns are a cache miss a read).
+     */
+    private final double[][] number;
+    private final int[][] batchOrder;
+    private final int[][] position;
+    private final int[][] row;
+    private final LocalDate[][] date;
     /** Per series: z of every result. */
     private final double[][] z;
-    /** Per series: swap label of every result, empty when none. */
+    /** Per series: swap label of every result, empty when none; {@code null} for a series without a swap. */
     private final String[][] swaps;
     /** Per series: indices of the judged (non-swap) results. */
     private final int[][] judged;
@@ -52,6 +62,11 @@ final class AnalyteJudgement {
         this.settings = settings;
         this.actions = settings.actions();
         int n = series.size();
+        this.number = new double[n][];
+        this.batchOrder = new int[n][];
+        this.position = new int[n][];
+        this.row = new int[n][];
+        this.date = new LocalDate[n][];
         this.z = new double[n][];
         this.swaps = new String[n][];
         this.judged = new int[n][];
@@ -66,13 +81,10 @@ final class AnalyteJudgement {
         j.applyRulesWithinSeries();
         j.applyRangeRuleWithinBatches();
         List<SeriesReview> out = new ArrayList<>();
-        List<List<CrmResult>> results = new ArrayList<>();
         for (int s = 0; s < series.size(); s++) {
-            SeriesReview r = j.review(s);
-            out.add(r);
-            results.add(r.results());
+            out.add(j.review(s));
         }
-        return new Judged(out, j.labDrift(results));
+        return new Judged(out, j.labDrift());
     }
 
     private void scoreAndFindSwaps(CrmCatalog catalog) {
@@ -81,21 +93,29 @@ final class AnalyteJudgement {
             CertifiedLimits lim = CertifiedLimits.of(cs.certificate());
             List<CrmCertificate> others = catalog.forAnalyte(cs.analyte().name()).stream()
                     .map(c -> c.unit() == cs.certificate().unit() ? c : c.in(cs.certificate().unit())).toList();
-            int n = cs.points().size();
+            PointList points = cs.pointList();
+            int n = points.size();
             double[] zs = new double[n];
-            String[] sw = new String[n];
+            String[] sw = null;
             int[] keep = new int[n];
             int kept = 0;
+            readPoints(s, points);
             for (int i = 0; i < n; i++) {
-                CrmPoint p = cs.points().get(i);
-                zs[i] = lim.z(p.value().value());
+                zs[i] = lim.z(number[s][i]);
                 Optional<String> m = LimitComparison.beyond(zs[i], 3)
-                        ? SwapCheck.match(p.value(), cs.certificate(), others, settings.swapWithinSd(),
+                        ? SwapCheck.match(points.value(i), cs.certificate(), others, settings.swapWithinSd(),
                         settings.blankLevelMultiple())
                         : Optional.empty();
-                sw[i] = m.orElse("");
-                if (m.isEmpty()) {
+                if (m.isPresent()) {
+                    sw = sw == null ? new String[n] : sw;
+                    sw[i] = m.get();
+                } else {
                     keep[kept++] = i;
+                }
+            }
+            if (sw != null) {
+                for (int i = 0; i < n; i++) {
+                    sw[i] = sw[i] == null ? "" : sw[i];
                 }
             }
             z[s] = zs;
@@ -104,6 +124,22 @@ final class AnalyteJudgement {
             hits[s] = new int[n];
             outlier[s] = isolatedOutliers(zs, judged[s]);
             findings.add(new ArrayList<>());
+        }
+    }
+
+    private void readPoints(int s, PointList points) {
+        int n = points.size();
+        number[s] = new double[n];
+        batchOrder[s] = new int[n];
+        position[s] = new int[n];
+        row[s] = new int[n];
+        date[s] = new LocalDate[n];
+        for (int i = 0; i < n; i++) {
+            number[s][i] = points.number(i);
+            batchOrder[s][i] = points.batchOrder(i);
+            position[s][i] = points.position(i);
+            row[s][i] = points.row(i);
+            date[s][i] = points.date(i);
         }
     }
 
@@ -147,15 +183,17 @@ final class AnalyteJudgement {
     }
 
     private boolean before(int s, int i, int t, int j) {
-        CrmPoint a = series.get(s).points().get(i);
-        CrmPoint b = series.get(t).points().get(j);
-        if (a.batchOrder() != b.batchOrder()) {
-            return a.batchOrder() < b.batchOrder();
+        if (batchOrder[s][i] != batchOrder[t][j]) {
+            return batchOrder[s][i] < batchOrder[t][j];
         }
-        if (a.position() != b.position()) {
-            return a.position() < b.position();
+        if (position[s][i] != position[t][j]) {
+            return position[s][i] < position[t][j];
         }
-        return a.row() < b.row();
+        return row[s][i] < row[t][j];
+    }
+
+    private PointList points(int s) {
+        return series.get(s).pointList();
     }
 
     private void applyRulesWithinSeries() {
@@ -165,7 +203,7 @@ final class AnalyteJudgement {
             int[] batch = new int[idx.length];
             for (int k = 0; k < idx.length; k++) {
                 zj[k] = z[s][idx[k]];
-                batch[k] = series.get(s).points().get(idx[k]).batchOrder();
+                batch[k] = batchOrder[s][idx[k]];
             }
             for (CrmRule rule : RULES) {
                 if (rule == CrmRule.W_R_4S || actions.get(rule) == RuleAction.OFF) {
@@ -191,7 +229,7 @@ final class AnalyteJudgement {
         int[] batch = new int[mergedSeries.length];
         for (int k = 0; k < zs.length; k++) {
             zs[k] = z[mergedSeries[k]][mergedIndex[k]];
-            batch[k] = series.get(mergedSeries[k]).points().get(mergedIndex[k]).batchOrder();
+            batch[k] = batchOrder[mergedSeries[k]][mergedIndex[k]];
         }
         for (RuleViolation v : RunRules.evaluate(CrmRule.W_R_4S, zs, batch)) {
             int[] seriesOf = v.involved().stream().mapToInt(k -> mergedSeries[k]).toArray();
@@ -205,40 +243,39 @@ final class AnalyteJudgement {
         List<String> ids = new ArrayList<>();
         for (int k = 0; k < involvedPoints.length; k++) {
             int sk = involvedSeries.length == 1 ? involvedSeries[0] : involvedSeries[k];
-            ids.add(series.get(sk).points().get(involvedPoints[k]).sampleId());
+            ids.add(points(sk).sampleId(involvedPoints[k]));
         }
-        CrmPoint p = series.get(s).points().get(signal);
+        PointList p = points(s);
         findings.get(s).add(new Found(signal, new RuleFinding(rule.id(), rule.description(),
                 rule.source().citation(), actions.get(rule), series.get(s).crm(), series.get(s).analyte().name(),
-                p.sampleId(), p.batchId(), ids)));
+                p.sampleId(signal), p.batchId(signal), ids)));
     }
 
+    /**
+     * The review of series {@code s}: its results as columns ({@link CrmResults#judged}), with the verdict and
+     * re-assay flag of each from the rules it completes.
+     */
     private SeriesReview review(int s) {
         CrmSeries cs = series.get(s);
+        PointList points = cs.pointList();
         CertifiedLimits lim = CertifiedLimits.of(cs.certificate());
-        ResultWording wording = ResultWording.of(cs, settings);
-        int n = cs.points().size();
-        List<CrmResult> results = new ArrayList<>(n);
-        List<CrmResult> judgedResults = new ArrayList<>(judged[s].length);
+        int n = points.size();
+        double[] runningMean = new double[n];
+        byte[] codes = new byte[n];
         double[] values = new double[judged[s].length];
         double sum = 0;
         int count = 0;
         for (int i = 0; i < n; i++) {
-            CrmPoint p = cs.points().get(i);
-            double zi = z[s][i];
-            String swap = swaps[s][i];
-            CrmResult r;
-            if (!swap.isEmpty()) {
-                r = new CrmResult(p, zi, ZBand.of(zi), count == 0 ? Double.NaN : sum / count, Verdict.WARN, SWAP,
-                        false, swap, wording);
+            if (swaps[s] != null && !swaps[s][i].isEmpty()) {
+                runningMean[i] = count == 0 ? Double.NaN : sum / count;
+                codes[i] = CrmResults.code(Verdict.WARN, false);
             } else {
-                values[count] = p.value().value();
-                sum += p.value().value();
+                values[count] = number[s][i];
+                sum += values[count];
                 count++;
-                r = judgedResult(p, zi, sum / count, hits[s][i], wording);
-                judgedResults.add(r);
+                runningMean[i] = sum / count;
+                codes[i] = code(hits[s][i]);
             }
-            results.add(r);
         }
         BiasEstimate bias = BiasEstimate.of(values, lim.certified(), settings.confidence());
         ProjectLimits pl = ProjectLimits.of(values, settings.projectLimitsMinN());
@@ -249,47 +286,71 @@ final class AnalyteJudgement {
         for (int k = 0; k < judgedOutlier.length; k++) {
             judgedOutlier[k] = outlier[s][judged[s][k]];
         }
+        CrmResults results = CrmResults.judged(points, z[s], runningMean, hits[s], codes, swaps[s],
+                ResultWording.of(cs, settings));
+        int[] mine = judged[s];
         return new SeriesReview(cs.analyte(), cs.certificate(), lim, pl, results, bias,
-                DriftAnalysis.of(judgedResults, judgedOutlier, settings), found.stream().map(Found::finding).toList());
+                DriftAnalysis.of(picked(k -> s, k -> mine[k], mine.length), judgedOutlier, settings),
+                found.stream().map(Found::finding).toList());
     }
 
     /**
-     * The verdict from the rules the result completes, listed in the order they were found: the
-     * within-series rules in {@link CrmRule} order, then R₄s.
+     * The verdict and re-assay flag ({@link CrmResults#code}) of a judged result that completed the rules
+     * {@code ruleBits}.
      */
-    private CrmResult judgedResult(CrmPoint p, double zi, double runningMean, int ruleBits, ResultWording wording) {
-        if (ruleBits == 0) {
-            return new CrmResult(p, zi, ZBand.of(zi), runningMean, Verdict.PASS, NO_RULE, false, "", wording);
-        }
+    private byte code(int ruleBits) {
         Verdict v = Verdict.PASS;
         boolean reassay = false;
-        List<String> ids = new ArrayList<>();
         for (CrmRule r : RULES) {
-            if (r != CrmRule.W_R_4S && (ruleBits & 1 << r.ordinal()) != 0) {
-                ids.add(r.id());
+            if ((ruleBits & 1 << r.ordinal()) != 0) {
                 v = v.worst(actions.get(r).verdict());
                 reassay |= actions.get(r) == RuleAction.FAIL;
             }
         }
-        if ((ruleBits & 1 << CrmRule.W_R_4S.ordinal()) != 0) {
-            ids.add(CrmRule.W_R_4S.id());
-            v = v.worst(actions.get(CrmRule.W_R_4S).verdict());
-            reassay |= actions.get(CrmRule.W_R_4S) == RuleAction.FAIL;
-        }
-        return new CrmResult(p, zi, ZBand.of(zi), runningMean, v, ids, reassay, "", wording);
+        return CrmResults.code(v, reassay);
+    }
+
+    /** The judged results of series {@code seriesOf(k)}, index {@code indexOf(k)}, for {@code k < n}, for the drift. */
+    private DriftAnalysis.Results picked(IntUnaryOperator seriesOf,
+                                         IntUnaryOperator indexOf, int n) {
+        return new DriftAnalysis.Results() {
+            @Override
+            public int size() {
+                return n;
+            }
+
+            @Override
+            public double z(int k) {
+                return z[seriesOf.applyAsInt(k)][indexOf.applyAsInt(k)];
+            }
+
+            @Override
+            public LocalDate date(int k) {
+                return date[seriesOf.applyAsInt(k)][indexOf.applyAsInt(k)];
+            }
+
+            @Override
+            public String sampleId(int k) {
+                return points(seriesOf.applyAsInt(k)).sampleId(indexOf.applyAsInt(k));
+            }
+
+            @Override
+            public String batchId(int k) {
+                return points(seriesOf.applyAsInt(k)).batchId(indexOf.applyAsInt(k));
+            }
+        };
     }
 
     /**
      * Drift of every judged result of the analyte, all CRMs together, in time order, leaving out the results that
      * are isolated outliers in their own CRM's series.
      */
-    private SeriesDrift labDrift(List<List<CrmResult>> results) {
-        List<CrmResult> all = new ArrayList<>(mergedSeries.length);
+    private SeriesDrift labDrift() {
         boolean[] isolated = new boolean[mergedSeries.length];
         for (int k = 0; k < mergedSeries.length; k++) {
-            all.add(results.get(mergedSeries[k]).get(mergedIndex[k]));
             isolated[k] = outlier[mergedSeries[k]][mergedIndex[k]];
         }
-        return DriftAnalysis.of(all, isolated, settings);
+        return DriftAnalysis.of(picked(k -> mergedSeries[k], k -> mergedIndex[k], mergedSeries.length), isolated,
+                settings);
     }
 }

@@ -10,6 +10,7 @@ import java.util.Map;
 import org.cupel.assay.AnalyteColumn;
 import org.cupel.assay.AssayValue;
 import org.cupel.assay.Batch;
+import org.cupel.assay.IntArrayBuilder;
 import org.cupel.assay.MissingReason;
 import org.cupel.assay.QcRole;
 import org.cupel.assay.SampleTable;
@@ -56,8 +57,9 @@ public record CrmData(List<CrmSeries> series, List<CrmException> exceptions) {
                 slotCols.add(cols.get(a));
             }
         }
-        List<List<CrmPoint>> points = new ArrayList<>();
-        certs.forEach(c -> points.add(new ArrayList<>()));
+        // Each series keeps only its rows: the points are read from the table and column when asked for.
+        List<IntArrayBuilder> points = new ArrayList<>();
+        certs.forEach(c -> points.add(new IntArrayBuilder()));
         int[] crmRows = t.rowsWithRole(QcRole.CRM);
         int[] batchOrder = batchOrder(t.batches());
         int[] orderOfRow = new int[t.size()];
@@ -97,16 +99,16 @@ public record CrmData(List<CrmSeries> series, List<CrmException> exceptions) {
                             "no CRM result", "no CRM result (" + v.display() + "): the batch has no control from "
                             + "this CRM")));
                 } else {
-                    points.get(slot[c][a]).add(new CrmPoint(row, t.id(row), b.id(), orderOfRow[row], b.reported(),
-                            t.position(row), v));
+                    points.get(slot[c][a]).add(row);
                 }
             }
         }
         exceptions.sort(Comparator.comparingLong(Keyed::key));
         List<CrmSeries> series = new ArrayList<>();
         for (int k = 0; k < certs.size(); k++) {
-            if (!points.get(k).isEmpty()) {
-                series.add(new CrmSeries(slotCols.get(k).analyte(), certs.get(k), points.get(k)));
+            if (points.get(k).size() > 0) {
+                series.add(new CrmSeries(slotCols.get(k).analyte(), certs.get(k),
+                        PointList.of(t, slotCols.get(k), points.get(k).toArray(), batchOrder)));
             }
         }
         return new CrmData(series, exceptions.stream().map(Keyed::exception).toList());

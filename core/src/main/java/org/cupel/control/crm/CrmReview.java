@@ -1,11 +1,14 @@
 package org.cupel.control.crm;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
 import org.cupel.control.ControlOutcome;
+import org.cupel.control.ControlOutcomes;
 import org.cupel.control.Verdict;
 import org.cupel.project.CrmCatalog;
 import org.cupel.project.Project;
@@ -61,19 +64,87 @@ public record CrmReview(CrmSettings settings, List<SeriesReview> series, List<An
         return new CrmReview(settings, reviews, analytes, data.exceptions());
     }
 
-    /** Every judged CRM result and every exception, in the common form batch verdicts consume. */
+    /**
+     * Every judged CRM result and every exception, in the common form batch verdicts consume: read from the
+     * series' results by index, an outcome made when read.
+     */
     public List<ControlOutcome> outcomes() {
-        List<ControlOutcome> out = new ArrayList<>(series.stream().mapToInt(SeriesReview::n).sum()
-                + exceptions.size());
-        for (SeriesReview s : series) {
-            for (CrmResult r : s.results()) {
-                out.add(r.outcome(s.analyte().name()));
+        return new Outcomes(series, exceptions);
+    }
+
+    /** The outcomes of every series' results, series after series, then of the exceptions. */
+    private static final class Outcomes extends ControlOutcomes {
+        private final List<SeriesReview> series;
+        private final List<CrmException> exceptions;
+        /** Series {@code s} holds outcomes {@code start[s] .. start[s + 1]}; the exceptions follow. */
+        private final int[] start;
+
+        Outcomes(List<SeriesReview> series, List<CrmException> exceptions) {
+            this.series = series;
+            this.exceptions = exceptions;
+            this.start = new int[series.size() + 1];
+            for (int s = 0; s < series.size(); s++) {
+                start[s + 1] = start[s] + series.get(s).n();
             }
         }
-        for (CrmException x : exceptions) {
-            out.add(new ControlOutcome(x.row(), x.analyte(), Verdict.CANNOT_JUDGE, x.rule(), x.problem(), false));
+
+        /** The series of outcome {@code i}, or {@code series.size()} for an exception. */
+        private int seriesOf(int i) {
+            Objects.checkIndex(i, size());
+            int s = Arrays.binarySearch(start, i);
+            if (s < 0) {
+                return -s - 2;
+            }
+            while (s < series.size() && start[s + 1] == i) {
+                s++; // a series without results starts where the next begins
+            }
+            return s;
         }
-        return out;
+
+        private CrmResults results(int s) {
+            return series.get(s).resultList();
+        }
+
+        @Override
+        public int size() {
+            return start[series.size()] + exceptions.size();
+        }
+
+        @Override
+        public int row(int i) {
+            int s = seriesOf(i);
+            return s < series.size() ? results(s).row(i - start[s]) : exceptions.get(i - start[s]).row();
+        }
+
+        @Override
+        public String analyte(int i) {
+            int s = seriesOf(i);
+            return s < series.size() ? series.get(s).analyte().name() : exceptions.get(i - start[s]).analyte();
+        }
+
+        @Override
+        public Verdict verdict(int i) {
+            int s = seriesOf(i);
+            return s < series.size() ? results(s).verdict(i - start[s]) : Verdict.CANNOT_JUDGE;
+        }
+
+        @Override
+        public String rule(int i) {
+            int s = seriesOf(i);
+            return s < series.size() ? results(s).rule(i - start[s]) : exceptions.get(i - start[s]).rule();
+        }
+
+        @Override
+        public String reason(int i) {
+            int s = seriesOf(i);
+            return s < series.size() ? results(s).get(i - start[s]).reason() : exceptions.get(i - start[s]).problem();
+        }
+
+        @Override
+        public boolean triggersReassay(int i) {
+            int s = seriesOf(i);
+            return s < series.size() && results(s).triggersReassay(i - start[s]);
+        }
     }
 
     public Optional<SeriesReview> series(String crm, String analyte) {

@@ -14,30 +14,45 @@ final class DriftAnalysis {
     private DriftAnalysis() {
     }
 
-    /** @param outlier for each judged result, whether it is an isolated outlier ({@link IsolatedOutliers}) */
-    static SeriesDrift of(List<CrmResult> judged, boolean[] outlier, CrmSettings s) {
-        List<CrmResult> used = new ArrayList<>(judged.size());
-        List<DriftOutlier> outliers = new ArrayList<>();
-        for (int i = 0; i < judged.size(); i++) {
-            CrmResult r = judged.get(i);
-            if (outlier[i]) {
-                outliers.add(new DriftOutlier(i, r.point().sampleId(), r.point().batchId(), r.z()));
-            } else {
-                used.add(r);
-            }
-        }
-        return of(used, outliers, s);
+    /** The judged results a drift analysis reads, in time order. */
+    interface Results {
+        int size();
+
+        double z(int k);
+
+        /** The batch date, {@code null} when unknown. */
+        LocalDate date(int k);
+
+        String sampleId(int k);
+
+        String batchId(int k);
     }
 
-    private static SeriesDrift of(List<CrmResult> judged, List<DriftOutlier> outliers, CrmSettings s) {
-        int n = judged.size();
+    /** @param outlier for each judged result, whether it is an isolated outlier ({@link IsolatedOutliers}) */
+    static SeriesDrift of(Results judged, boolean[] outlier, CrmSettings s) {
+        int[] used = new int[judged.size()];
+        int n = 0;
+        List<DriftOutlier> outliers = new ArrayList<>();
+        for (int i = 0; i < judged.size(); i++) {
+            if (outlier[i]) {
+                outliers.add(new DriftOutlier(i, judged.sampleId(i), judged.batchId(i), judged.z(i)));
+            } else {
+                used[n++] = i;
+            }
+        }
+        return of(judged, java.util.Arrays.copyOf(used, n), outliers, s);
+    }
+
+    /** @param used the indices of the results the analysis runs over (the isolated outliers left out) */
+    private static SeriesDrift of(Results judged, int[] used, List<DriftOutlier> outliers, CrmSettings s) {
+        int n = used.length;
         double[] z = new double[n];
         double[] t = new double[n];
         long[] day = new long[n];
         long origin = Long.MAX_VALUE;
         boolean dated = n > 0;
         for (int i = 0; i < n; i++) {
-            LocalDate d = judged.get(i).point().date();
+            LocalDate d = judged.date(used[i]);
             if (d == null) {
                 dated = false;
             } else {
@@ -46,7 +61,7 @@ final class DriftAnalysis {
             }
         }
         for (int i = 0; i < n; i++) {
-            z[i] = judged.get(i).z();
+            z[i] = judged.z(used[i]);
             t[i] = dated ? day[i] - origin : i + 1;
         }
         String axis = dated ? "days since " + LocalDate.ofEpochDay(origin) : "sequence number (some batches undated)";
@@ -63,20 +78,20 @@ final class DriftAnalysis {
                     Numbers.significant(trend.slopeHigh(), 3), trend.pText(), n, left));
         }
         if (ewma.firstSignal() >= 0) {
-            CrmResult r = judged.get(ewma.firstSignal());
+            int r = used[ewma.firstSignal()];
             findings.add(String.format(Locale.ROOT, "EWMA (λ = %s, L = %s) outside its limits from %s (batch %s, "
                             + "result %d of %d), %d results outside in all", Numbers.compact(s.ewmaLambda()),
-                    Numbers.compact(s.ewmaWidth()), r.point().sampleId(), r.point().batchId(),
+                    Numbers.compact(s.ewmaWidth()), judged.sampleId(r), judged.batchId(r),
                     SeriesDrift.judgedIndex(ewma.firstSignal(), outliers) + 1, n + outliers.size(),
                     ewma.signals().size()));
         }
         if (cusum.firstSignal() >= 0) {
             int i = cusum.firstSignal();
-            CrmResult r = judged.get(i);
+            int r = used[i];
             String side = cusum.upper().get(i) > s.cusumH() ? "results read high" : "results read low";
             findings.add(String.format(Locale.ROOT, "CUSUM (k = %s, h = %s) above h from %s (batch %s, result %d of "
-                            + "%d): %s", Numbers.compact(s.cusumK()), Numbers.compact(s.cusumH()), r.point().sampleId(),
-                    r.point().batchId(), SeriesDrift.judgedIndex(i, outliers) + 1, n + outliers.size(), side));
+                            + "%d): %s", Numbers.compact(s.cusumK()), Numbers.compact(s.cusumH()), judged.sampleId(r),
+                    judged.batchId(r), SeriesDrift.judgedIndex(i, outliers) + 1, n + outliers.size(), side));
         }
         return new SeriesDrift(axis, trend, ewma, cusum, !findings.isEmpty(), findings, outliers);
     }

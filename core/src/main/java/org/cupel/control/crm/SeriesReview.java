@@ -1,6 +1,7 @@
 package org.cupel.control.crm;
 
 import java.util.List;
+import java.util.stream.IntStream;
 import org.cupel.assay.Analyte;
 import org.cupel.control.Verdict;
 import org.cupel.project.CrmCertificate;
@@ -12,7 +13,7 @@ import org.cupel.project.CrmCertificate;
  * @param certificate the certificate in the analyte's unit
  * @param limits certified limits
  * @param projectLimits limits from the project's own results
- * @param results every numeric result, in series order
+ * @param results every numeric result, in series order (those of a review are kept as columns and made when read)
  * @param bias bias of the judged results (swaps left out)
  * @param drift trend, EWMA and CUSUM of the judged results
  * @param findings rule violations of this series
@@ -21,7 +22,7 @@ public record SeriesReview(Analyte analyte, CrmCertificate certificate, Certifie
                            ProjectLimits projectLimits, List<CrmResult> results, BiasEstimate bias,
                            SeriesDrift drift, List<RuleFinding> findings) {
     public SeriesReview {
-        results = List.copyOf(results);
+        results = CrmResults.of(results);
         findings = List.copyOf(findings);
     }
 
@@ -34,15 +35,29 @@ public record SeriesReview(Analyte analyte, CrmCertificate certificate, Certifie
     }
 
     public long failures() {
-        return results.stream().filter(r -> r.verdict() == Verdict.FAIL).count();
+        CrmResults rs = resultList();
+        return IntStream.range(0, rs.size()).filter(i -> rs.verdict(i) == Verdict.FAIL).count();
     }
 
     /** Warnings other than swaps. */
     public long warnings() {
-        return results.stream().filter(r -> r.verdict() == Verdict.WARN && !r.isSwap()).count();
+        CrmResults rs = resultList();
+        return IntStream.range(0, rs.size()).filter(i -> rs.verdict(i) == Verdict.WARN && !rs.isSwap(i)).count();
     }
 
     public long swaps() {
-        return results.stream().filter(CrmResult::isSwap).count();
+        CrmResults rs = resultList();
+        return IntStream.range(0, rs.size()).filter(rs::isSwap).count();
+    }
+
+    /** The results judged probable swaps, in series order. */
+    public List<CrmResult> probableSwaps() {
+        CrmResults rs = resultList();
+        return IntStream.range(0, rs.size()).filter(rs::isSwap).mapToObj(rs::get).toList();
+    }
+
+    /** The results, their fields readable by index. */
+    CrmResults resultList() {
+        return (CrmResults) results;
     }
 }
