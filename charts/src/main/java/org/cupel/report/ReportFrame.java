@@ -128,9 +128,11 @@ final class ReportFrame {
     }
 
     private static StringColumn text(String name, List<List<ReportColumn.CsvField>> rows, int c) {
-        StringColumn col = StringColumn.create(name, rows.size());
-        for (int r = 0; r < rows.size(); r++) {
-            col.set(r, rows.get(r).get(c).text());
+        // Appended, not set into a column of empty cells: a set first takes the empty value out of the column's
+        // dictionary, which made building the text columns of a million-sample report 40 % slower.
+        StringColumn col = StringColumn.create(name);
+        for (List<ReportColumn.CsvField> row : rows) {
+            col.append(row.get(c).text());
         }
         return col;
     }
