@@ -15,8 +15,14 @@ public final class RadixSort {
     private static final int BITS = 11;
     private static final int BUCKETS = 1 << BITS;
     private static final int DIGITS = (Long.SIZE + BITS - 1) / BITS;
-    /** Runs of ties up to this length are ordered by insertion: a radix pass costs more to set up. */
+    /** Runs of ties up to this length are ordered by insertion: a merge costs more to set up. */
     private static final int SHORT_RUN = 24;
+    /**
+     * Runs of ties from this length on are ordered by radix, shorter ones by a merge sort: a radix sort clears and
+     * sums {@value #DIGITS} histograms of {@value #BUCKETS} counts, more work than a merge sort of a few thousand
+     * values (the ties of rounded assay means are mostly runs of tens to hundreds).
+     */
+    private static final int RADIX_RUN = 4096;
 
     private RadixSort() {
     }
@@ -109,19 +115,53 @@ public final class RadixSort {
             order[i] = i;
         }
         sortUnsigned(key, order);
+        int[] tmp = null;
         for (int from = 0; from < n; ) {
             int to = from + 1;
             while (to < n && key[to] == key[from]) {
                 to++;
             }
-            if (to - from > SHORT_RUN) {
+            if (to - from >= RADIX_RUN) {
                 orderRun(order, from, to, second);
+            } else if (to - from > SHORT_RUN) {
+                tmp = tmp != null ? tmp : new int[n];
+                mergeOrder(order, from, to, second, tmp);
             } else if (to - from > 1) {
                 insertionOrder(order, from, to, second);
             }
             from = to;
         }
         return order;
+    }
+
+    /**
+     * As {@link #orderRun}, by a merge sort: of two halves, the left one's index goes first unless the right
+     * one's value is smaller, so ties keep their order; halves already in order are not merged.
+     */
+    private static void mergeOrder(int[] order, int from, int to, double[] second, int[] tmp) {
+        if (to - from <= SHORT_RUN) {
+            insertionOrder(order, from, to, second);
+            return;
+        }
+        int mid = (from + to) >>> 1;
+        mergeOrder(order, from, mid, second, tmp);
+        mergeOrder(order, mid, to, second, tmp);
+        if (Double.compare(second[order[mid - 1]], second[order[mid]]) <= 0) {
+            return;
+        }
+        int i = from;
+        int j = mid;
+        int k = from;
+        while (i < mid && j < to) {
+            tmp[k++] = Double.compare(second[order[j]], second[order[i]]) < 0 ? order[j++] : order[i++];
+        }
+        while (i < mid) {
+            tmp[k++] = order[i++];
+        }
+        while (j < to) {
+            tmp[k++] = order[j++];
+        }
+        System.arraycopy(tmp, from, order, from, to - from);
     }
 
     /** The indices {@code order[from, to)}, ascending, stably sorted by their second values. */

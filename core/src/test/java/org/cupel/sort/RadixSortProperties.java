@@ -40,7 +40,7 @@ class RadixSortProperties {
     }
 
     /**
-     * Up to {@code maxSize} points; the first values sometimes from few distinct values, so that runs of ties
+     * From {@code minSize} to {@code maxSize} points; the first values sometimes from few distinct values, so that runs of ties
      * longer than the insertion sort's are common.
      */
     private static Gen<Input> inputs(int minSize, int maxSize) {
@@ -64,7 +64,14 @@ class RadixSortProperties {
             r -> new Input(new double[0], new double[0]),
             r -> new Input(new double[] {Double.NaN}, new double[] {-0.0}),
             // One run of 100 equal first values (longer than the insertion sort's) with ties in the second.
-            r -> new Input(new double[100], IntStream.range(0, 100).mapToDouble(i -> (i * 7) % 10 - 5).toArray()));
+            r -> new Input(new double[100], IntStream.range(0, 100).mapToDouble(i -> (i * 7) % 10 - 5).toArray()),
+            // Runs long enough to be ordered by radix (5,000 and 4,096 equal first values), the second values drawn.
+            r -> new Input(new double[5000], inputs(5000, 5000).next(r).second()),
+            r -> {
+                Input in = inputs(4096 + 300, 4096 + 300).next(r);
+                Arrays.fill(in.first(), 0, 4096, -0.0);
+                return in;
+            });
 
     @Test
     void orderIsThePermutationOfAStableComparisonSort() {
