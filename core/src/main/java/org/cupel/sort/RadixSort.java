@@ -101,7 +101,8 @@ public final class RadixSort {
      * The stable order of the points {@code (first[i], second[i])} by first, ties by second, both in the order of
      * {@link Double#compare}; points equal in both keep their index order. It is the permutation any stable
      * comparison sort of the indices by that comparison gives: the indices are sorted by the keys of the first
-     * values, then each run of equal first values by the keys of its second values.
+     * values, then each run of equal first values by the keys of its second values, taken once in that order so
+     * that a run's keys lie side by side.
      */
     public static int[] order(double[] first, double[] second) {
         int n = first.length;
@@ -115,19 +116,25 @@ public final class RadixSort {
             order[i] = i;
         }
         sortUnsigned(key, order);
-        int[] tmp = null;
+        long[] tie = null;
+        long[] tmpKey = null;
+        int[] tmpOrder = null;
         for (int from = 0; from < n; ) {
             int to = from + 1;
             while (to < n && key[to] == key[from]) {
                 to++;
             }
+            if (to - from > 1 && tie == null) {
+                tie = signedKeys(second, order);
+            }
             if (to - from >= RADIX_RUN) {
-                orderRun(order, from, to, second);
+                radixRun(tie, order, from, to);
             } else if (to - from > SHORT_RUN) {
-                tmp = tmp != null ? tmp : new int[n];
-                mergeOrder(order, from, to, second, tmp);
+                tmpKey = tmpKey != null ? tmpKey : new long[n];
+                tmpOrder = tmpOrder != null ? tmpOrder : new int[n];
+                mergeRun(tie, order, from, to, tmpKey, tmpOrder);
             } else if (to - from > 1) {
-                insertionOrder(order, from, to, second);
+                insertionRun(tie, order, from, to);
             }
             from = to;
         }
@@ -135,57 +142,69 @@ public final class RadixSort {
     }
 
     /**
-     * As {@link #orderRun}, by a merge sort: of two halves, the left one's index goes first unless the right
-     * one's value is smaller, so ties keep their order; halves already in order are not merged.
+     * The key of each {@code values[order[i]]}, its top bit flipped so that the signed order of the keys is the
+     * unsigned order of {@link #sortable} (the order of {@link Double#compare}): a tie is a plain {@code <}.
      */
-    private static void mergeOrder(int[] order, int from, int to, double[] second, int[] tmp) {
+    private static long[] signedKeys(double[] values, int[] order) {
+        long[] k = new long[order.length];
+        for (int i = 0; i < k.length; i++) {
+            k[i] = sortable(values[order[i]]) ^ Long.MIN_VALUE;
+        }
+        return k;
+    }
+
+    /** Sorts {@code key[from, to)} stably by radix, moving {@code order} along. */
+    private static void radixRun(long[] key, int[] order, int from, int to) {
+        long[] run = new long[to - from];
+        for (int i = 0; i < run.length; i++) {
+            run[i] = key[from + i] ^ Long.MIN_VALUE;
+        }
+        int[] idx = Arrays.copyOfRange(order, from, to);
+        sortUnsigned(run, idx);
+        System.arraycopy(idx, 0, order, from, idx.length);
+    }
+
+    /**
+     * Sorts {@code key[from, to)} stably by a merge sort, moving {@code order} along: of two halves, the left
+     * one's entry goes first unless the right one's key is smaller, so ties keep their order; halves already in
+     * order are not merged.
+     */
+    private static void mergeRun(long[] key, int[] order, int from, int to, long[] tmpKey, int[] tmpOrder) {
         if (to - from <= SHORT_RUN) {
-            insertionOrder(order, from, to, second);
+            insertionRun(key, order, from, to);
             return;
         }
         int mid = (from + to) >>> 1;
-        mergeOrder(order, from, mid, second, tmp);
-        mergeOrder(order, mid, to, second, tmp);
-        if (Double.compare(second[order[mid - 1]], second[order[mid]]) <= 0) {
+        mergeRun(key, order, from, mid, tmpKey, tmpOrder);
+        mergeRun(key, order, mid, to, tmpKey, tmpOrder);
+        if (key[mid - 1] <= key[mid]) {
             return;
         }
         int i = from;
         int j = mid;
-        int k = from;
-        while (i < mid && j < to) {
-            tmp[k++] = Double.compare(second[order[j]], second[order[i]]) < 0 ? order[j++] : order[i++];
+        for (int k = from; k < to; k++) {
+            boolean right = i >= mid || j < to && key[j] < key[i];
+            int at = right ? j++ : i++;
+            tmpKey[k] = key[at];
+            tmpOrder[k] = order[at];
         }
-        while (i < mid) {
-            tmp[k++] = order[i++];
-        }
-        while (j < to) {
-            tmp[k++] = order[j++];
-        }
-        System.arraycopy(tmp, from, order, from, to - from);
+        System.arraycopy(tmpKey, from, key, from, to - from);
+        System.arraycopy(tmpOrder, from, order, from, to - from);
     }
 
-    /** The indices {@code order[from, to)}, ascending, stably sorted by their second values. */
-    private static void orderRun(int[] order, int from, int to, double[] second) {
-        int[] run = Arrays.copyOfRange(order, from, to);
-        long[] key = new long[run.length];
-        for (int i = 0; i < run.length; i++) {
-            key[i] = sortable(second[run[i]]);
-        }
-        sortUnsigned(key, run);
-        System.arraycopy(run, 0, order, from, run.length);
-    }
-
-    /** As {@link #orderRun}, by insertion: an index moves only past larger values, so ties keep their order. */
-    private static void insertionOrder(int[] order, int from, int to, double[] second) {
+    /** As {@link #mergeRun}, by insertion: an entry moves only past larger keys, so ties keep their order. */
+    private static void insertionRun(long[] key, int[] order, int from, int to) {
         for (int i = from + 1; i < to; i++) {
-            int idx = order[i];
-            double v = second[idx];
+            long k = key[i];
+            int o = order[i];
             int j = i - 1;
-            while (j >= from && Double.compare(second[order[j]], v) > 0) {
+            while (j >= from && key[j] > k) {
+                key[j + 1] = key[j];
                 order[j + 1] = order[j];
                 j--;
             }
-            order[j + 1] = idx;
+            key[j + 1] = k;
+            order[j + 1] = o;
         }
     }
 
