@@ -44,7 +44,7 @@ public final class RadixSort {
 
     /** Sorts {@code keys} in place, in ascending unsigned order (the order of {@link Long#compareUnsigned}). */
     public static void sortUnsigned(long[] keys) {
-        sortUnsigned(keys, null);
+        sort(keys, null, null);
     }
 
     /**
@@ -52,9 +52,20 @@ public final class RadixSort {
      * null) along with them: equal keys keep the order of their payloads as given.
      */
     public static void sortUnsigned(long[] keys, int[] payload) {
+        sort(keys, payload, null);
+    }
+
+    /** As {@link #sortUnsigned(long[], int[])}, with values as the payload. */
+    public static void sortUnsigned(long[] keys, double[] payload) {
+        sort(keys, null, payload);
+    }
+
+    /** One stable distribution pass per digit that the keys do not all share, with at most one payload. */
+    private static void sort(long[] keys, int[] ints, double[] doubles) {
         int n = keys.length;
-        if (payload != null && payload.length != n) {
-            throw new IllegalArgumentException(n + " keys but " + payload.length + " payloads");
+        int payload = ints != null ? ints.length : doubles != null ? doubles.length : n;
+        if (payload != n) {
+            throw new IllegalArgumentException(n + " keys but " + payload + " payloads");
         }
         if (n < 2) {
             return;
@@ -62,8 +73,10 @@ public final class RadixSort {
         int[][] counts = histograms(keys);
         long[] key = keys;
         long[] keyOut = new long[n];
-        int[] p = payload;
-        int[] pOut = payload == null ? null : new int[n];
+        int[] ip = ints;
+        int[] ipOut = ints == null ? null : new int[n];
+        double[] dp = doubles;
+        double[] dpOut = doubles == null ? null : new double[n];
         int[] start = new int[BUCKETS];
         for (int digit = 0; digit < DIGITS; digit++) {
             int shift = digit * BITS;
@@ -78,21 +91,29 @@ public final class RadixSort {
             for (int i = 0; i < n; i++) {
                 int at = start[(int) ((key[i] >>> shift) & (BUCKETS - 1))]++;
                 keyOut[at] = key[i];
-                if (p != null) {
-                    pOut[at] = p[i];
+                if (ip != null) {
+                    ipOut[at] = ip[i];
+                } else if (dp != null) {
+                    dpOut[at] = dp[i];
                 }
             }
             long[] k = key;
             key = keyOut;
             keyOut = k;
-            int[] t = p;
-            p = pOut;
-            pOut = t;
+            int[] t = ip;
+            ip = ipOut;
+            ipOut = t;
+            double[] d = dp;
+            dp = dpOut;
+            dpOut = d;
         }
         if (key != keys) {
             System.arraycopy(key, 0, keys, 0, n);
-            if (payload != null) {
-                System.arraycopy(p, 0, payload, 0, n);
+            if (ints != null) {
+                System.arraycopy(ip, 0, ints, 0, n);
+            }
+            if (doubles != null) {
+                System.arraycopy(dp, 0, doubles, 0, n);
             }
         }
     }

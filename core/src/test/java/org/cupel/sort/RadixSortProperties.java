@@ -84,7 +84,10 @@ class RadixSortProperties {
         });
     }
 
-    /** Equal keys keep their payloads' order: the payload is each key's index, checked against a stable sort. */
+    /**
+     * Equal keys keep their payloads' order: the payload is each key's index (as an int, then as a double),
+     * checked against a stable sort.
+     */
     @Test
     void sortingKeysWithAPayloadIsStable() {
         SeededTries.forAll(200, EDGES, inputs(0, 6000), in -> {
@@ -96,6 +99,12 @@ class RadixSortProperties {
             RadixSort.sortUnsigned(sorted, payload);
             assertArrayEquals(Arrays.stream(boxed).mapToInt(Integer::intValue).toArray(), payload);
             assertArrayEquals(Arrays.stream(boxed).mapToLong(i -> keys[i]).toArray(), sorted);
+            // The same with values as the payload: each key's index as a double.
+            double[] values = IntStream.range(0, keys.length).asDoubleStream().toArray();
+            long[] sortedToo = keys.clone();
+            RadixSort.sortUnsigned(sortedToo, values);
+            assertArrayEquals(Arrays.stream(boxed).mapToDouble(Integer::doubleValue).toArray(), values);
+            assertArrayEquals(sorted, sortedToo);
         });
     }
 
