@@ -139,7 +139,13 @@ public final class PngEncoder {
         return out.toByteArray();
     }
 
-    /** Row {@code at} as Up-filtered RGB bytes after the filter-type byte; {@code above < 0} for the first row. */
+    /**
+     * Row {@code at} as Up-filtered RGB bytes after the filter-type byte; {@code above < 0} for the first row.
+     * Pixels equal to the one above filter to zeros: a changed row of a chart is still mostly unchanged pixels
+     * (a line or a few markers crossing the flat plot), so the runs of equal pixels are found by
+     * {@link Arrays#mismatch} and copied from {@code zeros} (at least as long as {@code row}, zero after the
+     * first byte), and only the differing pixels are computed one by one.
+     */
     private static void upFilter(int[] pixels, int at, int above, int w, byte[] row, byte[] zeros) {
         if (above < 0) {
             for (int x = 0, o = 1; x < w; x++, o += 3) {

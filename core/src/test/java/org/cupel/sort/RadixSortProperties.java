@@ -40,8 +40,8 @@ class RadixSortProperties {
     }
 
     /**
-     * From {@code minSize} to {@code maxSize} points; the first values sometimes from few distinct values, so that runs of ties
-     * longer than the insertion sort's are common.
+     * From {@code minSize} to {@code maxSize} points; the first values sometimes from few distinct values, so that
+     * runs of ties longer than the insertion sort's are common.
      */
     private static Gen<Input> inputs(int minSize, int maxSize) {
         return r -> {
