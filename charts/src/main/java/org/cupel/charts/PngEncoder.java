@@ -122,7 +122,7 @@ public final class PngEncoder {
                 if (y > 0 && Arrays.equals(pixels, base, base + w, pixels, base - w, base)) {
                     filtered = same;
                 } else {
-                    upFilter(pixels, base, y > 0 ? base - w : -1, w, row);
+                    upFilter(pixels, base, y > 0 ? base - w : -1, w, row, same);
                 }
                 deflater.setInput(filtered);
                 while (!deflater.needsInput()) {
@@ -139,8 +139,14 @@ public final class PngEncoder {
         return out.toByteArray();
     }
 
-    /** Row {@code at} as Up-filtered RGB bytes after the filter-type byte; {@code above < 0} for the first row. */
-    private static void upFilter(int[] pixels, int at, int above, int w, byte[] row) {
+    /**
+     * Row {@code at} as Up-filtered RGB bytes after the filter-type byte; {@code above < 0} for the first row.
+     * Pixels equal to the one above filter to zeros: a changed row of a chart is still mostly unchanged pixels
+     * (a line or a few markers crossing the flat plot), so the runs of equal pixels are found by
+     * {@link Arrays#mismatch} and copied from {@code zeros} (at least as long as {@code row}, zero after the
+     * first byte), and only the differing pixels are computed one by one.
+     */
+    private static void upFilter(int[] pixels, int at, int above, int w, byte[] row, byte[] zeros) {
         if (above < 0) {
             for (int x = 0, o = 1; x < w; x++, o += 3) {
                 int c = pixels[at + x];
@@ -150,12 +156,22 @@ public final class PngEncoder {
             }
             return;
         }
-        for (int x = 0, o = 1; x < w; x++, o += 3) {
-            int c = pixels[at + x];
-            int p = pixels[above + x];
-            row[o] = (byte) ((c >> 16) - (p >> 16));
-            row[o + 1] = (byte) ((c >> 8) - (p >> 8));
-            row[o + 2] = (byte) (c - p);
+        int x = 0;
+        while (x < w) {
+            int equal = Arrays.mismatch(pixels, at + x, at + w, pixels, above + x, above + w);
+            int end = equal < 0 ? w : x + equal;
+            System.arraycopy(zeros, 1 + 3 * x, row, 1 + 3 * x, 3 * (end - x));
+            for (x = end; x < w; x++) {
+                int c = pixels[at + x];
+                int p = pixels[above + x];
+                if (c == p) {
+                    break;
+                }
+                int o = 1 + 3 * x;
+                row[o] = (byte) ((c >> 16) - (p >> 16));
+                row[o + 1] = (byte) ((c >> 8) - (p >> 8));
+                row[o + 2] = (byte) (c - p);
+            }
         }
     }
 

@@ -1,5 +1,7 @@
 package org.cupel.charts;
 
+import org.cupel.sort.RadixSort;
+
 /**
  * Keeps scatter and series charts legible and their rendering time bounded whatever n is: beyond a budget
  * of points a deterministic subset is drawn and the chart says so via {@link ChartNotes}. Only what is
@@ -112,44 +114,13 @@ public final class PointBudget {
     }
 
     /**
-     * The order that sorts the points by x, ties by y: a permutation of the input gives the same sequence
-     * of values, so what is drawn does not depend on input order.
+     * The order that sorts the points by x, ties by y (in the order of {@link Double#compare}), points equal in
+     * both in index order: a permutation of the input gives the same sequence of values, so what is drawn does
+     * not depend on input order. By {@link RadixSort#order}, which gives the permutation of a stable comparison
+     * sort in a few passes over the keys, not the twenty merge levels of comparisons of half a million points.
      */
     public static int[] orderByXThenY(double[] x, double[] y) {
-        // A stable merge sort of primitive indices: no boxing of 50,000+ Integers per chart.
-        int[] order = new int[x.length];
-        for (int i = 0; i < order.length; i++) {
-            order[i] = i;
-        }
-        sort(order, x, y, new int[order.length], 0, order.length);
-        return order;
-    }
-
-    private static void sort(int[] a, double[] x, double[] y, int[] tmp, int lo, int hi) {
-        if (hi - lo < 2) {
-            return;
-        }
-        int mid = (lo + hi) >>> 1;
-        sort(a, x, y, tmp, lo, mid);
-        sort(a, x, y, tmp, mid, hi);
-        int i = lo;
-        int j = mid;
-        int k = lo;
-        while (i < mid && j < hi) {
-            tmp[k++] = compare(x, y, a[j], a[i]) < 0 ? a[j++] : a[i++];
-        }
-        while (i < mid) {
-            tmp[k++] = a[i++];
-        }
-        while (j < hi) {
-            tmp[k++] = a[j++];
-        }
-        System.arraycopy(tmp, lo, a, lo, hi - lo);
-    }
-
-    private static int compare(double[] x, double[] y, int p, int q) {
-        int c = Double.compare(x[p], x[q]);
-        return c != 0 ? c : Double.compare(y[p], y[q]);
+        return RadixSort.order(x, y);
     }
 
     private static int[] positions(boolean[] flagged, boolean value) {

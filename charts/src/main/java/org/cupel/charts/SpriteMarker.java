@@ -8,6 +8,7 @@ import java.awt.Stroke;
 import java.awt.geom.AffineTransform;
 import java.awt.image.BufferedImage;
 import java.util.Map;
+import java.util.Objects;
 import java.util.concurrent.ConcurrentHashMap;
 import org.knowm.xchart.style.markers.Marker;
 
@@ -84,7 +85,67 @@ public final class SpriteMarker extends Marker {
         }
     }
 
-    private record Key(int argb, int size, double scaleX, double scaleY, int phaseX, int phaseY, Object antialias) {
+    /**
+     * What a sprite depends on. Written out rather than a record: a record's {@code equals} and {@code hashCode}
+     * go through method handles, which the C1 compiler alone (as the launcher runs Cupel) does not inline, and
+     * they run once per point drawn.
+     */
+    private static final class Key {
+        private final int argb;
+        private final int size;
+        private final double scaleX;
+        private final double scaleY;
+        private final int phaseX;
+        private final int phaseY;
+        private final Object antialias;
+
+        Key(int argb, int size, double scaleX, double scaleY, int phaseX, int phaseY, Object antialias) {
+            this.argb = argb;
+            this.size = size;
+            this.scaleX = scaleX;
+            this.scaleY = scaleY;
+            this.phaseX = phaseX;
+            this.phaseY = phaseY;
+            this.antialias = antialias;
+        }
+
+        int size() {
+            return size;
+        }
+
+        double scaleX() {
+            return scaleX;
+        }
+
+        double scaleY() {
+            return scaleY;
+        }
+
+        int phaseX() {
+            return phaseX;
+        }
+
+        int phaseY() {
+            return phaseY;
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Key k && argb == k.argb && size == k.size && Double.compare(scaleX, k.scaleX) == 0
+                    && Double.compare(scaleY, k.scaleY) == 0 && phaseX == k.phaseX && phaseY == k.phaseY
+                    && Objects.equals(antialias, k.antialias);
+        }
+
+        @Override
+        public int hashCode() {
+            int h = argb;
+            h = 31 * h + size;
+            h = 31 * h + Double.hashCode(scaleX);
+            h = 31 * h + Double.hashCode(scaleY);
+            h = 31 * h + phaseX;
+            h = 31 * h + phaseY;
+            return 31 * h + Objects.hashCode(antialias);
+        }
     }
 
     private record Sprite(BufferedImage image, int centre, Stroke stroke, Color colour) {

@@ -3,7 +3,9 @@ package org.cupel.censored;
 import java.util.AbstractList;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Iterator;
 import java.util.List;
+import java.util.NoSuchElementException;
 import java.util.Objects;
 import java.util.RandomAccess;
 import org.apache.commons.statistics.distribution.NormalDistribution;
@@ -311,11 +313,60 @@ public final class Ros {
             while (start[k + 1] == i) {
                 k++;
             }
-            int m = limits.length;
             int r = i - start[k] + 1;
+            double x = k < limits.length ? detects.orderStatistic(detects.countBelow(limits[k]) + r - 1) : Double.NaN;
+            return point(k, r, x);
+        }
+
+        /**
+         * The points in order, block by block: what {@link #get} finds by binary searches for each point (its
+         * block, and a detect's rank among the detects and its value) is carried from one point to the next.
+         * Copying or streaming the list goes through here.
+         */
+        @Override
+        public Iterator<Point> iterator() {
+            return new Iterator<>() {
+                private int i;
+                private int k = -1;
+                /** The rank among all detects of the next detect, and the distinct value it falls in. */
+                private int rank;
+                private int distinct;
+
+                @Override
+                public boolean hasNext() {
+                    return i < size();
+                }
+
+                @Override
+                public Point next() {
+                    if (!hasNext()) {
+                        throw new NoSuchElementException();
+                    }
+                    while (start[k + 1] == i) {
+                        k++;
+                        if (k < limits.length) {
+                            // Ascending from block to block, as the limits are: the cursor only moves on.
+                            rank = detects.countBelow(limits[k]);
+                        }
+                    }
+                    double x = Double.NaN;
+                    if (k < limits.length) {
+                        while (distinct + 1 < detects.distinct() && detects.before(distinct + 1) <= rank) {
+                            distinct++;
+                        }
+                        x = detects.value(distinct);
+                        rank++;
+                    }
+                    return point(k, i++ - start[k] + 1, x);
+                }
+            };
+        }
+
+        /** The r-th point (from 1) of block k: detect interval k, or nondetect block k − m; x is a detect's value. */
+        private Point point(int k, int r, double x) {
+            int m = limits.length;
             if (k < m) {
                 double p = detectPosition(pe, a, k, r);
-                double x = detects.orderStatistic(detects.countBelow(limits[k]) + r - 1);
                 return new Point(p, quantile(p), x, true, limits[k]);
             }
             int j = k - m;

@@ -6,6 +6,7 @@ import java.util.Arrays;
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.math3.stat.inference.TTest;
 import org.apache.commons.math3.stat.inference.WilcoxonSignedRankTest;
+import org.cupel.sort.RadixSort;
 
 /** Tests of whether duplicates read systematically higher or lower than their originals. */
 final class PairedTests {
@@ -97,14 +98,14 @@ final class PairedTests {
 
     /**
      * One difference as one sortable key: its magnitude's bits in the order of {@link Double#compare}
-     * ({@link RadixPairSort#sortable}) shifted up by one bit, and its sign in the lowest bit (1: positive). A
+     * ({@link RadixSort#sortable}) shifted up by one bit, and its sign in the lowest bit (1: positive). A
      * magnitude is never negative, so the top bit the shift drops is always set; keys in ascending unsigned order
      * are the magnitudes in ascending order, each run of equal magnitudes with its negative differences first.
      * One sort of these keys gives both the ranks of all magnitudes and which of them are positive, where two
      * sorts (all magnitudes, then the positive ones) were needed before.
      */
     static long signedRankKey(double magnitude, boolean positive) {
-        return (RadixPairSort.sortable(magnitude) << 1) | (positive ? 1 : 0);
+        return (RadixSort.sortable(magnitude) << 1) | (positive ? 1 : 0);
     }
 
     /** The magnitude of a {@link #signedRankKey}, as a key of equal magnitudes only: its sign bit dropped. */
@@ -172,7 +173,7 @@ final class PairedTests {
      */
     private static void sortKeys(long[] keys) {
         if (keys.length >= PairGroups.RADIX_FROM) {
-            RadixPairSort.sortUnsigned(keys);
+            RadixSort.sortUnsigned(keys);
             return;
         }
         for (int i = 0; i < keys.length; i++) {

@@ -148,6 +148,23 @@ class CensoredGroupingPropertiesTest {
         });
     }
 
+    /**
+     * Walking the points (copying or streaming the list) gives each point exactly as {@code get(i)} does: the
+     * walk carries a detect's rank and value from point to point where {@code get} searches for them.
+     */
+    @Test
+    void walkingThePointsGivesWhatGetGives() {
+        SeededTries.forAll(300, LEFT_CENSORED, obs -> {
+            List<Ros.Point> points = Ros.fit(sample(obs)).points();
+            List<Ros.Point> byIndex = new ArrayList<>();
+            for (int i = 0; i < points.size(); i++) {
+                byIndex.add(points.get(i));
+            }
+            assertEquals(byIndex, new ArrayList<>(points));
+            assertEquals(byIndex, points.stream().toList());
+        });
+    }
+
     @Test
     void substitutionEqualsTheDirectPerObservationComputation() {
         SeededTries.forAll(300, OBSERVATIONS, obs -> {

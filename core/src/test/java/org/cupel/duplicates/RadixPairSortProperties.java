@@ -64,42 +64,4 @@ class RadixPairSortProperties {
             assertArrayEquals(d2, d1);
         });
     }
-
-    /**
-     * Keys sorted by radix are in ascending unsigned order: the keys of the drawn doubles (sortable, and shifted
-     * by one with a sign bit as the Wilcoxon test makes them) and raw random longs, against a boxed sort by
-     * {@link Long#compareUnsigned}.
-     */
-    @Test
-    void radixSortOfKeysGivesTheUnsignedOrder() {
-        SeededTries.forAll(60, List.of(inputs(0, 1), inputs(1, 2)), inputs(0, 9000), in -> {
-            Random r = new Random(in.first().length);
-            long[] keys = new long[in.first().length];
-            for (int i = 0; i < keys.length; i++) {
-                long sortable = RadixPairSort.sortable(in.first()[i]);
-                keys[i] = switch (i % 3) {
-                    case 0 -> sortable;
-                    case 1 -> (sortable << 1) | (r.nextBoolean() ? 1 : 0);
-                    default -> r.nextLong();
-                };
-            }
-            long[] reference = Arrays.stream(keys).boxed().sorted(Long::compareUnsigned).mapToLong(Long::longValue)
-                    .toArray();
-            RadixPairSort.sortUnsigned(keys);
-            assertArrayEquals(reference, keys);
-        });
-    }
-
-    @Test
-    void sortableKeysKeepTheOrderOfDoubleCompareAndInvert() {
-        SeededTries.forAll(200, inputs(2, 2), in -> {
-            double x = in.first()[0];
-            double y = in.first()[1];
-            long kx = RadixPairSort.sortable(x);
-            long ky = RadixPairSort.sortable(y);
-            assertArrayEquals(new int[] {Integer.signum(Double.compare(x, y))},
-                    new int[] {Integer.signum(Long.compareUnsigned(kx, ky))});
-            assertArrayEquals(new double[] {x}, new double[] {RadixPairSort.unsortable(kx)});
-        });
-    }
 }
