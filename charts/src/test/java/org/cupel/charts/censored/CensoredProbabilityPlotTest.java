@@ -51,6 +51,46 @@ class CensoredProbabilityPlotTest {
         }
     }
 
+    /**
+     * A large sample reaching far below its limit: counts written with thousands separators, the decades under
+     * 0.001 labelled as the numbers they are (the report's three-decimal pattern wrote 0.0001 as "0"), and the
+     * key wrapped under the plot instead of one legend line running off the chart's right edge.
+     */
+    @Test
+    void aLargeSampleFarBelowItsLimitKeepsEveryLabelReadable() {
+        java.util.Random r = new java.util.Random(11);
+        CensoredSample.Builder b = CensoredSample.builder();
+        int below = 0;
+        for (int i = 0; i < 20_000; i++) {
+            double v = Math.exp(-2.3 + 1.6 * r.nextGaussian());
+            if (v < 0.005) {
+                b.below(0.005);
+                below++;
+            } else {
+                b.detected(Math.round(v * 1000) / 1000.0);
+            }
+        }
+        ChartFigure figure = CensoredProbabilityPlot.create(Ros.fit(b.build()), "Au (ppm)", "Censored probability plot");
+        XYChart chart = (XYChart) figure.charts().get(0);
+        String detected = String.format(java.util.Locale.US, "Detected (%,d)", 20_000 - below);
+        assertTrue(detected.contains(","), detected);
+        java.util.List<String> key = figure.panels().get(0).key().stream().map(org.cupel.charts.KeyEntry::label)
+                .toList();
+        assertEquals(detected, key.get(0));
+        assertEquals(String.format(java.util.Locale.US, "Below detection (imputed by ROS) (%,d)", below), key.get(1));
+        assertTrue(key.get(2).startsWith("ROS line: ln x = "), key.get(2));
+        assertEquals("Detection limit 0.005", key.get(3));
+        assertTrue(!chart.getStyler().isLegendVisible(), "the figure's wrapping key, not XChart's one-line legend");
+        assertTrue(figure.panels().get(0).note().endsWith(String.format(java.util.Locale.US, "; %,d censored (3 %%)",
+                below)), figure.panels().get(0).note());
+        java.text.DecimalFormat ticks = new java.text.DecimalFormat(chart.getStyler().getYAxisDecimalPattern(),
+                java.text.DecimalFormatSymbols.getInstance(java.util.Locale.US));
+        assertEquals("0.0001", ticks.format(1e-4));
+        assertEquals("0.00001", ticks.format(1.0000000000000001e-5));
+        assertEquals("1,000", ticks.format(1000));
+        FigureChecks.writingStaysOutOfThePlots("probability plot", figure);
+    }
+
     @Test
     void notApplicableSaysWhyInsteadOfDrawingPoints(@TempDir Path dir) throws Exception {
         CensoredSample over = CensoredSample.builder().detected(1).detected(2).detected(3).above(10).build();
