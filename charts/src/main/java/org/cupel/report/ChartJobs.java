@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
@@ -19,7 +20,8 @@ import org.cupel.project.Workers;
  * The report's charts, drawn on up to {@value #THREADS} threads while the caller writes the tables, the
  * page and the PDF; the PDF waits for each chart only when it reaches it. Each chart is built, drawn and
  * written by one task into its own file, so the bytes do not depend on the order tasks run in; progress
- * is reported in reading order, from the caller's thread.
+ * is reported in reading order, from the caller's thread. Work queued with {@link #afterCharts} runs on a
+ * drawing thread once no chart is left to start.
  */
 final class ChartJobs implements AutoCloseable {
     /** Charts drawn at once: the two cores of a typical QC workstation or CI runner. */
@@ -60,6 +62,28 @@ final class ChartJobs implements AutoCloseable {
     /** Waits until the chart of {@code f}, and every chart before it in reading order, is written. */
     void await(ReportBlock.Figure f) throws IOException {
         awaitUpTo(index.get(f));
+    }
+
+    /**
+     * Runs {@code task} on the first drawing thread that finds no chart left to start: the tasks run in the
+     * order they were queued, every chart first. A task that needs a chart waits for it with
+     * {@link #awaitQuietly}.
+     */
+    <T> Future<T> afterCharts(Callable<T> task) {
+        return pool.submit(task);
+    }
+
+    /**
+     * Waits until the chart of {@code f} is written, without reporting progress: for tasks on other threads
+     * than the caller's.
+     */
+    void awaitQuietly(ReportBlock.Figure f) throws IOException {
+        await(done.get(index.get(f)));
+    }
+
+    /** Waits for a task queued with {@link #afterCharts}; its failure is thrown as the task threw it. */
+    static <T> T result(Future<T> task) throws IOException {
+        return await(task);
     }
 
     /** Waits until every chart is written. */
@@ -109,9 +133,9 @@ final class ChartJobs implements AutoCloseable {
         return chart.replace('/', '_');
     }
 
-    private static void await(Future<?> task) throws IOException {
+    private static <T> T await(Future<T> task) throws IOException {
         try {
-            task.get();
+            return task.get();
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             throw new IOException("interrupted while drawing the charts", e);

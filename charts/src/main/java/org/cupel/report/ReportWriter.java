@@ -12,6 +12,7 @@ import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.Comparator;
+import java.util.concurrent.Future;
 import java.util.function.Function;
 import java.util.stream.Stream;
 import org.cupel.charts.PngWriter;
@@ -147,9 +148,10 @@ public final class ReportWriter {
 
     /**
      * The charts are drawn on worker threads from the start; meanwhile this thread writes the tables and
-     * the page, then the PDF, which takes each chart as soon as it is written, then the Word copy. Drawing
-     * the charts and laying out the PDF are the two largest costs of a big report, and they no longer wait
-     * for each other.
+     * the page, then the PDF, which takes each chart as soon as it is written. The Word copy is written on
+     * a drawing thread once no chart is left to start, beside the end of the PDF: drawing the charts and
+     * laying out the PDF are the two largest costs of a big report, and written one after the other the PDF
+     * and the Word copy left one of two cores idle for the last seconds (about 3 s at a million samples).
      */
     private static void build(QcReport report, Path dir, ReportOptions options, ReportProgress progress)
             throws IOException {
@@ -159,31 +161,26 @@ public final class ReportWriter {
         Files.createDirectory(dir.resolve("charts"));
         Files.createDirectory(dir.resolve("tables"));
         Path print = separatePrint ? Files.createDirectory(dir.resolve(".print")) : dir;
+        Function<ReportBlock.Figure, Path> printFile = f -> separatePrint
+                ? print.resolve(ChartJobs.printName(files.chart(f))) : dir.resolve(files.chart(f));
         try (ChartJobs charts = new ChartJobs(files, dir, separatePrint ? print : null, options.chartDpi(),
                 progress)) {
+            Future<Void> word = charts.afterCharts(() -> {
+                write(dir.resolve("appendix.docx"), os -> DocxReport.write(report, files,
+                        f -> printPng(charts::awaitQuietly, f, printFile.apply(f)), options.paper(), os));
+                return null;
+            });
             for (ReportTable t : files.tables()) {
                 progress.step("table " + files.table(t));
                 CsvTables.write(t, dir.resolve(files.table(t)));
             }
             progress.step("index.html");
             Files.writeString(dir.resolve("index.html"), HtmlReport.render(report, files), StandardCharsets.UTF_8);
-            Function<ReportBlock.Figure, byte[]> printPngs = f -> printPng(charts, f, separatePrint
-                    ? print.resolve(ChartJobs.printName(files.chart(f))) : dir.resolve(files.chart(f)));
             progress.step("appendix.pdf");
-            // OpenPDF writes many small pieces (one per PDF object and content operator run): buffer them.
-            try (OutputStream os = new BufferedOutputStream(Files.newOutputStream(dir.resolve("appendix.pdf")),
-                    1 << 16)) {
-                PdfReport.write(report, files, printPngs, options.paper(), os);
-            } catch (UncheckedIOException e) {
-                throw e.getCause();
-            }
+            write(dir.resolve("appendix.pdf"), os -> PdfReport.write(report, files,
+                    f -> printPng(charts::await, f, printFile.apply(f)), options.paper(), os));
             progress.step("appendix.docx");
-            try (OutputStream os = new BufferedOutputStream(Files.newOutputStream(dir.resolve("appendix.docx")),
-                    1 << 16)) {
-                DocxReport.write(report, files, printPngs, options.paper(), os);
-            } catch (UncheckedIOException e) {
-                throw e.getCause();
-            }
+            ChartJobs.result(word);
             charts.awaitAll();
         }
         if (separatePrint) {
@@ -195,10 +192,34 @@ public final class ReportWriter {
                 + "'cupel report --force' may replace this folder.\n", StandardCharsets.UTF_8);
     }
 
+    /** Something written to an output stream. */
+    @FunctionalInterface
+    private interface Writing {
+        void to(OutputStream out) throws IOException;
+    }
+
+    /**
+     * Writes {@code file} through a buffer: OpenPDF and the Word packaging write many small pieces (one per
+     * PDF object and content operator run).
+     */
+    private static void write(Path file, Writing writing) throws IOException {
+        try (OutputStream os = new BufferedOutputStream(Files.newOutputStream(file), 1 << 16)) {
+            writing.to(os);
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
+        }
+    }
+
+    /** Waits for a chart. */
+    @FunctionalInterface
+    private interface ChartWait {
+        void until(ReportBlock.Figure f) throws IOException;
+    }
+
     /** The print PNG of {@code f}, once its chart job has written it to {@code file}. */
-    private static byte[] printPng(ChartJobs charts, ReportBlock.Figure f, Path file) {
+    private static byte[] printPng(ChartWait wait, ReportBlock.Figure f, Path file) {
         try {
-            charts.await(f);
+            wait.until(f);
             return Files.readAllBytes(file);
         } catch (IOException e) {
             throw new UncheckedIOException(e);

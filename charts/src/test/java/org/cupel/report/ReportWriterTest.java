@@ -139,16 +139,23 @@ class ReportWriterTest {
     /**
      * The PDF too is the same bytes run after run: OpenPDF's random font-subset tags, its clock-based file
      * identifier and creation date are fixed by the report (issue 15). Two runs in one JVM also prove that the
-     * fonts' tag sources do not carry over from one document to the next.
+     * fonts' tag sources do not carry over from one document to the next. The Word copy, written on a drawing
+     * thread beside the PDF, is the same bytes too, at either chart resolution.
      */
     @Test
-    void twoRunsGiveAnIdenticalPdfDatedByTheReport(@TempDir Path dir) throws IOException {
+    void twoRunsGiveAnIdenticalPdfAndWordCopyDatedByTheReport(@TempDir Path dir) throws IOException {
         Path a = dir.resolve("a");
         Path b = dir.resolve("b");
         ReportWriter.write(ReportFixture.report(), a, PRINT, ReportProgress.NONE);
         ReportWriter.write(ReportFixture.report(), b, PRINT, ReportProgress.NONE);
         byte[] pdf = Files.readAllBytes(a.resolve("appendix.pdf"));
         assertArrayEquals(pdf, Files.readAllBytes(b.resolve("appendix.pdf")));
+        byte[] word = Files.readAllBytes(a.resolve("appendix.docx"));
+        assertArrayEquals(word, Files.readAllBytes(b.resolve("appendix.docx")));
+        Path screen = dir.resolve("screen");
+        ReportWriter.write(ReportFixture.report(), screen, SCREEN, ReportProgress.NONE);
+        assertArrayEquals(word, Files.readAllBytes(screen.resolve("appendix.docx")),
+                "the Word copy takes the print charts whatever the screen charts' resolution");
         String text = new String(pdf, java.nio.charset.StandardCharsets.ISO_8859_1);
         // ReportFixture.GENERATED is 1767225600 s = 2026-01-01 00:00:00 UTC.
         assertTrue(text.contains("/CreationDate(D:20260101000000Z)"), "creation date from the report");
