@@ -30,35 +30,56 @@ public final class PngEncoder {
      */
     private static final int LEVEL = 3;
     private static final double METRES_PER_INCH = 0.0254;
+    /** Bytes of a chunk besides its data: length, type and CRC. */
+    private static final int CHUNK_OVERHEAD = 12;
 
     private PngEncoder() {
     }
 
-    /** The PNG bytes of {@code image}, which must be of type {@link BufferedImage#TYPE_INT_RGB}. */
+    /**
+     * The PNG bytes of {@code image}, which must be of type {@link BufferedImage#TYPE_INT_RGB}. The chunks
+     * are written straight into an array of the file's size: a print chart's compressed data is 0.2 to 1 MB,
+     * and each copy of it through a growing buffer was one more large array alive across a young collection.
+     */
     public static byte[] encode(BufferedImage image, int dpi) {
         if (image.getType() != BufferedImage.TYPE_INT_RGB) {
             throw new IllegalArgumentException("expected an opaque RGB image, got type " + image.getType());
         }
         int w = image.getWidth();
         int h = image.getHeight();
-        ByteArrayOutputStream out = new ByteArrayOutputStream(w * h / 4 + 1024);
-        out.writeBytes(SIGNATURE);
         byte[] ihdr = new byte[13];
         putInt(ihdr, 0, w);
         putInt(ihdr, 4, h);
         ihdr[8] = 8; // bit depth
         ihdr[9] = 2; // colour type: truecolour
-        chunk(out, "IHDR", ihdr, ihdr.length);
         byte[] phys = new byte[9];
         int perMetre = (int) Math.round(dpi / METRES_PER_INCH);
         putInt(phys, 0, perMetre);
         putInt(phys, 4, perMetre);
         phys[8] = 1; // unit: metre
-        chunk(out, "pHYs", phys, phys.length);
-        byte[] idat = deflateRows(((DataBufferInt) image.getRaster().getDataBuffer()).getData(), w, h);
-        chunk(out, "IDAT", idat, idat.length);
-        chunk(out, "IEND", new byte[0], 0);
-        return out.toByteArray();
+        Deflated idat = deflateRows(((DataBufferInt) image.getRaster().getDataBuffer()).getData(), w, h);
+        byte[] png = new byte[SIGNATURE.length + 4 * CHUNK_OVERHEAD + ihdr.length + phys.length + idat.length()];
+        System.arraycopy(SIGNATURE, 0, png, 0, SIGNATURE.length);
+        int at = SIGNATURE.length;
+        at = chunk(png, at, "IHDR", ihdr, ihdr.length);
+        at = chunk(png, at, "pHYs", phys, phys.length);
+        at = chunk(png, at, "IDAT", idat.bytes(), idat.length());
+        chunk(png, at, "IEND", new byte[0], 0);
+        return png;
+    }
+
+    /** The width and height of a PNG, from its header, or null when it is not a PNG. */
+    public static Size size(byte[] png) {
+        int body = SIGNATURE.length + 8;
+        if (png.length < body + 13 || !Arrays.equals(png, 0, SIGNATURE.length, SIGNATURE, 0, SIGNATURE.length)
+                || !"IHDR".equals(new String(png, SIGNATURE.length + 4, 4, StandardCharsets.US_ASCII))) {
+            return null;
+        }
+        return new Size(getInt(png, body), getInt(png, body + 4));
+    }
+
+    /** A PNG's pixel size. */
+    public record Size(int width, int height) {
     }
 
     /** Image width, height and the concatenated IDAT data of a PNG, or null when it is not a PNG. */
@@ -71,7 +92,9 @@ public final class PngEncoder {
                 SIGNATURE.length)) {
             return null;
         }
-        ByteArrayOutputStream data = new ByteArrayOutputStream(png.length);
+        ByteArrayOutputStream data = new ByteArrayOutputStream();
+        int firstData = -1;
+        int firstLength = 0;
         int w = 0;
         int h = 0;
         int depth = 0;
@@ -92,9 +115,20 @@ public final class PngEncoder {
                 colour = png[body + 9];
                 interlaced = png[body + 12] != 0;
             } else if (type.equals("IDAT")) {
-                data.write(png, body, len);
+                // One IDAT chunk, as this encoder writes, is copied once; more are joined.
+                if (firstData < 0) {
+                    firstData = body;
+                    firstLength = len;
+                } else {
+                    data.write(png, body, len);
+                }
             } else if (type.equals("IEND")) {
-                return new Idat(w, h, depth, colour, interlaced, data.toByteArray());
+                byte[] joined = new byte[firstLength + data.size()];
+                if (firstData >= 0) {
+                    System.arraycopy(png, firstData, joined, 0, firstLength);
+                    System.arraycopy(data.toByteArray(), 0, joined, firstLength, data.size());
+                }
+                return new Idat(w, h, depth, colour, interlaced, joined);
             }
             p = body + len + 4;
         }
@@ -107,9 +141,9 @@ public final class PngEncoder {
      * parts of the plot area: a large share of a chart) filters to zeros, so it is recognised with one
      * array comparison and its filtered bytes are not computed.
      */
-    private static byte[] deflateRows(int[] pixels, int w, int h) {
+    private static Deflated deflateRows(int[] pixels, int w, int h) {
         Deflater deflater = new Deflater(LEVEL);
-        ByteArrayOutputStream out = new ByteArrayOutputStream(w * h / 4 + 1024);
+        Deflated out = new Deflated(w * h / 4 + 1024);
         byte[] row = new byte[w * 3 + 1];
         byte[] same = new byte[w * 3 + 1];
         byte[] buf = new byte[1 << 16];
@@ -136,7 +170,22 @@ public final class PngEncoder {
         } finally {
             deflater.end();
         }
-        return out.toByteArray();
+        return out;
+    }
+
+    /** Compressed image data, read in place rather than copied out. */
+    private static final class Deflated extends ByteArrayOutputStream {
+        Deflated(int capacity) {
+            super(capacity);
+        }
+
+        byte[] bytes() {
+            return buf;
+        }
+
+        int length() {
+            return count;
+        }
     }
 
     /**
@@ -175,19 +224,17 @@ public final class PngEncoder {
         }
     }
 
-    private static void chunk(ByteArrayOutputStream out, String type, byte[] data, int len) {
-        byte[] head = new byte[8];
-        putInt(head, 0, len);
+    /** Writes one chunk (length, type, data, CRC-32 of type and data) at {@code at}; returns where it ends. */
+    private static int chunk(byte[] png, int at, String type, byte[] data, int len) {
+        putInt(png, at, len);
         byte[] name = type.getBytes(StandardCharsets.US_ASCII);
-        System.arraycopy(name, 0, head, 4, 4);
-        out.writeBytes(head);
-        out.write(data, 0, len);
+        System.arraycopy(name, 0, png, at + 4, 4);
+        System.arraycopy(data, 0, png, at + 8, len);
         CRC32 crc = new CRC32();
         crc.update(name);
         crc.update(data, 0, len);
-        byte[] tail = new byte[4];
-        putInt(tail, 0, (int) crc.getValue());
-        out.writeBytes(tail);
+        putInt(png, at + 8 + len, (int) crc.getValue());
+        return at + CHUNK_OVERHEAD + len;
     }
 
     private static void putInt(byte[] b, int at, int v) {

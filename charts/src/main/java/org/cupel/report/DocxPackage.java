@@ -1,8 +1,6 @@
 package org.cupel.report;
 
 import java.io.BufferedWriter;
-import java.io.ByteArrayInputStream;
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
@@ -64,7 +62,7 @@ final class DocxPackage {
         core.setCreated(Optional.of(Date.from(generated)));
         core.setModified(Optional.of(Date.from(generated)));
         doc.getProperties().getExtendedProperties().setApplication("Cupel");
-        Saved saved = new Saved();
+        ChunkedBytes saved = new ChunkedBytes();
         try (ZipArchiveOutputStream z = new ZipArchiveOutputStream(saved)) {
             z.setLevel(Deflater.NO_COMPRESSION);
             doc.write(z);
@@ -118,17 +116,6 @@ final class DocxPackage {
         entry.setSize(data.length);
         entry.setCompressedSize(data.length);
         entry.setCrc(crc.getValue());
-    }
-
-    /** POI's save, read back without copying the buffer. */
-    private static final class Saved extends ByteArrayOutputStream {
-        Saved() {
-            super(1 << 20);
-        }
-
-        InputStream input() {
-            return new ByteArrayInputStream(buf, 0, count);
-        }
     }
 
     /** Lets the caller close its own stream. */

@@ -232,7 +232,7 @@ public final class DocxReport {
 
     private void figure(ReportBlock.Figure f) throws IOException {
         byte[] bytes = png.apply(f);
-        PngEncoder.Idat size = PngEncoder.idat(bytes);
+        PngEncoder.Size size = PngEncoder.size(bytes);
         if (size == null) {
             throw new IllegalStateException("chart " + files.chart(f) + " is not a PNG");
         }

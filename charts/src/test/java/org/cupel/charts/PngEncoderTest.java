@@ -3,10 +3,16 @@ package org.cupel.charts;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
 
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayInputStream;
+import java.io.ByteArrayOutputStream;
+import java.nio.ByteBuffer;
+import java.nio.charset.StandardCharsets;
+import java.util.Arrays;
 import java.util.Random;
+import java.util.zip.CRC32;
 import javax.imageio.ImageIO;
 import javax.imageio.ImageReader;
 import javax.imageio.metadata.IIOMetadataNode;
@@ -46,6 +52,45 @@ class PngEncoderTest {
         assertNotNull(idat);
         assertEquals(257, idat.width());
         assertEquals(2, idat.colourType());
+        assertEquals(new PngEncoder.Size(257, 131), PngEncoder.size(png));
+        assertNull(PngEncoder.size(new byte[40]), "not a PNG");
+        assertNull(PngEncoder.size(Arrays.copyOf(png, 20)), "too short for a header");
+    }
+
+    /**
+     * The PNG format allows the image data in several consecutive IDAT chunks (W3C 2003, "Portable Network
+     * Graphics (PNG) Specification (Second Edition)", section 11.2.4): they are joined in order.
+     */
+    @Test
+    void imageDataSplitOverSeveralChunksIsJoined() throws Exception {
+        BufferedImage img = new BufferedImage(64, 48, BufferedImage.TYPE_INT_RGB);
+        img.setRGB(10, 10, 0xff8800);
+        byte[] png = PngEncoder.encode(img, 96);
+        byte[] data = PngEncoder.idat(png).data();
+        int headerEnd = 8 + 12 + 13 + 12 + 9; // signature, IHDR, pHYs
+        ByteArrayOutputStream split = new ByteArrayOutputStream();
+        split.write(png, 0, headerEnd);
+        int cut = data.length / 3;
+        chunk(split, "tEXt", "Comment\0before the data".getBytes(StandardCharsets.ISO_8859_1));
+        chunk(split, "IDAT", Arrays.copyOfRange(data, 0, cut));
+        chunk(split, "IDAT", Arrays.copyOfRange(data, cut, 2 * cut));
+        chunk(split, "IDAT", Arrays.copyOfRange(data, 2 * cut, data.length));
+        chunk(split, "IEND", new byte[0]);
+        byte[] joined = split.toByteArray();
+        assertArrayEquals(data, PngEncoder.idat(joined).data());
+        BufferedImage back = ImageIO.read(new ByteArrayInputStream(joined));
+        assertEquals(0xff8800, back.getRGB(10, 10) & 0xffffff, "the JDK decoder reads the split file too");
+    }
+
+    private static void chunk(ByteArrayOutputStream out, String type, byte[] body) {
+        byte[] name = type.getBytes(StandardCharsets.US_ASCII);
+        out.writeBytes(ByteBuffer.allocate(4).putInt(body.length).array());
+        out.writeBytes(name);
+        out.writeBytes(body);
+        CRC32 crc = new CRC32();
+        crc.update(name);
+        crc.update(body);
+        out.writeBytes(ByteBuffer.allocate(4).putInt((int) crc.getValue()).array());
     }
 
     @Test
